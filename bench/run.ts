@@ -1,0 +1,27 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import type { BenchRow, BenchSuite } from './harness';
+import { engineSuite } from './suites/engine';
+
+const suites: BenchSuite[] = [engineSuite];
+
+async function main(): Promise<void> {
+  const only = process.argv[2];
+  const rows: BenchRow[] = [];
+  for (const suite of suites) {
+    if (only && suite.name !== only) continue;
+    rows.push(...(await suite.run()));
+  }
+  const dir = join(process.cwd(), 'bench', 'results');
+  mkdirSync(dir, { recursive: true });
+  const stamp = new Date().toISOString().replace(/[:.]/g, '-');
+  const file = join(dir, `bench-${stamp}.json`);
+  writeFileSync(file, JSON.stringify({ date: new Date().toISOString(), node: process.version, rows }, null, 2));
+  console.table(rows.map((r) => ({
+    suite: r.suite, measure: r.name, value: Number(r.value.toPrecision(4)), unit: r.unit,
+    target: r.target ?? '', pass: r.pass === undefined ? '' : r.pass ? 'yes' : 'NO',
+  })));
+  console.log(`written ${file}`);
+}
+
+void main();

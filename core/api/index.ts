@@ -1,0 +1,19 @@
+import { engineMethods } from './engine';
+import type { MethodInput, MethodOutput, ApiResult } from './contract';
+
+export * from './contract';
+
+/** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
+export const contract = {
+  ...engineMethods,
+};
+
+export type Contract = typeof contract;
+export type MethodName = keyof Contract;
+
+/** The API as the renderer sees it, whatever carries it (IPC, HTTP, in-process). */
+export type Api = {
+  [K in MethodName]: (input: MethodInput<Contract[K]>) => Promise<ApiResult<MethodOutput<Contract[K]>>>;
+};
+
+export const methodNames = Object.keys(contract) as MethodName[];

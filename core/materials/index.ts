@@ -1,0 +1,10 @@
+/** The wire grade library: data by standard, strength and moduli by diameter, and static allowables. */
+export { wireGrades, findGrade } from './catalog';
+export { tensileStrengthAt } from './lookup';
+export type { StrengthAt } from './lookup';
+export { wireProperties } from './properties';
+export { gradeSummaries } from './summaries';
+export type { GradeSummary, StrengthSourceSummary } from './summaries';
+export { staticAllowables } from './allowables';
+export type { StaticAllowable } from './allowables';
+export type * from './types';

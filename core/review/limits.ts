@@ -1,0 +1,16 @@
+/** Limits the maker's review checks against, each with where it comes from. */
+export const reviewLimits = {
+  /** Shigley 9e §10-5: 4 ≤ C ≤ 12 preferred (from memory). */
+  preferredIndex: { min: 4, max: 12 },
+  /** Beyond these a spring is not practically coiled (common trade practice). */
+  makeableIndex: { min: 2, max: 25 },
+  /** Wire under 0.5 mm is normally left unground (common trade practice; shop-practice notes §3.3). */
+  minimumGroundWire: 0.5,
+  /** Trade rules for set removal (SMI, reprinted by spring makers): set ≥ 10 % of the deflection to solid; ratio ≤ 1.3. */
+  minimumSetFraction: 0.1,
+  maximumSetRatio: 1.3,
+  /** Shigley 9e: 3 ≤ Na (from memory). */
+  minimumActiveCoils: 3,
+  /** EN 15800 Table 1 scope of the tolerance standard (CEN/TC listing). */
+  en15800: { d: { min: 0.07, max: 16 }, D: { min: 0.63, max: 200 }, L0Max: 630, nMin: 2, w: { min: 4, max: 20 } },
+} as const;

@@ -1,0 +1,37 @@
+import { z } from 'zod';
+
+/** Schema pieces shared by every spring kind. Values are in the spec's own unit system. */
+export const positive = z.number().finite().positive();
+
+
+export const unitSystemSchema = z.enum(['metric', 'inch']);
+
+export const materialOverridesSchema = z
+  .object({
+    shearModulus: positive.optional(),
+    elasticModulus: positive.optional(),
+    tensileStrength: positive.optional(),
+    density: positive.optional(),
+  })
+  .strict();
+
+export const serviceTemperatureSchema = z
+  .object({ min: z.number().finite(), max: z.number().finite() })
+  .strict()
+  .refine((t) => t.max >= t.min, { message: 'max must not be below min', path: ['max'] });
+
+export const staticDutySchema = z.object({ type: z.literal('static') }).strict();
+
+/** Order-level choices the shop plans and prices with; all optional so a bare engineering spec stays valid. */
+export const orderFieldsShape = {
+  quantities: z.array(z.number().int().positive()).min(1).max(12).optional(),
+  toleranceGrade: z.union([z.literal(1), z.literal(2), z.literal(3)]).optional(),
+  finish: z.string().min(1).max(64).optional(),
+  bakeSpecification: z.string().min(1).max(120).optional(),
+  aql: positive.optional(),
+  directionOfWind: z.enum(['right', 'left', 'either']).optional(),
+  shotPeen: z.boolean().optional(),
+  serviceTemperature: serviceTemperatureSchema.optional(),
+};
+
+export const specVersionSchema = z.literal(1).optional();

@@ -1,0 +1,80 @@
+import type { FieldError } from '../result';
+import { fieldError } from '../result';
+import { findGrade } from '../materials';
+import { endForms, solidLength } from '../springs/compression/ends';
+import type { CompressionSpec } from './compression';
+
+/** Index below which a coil cannot be wound on an arbor at all (the spec is rejected). */
+export const MINIMUM_INDEX = 2;
+
+function diameterErrors(s: CompressionSpec): FieldError[] {
+  const given = [s.outerDiameter, s.innerDiameter, s.meanDiameter].filter((v) => v !== undefined).length;
+  if (given === 1) return [];
+  return [fieldError('diameter-count', 'outerDiameter',
+    `give exactly one of outerDiameter, innerDiameter, meanDiameter (${given} given)`)];
+}
+
+function coilErrors(s: CompressionSpec): FieldError[] {
+  const given = [s.totalCoils, s.activeCoils].filter((v) => v !== undefined).length;
+  if (given !== 1) {
+    return [fieldError('coil-count', 'totalCoils', `give exactly one of totalCoils, activeCoils (${given} given)`)];
+  }
+  const inactive = endForms[s.ends].inactiveCoils;
+  const active = s.activeCoils ?? (s.totalCoils ?? 0) - inactive;
+  if (active >= 1) return [];
+  const path = s.activeCoils !== undefined ? 'activeCoils' : 'totalCoils';
+  return [fieldError('too-few-coils', path,
+    `${s.ends} ends take ${inactive} inactive coils, so at least ${inactive + 1} total coils are needed`)];
+}
+
+function meanDiameterOf(s: CompressionSpec): { D: number; path: string } {
+  if (s.outerDiameter !== undefined) return { D: s.outerDiameter - s.wireDiameter, path: 'outerDiameter' };
+  if (s.innerDiameter !== undefined) return { D: s.innerDiameter + s.wireDiameter, path: 'innerDiameter' };
+  return { D: s.meanDiameter ?? Number.NaN, path: 'meanDiameter' };
+}
+
+function lengthErrors(s: CompressionSpec): FieldError[] {
+  const errors: FieldError[] = [];
+  const inactive = endForms[s.ends].inactiveCoils;
+  const nt = s.totalCoils ?? (s.activeCoils ?? 0) + inactive;
+  const solid = solidLength(s.ends, s.wireDiameter, nt);
+  if (solid >= s.freeLength) {
+    errors.push(fieldError('solid-above-free-length', 'freeLength',
+      `solid length ${solid.toPrecision(4)} is not below the free length ${s.freeLength}: fewer coils, finer wire or a longer free length`));
+  }
+  s.loads.forEach((l, i) => {
+    if (l.length >= s.freeLength) {
+      errors.push(fieldError('load-length-not-below-free-length', `loads[${i}].length`,
+        `a compression load length must be shorter than the free length ${s.freeLength}`));
+    }
+  });
+  if (s.duty.type === 'cyclic') {
+    s.duty.between.forEach((len, i) => {
+      if (len >= s.freeLength) {
+        errors.push(fieldError('load-length-not-below-free-length', `duty.between[${i}]`,
+          `a working length must be shorter than the free length ${s.freeLength}`));
+      }
+    });
+    if (s.duty.between[0] === s.duty.between[1]) {
+      errors.push(fieldError('no-stroke', 'duty.between[1]', 'the two working lengths are equal: no stroke to cycle'));
+    }
+  }
+  return errors;
+}
+
+/** Checks a schema-valid compression spec for contradictions the schema cannot express. */
+export function compressionSpecErrors(s: CompressionSpec): FieldError[] {
+  const errors: FieldError[] = [];
+  if (!findGrade(s.material)) {
+    errors.push(fieldError('unknown-material', 'material', `unknown wire grade "${s.material}" (see the materials list)`));
+  }
+  errors.push(...diameterErrors(s), ...coilErrors(s));
+  if (errors.length > 0) return errors;
+  const { D, path } = meanDiameterOf(s);
+  if (!(D / s.wireDiameter >= MINIMUM_INDEX)) {
+    errors.push(fieldError('index-too-small', path,
+      `spring index D/d = ${(D / s.wireDiameter).toPrecision(3)} is below ${MINIMUM_INDEX}: the coil cannot be wound`));
+    return errors;
+  }
+  return [...errors, ...lengthErrors(s)];
+}

@@ -1,0 +1,43 @@
+import { z } from 'zod';
+import type { FieldError, Result } from '../result';
+import { fail, fieldError, formatPath, ok } from '../result';
+import { compressionSpecSchema } from './compression';
+import { compressionSpecErrors } from './compression-rules';
+
+export * from './compression';
+
+/** The one input shape of a spring, for every kind; the same in the UI, the store, the CLI and import files. */
+export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema]);
+
+export type Spec = z.infer<typeof specSchema>;
+export type SpecInput = z.input<typeof specSchema>;
+export type SpringKind = Spec['kind'];
+export const springKinds: readonly SpringKind[] = ['compression'];
+
+function schemaErrors(error: z.ZodError): FieldError[] {
+  const out: FieldError[] = [];
+  for (const issue of error.issues) {
+    const path = formatPath(issue.path);
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) {
+        out.push(fieldError('unknown-field', formatPath([...issue.path, key]), `unknown field "${key}"`));
+      }
+    } else if (issue.code === 'invalid_union' && path === 'kind') {
+      out.push(fieldError('invalid-kind', 'kind', `kind must be one of: ${springKinds.join(', ')}`));
+    } else {
+      out.push(fieldError(`invalid-${issue.code.replace(/_/g, '-')}`, path, issue.message));
+    }
+  }
+  return out;
+}
+
+/** Validates raw input as a spec. Never throws: every problem comes back with the field it concerns. */
+export function parseSpec(raw: unknown): Result<Spec> {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+    return fail([fieldError('not-an-object', '', 'a spec must be a JSON object')]);
+  }
+  const parsed = specSchema.safeParse(raw);
+  if (!parsed.success) return fail(schemaErrors(parsed.error));
+  const errors = compressionSpecErrors(parsed.data);
+  return errors.length > 0 ? fail(errors) : ok(parsed.data);
+}

@@ -1,0 +1,30 @@
+import type { CompressionEnds } from '../../spec/compression';
+
+/**
+ * End types of compression springs. Machinery's Handbook 31e, Spring Design, Table 3 "Formulas for
+ * Compression Springs" (the same table as Shigley 9e Table 10-1):
+ *
+ * | ends          | Nt − Na | solid length | pitch p          |
+ * | open          | 0       | d(Nt + 1)    | (L0 − d)/Na      |
+ * | open-ground   | 1       | d·Nt         | L0/(Na + 1)      |
+ * | closed        | 2       | d(Nt + 1)    | (L0 − 3d)/Na     |
+ * | closed-ground | 2       | d·Nt         | (L0 − 2d)/Na     |
+ */
+export interface EndForm {
+  inactiveCoils: number;
+  ground: boolean;
+  /** Solid length in wire diameters: Nt + solidExtra. */
+  solidExtra: number;
+  pitch(L0: number, d: number, na: number): number;
+}
+
+export const endForms: Record<CompressionEnds, EndForm> = {
+  open: { inactiveCoils: 0, ground: false, solidExtra: 1, pitch: (L0, d, na) => (L0 - d) / na },
+  'open-ground': { inactiveCoils: 1, ground: true, solidExtra: 0, pitch: (L0, _d, na) => L0 / (na + 1) },
+  closed: { inactiveCoils: 2, ground: false, solidExtra: 1, pitch: (L0, d, na) => (L0 - 3 * d) / na },
+  'closed-ground': { inactiveCoils: 2, ground: true, solidExtra: 0, pitch: (L0, d, na) => (L0 - 2 * d) / na },
+};
+
+export function solidLength(ends: CompressionEnds, d: number, nt: number): number {
+  return d * (nt + endForms[ends].solidExtra);
+}

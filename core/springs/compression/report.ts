@@ -1,0 +1,96 @@
+import type { Finding } from '../../result';
+import type { QuantityMap } from '../../units';
+import type { FatigueResult } from '../fatigue';
+import type { StrengthBasis } from '../../materials/types';
+
+export interface CompressionLoadResult {
+  length: number;
+  deflection: number;
+  force: number;
+  /** Corrected (EN 13906-1 k) torsional stress. */
+  stress: number;
+  stressUncorrected: number;
+  /** Force the drawing asks for at this length, and whether the spring meets it within tolerance. */
+  specifiedForce: number | null;
+  tolerancePercent: number | null;
+  withinTolerance: boolean | null;
+}
+
+export interface SetRemovalResult {
+  required: boolean;
+  /** Free length to coil to, before pressing to solid. */
+  /** Null when the set model cannot reach the finished free length (beyond a fully plastic section). */
+  coiledFreeLength: number | null;
+  expectedSet: number | null;
+  /** Corrected stress at solid ÷ allowable before set removal (the trade's "stress ratio"). */
+  ratio: number;
+  /** Set as a fraction of the coiled deflection to solid (trade rule: at least 10 %). */
+  setFraction: number | null;
+  /** False when even pressing to solid cannot bring the uncorrected solid stress within the set-removed allowable. */
+  achievable: boolean;
+}
+
+/** Analysis of one compression spring. Internal units here; `compressionReportQuantities` converts out. */
+export interface CompressionReport {
+  kind: 'compression';
+  units: 'metric' | 'inch';
+  material: string;
+  springIndex: number;
+  meanDiameter: number;
+  outerDiameter: number;
+  innerDiameter: number;
+  activeCoils: number;
+  totalCoils: number;
+  freeLength: number;
+  pitch: number;
+  rate: number;
+  solidLength: number;
+  solidForce: number;
+  storedEnergyAtSolid: number;
+  tensileStrength: number;
+  tensileStrengthBasis: StrengthBasis;
+  tensileStrengthSource: string;
+  shearModulus: number;
+  elasticModulus: number;
+  density: number;
+  stressCorrectionFactor: number;
+  wahlFactor: number;
+  stressAtSolid: number;
+  stressAtSolidUncorrected: number;
+  allowableStress: number;
+  allowableStressSetRemoved: number;
+  loads: CompressionLoadResult[];
+  minimumWorkingLength: number;
+  coilGapSum: number;
+  bucklingDeflection: number | null;
+  slendernessLimit: number;
+  slenderness: number;
+  outerDiameterAtSolid: number;
+  naturalFrequency: number;
+  wireLength: number;
+  mass: number;
+  setRemoval: SetRemovalResult;
+  fatigue: FatigueResult | null;
+  findings: Finding[];
+}
+
+const fatigueQuantities: QuantityMap = {
+  stressMin: 'stress', stressMax: 'stress', stressAlternating: 'stress', stressMean: 'stress',
+  stressRange: 'stress', ultimateShear: 'stress', enduranceAlternating: 'stress', enduranceMean: 'stress',
+};
+
+export const compressionReportQuantities: QuantityMap = {
+  meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', freeLength: 'length',
+  pitch: 'length', rate: 'rate', solidLength: 'length', solidForce: 'force', storedEnergyAtSolid: 'energy',
+  tensileStrength: 'stress', shearModulus: 'stress', elasticModulus: 'stress', density: 'density',
+  stressAtSolid: 'stress', stressAtSolidUncorrected: 'stress', allowableStress: 'stress',
+  allowableStressSetRemoved: 'stress',
+  loads: {
+    length: 'length', deflection: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress',
+    specifiedForce: 'force',
+  },
+  minimumWorkingLength: 'length', coilGapSum: 'length', bucklingDeflection: 'length',
+  outerDiameterAtSolid: 'length', wireLength: 'length', mass: 'mass',
+  setRemoval: { coiledFreeLength: 'length', expectedSet: 'length' },
+  fatigue: fatigueQuantities,
+};

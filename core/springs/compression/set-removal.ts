@@ -1,0 +1,36 @@
+/**
+ * Set removal (presetting) by an elastic–perfectly-plastic round bar in torsion.
+ *
+ * The wire yields when the uncorrected stress 8FD/(πd³) reaches τY. Pressing a spring whose deflection s
+ * would cause the elastic stress τe > τY leaves the permanent set s_set = s·(1 − 4r/3 + r⁴/3), r = τY/τe
+ * (torsion of a round bar with an elastic core of radius r·c; derived from the bar formulas
+ * T = (4/3)·TY·(1 − r³/4) and the elastic spring-back T/(GJ)).
+ *
+ * Stress is proportional to deflection, so with sY the deflection at which yield starts (τe = τY), the
+ * finished length to solid is s − s_set = 4sY/3 − sY⁴/(3s³). Setting that equal to the finished deflection
+ * to solid s0 gives the coiled deflection in closed form: s = sY · (sY / (4sY − 3s0))^(1/3), which exists
+ * while s0 < 4sY/3 (a fully plastic section carries 4/3 of the yield torque).
+ */
+export interface SetRemovalSolution {
+  /** Deflection from coiled free length to solid. */
+  coiledDeflection: number;
+  expectedSet: number;
+  /** False when no coiled length can reach the finished one within this model. */
+  reachable: boolean;
+}
+
+export function permanentSet(deflection: number, yieldDeflection: number): number {
+  if (deflection <= yieldDeflection) return 0;
+  const r = yieldDeflection / deflection;
+  return deflection * (1 - (4 * r) / 3 + r ** 4 / 3);
+}
+
+export function solveCoiledDeflection(finishedDeflection: number, yieldDeflection: number): SetRemovalSolution {
+  const s0 = finishedDeflection;
+  const sY = yieldDeflection;
+  if (s0 <= sY) return { coiledDeflection: s0, expectedSet: 0, reachable: true };
+  const denominator = 4 * sY - 3 * s0;
+  if (denominator <= 0) return { coiledDeflection: Number.NaN, expectedSet: Number.NaN, reachable: false };
+  const s = sY * Math.cbrt(sY / denominator);
+  return { coiledDeflection: s, expectedSet: s - s0, reachable: true };
+}

@@ -1,0 +1,93 @@
+/**
+ * Unit systems. Internally everything is mm, N, MPa, N/mm, N·mm, degrees, seconds, kg, kg/dm³ (= g/cm³)
+ * and °C. A spec carries its own system; values convert on the way in and on the way out, nowhere else.
+ */
+export type UnitSystem = 'metric' | 'inch';
+
+export type Quantity =
+  | 'length' | 'force' | 'stress' | 'rate' | 'torque' | 'torqueRatePerTurn' | 'torqueRatePerDegree'
+  | 'mass' | 'density' | 'temperature' | 'frequency' | 'angle' | 'count' | 'ratio' | 'percent'
+  | 'energy' | 'time' | 'lengthLong';
+
+// Exact definitions: 1 in = 25.4 mm; 1 lbf = 4.4482216152605 N; 1 lb = 0.45359237 kg (NIST SP 811, Appendix B).
+export const MM_PER_IN = 25.4;
+export const N_PER_LBF = 4.4482216152605;
+export const KG_PER_LB = 0.45359237;
+export const MPA_PER_PSI = N_PER_LBF / (MM_PER_IN * MM_PER_IN);
+const CM3_PER_IN3 = (MM_PER_IN / 10) ** 3;
+
+interface UnitDef { factor: number; offset?: number; symbol: string }
+
+const metric: Record<Quantity, UnitDef> = {
+  length: { factor: 1, symbol: 'mm' },
+  lengthLong: { factor: 1000, symbol: 'm' },
+  force: { factor: 1, symbol: 'N' },
+  stress: { factor: 1, symbol: 'MPa' },
+  rate: { factor: 1, symbol: 'N/mm' },
+  torque: { factor: 1, symbol: 'N·mm' },
+  torqueRatePerTurn: { factor: 1, symbol: 'N·mm/turn' },
+  torqueRatePerDegree: { factor: 1, symbol: 'N·mm/°' },
+  mass: { factor: 0.001, symbol: 'g' },
+  density: { factor: 1, symbol: 'g/cm³' },
+  temperature: { factor: 1, symbol: '°C' },
+  frequency: { factor: 1, symbol: 'Hz' },
+  angle: { factor: 1, symbol: '°' },
+  count: { factor: 1, symbol: '' },
+  ratio: { factor: 1, symbol: '' },
+  percent: { factor: 1, symbol: '%' },
+  energy: { factor: 1, symbol: 'N·mm' },
+  time: { factor: 1, symbol: 's' },
+};
+
+const inch: Record<Quantity, UnitDef> = {
+  ...metric,
+  length: { factor: MM_PER_IN, symbol: 'in' },
+  lengthLong: { factor: MM_PER_IN * 12, symbol: 'ft' },
+  force: { factor: N_PER_LBF, symbol: 'lbf' },
+  stress: { factor: MPA_PER_PSI, symbol: 'psi' },
+  rate: { factor: N_PER_LBF / MM_PER_IN, symbol: 'lbf/in' },
+  torque: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in' },
+  torqueRatePerTurn: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in/turn' },
+  torqueRatePerDegree: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in/°' },
+  mass: { factor: KG_PER_LB, symbol: 'lb' },
+  density: { factor: (KG_PER_LB * 1000) / CM3_PER_IN3, symbol: 'lb/in³' },
+  // °F = °C · 9/5 + 32, so internal = (x − 32) · 5/9.
+  temperature: { factor: 5 / 9, offset: -32, symbol: '°F' },
+  energy: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in' },
+};
+
+const systems: Record<UnitSystem, Record<Quantity, UnitDef>> = { metric, inch };
+
+export function toInternal(value: number, quantity: Quantity, units: UnitSystem): number {
+  const def = systems[units][quantity];
+  return (value + (def.offset ?? 0)) * def.factor;
+}
+
+export function fromInternal(value: number, quantity: Quantity, units: UnitSystem): number {
+  const def = systems[units][quantity];
+  return value / def.factor - (def.offset ?? 0);
+}
+
+export function unitSymbol(quantity: Quantity, units: UnitSystem): string {
+  return systems[units][quantity].symbol;
+}
+
+/** Converts every field of `value` named in `fields` (a quantity map); nested objects and arrays follow the map. */
+export type QuantityMap = { [field: string]: Quantity | QuantityMap };
+
+export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: 'in' | 'out'): T {
+  const convert = direction === 'in' ? toInternal : fromInternal;
+  const walk = (v: unknown, m: Quantity | QuantityMap): unknown => {
+    if (v === null || v === undefined) return v;
+    if (Array.isArray(v)) return v.map((item) => walk(item, m));
+    if (typeof m === 'string') return typeof v === 'number' ? convert(v, m, units) : v;
+    if (typeof v !== 'object') return v;
+    const out: Record<string, unknown> = {};
+    for (const [key, inner] of Object.entries(v as Record<string, unknown>)) {
+      const sub = m[key];
+      out[key] = sub === undefined ? inner : walk(inner, sub);
+    }
+    return out;
+  };
+  return walk(value, map) as T;
+}
