@@ -7,10 +7,9 @@ const lengthDecimals: Record<UnitSystem, number> = { metric: 2, inch: 3 };
 /** Three significant digits, without exponent notation for ordinary magnitudes. */
 export function significant(value: number, digits = 3): string {
   if (!Number.isFinite(value)) return String(value);
-  if (value === 0) return '0';
-  const magnitude = Math.floor(Math.log10(Math.abs(value)));
-  const decimals = Math.max(0, digits - 1 - magnitude);
-  return value.toFixed(decimals);
+  // Whole numbers at or above the precision are shown whole (12 345 N, not 1.23e+4 N).
+  if (Math.abs(value) >= 10 ** digits) return Math.round(value).toString();
+  return value === 0 ? '0' : value.toPrecision(digits);
 }
 
 /** Formats an internal value in the spec's units with the trade's precision and the unit symbol. */

@@ -7,7 +7,7 @@ export type UnitSystem = 'metric' | 'inch';
 export type Quantity =
   | 'length' | 'force' | 'stress' | 'rate' | 'torque' | 'torqueRatePerTurn' | 'torqueRatePerDegree'
   | 'mass' | 'density' | 'temperature' | 'frequency' | 'angle' | 'count' | 'ratio' | 'percent'
-  | 'energy' | 'time' | 'lengthLong';
+  | 'energy' | 'time' | 'lengthLong' | 'massBulk';
 
 // Exact definitions: 1 in = 25.4 mm; 1 lbf = 4.4482216152605 N; 1 lb = 0.45359237 kg (NIST SP 811, Appendix B).
 export const MM_PER_IN = 25.4;
@@ -28,6 +28,7 @@ const metric: Record<Quantity, UnitDef> = {
   torqueRatePerTurn: { factor: 1, symbol: 'N·mm/turn' },
   torqueRatePerDegree: { factor: 1, symbol: 'N·mm/°' },
   mass: { factor: 0.001, symbol: 'g' },
+  massBulk: { factor: 1, symbol: 'kg' },
   density: { factor: 1, symbol: 'g/cm³' },
   temperature: { factor: 1, symbol: '°C' },
   frequency: { factor: 1, symbol: 'Hz' },
@@ -50,6 +51,7 @@ const inch: Record<Quantity, UnitDef> = {
   torqueRatePerTurn: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in/turn' },
   torqueRatePerDegree: { factor: N_PER_LBF * MM_PER_IN, symbol: 'lbf·in/°' },
   mass: { factor: KG_PER_LB, symbol: 'lb' },
+  massBulk: { factor: KG_PER_LB, symbol: 'lb' },
   density: { factor: (KG_PER_LB * 1000) / CM3_PER_IN3, symbol: 'lb/in³' },
   // °F = °C · 9/5 + 32, so internal = (x − 32) · 5/9.
   temperature: { factor: 5 / 9, offset: -32, symbol: '°F' },

@@ -50,7 +50,7 @@ const musicWire: WireGrade = {
   density: steelDensity,
   // Shigley: not above 120 °C nor at sub-zero temperatures.
   serviceTemperature: { min: 0, max: 120, ...read('Shigley 9e Table 10-3') },
-  stressRelief: { temperature: fahrenheitToC(500), minutes: 30, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(500), diameterChange: 'closes', minutes: 30, ...read(STRESS_RELIEF) },
   relativeCost: cost(2.6),
   dynamicGrade: true,
 };
@@ -88,7 +88,7 @@ function hardDrawn(cls: 1 | 2): WireGrade {
       min: 0, max: fahrenheitToC(250),
       ...unverified(`max 250 °F: ${SERVICE_TEMP} and Shigley 9e Table 10-3 (read); ${SHIGLEY_MIN_TEMP}`),
     },
-    stressRelief: { temperature: fahrenheitToC(550), minutes: 20, ...read(STRESS_RELIEF) },
+    stressRelief: { temperature: fahrenheitToC(550), diameterChange: 'closes', minutes: 20, ...read(STRESS_RELIEF) },
     relativeCost: cost(1.0),
     dynamicGrade: false,
   };
@@ -110,7 +110,7 @@ const oilTempered: WireGrade = {
   // A maker's table gives 250 °F (121 °C); Shigley/SMI give 180 °C. The higher value is used, with caution.
   serviceTemperature: { min: 0, max: 180, ...unverified(`max: Shigley 9e Table 10-3 (read); ${SHIGLEY_MIN_TEMP}`) },
   // Printed 500–600 °F; the low end is taken.
-  stressRelief: { temperature: fahrenheitToC(500), minutes: 30, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(500), diameterChange: 'closes', minutes: 30, ...read(STRESS_RELIEF) },
   relativeCost: cost(1.3),
   dynamicGrade: false,
 };
@@ -126,7 +126,7 @@ const chromeVanadium: WireGrade = {
   density: steelDensity,
   serviceTemperature: { min: -40, max: fahrenheitToC(425), ...unverified(`max 425 °F: ${SERVICE_TEMP} (read); ${NO_MIN_TEMP}`) },
   // The stress-relief tables name A231; A232 is the valve-spring quality of the same alloy.
-  stressRelief: { temperature: fahrenheitToC(800), minutes: 30, ...read(`${STRESS_RELIEF}, A231 row`) },
+  stressRelief: { temperature: fahrenheitToC(800), diameterChange: 'closes', minutes: 30, ...read(`${STRESS_RELIEF}, A231 row`) },
   relativeCost: cost(3.1),
   // Shigley 9e Table 10-3 (read): chrome-vanadium is the valve-spring wire.
   dynamicGrade: true,
@@ -142,7 +142,7 @@ const chromeSilicon: WireGrade = {
   moduli: { bands: singleBand(203.4, 77.2), ...read(T10_5) },
   density: steelDensity,
   serviceTemperature: { min: -40, max: fahrenheitToC(475), ...unverified(`max 475 °F: ${SERVICE_TEMP} (read); ${NO_MIN_TEMP}`) },
-  stressRelief: { temperature: fahrenheitToC(800), minutes: 30, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(800), diameterChange: 'closes', minutes: 30, ...read(STRESS_RELIEF) },
   relativeCost: cost(4.0),
   dynamicGrade: false,
 };

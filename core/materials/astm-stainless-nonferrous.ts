@@ -31,7 +31,7 @@ const stainless302: WireGrade = {
   density: { value: lbPerIn3ToGPerCm3(0.286), ...read(MAKER_TABLES) },
   serviceTemperature: { min: -200, max: fahrenheitToC(550), ...unverified('max 550 °F: diamondwire.com (read); min: from memory') },
   // Printed 600–650 °F; the low end is taken.
-  stressRelief: { temperature: fahrenheitToC(600), minutes: 30, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(600), diameterChange: 'opens', minutes: 30, ...read(STRESS_RELIEF) },
   relativeCost: cost(7.6, ' (low end of 7.6–11)'),
   dynamicGrade: false,
 };
@@ -53,7 +53,7 @@ const stainless177: WireGrade = {
   density: { value: lbPerIn3ToGPerCm3(0.282), ...read(MAKER_TABLES) },
   serviceTemperature: { min: -40, max: fahrenheitToC(650), ...unverified('max 650 °F: diamondwire.com (read); min: from memory') },
   // Precipitation hardening after coiling; suzuki-garphyttan.com gives the same, 480 °C for 1 h.
-  stressRelief: { temperature: fahrenheitToC(900), minutes: 60, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(900), diameterChange: 'opens', minutes: 60, ...read(STRESS_RELIEF) },
   relativeCost: { value: 11, ...fromMemory('top of the stainless range in the Shigley 9e Table 10-4 cost column') },
   dynamicGrade: false,
 };
@@ -72,7 +72,7 @@ const phosphorBronze: WireGrade = {
   moduli: band(103.4, 41.4),
   density: { value: lbPerIn3ToGPerCm3(0.32), ...read(MAKER_TABLES) },
   serviceTemperature: { min: -200, max: fahrenheitToC(200), ...fromMemory('spring makers\' material tables') },
-  stressRelief: { temperature: fahrenheitToC(375), minutes: 30, ...fromMemory('common trade practice') },
+  stressRelief: { temperature: fahrenheitToC(375), diameterChange: 'unknown', minutes: 30, ...fromMemory('common trade practice') },
   relativeCost: cost(8.0),
   dynamicGrade: false,
 };
@@ -92,7 +92,7 @@ const berylliumCopper: WireGrade = {
   density: { value: 8.26, ...read('lfa-wire.com beryllium copper datasheet') },
   serviceTemperature: { min: -200, max: fahrenheitToC(400), ...fromMemory('spring makers\' material tables') },
   // Pre-tempered wire; the tables give 30 min to 2 h, the short end is taken.
-  stressRelief: { temperature: fahrenheitToC(600), minutes: 30, ...read(STRESS_RELIEF) },
+  stressRelief: { temperature: fahrenheitToC(600), diameterChange: 'closes', minutes: 30, ...read(STRESS_RELIEF) },
   relativeCost: { value: 27, ...fromMemory('relative cost list in spring makers\' material tables') },
   dynamicGrade: false,
 };

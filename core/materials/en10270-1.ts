@@ -44,11 +44,11 @@ const common = {
 
 // SL and SM are sold as the equivalent of ASTM A227, SH and DH of A228; process and cost follow those.
 const likeA227 = {
-  stressRelief: { temperature: fahrenheitToC(550), minutes: 20, ...unverified(`${STRESS_RELIEF}, A227 row, by ${ANALOGY}`) },
+  stressRelief: { temperature: fahrenheitToC(550), diameterChange: 'closes' as const, minutes: 20, ...unverified(`${STRESS_RELIEF}, A227 row, by ${ANALOGY}`) },
   relativeCost: { value: 1.0, ...unverified(`Shigley 9e Table 10-4 A227 cost (from memory), by ${ANALOGY}`) },
 };
 const likeA228 = {
-  stressRelief: { temperature: fahrenheitToC(500), minutes: 30, ...unverified(`${STRESS_RELIEF}, A228 row, by ${ANALOGY}`) },
+  stressRelief: { temperature: fahrenheitToC(500), diameterChange: 'closes' as const, minutes: 30, ...unverified(`${STRESS_RELIEF}, A228 row, by ${ANALOGY}`) },
   relativeCost: { value: 2.6, ...unverified(`Shigley 9e Table 10-4 A228 cost (from memory), by ${ANALOGY}`) },
 };
 

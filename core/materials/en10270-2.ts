@@ -29,7 +29,7 @@ const fdc: WireGrade = {
     ...unverified(`derived: Norton Table 13-4 A229 exponent (SI row via issuhub.com) through the 0.70 mm row, by ${FDC_LIKE}`),
   }],
   serviceTemperature: { min: 0, max: 180, ...unverified(`ASTM A229 limits (Shigley 9e Table 10-3), by ${FDC_LIKE}`) },
-  stressRelief: { temperature: fahrenheitToC(500), minutes: 30, ...unverified(`${STRESS_RELIEF}, A229 row, by ${FDC_LIKE}`) },
+  stressRelief: { temperature: fahrenheitToC(500), diameterChange: 'closes', minutes: 30, ...unverified(`${STRESS_RELIEF}, A229 row, by ${FDC_LIKE}`) },
   relativeCost: { value: 1.3, ...unverified(`Shigley 9e Table 10-4 A229 cost (from memory), by ${FDC_LIKE}`) },
 };
 
@@ -45,7 +45,7 @@ const vdsicr: WireGrade = {
   serviceTemperature: {
     min: -40, max: fahrenheitToC(475), ...unverified(`ASTM A401 limits (diamondwire.com; min from memory), by ${VDSICR_LIKE}`),
   },
-  stressRelief: { temperature: fahrenheitToC(800), minutes: 30, ...unverified(`${STRESS_RELIEF}, A401 row, by ${VDSICR_LIKE}`) },
+  stressRelief: { temperature: fahrenheitToC(800), diameterChange: 'closes', minutes: 30, ...unverified(`${STRESS_RELIEF}, A401 row, by ${VDSICR_LIKE}`) },
   relativeCost: { value: 4.0, ...unverified(`Shigley 9e Table 10-4 A401 cost (from memory), by ${VDSICR_LIKE}`) },
 };
 

@@ -25,7 +25,7 @@ const stainless14310: WireGrade = {
   density: { value: 7.9, ...fromMemory('EN 10088-1 value for 1.4310') },
   serviceTemperature: { min: -200, max: fahrenheitToC(550), ...unverified(`302 limits (diamondwire.com; min from memory), ${LIKE_302}`) },
   stressRelief: {
-    temperature: fahrenheitToC(600), minutes: 30,
+    temperature: fahrenheitToC(600), diameterChange: 'opens', minutes: 30,
     ...unverified(`apexspring.com / chinaspringcorp.com stress-relief tables, 302 row (low end of 600–650 °F), ${LIKE_302}`),
   },
   relativeCost: { value: 7.6, ...unverified(`Shigley 9e Table 10-4 302 cost (from memory), ${LIKE_302}`) },

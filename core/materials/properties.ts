@@ -9,7 +9,7 @@ import type { StaticAllowable } from './allowables';
 import { wireGrades } from './catalog';
 import type { CompiledStrength, StrengthScratch } from './lookup';
 import { clampToRange, compiledStrength, modulusBandAt, strengthInto } from './lookup';
-import type { MaterialOverrides, WireGrade, WireProperties } from './types';
+import type { DiameterChange, MaterialOverrides, WireGrade, WireProperties } from './types';
 
 interface Prepared {
   grade: WireGrade;
@@ -20,7 +20,7 @@ interface Prepared {
   rangeText: string;
   fitNotes: string[];
   serviceTemperature: { min: number; max: number };
-  stressRelief: { temperature: number; minutes: number };
+  stressRelief: { temperature: number; minutes: number; diameterChange: DiameterChange };
   allowable: Readonly<StaticAllowable>;
 }
 
@@ -41,7 +41,10 @@ function prepare(grade: WireGrade): Prepared {
     fitNotes: grade.strengthFits.map((f) =>
       `The tensile strength of ${grade.name} at this size is not from the standard's table: ${f.source}.`),
     serviceTemperature: Object.freeze({ min: grade.serviceTemperature.min, max: grade.serviceTemperature.max }),
-    stressRelief: Object.freeze({ temperature: grade.stressRelief.temperature, minutes: grade.stressRelief.minutes }),
+    stressRelief: Object.freeze({
+      temperature: grade.stressRelief.temperature, minutes: grade.stressRelief.minutes,
+      diameterChange: grade.stressRelief.diameterChange,
+    }),
     allowable: staticAllowables[grade.family],
   };
 }

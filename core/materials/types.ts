@@ -58,12 +58,18 @@ export interface WireGrade {
   moduli: { bands: ModulusBand[] } & Sourced;
   density: { value: number } & Sourced;
   serviceTemperature: { min: number; max: number } & Sourced;
-  stressRelief: { temperature: number; minutes: number } & Sourced;
+  /**
+   * Stress-relief temperature and time at temperature; `diameterChange` is which way the coil diameter
+   * moves in the oven, a coiler set-up allowance (shop-practice notes §3.2 tables).
+   */
+  stressRelief: { temperature: number; minutes: number; diameterChange: DiameterChange } & Sourced;
   /** Cost per kg relative to hard-drawn carbon steel (= 1.0). */
   relativeCost: { value: number } & Sourced;
   /** Suitable for cyclic duty without qualification (e.g. EN 10270-1 D grades, valve-spring quality). */
   dynamicGrade: boolean;
 }
+
+export type DiameterChange = 'closes' | 'opens' | 'unknown';
 
 export type StrengthBasis = 'table' | 'fit' | 'override';
 
@@ -83,7 +89,7 @@ export interface WireProperties {
   serviceTemperature: { min: number; max: number };
   /** Allowable static torsion as a fraction of tensile strength (handbook table 10-6 classes). */
   allowableStaticFraction: { beforeSetRemoval: number; afterSetRemoval: number; source: string };
-  stressRelief: { temperature: number; minutes: number };
+  stressRelief: { temperature: number; minutes: number; diameterChange: DiameterChange };
   relativeCost: number;
   dynamicGrade: boolean;
 }

@@ -67,7 +67,7 @@ export function analyseCompression(x: CompressionDesign): CompressionReport {
     : null;
   const sK = bucklingDeflection(L0, D, nu, wire.shearModulus, wire.elasticModulus);
   return {
-    kind: 'compression', units: x.units, material: wire.gradeId,
+    kind: 'compression', units: x.units, material: wire.gradeId, wireDiameter: d, ends: x.ends,
     springIndex: c, meanDiameter: D, outerDiameter: D + d, innerDiameter: D - d, activeCoils: na, totalCoils: nt,
     freeLength: L0, pitch, rate, solidLength: Ls, solidForce, storedEnergyAtSolid: (solidForce * (L0 - Ls)) / 2,
     tensileStrength: wire.tensileStrength, tensileStrengthBasis: wire.tensileStrengthBasis,

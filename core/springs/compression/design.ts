@@ -30,23 +30,50 @@ export interface CompressionDesign {
   wireFindings: Finding[];
 }
 
-function meanDiameter(spec: CompressionSpec, d: number): { D: number; given: CompressionDesign['diameterGiven'] } {
-  const L = (v: number) => toInternal(v, 'length', spec.units);
-  if (spec.outerDiameter !== undefined) return { D: L(spec.outerDiameter) - d, given: 'outer' };
-  if (spec.innerDiameter !== undefined) return { D: L(spec.innerDiameter) + d, given: 'inner' };
-  return { D: L(spec.meanDiameter ?? Number.NaN), given: 'mean' };
+function meanDiameter(spec: CompressionSpec, d: number, mm: number): { D: number; given: CompressionDesign['diameterGiven'] } {
+  if (spec.outerDiameter !== undefined) return { D: spec.outerDiameter * mm - d, given: 'outer' };
+  if (spec.innerDiameter !== undefined) return { D: spec.innerDiameter * mm + d, given: 'inner' };
+  return { D: (spec.meanDiameter ?? Number.NaN) * mm, given: 'mean' };
+}
+
+function stressOverride(v: number | undefined, units: UnitSystem): number | undefined {
+  return v === undefined ? undefined : toInternal(v, 'stress', units);
 }
 
 function overridesInternal(spec: CompressionSpec): MaterialOverrides | undefined {
   const o = spec.materialOverrides;
   if (!o) return undefined;
-  const stress = (v: number | undefined) => (v === undefined ? undefined : toInternal(v, 'stress', spec.units));
   return {
-    shearModulus: stress(o.shearModulus),
-    elasticModulus: stress(o.elasticModulus),
-    tensileStrength: stress(o.tensileStrength),
+    shearModulus: stressOverride(o.shearModulus, spec.units),
+    elasticModulus: stressOverride(o.elasticModulus, spec.units),
+    tensileStrength: stressOverride(o.tensileStrength, spec.units),
     density: o.density === undefined ? undefined : toInternal(o.density, 'density', spec.units),
   };
+}
+
+function loadsInternal(spec: CompressionSpec, mm: number): CompressionDesign['loads'] {
+  const newtons = toInternal(1, 'force', spec.units);
+  const out: CompressionDesign['loads'] = [];
+  for (const l of spec.loads) {
+    out.push({
+      length: l.length * mm,
+      force: l.force === undefined ? undefined : l.force * newtons,
+      tolerancePercent: l.tolerancePercent,
+    });
+  }
+  return out;
+}
+
+function dutyInternal(spec: CompressionSpec, mm: number): CompressionDesign['duty'] {
+  const duty = spec.duty;
+  if (duty.type === 'static') return duty;
+  return { ...duty, between: [duty.between[0] * mm, duty.between[1] * mm] };
+}
+
+function temperatureInternal(spec: CompressionSpec): CompressionDesign['serviceTemperature'] {
+  const t = spec.serviceTemperature;
+  if (!t) return undefined;
+  return { min: toInternal(t.min, 'temperature', spec.units), max: toInternal(t.max, 'temperature', spec.units) };
 }
 
 /**
@@ -55,29 +82,20 @@ function overridesInternal(spec: CompressionSpec): MaterialOverrides | undefined
  */
 export function compressionDesign(spec: CompressionSpec): CompressionDesign | undefined {
   const units = spec.units;
-  const L = (v: number) => toInternal(v, 'length', units);
-  const d = L(spec.wireDiameter);
-  const { D, given } = meanDiameter(spec, d);
+  // Lengths scale linearly between the two systems, so one factor serves every length field.
+  const mm = toInternal(1, 'length', units);
+  const d = spec.wireDiameter * mm;
+  const { D, given } = meanDiameter(spec, d, mm);
   const inactive = endForms[spec.ends].inactiveCoils;
   const nt = spec.totalCoils ?? (spec.activeCoils ?? Number.NaN) + inactive;
   const resolved = wireProperties(spec.material, d, overridesInternal(spec));
   if (!resolved) return undefined;
-  const duty = spec.duty.type === 'static'
-    ? spec.duty
-    : { ...spec.duty, between: [L(spec.duty.between[0]), L(spec.duty.between[1])] as [number, number] };
   return {
     units, d, D, diameterGiven: given, nt, na: nt - inactive,
-    coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active', ends: spec.ends, L0: L(spec.freeLength),
-    loads: spec.loads.map((l) => ({
-      length: L(l.length),
-      force: l.force === undefined ? undefined : toInternal(l.force, 'force', units),
-      tolerancePercent: l.tolerancePercent,
-    })),
-    seating: spec.seating, duty, freeParameters: spec.freeParameters,
-    serviceTemperature: spec.serviceTemperature && {
-      min: toInternal(spec.serviceTemperature.min, 'temperature', units),
-      max: toInternal(spec.serviceTemperature.max, 'temperature', units),
-    },
+    coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active',
+    ends: spec.ends, L0: spec.freeLength * mm, loads: loadsInternal(spec, mm),
+    seating: spec.seating, duty: dutyInternal(spec, mm), freeParameters: spec.freeParameters,
+    serviceTemperature: temperatureInternal(spec),
     wire: resolved.props, wireFindings: resolved.findings,
   };
 }

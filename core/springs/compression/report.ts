@@ -2,6 +2,7 @@ import type { Finding } from '../../result';
 import type { QuantityMap } from '../../units';
 import type { FatigueResult } from '../fatigue';
 import type { StrengthBasis } from '../../materials/types';
+import type { CompressionEnds } from '../../spec/compression';
 
 export interface CompressionLoadResult {
   length: number;
@@ -35,6 +36,8 @@ export interface CompressionReport {
   kind: 'compression';
   units: 'metric' | 'inch';
   material: string;
+  wireDiameter: number;
+  ends: CompressionEnds;
   springIndex: number;
   meanDiameter: number;
   outerDiameter: number;
@@ -80,7 +83,7 @@ const fatigueQuantities: QuantityMap = {
 };
 
 export const compressionReportQuantities: QuantityMap = {
-  meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', freeLength: 'length',
+  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', freeLength: 'length',
   pitch: 'length', rate: 'rate', solidLength: 'length', solidForce: 'force', storedEnergyAtSolid: 'energy',
   tensileStrength: 'stress', shearModulus: 'stress', elasticModulus: 'stress', density: 'density',
   stressAtSolid: 'stress', stressAtSolidUncorrected: 'stress', allowableStress: 'stress',

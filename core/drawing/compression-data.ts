@@ -1,0 +1,67 @@
+/** The data block beside a compression spring view, with the symbols of ISO 2162-2 / EN 13906-1. */
+import type { CompressionEnds } from '../spec/compression';
+import type { CompressionLoadResult, CompressionReport } from '../springs/compression/report';
+import { formatQuantity } from '../format';
+import { plainNumber } from './svg';
+import type { TableRow } from './table';
+
+export type WindDirection = 'right' | 'left' | 'either';
+
+const windText: Record<WindDirection, string> = { right: 'right-hand', left: 'left-hand', either: 'either' };
+
+const endsText: Record<CompressionEnds, string> = {
+  'closed-ground': 'closed, ground', closed: 'closed', 'open-ground': 'open, ground', open: 'open',
+};
+
+export interface DataBlockInput {
+  report: CompressionReport;
+  ends: CompressionEnds;
+  diameter: 'outer' | 'inner';
+  wind?: WindDirection;
+}
+
+export function lengthText(report: CompressionReport, value: number): string {
+  return formatQuantity(value, 'length', report.units);
+}
+
+export function wireDiameter(report: CompressionReport): number {
+  return report.wireDiameter;
+}
+
+export function diameterLabel(input: Pick<DataBlockInput, 'report' | 'diameter'>): { symbol: string; value: number } {
+  const r = input.report;
+  return input.diameter === 'inner' ? { symbol: 'Di', value: r.innerDiameter } : { symbol: 'De', value: r.outerDiameter };
+}
+
+export function parameterRows(input: DataBlockInput): TableRow[] {
+  const r = input.report;
+  const diameter = diameterLabel(input);
+  const rows: [string, string][] = [
+    ['Material', r.material],
+    ['d', lengthText(r, wireDiameter(r))],
+    [diameter.symbol, lengthText(r, diameter.value)],
+    ['L0', lengthText(r, r.freeLength)],
+    ['n', plainNumber(r.activeCoils)],
+    ['nt', plainNumber(r.totalCoils)],
+    ['Ls', lengthText(r, r.solidLength)],
+    ['R', formatQuantity(r.rate, 'rate', r.units)],
+    ['Ends', endsText[input.ends]],
+  ];
+  if (input.wind) rows.push(['Wind', windText[input.wind]]);
+  return rows.map((cells) => ({ cells }));
+}
+
+/** The drawing states the force asked for, with its tolerance; without one, the force the design gives. */
+function forceText(report: CompressionReport, load: CompressionLoadResult): string {
+  if (load.specifiedForce === null) return formatQuantity(load.force, 'force', report.units);
+  const force = formatQuantity(load.specifiedForce, 'force', report.units);
+  return load.tolerancePercent === null ? force : `${force} ±${plainNumber(load.tolerancePercent, 1)} %`;
+}
+
+export function loadRows(report: CompressionReport): TableRow[] {
+  if (report.loads.length === 0) return [];
+  return [
+    { cells: ['', 'L', 'F'], bold: true },
+    ...report.loads.map((load, i) => ({ cells: [String(i + 1), lengthText(report, load.length), forceText(report, load)] })),
+  ];
+}

@@ -1,0 +1,184 @@
+import { z } from 'zod';
+import type { FieldError, Result } from '../result';
+import { fail, fieldError, formatPath, ok } from '../result';
+
+/**
+ * Shop settings: one validated JSON document per key, stored one row per key. Every number given as a
+ * default below is a demo default: a round figure to start from, not a sourced value. A shop replaces
+ * them with its own.
+ */
+const money = z.number().finite().min(0);
+const percent = z.number().finite().min(0).max(1000);
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD');
+const text = (max: number) => z.string().max(max);
+
+export const shopProfileSchema = z.object({
+  name: text(120).default(''),
+  addressLines: z.array(text(120)).max(6).default([]),
+  phone: text(40).default(''),
+  email: text(120).default(''),
+  logo: z.string().regex(/^data:image\/(png|jpeg|svg\+xml);base64,/, 'a PNG, JPEG or SVG data URL').max(2_000_000).optional(),
+}).strict();
+
+export const defaultsSchema = z.object({
+  currency: z.string().regex(/^[A-Z]{3}$/, 'an ISO 4217 code such as USD').default('USD'),
+  paperSize: z.enum(['letter', 'a4']).default('letter'),
+  units: z.enum(['metric', 'inch']).default('metric'),
+  toleranceGrade: z.union([z.literal(1), z.literal(2), z.literal(3)]).default(2),
+  quoteValidityDays: z.number().int().min(1).max(365).default(30),
+}).strict();
+
+const sequence = {
+  /** `{yy}` and `{yyyy}` are replaced by the year of issue, e.g. "J-{yy}-" gives "J-26-0001". */
+  prefix: text(24),
+  width: z.number().int().min(1).max(10),
+  next: z.number().int().min(1),
+};
+
+export const numberingSchema = z.object({
+  prefix: sequence.prefix.default('J-{yy}-'),
+  width: sequence.width.default(4),
+  next: sequence.next.default(1),
+  quotes: z.object(sequence).strict().default({ prefix: 'Q-{yy}-', width: 4, next: 1 }),
+}).strict();
+
+export const machineOperations = [
+  'coil', 'grind', 'stress-relieve', 'set', 'shot-peen', 'load-test', 'loop-form', 'leg-form', 'pack',
+] as const;
+export type MachineOperation = (typeof machineOperations)[number];
+
+const range = z.object({ min: z.number().finite().min(0), max: z.number().finite().positive() }).strict()
+  .refine((r) => r.max >= r.min, { message: 'max must not be below min', path: ['max'] });
+
+export const machineSchema = z.object({
+  id: z.string().min(1).max(40),
+  name: z.string().min(1).max(120),
+  operation: z.enum(machineOperations),
+  wireRange: range,
+  hourlyRate: money,
+  setupMinutes: z.number().finite().min(0),
+  speedModel: z.object({
+    feedMetresPerMinute: z.number().finite().positive(),
+    maxPiecesPerMinute: z.number().finite().positive(),
+  }).strict().optional(),
+  batch: z.object({
+    capacityPieces: z.number().int().positive(),
+    cycleMinutes: z.number().finite().positive(),
+  }).strict().optional(),
+}).strict().refine((m) => m.operation !== 'coil' || m.speedModel !== undefined, {
+  message: 'a coiler needs a speed model', path: ['speedModel'],
+});
+
+export const materialPriceSchema = z.object({
+  grade: z.string().min(1),
+  dMin: z.number().finite().min(0),
+  dMax: z.number().finite().positive(),
+  pricePerKg: money,
+  date: isoDate,
+  supplier: text(120).default(''),
+}).strict().refine((p) => p.dMax >= p.dMin, { message: 'dMax must not be below dMin', path: ['dMax'] });
+
+export const finishSchema = z.object({
+  id: z.string().min(1).max(40),
+  name: z.string().min(1).max(120),
+  vendor: text(120).default(''),
+  pricePerKg: money.optional(),
+  pricePerPiece: money.optional(),
+  lotMinimum: money.default(0),
+  electroplated: z.boolean().default(false),
+  bakeSpecification: text(120).optional(),
+}).strict();
+
+export const wireStockSchema = z.object({
+  grade: z.string().min(1),
+  d: z.number().finite().positive(),
+  kg: z.number().finite().min(0),
+  heatNumber: text(60).optional(),
+}).strict();
+
+export const costingSchema = z.object({
+  /** Per operation name (a machine operation, or any key a costing model reads). Demo defaults. */
+  scrapPercentByOperation: z.record(z.string(), percent).default({ coil: 3, grind: 1, 'stress-relieve': 0.5 }),
+  setupScrapMetres: z.number().finite().min(0).default(5),
+  overheadPercent: percent.default(25),
+  marginPercent: percent.default(20),
+  inspectionHourlyRate: money.default(45),
+  firstArticleMinutes: z.number().finite().min(0).default(20),
+  inspectionMinutesPerPiece: z.number().finite().min(0).default(0.5),
+  packagingPerPiece: money.default(0.01),
+  minimumOrderValue: money.default(150),
+}).strict();
+
+function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): void {
+  const seen = new Set<string>();
+  items.forEach((item, i) => {
+    if (seen.has(item.id)) ctx.addIssue({ code: 'custom', message: `duplicate id "${item.id}"`, path: [i, 'id'] });
+    seen.add(item.id);
+  });
+}
+
+/** The schema of each settings key; the store keeps one row per key. */
+export const settingsSchemas = {
+  shopProfile: shopProfileSchema.default({ name: '', addressLines: [], phone: '', email: '' }),
+  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30 }),
+  numbering: numberingSchema.default({ prefix: 'J-{yy}-', width: 4, next: 1, quotes: { prefix: 'Q-{yy}-', width: 4, next: 1 } }),
+  machines: z.array(machineSchema).max(200).superRefine(uniqueIds).default([]),
+  materialPrices: z.array(materialPriceSchema).max(2000).default([]),
+  finishes: z.array(finishSchema).max(200).superRefine(uniqueIds).default([]),
+  wireStock: z.array(wireStockSchema).max(5000).default([]),
+  costing: costingSchema.default({
+    scrapPercentByOperation: { coil: 3, grind: 1, 'stress-relieve': 0.5 }, setupScrapMetres: 5,
+    overheadPercent: 25, marginPercent: 20, inspectionHourlyRate: 45, firstArticleMinutes: 20,
+    inspectionMinutesPerPiece: 0.5, packagingPerPiece: 0.01,
+    minimumOrderValue: 150,
+  }),
+};
+
+export const settingsSchema = z.object(settingsSchemas).strict();
+export type Settings = z.infer<typeof settingsSchema>;
+export type SettingsInput = z.input<typeof settingsSchema>;
+export type SettingsKey = keyof typeof settingsSchemas;
+export const settingsKeys = Object.keys(settingsSchemas) as SettingsKey[];
+export type Machine = z.infer<typeof machineSchema>;
+export type MaterialPrice = z.infer<typeof materialPriceSchema>;
+export type Finish = z.infer<typeof finishSchema>;
+
+/** The settings of a new shop: every key at its default. */
+export function defaultSettings(): Settings {
+  return settingsSchema.parse({});
+}
+
+function issuesToErrors(error: z.ZodError, prefix: readonly PropertyKey[]): FieldError[] {
+  return error.issues.map((issue) => {
+    if (issue.code === 'unrecognized_keys') {
+      return fieldError('unknown-field', formatPath([...prefix, ...issue.path, issue.keys[0] ?? '']),
+        `unknown field(s): ${issue.keys.join(', ')}`);
+    }
+    return fieldError(`invalid-${issue.code.replace(/_/g, '-')}`, formatPath([...prefix, ...issue.path]), issue.message);
+  });
+}
+
+/** Validates one settings document; error paths start with the key, e.g. "machines[2].hourlyRate". */
+export function parseSettingsValue<K extends SettingsKey>(key: K, raw: unknown): Result<Settings[K]> {
+  const parsed = settingsSchemas[key].safeParse(raw);
+  return parsed.success ? ok(parsed.data as Settings[K]) : fail(issuesToErrors(parsed.error, [key]));
+}
+
+/** Validates a partial settings object (only the keys given); unknown keys are errors. */
+export function parseSettingsPatch(raw: unknown): Result<Partial<Settings>> {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+    return fail([fieldError('not-an-object', '', 'settings must be a JSON object')]);
+  }
+  const errors: FieldError[] = [];
+  const out: Partial<Record<SettingsKey, unknown>> = {};
+  for (const [key, value] of Object.entries(raw)) {
+    if (!Object.hasOwn(settingsSchemas, key)) {
+      errors.push(fieldError('unknown-field', key, `unknown settings key "${key}" (known: ${settingsKeys.join(', ')})`));
+      continue;
+    }
+    const parsed = parseSettingsValue(key as SettingsKey, value);
+    if (parsed.ok) out[key as SettingsKey] = parsed.value;
+    else errors.push(...parsed.errors);
+  }
+  return errors.length > 0 ? fail(errors) : ok(out as Partial<Settings>);
+}

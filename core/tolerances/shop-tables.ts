@@ -1,0 +1,119 @@
+/**
+ * Load and free-length tolerances as shop-editable tables (± % of the value, never less than a minimum).
+ * EN 15800 derives both from factors the public material does not give, so the shop enters its own;
+ * the defaults below are demo defaults only.
+ */
+import type { FieldError } from '../result';
+import { fieldError } from '../result';
+import type { Band } from './bands';
+import { findBand, firstBandBreak } from './bands';
+import type { Lookup, ToleranceGrade } from './lookup';
+import { checkPositive, found, notFound } from './lookup';
+
+export interface ShopToleranceRow extends Band {
+  grade: ToleranceGrade;
+  percent: number;
+  /** Floor in the quantity's internal unit: N for load, mm for free length. */
+  minimum: number;
+}
+
+export interface ShopToleranceTable {
+  quantity: 'load' | 'freeLength';
+  /** What the bands count: spring index w = D/d, or active coils n. */
+  bandedBy: 'index' | 'activeCoils';
+  rows: ShopToleranceRow[];
+  source: string;
+  verified: boolean;
+}
+
+const DEMO = 'demo defaults, shop to set';
+
+const rowsFor = (grade: ToleranceGrade, bands: readonly (readonly [number, number, number, number])[]): ShopToleranceRow[] =>
+  bands.map(([over, upTo, percent, minimum]) => ({ grade, over, upTo, percent, minimum }));
+
+/** Shaped like the Chinese grade table (±5/10/15 % for 3–10 coils, ±4/8/12 % above; notes §2.2). */
+export const demoLoadTolerances: ShopToleranceTable = {
+  quantity: 'load',
+  bandedBy: 'activeCoils',
+  source: `${DEMO} (shaped like the cold-coiled compression-spring table reprinted at chinacustomspring.com)`,
+  verified: false,
+  rows: [
+    ...rowsFor(1, [[3, 10, 5, 0], [10, Infinity, 4, 0]]),
+    ...rowsFor(2, [[3, 10, 10, 0], [10, Infinity, 8, 0]]),
+    ...rowsFor(3, [[3, 10, 15, 0], [10, Infinity, 12, 0]]),
+  ],
+};
+
+/** Grade 2 starts from ±2 % (min 0.5 mm) at w 4–8 (notes §2.2); grades 1 and 3 scaled by 0.63 and 1.6. */
+export const demoFreeLengthTolerances: ShopToleranceTable = {
+  quantity: 'freeLength',
+  bandedBy: 'index',
+  source: `${DEMO} (grade-2 row after chinacustomspring.com; grade scaling after the EN 15800 factor Q, from memory)`,
+  verified: false,
+  rows: [
+    ...rowsFor(1, [[4, 8, 1.3, 0.3], [8, 15, 1.9, 0.3], [15, 22, 2.5, 0.3]]),
+    ...rowsFor(2, [[4, 8, 2, 0.5], [8, 15, 3, 0.5], [15, 22, 4, 0.5]]),
+    ...rowsFor(3, [[4, 8, 3.2, 0.8], [8, 15, 4.8, 0.8], [15, 22, 6.4, 0.8]]),
+  ],
+};
+
+/** Bands of each grade must be contiguous and increasing; percent and minimum not negative. */
+export function checkShopToleranceTable(table: ShopToleranceTable): FieldError[] {
+  const errors: FieldError[] = [];
+  table.rows.forEach((r, i) => {
+    if (!(r.percent >= 0)) errors.push(fieldError('negative-tolerance', `rows[${i}].percent`, 'percent must be 0 or more'));
+    if (!(r.minimum >= 0)) errors.push(fieldError('negative-tolerance', `rows[${i}].minimum`, 'minimum must be 0 or more'));
+  });
+  for (const grade of [1, 2, 3] as const) {
+    const rows = table.rows.filter((r) => r.grade === grade);
+    const broken = firstBandBreak(rows);
+    if (broken >= 0) {
+      errors.push(fieldError('bands-not-contiguous', `rows[${table.rows.indexOf(rows[broken] as ShopToleranceRow)}]`,
+        `grade ${grade}: each band must start where the previous one ends and end above its start`));
+    }
+  }
+  return errors;
+}
+
+export interface PlusMinus {
+  plusMinus: number;
+  percent: number;
+}
+
+function lookupRow(table: ShopToleranceTable, grade: ToleranceGrade, key: number, value: number): Lookup<PlusMinus> {
+  const row = findBand(table.rows.filter((r) => r.grade === grade), key, true);
+  if (!row) {
+    return notFound('not-in-shop-table', table.bandedBy,
+      `the shop's ${table.quantity} table has no grade ${grade} row for ${table.bandedBy} ${key}: by agreement`);
+  }
+  return found({ plusMinus: Math.max((row.percent / 100) * value, row.minimum), percent: row.percent }, table);
+}
+
+/** ± N on a specified load, from the shop's table (demo defaults unless the shop has set its own). */
+export function loadTolerance(
+  input: { load: number; grade?: ToleranceGrade; activeCoils: number; index: number },
+  table: ShopToleranceTable = demoLoadTolerances,
+): Lookup<PlusMinus> {
+  const { load, grade = 2, activeCoils, index } = input;
+  const bad = checkPositive({ load, activeCoils, index });
+  if (bad) return bad;
+  return lookupRow(table, grade, table.bandedBy === 'index' ? index : activeCoils, load);
+}
+
+export type FreeLengthTolerance = { reference: true } | ({ reference: false } & PlusMinus);
+
+const REFERENCE_RULE = 'EN 15800 / DIN 2095: where a force is specified, L0 is a reference dimension ' +
+  'and only the force is checked (from memory, shop-practice notes §2.1)';
+
+/** ± mm on L0, or `{ reference: true }` when a load is specified (the maker then adjusts L0 to hit it). */
+export function freeLengthTolerance(
+  input: { L0: number; grade?: ToleranceGrade; index: number; activeCoils: number; loadSpecified: boolean },
+  table: ShopToleranceTable = demoFreeLengthTolerances,
+): Lookup<FreeLengthTolerance> {
+  const { L0, grade = 2, index, activeCoils, loadSpecified } = input;
+  const bad = checkPositive({ L0, index, activeCoils });
+  if (bad) return bad;
+  if (loadSpecified) return found({ reference: true }, { source: REFERENCE_RULE, verified: false });
+  const r = lookupRow(table, grade, table.bandedBy === 'index' ? index : activeCoils, L0);
+  return r.ok ? { ...r, value: { reference: false, ...r.value } } : r;
+}

@@ -1,0 +1,18 @@
+// Bundles the benchmark the way the app ships its code (one esbuild bundle, no on-the-fly
+// transpiler), then runs it. Arguments pass through: `npm run bench -- engine`.
+import { build } from 'esbuild';
+import { spawnSync } from 'node:child_process';
+
+const outfile = 'dist/bench/run.cjs';
+await build({
+  entryPoints: ['bench/run.ts'],
+  bundle: true,
+  platform: 'node',
+  target: 'node20',
+  format: 'cjs',
+  outfile,
+  external: ['better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'pdf-parse', 'playwright-core', 'electron'],
+  logLevel: 'warning',
+});
+const run = spawnSync(process.execPath, ['--expose-gc', outfile, ...process.argv.slice(2)], { stdio: 'inherit' });
+process.exit(run.status ?? 1);
