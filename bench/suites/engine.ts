@@ -33,7 +33,7 @@ export const engineSuite: BenchSuite = {
   run(): BenchRow[] {
     const pool = specPool(1024);
     let sink = 0;
-    const full = throughput((i) => { sink += analyseSpec(pool[i & 1023]!).rate; }, 2000);
+    const full = throughput((i) => { sink += analyseSpec(pool[i & 1023]!).springIndex; }, 2000);
     const bare = throughput((i) => {
       const s = pool[i & 1023]! as Extract<Spec, { kind: 'compression' }>;
       const D = s.meanDiameter!;
@@ -41,7 +41,7 @@ export const engineSuite: BenchSuite = {
       sink += bergstraesser(D / s.wireDiameter) * torsionStressPerForce(D, s.wireDiameter) * rate * (s.freeLength - s.wireDiameter * s.totalCoils!);
     }, 1000);
     const raw = pool.map((s) => JSON.parse(JSON.stringify(s)));
-    const validated = throughput((i) => { const p = parseSpec(raw[i & 1023]); if (p.ok) sink += analyseSpec(p.value).rate; }, 1000);
+    const validated = throughput((i) => { const p = parseSpec(raw[i & 1023]); if (p.ok) sink += analyseSpec(p.value).springIndex; }, 1000);
     if (sink === 42) console.log('');
     return [
       { suite: 'engine', name: 'compression analysis + review', value: full, unit: 'specs/s', target: '≥ 200 000', pass: full >= 200_000 },

@@ -5,6 +5,8 @@ export type { StrengthAt } from './lookup';
 export { wireProperties } from './properties';
 export { gradeSummaries } from './summaries';
 export type { GradeSummary, StrengthSourceSummary } from './summaries';
-export { staticAllowables } from './allowables';
-export type { StaticAllowable } from './allowables';
+export {
+  EN_EXTENSION_STATIC_FRACTION, EN_TORSION_STATIC_FRACTION, extensionAllowables, staticAllowables, torsionAllowables,
+} from './allowables';
+export type { ExtensionAllowable, StaticAllowable } from './allowables';
 export type * from './types';

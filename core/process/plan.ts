@@ -4,27 +4,38 @@ import { convertFields, fromInternal } from '../units';
 import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import type { ToleranceGrade } from '../tolerances';
+import type { CoilBody } from '../springs/coil-body';
 import { compressionDesign } from '../springs/compression/design';
-import type { CompressionDesign } from '../springs/compression/design';
 import { analyseCompression } from '../springs/compression/analyse';
-import type { CompressionReport } from '../springs/compression/report';
+import { extensionDesign } from '../springs/extension/design';
+import { analyseExtension } from '../springs/extension/analyse';
+import { torsionDesign } from '../springs/torsion/design';
+import { analyseTorsion } from '../springs/torsion/analyse';
 import { reviewCompression } from '../review/compression';
+import { reviewExtension } from '../review/extension';
+import { reviewTorsion } from '../review/torsion';
+import { checkBakeSpecification } from '../finishing/bake';
 import { compressionRouting } from './compression-routing';
-import type { RoutingChoices } from './compression-routing';
-import { compressionInspection } from './inspection-plan';
+import { extensionRouting } from './extension-routing';
+import { torsionRouting } from './torsion-routing';
+import type { RoutingChoices } from './operations';
+import { compressionInspection } from './compression-inspection';
+import { extensionInspection } from './extension-inspection';
+import { torsionInspection } from './torsion-inspection';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
 import type { LotWire, Operation, OperationSetting } from './types';
 
-/** How the shop makes one order of a spring. Internal units; `planQuantities` converts out. */
+/** How the shop makes one order of a spring. Internal units; `planInSpecUnits` converts out. */
 export interface ManufacturingPlan {
   kind: Spec['kind'];
   units: Spec['units'];
   orderQuantity: number;
   toleranceGrade: ToleranceGrade;
   material: { grade: string; name: string; wireDiameter: number; tensileStrength: number; diameterTolerance: string };
-  coiledFreeLength: number;
-  freeLength: number;
+  /** Free length to coil to (compression: with the set-removal allowance); null for torsion springs. */
+  coiledFreeLength: number | null;
+  freeLength: number | null;
   wireLengthPerPiece: number;
   massPerPiece: number;
   massPer1000: number;
@@ -36,7 +47,7 @@ export interface ManufacturingPlan {
 
 export const DEFAULT_AQL = 1.0;
 
-function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number): RoutingChoices {
+function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number, tensileStrength: number): RoutingChoices {
   const finishId = spec.finish ?? 'none';
   const finish = finishId === 'none' ? null : settings.finishes.find((f) => f.id === finishId) ?? null;
   if (finishId !== 'none' && !finish) {
@@ -44,49 +55,84 @@ function routingChoices(spec: Spec, settings: Settings, findings: Finding[], sta
       message: `finish "${finishId}" is not in the shop's finishes`, fix: 'choose one from Settings → Finishes, or "none"' });
   }
   const bake = spec.bakeSpecification ?? finish?.bakeSpecification ?? null;
-  if (finish?.electroplated && !bake) {
-    findings.push({ code: 'bake-specification-missing', severity: 'error', path: 'bakeSpecification',
-      message: `${finish.name} is electroplated: a hydrogen-embrittlement relief bake must be specified`,
-      fix: 'name the bake specification the customer requires (e.g. ASTM B850, ISO 4042, SAE/USCAR-5)' });
-  }
+  if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength));
+  const peened = spec.duty.type === 'cyclic' && spec.duty.peened;
   return {
-    directionOfWind: spec.directionOfWind ?? 'either',
-    shotPeen: spec.shotPeen ?? (spec.duty.type === 'cyclic' && spec.duty.peened),
+    directionOfWind: spec.kind === 'torsion' ? spec.windDirection : spec.directionOfWind ?? 'either',
+    shotPeen: spec.kind === 'compression' && (spec.shotPeen ?? peened),
     finish, bakeSpecification: bake, startQuantity: start,
   };
 }
 
-function assemble(
-  spec: Spec, settings: Settings, x: CompressionDesign, r: CompressionReport, orderQuantity: number, findings: Finding[],
-): ManufacturingPlan {
-  const grade = (spec.toleranceGrade ?? settings.defaults.toleranceGrade) as ToleranceGrade;
-  // The routing's scrap rates set the start quantity, which in turn sets oven batches: route twice.
-  const first = compressionRouting(settings, x, r, routingChoices(spec, settings, [], orderQuantity));
-  const start = startQuantity(orderQuantity, first);
-  const operations = compressionRouting(settings, x, r, routingChoices(spec, settings, findings, start));
-  const coiled = r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength;
-  return {
-    kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
-    material: {
-      grade: x.wire.gradeId, name: x.wire.gradeName, wireDiameter: x.d, tensileStrength: x.wire.tensileStrength,
-      diameterTolerance: 'per the wire standard of the grade',
-    },
-    coiledFreeLength: coiled, freeLength: r.freeLength,
-    wireLengthPerPiece: r.wireLength, massPerPiece: r.mass, massPer1000: 1000 * r.mass,
-    lotWire: lotWire(start, r.wireLength, settings.costing.setupScrapMetres, x.d, x.wire.density),
-    operations,
-    inspection: compressionInspection(x, r, orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
-    findings,
-  };
+/** What the plan needs from one kind of spring: its resolved design, findings, routing and inspection. */
+interface KindPlanner {
+  body: CoilBody;
+  findings: Finding[];
+  coiledFreeLength: number | null;
+  freeLength: number | null;
+  wireLength: number;
+  mass: number;
+  route(choices: RoutingChoices): Operation[];
+  inspect(lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[]): InspectionPlan;
+}
+
+const unknownGrade = (spec: Spec): never => {
+  throw new Error(`unknown wire grade ${spec.material}: validate specs with parseSpec first`);
+};
+
+function plannerFor(spec: Spec, settings: Settings): KindPlanner {
+  switch (spec.kind) {
+    case 'compression': {
+      const x = compressionDesign(spec) ?? unknownGrade(spec);
+      const r = analyseCompression(x);
+      const coiled = r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength;
+      return {
+        body: x, findings: reviewCompression(x, r), coiledFreeLength: coiled, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
+        route: (c) => compressionRouting(settings, x, r, c),
+        inspect: (lot, aql, grade, f) => compressionInspection(x, r, lot, aql, grade, f),
+      };
+    }
+    case 'extension': {
+      const x = extensionDesign(spec) ?? unknownGrade(spec);
+      const r = analyseExtension(x);
+      return {
+        body: x, findings: reviewExtension(x, r), coiledFreeLength: r.freeLength, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
+        route: (c) => extensionRouting(settings, x, r, c),
+        inspect: (lot, aql, grade, f) => extensionInspection(x, r, lot, aql, grade, f),
+      };
+    }
+    case 'torsion': {
+      const x = torsionDesign(spec) ?? unknownGrade(spec);
+      const r = analyseTorsion(x);
+      return {
+        body: x, findings: reviewTorsion(x, r), coiledFreeLength: null, freeLength: null, wireLength: r.wireLength, mass: r.mass,
+        route: (c) => torsionRouting(settings, x, r, c),
+        inspect: (lot, aql, grade, f) => torsionInspection(x, r, lot, aql, grade, f),
+      };
+    }
+  }
 }
 
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
 export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number): ManufacturingPlan {
-  const x = compressionDesign(spec);
-  if (!x) throw new Error(`unknown wire grade ${spec.material}: validate specs with parseSpec first`);
-  const r = analyseCompression(x);
-  const findings = reviewCompression(x, r);
-  return assemble(spec, settings, x, r, orderQuantity, findings);
+  const k = plannerFor(spec, settings);
+  const { wire, d } = k.body;
+  const findings = k.findings;
+  const grade = (spec.toleranceGrade ?? settings.defaults.toleranceGrade) as ToleranceGrade;
+  // The routing's scrap rates set the start quantity, which in turn sets oven batches: route twice.
+  const first = k.route(routingChoices(spec, settings, [], orderQuantity, wire.tensileStrength));
+  const start = startQuantity(orderQuantity, first);
+  return {
+    kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
+    material: { grade: wire.gradeId, name: wire.gradeName, wireDiameter: d, tensileStrength: wire.tensileStrength,
+      diameterTolerance: 'per the wire standard of the grade' },
+    coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
+    wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
+    lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),
+    operations: k.route(routingChoices(spec, settings, findings, start, wire.tensileStrength)),
+    inspection: k.inspect(orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
+    findings,
+  };
 }
 
 /** Unit map for converting a plan to the spec's units (operation settings carry their own quantity). */

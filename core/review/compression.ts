@@ -1,34 +1,12 @@
-import type { Finding, Severity } from '../result';
+import type { Finding } from '../result';
 import { formatQuantity, significant } from '../format';
 import type { CompressionDesign } from '../springs/compression/design';
 import type { CompressionReport } from '../springs/compression/report';
 import { endForms } from '../springs/compression/ends';
 import { SURGE_MARGIN } from '../springs/compression/surge';
 import { reviewLimits as lim } from './limits';
-
-type Sink = Finding[];
-
-const add = (out: Sink, severity: Severity, code: string, path: string, message: string, fix = ''): void => {
-  out.push({ code, severity, message, path, fix });
-};
-
-const diameterPath = (x: CompressionDesign): string =>
-  x.diameterGiven === 'outer' ? 'outerDiameter' : x.diameterGiven === 'inner' ? 'innerDiameter' : 'meanDiameter';
-
-function reviewIndex(x: CompressionDesign, r: CompressionReport, out: Sink): void {
-  const w = r.springIndex;
-  const shown = significant(w);
-  if (w > lim.makeableIndex.max) {
-    add(out, 'error', 'index-not-makeable', diameterPath(x),
-      `spring index ${shown} is above ${lim.makeableIndex.max}: the coil will not hold its diameter`,
-      'use heavier wire or a smaller coil diameter');
-  } else if (w < lim.preferredIndex.min || w > lim.preferredIndex.max) {
-    add(out, 'warning', 'index-outside-preferred', diameterPath(x),
-      `spring index ${shown} is outside the preferred ${lim.preferredIndex.min}–${lim.preferredIndex.max}: ` +
-      (w < lim.preferredIndex.min ? 'hard to coil, high curvature stress' : 'springs tangle and diameters wander'),
-      'change wire or coil diameter towards an index of 6–10');
-  }
-}
+import { add, reviewIndex, reviewServiceTemperature } from './common';
+import type { Sink } from './common';
 
 function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const s = r.setRemoval;
@@ -153,18 +131,7 @@ function reviewScope(x: CompressionDesign, r: CompressionReport, out: Sink): voi
 }
 
 function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): void {
-  const t = x.serviceTemperature;
-  const range = x.wire.serviceTemperature;
-  if (t && t.max > range.max) {
-    add(out, 'error', 'temperature-above-grade', 'serviceTemperature.max',
-      `service temperature ${formatQuantity(t.max, 'temperature', x.units)} is above the ${x.wire.gradeName} limit ` +
-      `${formatQuantity(range.max, 'temperature', x.units)}: the spring will relax`, 'choose a grade rated for the temperature');
-  }
-  if (t && t.min < range.min) {
-    add(out, 'warning', 'temperature-below-grade', 'serviceTemperature.min',
-      `service temperature ${formatQuantity(t.min, 'temperature', x.units)} is below the ${x.wire.gradeName} limit ` +
-      `${formatQuantity(range.min, 'temperature', x.units)}: risk of brittle fracture`, 'choose a grade rated for the temperature');
-  }
+  reviewServiceTemperature(x, out);
   if (x.duty.type !== 'cyclic') return;
   if (!x.wire.dynamicGrade) {
     add(out, 'warning', 'grade-not-for-cyclic-duty', 'material',
@@ -187,7 +154,7 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
 /** The maker's review of a compression spring: every finding names the field it concerns. */
 export function reviewCompression(x: CompressionDesign, r: CompressionReport): Finding[] {
   const out: Finding[] = [...x.wireFindings];
-  reviewIndex(x, r, out);
+  reviewIndex(x, r.springIndex, out);
   reviewSolidStress(x, r, out);
   reviewWorkingLengths(x, r, out);
   reviewLoads(x, r, out);

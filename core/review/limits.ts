@@ -13,4 +13,12 @@ export const reviewLimits = {
   minimumActiveCoils: 3,
   /** EN 15800 Table 1 scope of the tolerance standard (CEN/TC listing). */
   en15800: { d: { min: 0.07, max: 16 }, D: { min: 0.63, max: 200 }, L0Max: 630, nMin: 2, w: { min: 4, max: 20 } },
+  /** Scope of EN 13906-2 and -3, cold coiled (DIN catalogue page): d ≤ 20 mm, n ≥ 3, 4 ≤ w ≤ 20. */
+  en13906ColdCoiled: { dMax: 20, nMin: 3, w: { min: 4, max: 20 } },
+  /** Extension hooks: side-bend radius at least 1.5·d (spring makers' review checklists, common practice). */
+  minimumHookBendRadius: 1.5,
+  /** Torsion legs: bend radius at least d (common practice). */
+  minimumLegBendRadius: 1,
+  /** Torsion arbor: about 10 % clearance to the smallest loaded inside diameter (common practice). */
+  minimumArborClearance: 0.1,
 } as const;

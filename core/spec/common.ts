@@ -2,6 +2,7 @@ import { z } from 'zod';
 
 /** Schema pieces shared by every spring kind. Values are in the spec's own unit system. */
 export const positive = z.number().finite().positive();
+export const nonNegative = z.number().finite().nonnegative();
 
 
 export const unitSystemSchema = z.enum(['metric', 'inch']);
@@ -35,3 +36,29 @@ export const orderFieldsShape = {
 };
 
 export const specVersionSchema = z.literal(1).optional();
+
+/** Wire, one coil diameter and mill-certificate overrides: the same fields for every kind. */
+export const coilBodyShape = {
+  version: specVersionSchema,
+  units: unitSystemSchema,
+  material: z.string().min(1),
+  wireDiameter: positive,
+  outerDiameter: positive.optional(),
+  innerDiameter: positive.optional(),
+  meanDiameter: positive.optional(),
+  materialOverrides: materialOverridesSchema.optional(),
+  notes: z.string().max(4000).optional(),
+};
+
+/** A force the drawing asks for, with its tolerance (± %). */
+export const toleranceShape = { tolerancePercent: positive.max(100).optional() };
+
+export const cyclicDutySchema = z
+  .object({
+    type: z.literal('cyclic'),
+    between: z.tuple([positive, positive]),
+    cycles: positive,
+    peened: z.boolean().default(false),
+    frequency: positive.optional(),
+  })
+  .strict();

@@ -1,18 +1,8 @@
 import type { FieldError } from '../result';
 import { fieldError } from '../result';
-import { findGrade } from '../materials';
 import { endForms, solidLength } from '../springs/compression/ends';
 import type { CompressionSpec } from './compression';
-
-/** Index below which a coil cannot be wound on an arbor at all (the spec is rejected). */
-export const MINIMUM_INDEX = 2;
-
-function diameterErrors(s: CompressionSpec): FieldError[] {
-  const given = [s.outerDiameter, s.innerDiameter, s.meanDiameter].filter((v) => v !== undefined).length;
-  if (given === 1) return [];
-  return [fieldError('diameter-count', 'outerDiameter',
-    `give exactly one of outerDiameter, innerDiameter, meanDiameter (${given} given)`)];
-}
+import { coilBodyErrors } from './common-rules';
 
 function coilErrors(s: CompressionSpec): FieldError[] {
   const given = [s.totalCoils, s.activeCoils].filter((v) => v !== undefined).length;
@@ -25,12 +15,6 @@ function coilErrors(s: CompressionSpec): FieldError[] {
   const path = s.activeCoils !== undefined ? 'activeCoils' : 'totalCoils';
   return [fieldError('too-few-coils', path,
     `${s.ends} ends take ${inactive} inactive coils, so at least ${inactive + 1} total coils are needed`)];
-}
-
-function meanDiameterOf(s: CompressionSpec): { D: number; path: string } {
-  if (s.outerDiameter !== undefined) return { D: s.outerDiameter - s.wireDiameter, path: 'outerDiameter' };
-  if (s.innerDiameter !== undefined) return { D: s.innerDiameter + s.wireDiameter, path: 'innerDiameter' };
-  return { D: s.meanDiameter ?? Number.NaN, path: 'meanDiameter' };
 }
 
 function lengthErrors(s: CompressionSpec): FieldError[] {
@@ -64,17 +48,6 @@ function lengthErrors(s: CompressionSpec): FieldError[] {
 
 /** Checks a schema-valid compression spec for contradictions the schema cannot express. */
 export function compressionSpecErrors(s: CompressionSpec): FieldError[] {
-  const errors: FieldError[] = [];
-  if (!findGrade(s.material)) {
-    errors.push(fieldError('unknown-material', 'material', `unknown wire grade "${s.material}" (see the materials list)`));
-  }
-  errors.push(...diameterErrors(s), ...coilErrors(s));
-  if (errors.length > 0) return errors;
-  const { D, path } = meanDiameterOf(s);
-  if (!(D / s.wireDiameter >= MINIMUM_INDEX)) {
-    errors.push(fieldError('index-too-small', path,
-      `spring index D/d = ${(D / s.wireDiameter).toPrecision(3)} is below ${MINIMUM_INDEX}: the coil cannot be wound`));
-    return errors;
-  }
-  return [...errors, ...lengthErrors(s)];
+  const errors = [...coilBodyErrors(s), ...coilErrors(s)];
+  return errors.length > 0 ? errors : lengthErrors(s);
 }

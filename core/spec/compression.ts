@@ -1,8 +1,5 @@
 import { z } from 'zod';
-import {
-  materialOverridesSchema, orderFieldsShape, positive, specVersionSchema, staticDutySchema,
-  unitSystemSchema,
-} from './common';
+import { coilBodyShape, cyclicDutySchema, toleranceShape, orderFieldsShape, positive, staticDutySchema } from './common';
 
 export const compressionEndsSchema = z.enum(['closed-ground', 'closed', 'open-ground', 'open']);
 
@@ -13,23 +10,13 @@ export const compressionLoadSchema = z
   .object({
     length: positive,
     force: positive.optional(),
-    tolerancePercent: positive.max(100).optional(),
+    ...toleranceShape,
   })
   .strict()
   .refine((l) => l.tolerancePercent === undefined || l.force !== undefined, {
     message: 'a tolerance needs a force to apply to',
     path: ['tolerancePercent'],
   });
-
-export const cyclicDutySchema = z
-  .object({
-    type: z.literal('cyclic'),
-    between: z.tuple([positive, positive]),
-    cycles: positive,
-    peened: z.boolean().default(false),
-    frequency: positive.optional(),
-  })
-  .strict();
 
 /**
  * Dimensions the drawing leaves to the maker (EN 15800's compensating parameters). With a specified
@@ -39,14 +26,8 @@ export const freeParameterSchema = z.enum(['wireDiameter', 'diameter', 'coils', 
 
 export const compressionSpecSchema = z
   .object({
-    version: specVersionSchema,
     kind: z.literal('compression'),
-    units: unitSystemSchema,
-    material: z.string().min(1),
-    wireDiameter: positive,
-    outerDiameter: positive.optional(),
-    innerDiameter: positive.optional(),
-    meanDiameter: positive.optional(),
+    ...coilBodyShape,
     totalCoils: positive.optional(),
     activeCoils: positive.optional(),
     ends: compressionEndsSchema,
@@ -55,8 +36,6 @@ export const compressionSpecSchema = z
     seating: seatingSchema.default('both-fixed'),
     duty: z.discriminatedUnion('type', [staticDutySchema, cyclicDutySchema]).default({ type: 'static' }),
     freeParameters: z.array(freeParameterSchema).max(4).default([]),
-    materialOverrides: materialOverridesSchema.optional(),
-    notes: z.string().max(4000).optional(),
     ...orderFieldsShape,
   })
   .strict();

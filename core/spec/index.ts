@@ -3,16 +3,22 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, formatPath, ok } from '../result';
 import { compressionSpecSchema } from './compression';
 import { compressionSpecErrors } from './compression-rules';
+import { extensionSpecSchema } from './extension';
+import { extensionSpecErrors } from './extension-rules';
+import { torsionSpecSchema } from './torsion';
+import { torsionSpecErrors } from './torsion-rules';
 
 export * from './compression';
+export * from './extension';
+export * from './torsion';
 
 /** The one input shape of a spring, for every kind; the same in the UI, the store, the CLI and import files. */
-export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema]);
+export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema, extensionSpecSchema, torsionSpecSchema]);
 
 export type Spec = z.infer<typeof specSchema>;
 export type SpecInput = z.input<typeof specSchema>;
 export type SpringKind = Spec['kind'];
-export const springKinds: readonly SpringKind[] = ['compression'];
+export const springKinds: readonly SpringKind[] = ['compression', 'extension', 'torsion'];
 
 function schemaErrors(error: z.ZodError): FieldError[] {
   const out: FieldError[] = [];
@@ -38,6 +44,8 @@ export function parseSpec(raw: unknown): Result<Spec> {
   }
   const parsed = specSchema.safeParse(raw);
   if (!parsed.success) return fail(schemaErrors(parsed.error));
-  const errors = compressionSpecErrors(parsed.data);
-  return errors.length > 0 ? fail(errors) : ok(parsed.data);
+  const spec = parsed.data;
+  const errors = spec.kind === 'compression' ? compressionSpecErrors(spec)
+    : spec.kind === 'extension' ? extensionSpecErrors(spec) : torsionSpecErrors(spec);
+  return errors.length > 0 ? fail(errors) : ok(spec);
 }

@@ -9,7 +9,10 @@ export const wahl = (c: number): number => (4 * c - 1) / (4 * c - 4) + 0.615 / c
 /** Direct-shear factor Ks = (2C + 1)/(2C), Shigley 9e Eq. (10-2) (from memory). */
 export const directShear = (c: number): number => (2 * c + 1) / (2 * c);
 
-/** Torsion-spring bending factor, inner fibre: Ki = (4C² − C − 1)/(4C(C − 1)), Shigley 9e §10-12. */
+/**
+ * Bending factor at the inside of a curved wire: Ki = (4C² − C − 1)/(4C(C − 1)), Shigley 9e §10-12 for torsion
+ * springs; the same form is (K)A of an extension hook's bending section with C1 = 2r1/d (§10-11).
+ */
 export const bendingInner = (c: number): number => (4 * c * c - c - 1) / (4 * c * (c - 1));
 
 /** Torsion-spring bending factor, outer fibre: Ko = (4C² + C − 1)/(4C(C + 1)), Shigley 9e §10-12. */
@@ -17,3 +20,6 @@ export const bendingOuter = (c: number): number => (4 * c * c + c - 1) / (4 * c 
 
 /** EN 13906-3 bending correction q = (w + 0.07)/(w − 0.75) (from memory). */
 export const enBending = (c: number): number => (c + 0.07) / (c - 0.75);
+
+/** Torsion curvature factor of an extension hook's side bend: (K)B = (4C2 − 1)/(4C2 − 4), C2 = 2r2/d (Shigley 9e §10-11). */
+export const hookTorsion = (c2: number): number => (4 * c2 - 1) / (4 * c2 - 4);

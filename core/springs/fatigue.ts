@@ -18,6 +18,8 @@ export const TORSIONAL_ULTIMATE_RATIO = 0.67;
  */
 export const fatigueCriteria = { goodmanPass: 1.2, gerberFail: 1.0, source: 'common trade practice' } as const;
 
+import type { QuantityMap } from '../units';
+
 export type FatigueVerdict = 'pass' | 'marginal' | 'fail';
 
 export interface FatigueResult {
@@ -67,3 +69,9 @@ export function fatigueCheck(stressA: number, stressB: number, tensileStrength: 
     goodmanSafetyFactor: goodman, gerberSafetyFactor: gerber, verdict,
   };
 }
+
+/** Units of a fatigue result's fields, for converting reports out. */
+export const fatigueQuantities: QuantityMap = {
+  stressMin: 'stress', stressMax: 'stress', stressAlternating: 'stress', stressMean: 'stress',
+  stressRange: 'stress', ultimateShear: 'stress', enduranceAlternating: 'stress', enduranceMean: 'stress',
+};

@@ -2,14 +2,15 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyseSpec, calculate } from '../../core/calculate';
 import { parseSpec } from '../../core/spec';
-import type { CompressionSpecInput, Spec } from '../../core/spec';
+import type { CompressionSpec, CompressionSpecInput } from '../../core/spec';
 import { permanentSet } from '../../core/springs/compression/set-removal';
 import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from '../../core/units';
 import { referenceSpring, valveSpringMetric } from '../fixtures/specs';
 
-const spec = (input: CompressionSpecInput): Spec => {
+const spec = (input: CompressionSpecInput): CompressionSpec => {
   const parsed = parseSpec(input);
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+  if (parsed.value.kind !== 'compression') throw new Error('not a compression spec');
   return parsed.value;
 };
 
@@ -46,7 +47,7 @@ describe('compression report in the spec\'s units', () => {
   it('reports the metric example and flags nothing it should not', () => {
     const result = calculate(valveSpringMetric);
     expect(result.ok).toBe(true);
-    if (!result.ok) return;
+    if (!result.ok || result.value.kind !== 'compression') throw new Error('expected a compression report');
     const r = result.value;
     expect(r.outerDiameter).toBeCloseTo(22, 10);
     expect(r.meanDiameter).toBeCloseTo(20, 10);

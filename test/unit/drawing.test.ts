@@ -122,6 +122,7 @@ function expectLinearOneTwoFive(values: number[]): void {
 function analyse(input: SpecInput): CompressionReport {
   const parsed = parseSpec(input);
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
+  if (parsed.value.kind !== 'compression') throw new Error('expected a compression spec');
   return analyseSpec(parsed.value);
 }
 

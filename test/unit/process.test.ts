@@ -4,14 +4,15 @@ import { startQuantity } from '../../core/process/lot-wire';
 import { settingsSchema } from '../../core/settings/schema';
 import type { SettingsInput } from '../../core/settings/schema';
 import { parseSpec } from '../../core/spec';
-import type { Spec } from '../../core/spec';
+import type { CompressionSpec } from '../../core/spec';
 import { analyseSpec } from '../../core/calculate';
 import { MM_PER_IN } from '../../core/units';
 import { referenceSpring, valveSpringMetric } from '../fixtures/specs';
 
-const specOf = (input: unknown): Spec => {
+const specOf = (input: unknown): CompressionSpec => {
   const r = parseSpec(input);
   if (!r.ok) throw new Error(JSON.stringify(r.errors));
+  if (r.value.kind !== 'compression') throw new Error('expected a compression spec');
   return r.value;
 };
 
@@ -55,7 +56,7 @@ describe('routing', () => {
 
   it('an electroplated finish without a bake specification is an error naming the field', () => {
     const plan = planManufacture(specOf({ ...valveSpringMetric, finish: 'zinc' }), settings, 500);
-    const f = plan.findings.find((x) => x.code === 'bake-specification-missing');
+    const f = plan.findings.find((x) => x.code === 'bake-spec-missing');
     expect(f?.severity).toBe('error');
     expect(f?.path).toBe('bakeSpecification');
   });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { parseSpec } from '../../core/spec';
-import { valveSpringMetric } from '../fixtures/specs';
+import { drawbarExtension, lidTorsion, valveSpringMetric } from '../fixtures/specs';
 
 const errorsOf = (raw: unknown) => {
   const r = parseSpec(raw);
@@ -75,5 +75,45 @@ describe('2 000 malformed specs', () => {
       },
     ), { numRuns: 2000 });
     expect(rejected).toBeGreaterThan(1500);
+  });
+});
+
+describe('malformed extension and torsion specs', () => {
+  it.each([
+    ['extension', drawbarExtension],
+    ['torsion', lidTorsion],
+  ] as const)('%s: 1 000 mutations never throw, and every error names a field', (_kind, base) => {
+    const keys = Object.keys(base);
+    let rejected = 0;
+    fc.assert(fc.property(
+      fc.array(fc.tuple(fc.constantFrom(...keys, 'extra'), badValue, fc.boolean()), { minLength: 1, maxLength: 4 }),
+      (mutations) => {
+        const raw: Record<string, unknown> = structuredClone(base) as Record<string, unknown>;
+        for (const [field, value, remove] of mutations) {
+          if (remove && field !== 'extra') delete raw[field];
+          else raw[field] = value;
+        }
+        const result = parseSpec(raw);
+        if (result.ok) return;
+        rejected++;
+        for (const e of result.errors) {
+          expect(e.code).toMatch(/^[a-z-]+$/);
+          expect(e.path.length).toBeGreaterThan(0);
+        }
+      },
+    ), { numRuns: 1000 });
+    expect(rejected).toBeGreaterThan(700);
+  });
+
+  it.each([
+    [{ ...drawbarExtension, ends: ['full-loop'] }, 'ends'],
+    [{ ...drawbarExtension, ends: ['extended-hook', 'full-loop'] }, 'ends[0]'],
+    [{ ...drawbarExtension, initialTension: -1 }, 'initialTension'],
+    [{ ...lidTorsion, windDirection: 'up' }, 'windDirection'],
+    [{ ...lidTorsion, legs: [{ length: 0 }, { length: 30 }] }, 'legs[0].length'],
+    [{ ...lidTorsion, loads: [{ angle: 30, tolerancePercent: 5 }] }, 'loads[0].tolerancePercent'],
+  ])('%#: error at %s', (raw, path) => {
+    const errors = errorsOf(raw);
+    expect(errors.map((e) => e.path), JSON.stringify(errors)).toContain(path);
   });
 });

@@ -6,24 +6,18 @@ import { minimumCoilGapSum, outsideDiameterGrowth } from './clearance';
 import { endForms, solidLength } from './ends';
 import { naturalFrequency } from './surge';
 import { solveCoiledDeflection } from './set-removal';
+import { checkSpecified } from '../specified';
 import type { CompressionDesign } from './design';
 import type { CompressionLoadResult, CompressionReport, SetRemovalResult } from './report';
-
-/** The trade's default load tolerance when the drawing gives a force without one (common trade practice: ±10 %). */
-export const DEFAULT_LOAD_TOLERANCE_PERCENT = 10;
 
 function loadResult(x: CompressionDesign, rate: number, perForce: number, k: number, i: number): CompressionLoadResult {
   const load = x.loads[i]!;
   const deflection = x.L0 - load.length;
   const force = rate * deflection;
-  const specified = load.force ?? null;
-  const tolerance = specified === null ? null : (load.tolerancePercent ?? DEFAULT_LOAD_TOLERANCE_PERCENT);
-  const within = specified === null || tolerance === null
-    ? null
-    : Math.abs(force - specified) <= (specified * tolerance) / 100 + 1e-9 * specified;
+  const check = checkSpecified(force, load.force, load.tolerancePercent);
   return {
     length: load.length, deflection, force, stress: k * perForce * force, stressUncorrected: perForce * force,
-    specifiedForce: specified, tolerancePercent: tolerance, withinTolerance: within,
+    specifiedForce: check.specified, tolerancePercent: check.tolerancePercent, withinTolerance: check.withinTolerance,
   };
 }
 

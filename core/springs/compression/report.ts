@@ -1,6 +1,7 @@
 import type { Finding } from '../../result';
 import type { QuantityMap } from '../../units';
 import type { FatigueResult } from '../fatigue';
+import { fatigueQuantities } from '../fatigue';
 import type { StrengthBasis } from '../../materials/types';
 import type { CompressionEnds } from '../../spec/compression';
 
@@ -76,11 +77,6 @@ export interface CompressionReport {
   fatigue: FatigueResult | null;
   findings: Finding[];
 }
-
-const fatigueQuantities: QuantityMap = {
-  stressMin: 'stress', stressMax: 'stress', stressAlternating: 'stress', stressMean: 'stress',
-  stressRange: 'stress', ultimateShear: 'stress', enduranceAlternating: 'stress', enduranceMean: 'stress',
-};
 
 export const compressionReportQuantities: QuantityMap = {
   wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', freeLength: 'length',

@@ -1,0 +1,36 @@
+import type { ToleranceGrade } from '../tolerances';
+import type { TorsionDesign } from '../springs/torsion/design';
+import type { TorsionReport } from '../springs/torsion/report';
+import { realisticFreeAngleTolerance } from '../review/torsion';
+import type { Finding } from '../result';
+import type { Characteristic, InspectionPlan } from './inspection-plan';
+import { diameterCharacteristic, HUNDRED_PERCENT_LOAD_TOLERANCE, limited, reference, sampledInspection } from './inspection-plan';
+
+/** No sourced torsion-spring tolerance table was found (DIN 2194): limits not on the drawing are the shop's. */
+export const TORSION_TOLERANCE_SOURCE = 'shop-entered: no sourced torsion tolerance table (DIN 2194 not found)';
+const GAUGE = 'torque tester on an arbor';
+
+function torqueCharacteristic(x: TorsionDesign, r: TorsionReport, grade: ToleranceGrade, i: number): Characteristic {
+  const l = r.loads[i]!;
+  const name = `Torque at ${l.angle}°`;
+  if (l.specifiedTorque === null) return reference(`${name} (reference)`, 'torque', l.torque, GAUGE, 'calculated');
+  const percent = x.loads[i]?.tolerancePercent ?? 10;
+  const source = x.loads[i]?.tolerancePercent !== undefined ? 'drawing' : `${TORSION_TOLERANCE_SOURCE}; ±10 % common trade practice`;
+  return limited(name, 'torque', l.specifiedTorque, (l.specifiedTorque * percent) / 100, GAUGE, source,
+    grade === 1 || percent < HUNDRED_PERCENT_LOAD_TOLERANCE);
+}
+
+/** What to measure on a torsion spring: torque at angle, free angle, diameters, legs. */
+export function torsionInspection(
+  x: TorsionDesign, r: TorsionReport, lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[],
+): InspectionPlan {
+  const characteristics = r.loads.map((_l, i) => torqueCharacteristic(x, r, grade, i));
+  if (x.freeAngle !== null) {
+    const plusMinus = x.freeAngleTolerance ?? realisticFreeAngleTolerance(r.bodyCoils);
+    characteristics.push(limited('Free angle between legs', 'angle', x.freeAngle, plusMinus, 'protractor',
+      x.freeAngleTolerance === null ? `${TORSION_TOLERANCE_SOURCE}; ±(2° + 1.5° per coil), from memory` : 'drawing'));
+  }
+  characteristics.push(diameterCharacteristic(x, r.springIndex, grade));
+  r.legLengths.forEach((length, i) => characteristics.push(reference(`Leg ${i + 1} length`, 'length', length, 'calliper', TORSION_TOLERANCE_SOURCE)));
+  return sampledInspection(characteristics, lotSize, aql, findings);
+}

@@ -1,0 +1,35 @@
+import type { TorsionDesign } from '../springs/torsion/design';
+import type { TorsionReport } from '../springs/torsion/report';
+import type { Settings } from '../settings/schema';
+import type { Operation } from './types';
+import { coilerPiecesPerHour, machinePiecesPerHour } from './work-centre';
+import type { Draft, RoutingChoices } from './operations';
+import { finishOperations, inspect, machineOperation, pack, sequenced, stressRelieve } from './operations';
+
+function coil(settings: Settings, x: TorsionDesign, r: TorsionReport): Draft {
+  return machineOperation(settings, x, 'coil', 'Coil with legs', [
+    { label: 'Outside diameter', value: r.outerDiameter, quantity: 'length' },
+    { label: 'Wire diameter', value: x.d, quantity: 'length' },
+    { label: 'Body coils', value: r.bodyCoils, quantity: 'count' },
+    { label: 'Direction of wind', value: x.windDirection },
+    { label: 'Leg 1', value: r.legLengths[0], quantity: 'length' },
+    { label: 'Leg 2', value: r.legLengths[1], quantity: 'length' },
+    { label: 'Free angle between legs', value: x.freeAngle === null ? 'as drawn' : `${x.freeAngle}°` },
+    { label: 'Wire per piece', value: r.wireLength, quantity: 'length' },
+  ], (m) => coilerPiecesPerHour(m, r.wireLength));
+}
+
+function formLegs(settings: Settings, x: TorsionDesign): Draft {
+  return machineOperation(settings, x, 'leg-form', 'Form legs', x.legs.map((leg, i) => ({
+    label: `Leg ${i + 1}`, value: `${leg.form}${leg.bendRadius === null ? '' : `, bend radius ${leg.bendRadius.toFixed(2)} mm`}`,
+  })), machinePiecesPerHour);
+}
+
+/** The operations a torsion spring needs: coil with legs, leg forming, stress relief, finish, torque test. */
+export function torsionRouting(settings: Settings, x: TorsionDesign, r: TorsionReport, c: RoutingChoices): Operation[] {
+  const drafts: Draft[] = [coil(settings, x, r)];
+  if (x.legs.some((l) => l.form !== 'tangent')) drafts.push(formLegs(settings, x));
+  drafts.push(stressRelieve(settings, x, c), ...finishOperations(x, c));
+  drafts.push(inspect(settings, x, 'Torque test at angle, free-angle check', 'wind once to the largest working angle on an arbor'), pack(settings, x));
+  return sequenced(drafts);
+}

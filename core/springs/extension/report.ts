@@ -1,0 +1,81 @@
+import type { Finding } from '../../result';
+import type { QuantityMap } from '../../units';
+import type { StrengthBasis } from '../../materials/types';
+import type { FatigueResult } from '../fatigue';
+import { fatigueQuantities } from '../fatigue';
+import type { ExtensionEndForm } from '../../spec/extension';
+
+export interface ExtensionLoadResult {
+  length: number;
+  extension: number;
+  force: number;
+  /** Corrected (EN 13906 k) body stress. */
+  stress: number;
+  stressUncorrected: number;
+  specifiedForce: number | null;
+  tolerancePercent: number | null;
+  withinTolerance: boolean | null;
+}
+
+export type ExtensionGoverning = 'body' | 'hook-torsion' | 'hook-bending';
+
+/** Analysis of an extension spring, internal units; lengths are inside the ends. */
+export interface ExtensionReport {
+  kind: 'extension';
+  units: 'metric' | 'inch';
+  material: string;
+  wireDiameter: number;
+  ends: [ExtensionEndForm, ExtensionEndForm];
+  springIndex: number;
+  meanDiameter: number;
+  outerDiameter: number;
+  innerDiameter: number;
+  bodyCoils: number;
+  activeCoils: number;
+  rate: number;
+  bodyLength: number;
+  loopHeights: [number, number];
+  freeLength: number;
+  specifiedFreeLength: number | null;
+  initialTension: number;
+  initialTensionProposed: boolean;
+  initialTensionStress: number;
+  initialTensionStressRange: { min: number; max: number };
+  loads: ExtensionLoadResult[];
+  tensileStrength: number;
+  tensileStrengthBasis: StrengthBasis;
+  shearModulus: number;
+  elasticModulus: number;
+  stressCorrectionFactor: number;
+  hookBendingFactor: number;
+  hookTorsionFactor: number;
+  hookBendRadius: number;
+  hookBendRadiusAssumed: boolean;
+  /** At the largest load. */
+  bodyStress: number;
+  hookBendingStress: number;
+  hookTorsionStress: number;
+  allowables: { body: number; hookTorsion: number; hookBending: number; bodyEn: number; source: string };
+  /** Largest force before the first section reaches its allowable, and which section that is. */
+  maximumSafeForce: number;
+  maximumSafeExtension: number;
+  maximumSafeLength: number;
+  governing: ExtensionGoverning;
+  wireLength: number;
+  mass: number;
+  fatigue: FatigueResult | null;
+  findings: Finding[];
+}
+
+export const extensionReportQuantities: QuantityMap = {
+  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', rate: 'rate',
+  bodyLength: 'length', loopHeights: 'length', freeLength: 'length', specifiedFreeLength: 'length',
+  initialTension: 'force', initialTensionStress: 'stress', initialTensionStressRange: { min: 'stress', max: 'stress' },
+  loads: { length: 'length', extension: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress', specifiedForce: 'force' },
+  tensileStrength: 'stress', shearModulus: 'stress', elasticModulus: 'stress', hookBendRadius: 'length',
+  bodyStress: 'stress', hookBendingStress: 'stress', hookTorsionStress: 'stress',
+  allowables: { body: 'stress', hookTorsion: 'stress', hookBending: 'stress', bodyEn: 'stress' },
+  maximumSafeForce: 'force', maximumSafeExtension: 'length', maximumSafeLength: 'length',
+  wireLength: 'length', mass: 'mass',
+  fatigue: fatigueQuantities,
+};

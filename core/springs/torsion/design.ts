@@ -1,0 +1,42 @@
+import type { LegForm, TorsionSpec } from '../../spec/torsion';
+import { toInternal } from '../../units';
+import type { CoilBody } from '../coil-body';
+import { coilBody, millimetresPer } from '../coil-body';
+
+export interface TorsionLeg {
+  length: number;
+  form: LegForm;
+  bendRadius: number | null;
+}
+
+/** A torsion spring in internal units (mm, N·mm, MPa, degrees). */
+export interface TorsionDesign extends CoilBody {
+  nb: number;
+  legs: [TorsionLeg, TorsionLeg];
+  freeAngle: number | null;
+  freeAngleTolerance: number | null;
+  windDirection: 'right' | 'left';
+  loadDirection: 'closing' | 'opening';
+  arborDiameter: number | null;
+  loads: { angle: number; torque?: number; tolerancePercent?: number }[];
+  duty: { type: 'static' } | { type: 'cyclic'; between: [number, number]; cycles: number; peened: boolean; frequency?: number };
+}
+
+export function torsionDesign(spec: TorsionSpec): TorsionDesign | undefined {
+  const body = coilBody(spec);
+  if (!body) return undefined;
+  const mm = millimetresPer(spec.units);
+  const Nmm = toInternal(1, 'torque', spec.units);
+  const leg = (i: 0 | 1): TorsionLeg => ({
+    length: spec.legs[i].length * mm, form: spec.legs[i].form,
+    bendRadius: spec.legs[i].bendRadius === undefined ? null : spec.legs[i].bendRadius! * mm,
+  });
+  return {
+    ...body, nb: spec.bodyCoils, legs: [leg(0), leg(1)],
+    freeAngle: spec.freeAngle ?? null, freeAngleTolerance: spec.freeAngleTolerance ?? null,
+    windDirection: spec.windDirection, loadDirection: spec.loadDirection,
+    arborDiameter: spec.arborDiameter === undefined ? null : spec.arborDiameter * mm,
+    loads: spec.loads.map((l) => ({ angle: l.angle, torque: l.torque === undefined ? undefined : l.torque * Nmm, tolerancePercent: l.tolerancePercent })),
+    duty: spec.duty,
+  };
+}

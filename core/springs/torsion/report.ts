@@ -1,0 +1,74 @@
+import type { Finding } from '../../result';
+import type { QuantityMap } from '../../units';
+import type { StrengthBasis } from '../../materials/types';
+
+export interface TorsionLoadResult {
+  angle: number;
+  torque: number;
+  /** Ki-corrected bending stress at the inside of the coil. */
+  stress: number;
+  /** The same with EN 13906-3's q. */
+  stressEn: number;
+  specifiedTorque: number | null;
+  tolerancePercent: number | null;
+  withinTolerance: boolean | null;
+}
+
+/** Analysis of a torsion spring, internal units (mm, N·mm, MPa, degrees). */
+export interface TorsionReport {
+  kind: 'torsion';
+  units: 'metric' | 'inch';
+  material: string;
+  wireDiameter: number;
+  springIndex: number;
+  meanDiameter: number;
+  outerDiameter: number;
+  innerDiameter: number;
+  bodyCoils: number;
+  activeCoils: number;
+  legLengths: [number, number];
+  ratePerTurn: number;
+  ratePerDegree: number;
+  ratePerDegreeTheoretical: number;
+  bendingFactorInner: number;
+  bendingFactorOuter: number;
+  enBendingFactor: number;
+  loads: TorsionLoadResult[];
+  /** At the largest working angle. */
+  maximumAngle: number;
+  meanDiameterAtLoad: number;
+  insideDiameterAtLoad: number;
+  outsideDiameterAtLoad: number;
+  arborDiameter: number | null;
+  arborClearance: number | null;
+  /** Clearance as a fraction of the loaded inside diameter. */
+  arborClearanceFraction: number | null;
+  bodyLength: number;
+  bodyLengthAtLoad: number;
+  tensileStrength: number;
+  tensileStrengthBasis: StrengthBasis;
+  elasticModulus: number;
+  allowableStress: number;
+  allowableStressEn: number;
+  allowableSource: string;
+  /** Largest deflection (degrees) before the corrected stress reaches the allowable. */
+  maximumSafeAngle: number;
+  windDirection: 'right' | 'left';
+  loadDirection: 'closing' | 'opening';
+  wireLength: number;
+  mass: number;
+  /** Cyclic duty: the highest corrected stress against the repeated-bending limit for the cycles. */
+  fatigue: { stressMax: number; limit: number; fractionOfTensile: number; cycles: number; peened: boolean; source: string; verdict: 'pass' | 'fail' } | null;
+  findings: Finding[];
+}
+
+export const torsionReportQuantities: QuantityMap = {
+  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', legLengths: 'length',
+  ratePerTurn: 'torqueRatePerTurn', ratePerDegree: 'torqueRatePerDegree', ratePerDegreeTheoretical: 'torqueRatePerDegree',
+  loads: { torque: 'torque', stress: 'stress', stressEn: 'stress', specifiedTorque: 'torque' },
+  meanDiameterAtLoad: 'length', insideDiameterAtLoad: 'length', outsideDiameterAtLoad: 'length',
+  arborDiameter: 'length', arborClearance: 'length', bodyLength: 'length', bodyLengthAtLoad: 'length',
+  tensileStrength: 'stress', elasticModulus: 'stress', allowableStress: 'stress', allowableStressEn: 'stress',
+  wireLength: 'length', mass: 'mass',
+  fatigue: { stressMax: 'stress', limit: 'stress' },
+};
