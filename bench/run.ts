@@ -2,8 +2,10 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BenchRow, BenchSuite } from './harness';
 import { engineSuite } from './suites/engine';
+import { storeSuite } from './suites/store';
+import { documentsSuite } from './suites/documents';
 
-const suites: BenchSuite[] = [engineSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -1,11 +1,16 @@
 import { engineMethods } from './engine';
+import { storeMethods } from './store';
+import { shopMethods } from './shop';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
+export * from './store';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
 export const contract = {
   ...engineMethods,
+  ...storeMethods,
+  ...shopMethods,
 };
 
 export type Contract = typeof contract;

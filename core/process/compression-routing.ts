@@ -32,7 +32,8 @@ function grind(settings: Settings, x: CompressionDesign, r: CompressionReport): 
   return machineOperation(settings, x, 'grind', 'Grind ends', [
     { label: 'Free length after grinding', value: r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength, quantity: 'length' },
     { label: 'End tip thickness (about d/4)', value: x.d / 4, quantity: 'length' },
-    { label: 'Entry gap over exit (¼–½ d)', value: `${(x.d / 4).toFixed(2)}–${(x.d / 2).toFixed(2)} mm` },
+    { label: 'Entry gap over exit, from (¼ d)', value: x.d / 4, quantity: 'length' },
+    { label: 'Entry gap over exit, to (½ d)', value: x.d / 2, quantity: 'length' },
   ], machinePiecesPerHour);
 }
 

@@ -15,6 +15,7 @@ import { reviewCompression } from '../review/compression';
 import { reviewExtension } from '../review/extension';
 import { reviewTorsion } from '../review/torsion';
 import { checkBakeSpecification } from '../finishing/bake';
+import { findGrade } from '../materials';
 import { compressionRouting } from './compression-routing';
 import { extensionRouting } from './extension-routing';
 import { torsionRouting } from './torsion-routing';
@@ -46,6 +47,12 @@ export interface ManufacturingPlan {
 }
 
 export const DEFAULT_AQL = 1.0;
+
+/** Where the wire's diameter tolerance is set: EN 10270 wire refers to EN 10218-2; ASTM grades carry their own table. */
+function wireDiameterTolerance(gradeId: string): string {
+  const standard = findGrade(gradeId)?.standard ?? '';
+  return standard.startsWith('EN 10270') ? `EN 10218-2 tolerance class (${standard})` : `${standard} diameter tolerance`;
+}
 
 function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number, tensileStrength: number): RoutingChoices {
   const finishId = spec.finish ?? 'none';
@@ -125,7 +132,7 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
   return {
     kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
     material: { grade: wire.gradeId, name: wire.gradeName, wireDiameter: d, tensileStrength: wire.tensileStrength,
-      diameterTolerance: 'per the wire standard of the grade' },
+      diameterTolerance: wireDiameterTolerance(wire.gradeId) },
     coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
     wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
     lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),

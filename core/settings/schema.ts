@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { FieldError, Result } from '../result';
-import { fail, fieldError, formatPath, ok } from '../result';
+import { fail, fieldError, ok } from '../result';
+import { zodErrors } from '../validation';
 
 /**
  * Shop settings: one validated JSON document per key, stored one row per key. Every number given as a
@@ -148,20 +149,10 @@ export function defaultSettings(): Settings {
   return settingsSchema.parse({});
 }
 
-function issuesToErrors(error: z.ZodError, prefix: readonly PropertyKey[]): FieldError[] {
-  return error.issues.map((issue) => {
-    if (issue.code === 'unrecognized_keys') {
-      return fieldError('unknown-field', formatPath([...prefix, ...issue.path, issue.keys[0] ?? '']),
-        `unknown field(s): ${issue.keys.join(', ')}`);
-    }
-    return fieldError(`invalid-${issue.code.replace(/_/g, '-')}`, formatPath([...prefix, ...issue.path]), issue.message);
-  });
-}
-
 /** Validates one settings document; error paths start with the key, e.g. "machines[2].hourlyRate". */
 export function parseSettingsValue<K extends SettingsKey>(key: K, raw: unknown): Result<Settings[K]> {
   const parsed = settingsSchemas[key].safeParse(raw);
-  return parsed.success ? ok(parsed.data as Settings[K]) : fail(issuesToErrors(parsed.error, [key]));
+  return parsed.success ? ok(parsed.data as Settings[K]) : fail(zodErrors(parsed.error, [key]));
 }
 
 /** Validates a partial settings object (only the keys given); unknown keys are errors. */

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { FieldError, Result } from '../result';
-import { fail, fieldError, formatPath, ok } from '../result';
+import { fail, fieldError, ok } from '../result';
+import { zodErrors } from '../validation';
 import { compressionSpecSchema } from './compression';
 import { compressionSpecErrors } from './compression-rules';
 import { extensionSpecSchema } from './extension';
@@ -20,21 +21,12 @@ export type SpecInput = z.input<typeof specSchema>;
 export type SpringKind = Spec['kind'];
 export const springKinds: readonly SpringKind[] = ['compression', 'extension', 'torsion'];
 
+/** Schema errors with the spec's own wording for a wrong kind. */
 function schemaErrors(error: z.ZodError): FieldError[] {
-  const out: FieldError[] = [];
-  for (const issue of error.issues) {
-    const path = formatPath(issue.path);
-    if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) {
-        out.push(fieldError('unknown-field', formatPath([...issue.path, key]), `unknown field "${key}"`));
-      }
-    } else if (issue.code === 'invalid_union' && path === 'kind') {
-      out.push(fieldError('invalid-kind', 'kind', `kind must be one of: ${springKinds.join(', ')}`));
-    } else {
-      out.push(fieldError(`invalid-${issue.code.replace(/_/g, '-')}`, path, issue.message));
-    }
-  }
-  return out;
+  return zodErrors(error).map((e) =>
+    e.path === 'kind' && e.code === 'invalid-invalid-union'
+      ? fieldError('invalid-kind', 'kind', `kind must be one of: ${springKinds.join(', ')}`)
+      : e);
 }
 
 /** Validates raw input as a spec. Never throws: every problem comes back with the field it concerns. */

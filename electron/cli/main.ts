@@ -1,8 +1,12 @@
 import type { Command } from './commands';
 import { calcCommand, materialsCommand } from './engine-commands';
+import { jobsCommand } from './job-commands';
+import { dbCommand, demoCommand } from './db-commands';
+import { priceCommand, sheetCommand } from './plan-commands';
+import { printCommand } from './print-commands';
 import { EXIT, InputError, parseArgs, toJson } from './io';
 
-const commands: Command[] = [calcCommand, materialsCommand];
+const commands: Command[] = [calcCommand, materialsCommand, sheetCommand, priceCommand, jobsCommand, dbCommand, demoCommand, printCommand];
 
 function usage(): string {
   return ['usage: npm run -s cli -- <command> …', ...commands.map((c) => `  ${c.usage}`)].join('\n');

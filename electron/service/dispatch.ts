@@ -1,6 +1,6 @@
 import { contract, inputError } from '../../core/api';
 import type { ApiResult, MethodName } from '../../core/api';
-import { formatPath } from '../../core/result';
+import { zodErrors } from '../../core/validation';
 
 /** A method implementation receives parsed input and returns a result value (never throws for bad input). */
 export type Handler = (input: never) => Promise<ApiResult<unknown>> | ApiResult<unknown>;
@@ -23,7 +23,7 @@ export async function dispatch(
   if (!parsed.success) {
     return {
       ok: false,
-      error: inputError(parsed.error.issues.map((i) => ({ code: `invalid-${i.code}`, message: i.message, path: formatPath(i.path) }))),
+      error: inputError(zodErrors(parsed.error)),
     };
   }
   try {

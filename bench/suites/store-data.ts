@@ -1,0 +1,72 @@
+import type { JobStatus } from '../../core/api/store';
+import { jobStatuses } from '../../core/api/store';
+
+/** Generated jobs for the store bench: invented customers, parts and notes, varied springs. */
+const grades = ['en10270-1-sh', 'en10270-1-dh', 'en10270-3-1.4310', 'en10270-2-vdsicr', 'astm-a228'];
+const words = ('valve return latch hinge seat clutch brake pump trigger detent plunger injector closer tine gauge ' +
+  'governor throttle pedal lever damper buffer catch pawl ratchet spool relief regulator actuator piston nozzle ' +
+  'zinc oxide passivate peened ground squared tested repeat urgent sample prototype drawing revised lost price').split(' ');
+const customerStems = ('Ash Birch Cedar Elm Fir Hazel Larch Maple Oak Pine Rowan Willow Yew Alder Beech Holly').split(' ');
+const customerTrades = ('Valves Pumps Locks Gauges Tractors Motors Marine Medical Controls Hydraulics').split(' ');
+
+export function lcg(seed: number): () => number {
+  let s = seed;
+  return () => ((s = (s * 16807) % 2147483647) / 2147483647);
+}
+
+export function customerName(i: number): string {
+  return `${customerStems[i % customerStems.length]} ${customerTrades[Math.floor(i / customerStems.length) % customerTrades.length]} ${Math.floor(i / 160) + 1} (bench)`;
+}
+
+/** A valid compression spec with d log-uniform over 0.2–12 mm; one in three in inch units. */
+export function benchSpec(random: () => number): Record<string, unknown> {
+  const d = 0.2 * Math.exp(random() * Math.log(60));
+  const index = 4 + random() * 10;
+  const na = 3 + Math.round(random() * 22);
+  const L0 = d * (na + 2) + na * d * (0.4 + random() * 2.5);
+  const inch = random() < 0.33;
+  const k = inch ? 1 / 25.4 : 1;
+  const round = (v: number) => Number(v.toPrecision(4));
+  return {
+    kind: 'compression', units: inch ? 'inch' : 'metric', material: grades[Math.floor(random() * grades.length)],
+    wireDiameter: round(d * k), outerDiameter: round(d * (index + 1) * k), totalCoils: na + 2, ends: 'closed-ground',
+    freeLength: round(L0 * k),
+  };
+}
+
+export interface BenchJob {
+  customer: { name: string };
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  status: JobStatus;
+  notes: string;
+  spec: Record<string, unknown>;
+}
+
+export function benchJob(i: number, random: () => number): BenchJob {
+  const note = Array.from({ length: 3 + Math.floor(random() * 6) }, () => words[Math.floor(random() * words.length)]).join(' ');
+  const prefix = String.fromCharCode(65 + (i % 26)) + String.fromCharCode(65 + Math.floor(i / 26) % 26);
+  return {
+    customer: { name: customerName(Math.floor(random() * 1200)) },
+    partNumber: `${prefix}-${String(10000 + i)}`,
+    drawingNumber: `D${String(i * 7 % 1000003).padStart(7, '0')}`,
+    drawingRevision: 'ABCDE'[i % 5]!,
+    status: jobStatuses[Math.floor(random() * jobStatuses.length)]!,
+    notes: note,
+    spec: benchSpec(random),
+  };
+}
+
+/** Words a shop would type: part-number prefixes, customer names, note words. */
+export function benchQueries(random: () => number, count: number): string[] {
+  return Array.from({ length: count }, (_, i) => {
+    const n = Math.floor(random() * 100000);
+    switch (i % 4) {
+      case 0: return `${String.fromCharCode(65 + (n % 26))}${String.fromCharCode(65 + Math.floor(n / 26) % 26)}-${10000 + n}`.slice(0, 6 + (i % 3));
+      case 1: return customerName(Math.floor(random() * 1200)).split(' ').slice(0, 2).join(' ');
+      case 2: return `${words[Math.floor(random() * words.length)]} ${words[Math.floor(random() * words.length)]}`;
+      default: return `D${String(n * 7 % 1000003).padStart(7, '0').slice(0, 5)}`;
+    }
+  });
+}

@@ -1,0 +1,49 @@
+/**
+ * The plain lists the sandboxed preload builds its bridge from. The preload cannot load npm packages, so
+ * this file imports nothing at run time (types only): no zod, no contract objects.
+ */
+import type { Api, MethodName } from './index';
+import type { ApiResult } from './contract';
+
+/** Every contract method, in the contract's order (a test holds this equal to Object.keys(contract)). */
+export const apiMethodNames = [
+  'calculate', 'listGrades',
+  'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
+  'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'backup', 'restore',
+  'manufacturingPlan', 'costEstimate',
+] as const;
+
+type Listed = (typeof apiMethodNames)[number];
+type SameNames = [MethodName] extends [Listed] ? ([Listed] extends [MethodName] ? true : false) : false;
+const namesMatchContract: SameNames = true;
+void namesMatchContract;
+
+/** The IPC channel of one API method; prefixed so no method can collide with the shell's own channels. */
+export const apiChannel = (name: string): string => `api:${name}`;
+
+export const MENU_COMMAND_CHANNEL = 'menu-command';
+export const PDF_PREVIEW_CHANNEL = 'pdf:preview';
+export const PDF_SAVE_CHANNEL = 'pdf:save';
+
+/** What the menu asks the renderer to do. Backup, restore, import and export run in main; then 'data-changed'. */
+export const menuCommands = [
+  'new-job', 'open-job', 'find-similar', 'save', 'print-quote', 'print-traveller', 'settings', 'data-changed',
+] as const;
+export type MenuCommand = (typeof menuCommands)[number];
+
+/** A finished PDF from a document method, as it crosses the bridge. */
+export interface PdfFile {
+  base64: string;
+  fileName: string;
+}
+
+/** `window.coilwright` in the desktop app: the API, menu commands and PDF handling, nothing else. */
+export interface CoilwrightBridge {
+  api: Api;
+  /** Calls back with each menu command; returns the function that stops listening. */
+  onMenuCommand(callback: (command: MenuCommand) => void): () => void;
+  previewPdf(file: PdfFile): Promise<ApiResult<{ opened: true }>>;
+  /** Asks where to save; `saved` is null when the user cancelled. */
+  savePdf(file: PdfFile): Promise<ApiResult<{ saved: string | null }>>;
+}

@@ -1,0 +1,154 @@
+import { z } from 'zod';
+
+/** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
+export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
+export const jobStatusSchema = z.enum(jobStatuses);
+export type JobStatus = z.infer<typeof jobStatusSchema>;
+
+const id = z.number().int().positive();
+export const isoDateSchema = z.string().regex(/^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])$/, 'a date as YYYY-MM-DD');
+
+export const customerRefSchema = z.object({
+  name: z.string().trim().min(1, 'a customer needs a name').max(120),
+  email: z.string().max(120).optional(),
+  phone: z.string().max(40).optional(),
+}).strict();
+
+const fields = {
+  customer: customerRefSchema.nullable(),
+  customerId: id,
+  partNumber: z.string().trim().max(64),
+  drawingNumber: z.string().trim().max(64),
+  drawingRevision: z.string().trim().max(16),
+  status: jobStatusSchema,
+  notes: z.string().max(4000),
+  dueDate: isoDateSchema.nullable(),
+  orderQuantity: z.number().int().positive().nullable(),
+  leadTimeDays: z.number().int().min(0).max(3650).nullable(),
+};
+
+/** A new job. Give the customer by name (found or added) or by id, or leave it out. */
+export const jobInputSchema = z.object({
+  customer: fields.customer.optional(),
+  customerId: fields.customerId.optional(),
+  partNumber: fields.partNumber.default(''),
+  drawingNumber: fields.drawingNumber.default(''),
+  drawingRevision: fields.drawingRevision.default(''),
+  status: fields.status.default('draft'),
+  notes: fields.notes.default(''),
+  dueDate: fields.dueDate.default(null),
+  orderQuantity: fields.orderQuantity.default(null),
+  leadTimeDays: fields.leadTimeDays.default(null),
+  spec: z.unknown(),
+}).strict();
+export type JobInput = z.input<typeof jobInputSchema>;
+export type JobFields = z.output<typeof jobInputSchema>;
+
+/** A save: only the fields given change; `expectedRevision` refuses the save if someone saved since. */
+export const jobPatchSchema = z.object({
+  id,
+  expectedRevision: z.number().int().positive().optional(),
+  customer: fields.customer.optional(),
+  customerId: fields.customerId.optional(),
+  partNumber: fields.partNumber.optional(),
+  drawingNumber: fields.drawingNumber.optional(),
+  drawingRevision: fields.drawingRevision.optional(),
+  status: fields.status.optional(),
+  notes: fields.notes.optional(),
+  dueDate: fields.dueDate.optional(),
+  orderQuantity: fields.orderQuantity.optional(),
+  leadTimeDays: fields.leadTimeDays.optional(),
+  spec: z.unknown().optional(),
+}).strict();
+export type JobPatch = z.input<typeof jobPatchSchema>;
+
+const statusFilterSchema = z.union([jobStatusSchema, z.array(jobStatusSchema).min(1)], {
+  error: `status must be one of ${jobStatuses.join(', ')}, or a list of them`,
+});
+
+export const jobSortSchema = z.enum(['number', 'updated', 'customer']);
+
+export const listJobsSchema = z.object({
+  status: statusFilterSchema.optional(),
+  customerId: id.optional(),
+  kind: z.string().min(1).optional(),
+  material: z.string().min(1).optional(),
+  dates: z.object({
+    field: z.enum(['created', 'updated', 'due']).default('updated'),
+    from: isoDateSchema.optional(),
+    to: isoDateSchema.optional(),
+  }).strict().optional(),
+  sort: jobSortSchema.default('updated'),
+  direction: z.enum(['asc', 'desc']).optional(),
+  limit: z.number().int().min(1).max(500).default(50),
+  offset: z.number().int().min(0).default(0),
+}).strict();
+export type ListJobsInput = z.input<typeof listJobsSchema>;
+export type ListJobsQuery = z.output<typeof listJobsSchema>;
+
+export const findJobsSchema = z.object({
+  text: z.string().max(200),
+  limit: z.number().int().min(1).max(200).default(25),
+}).strict();
+
+export const similarJobsSchema = z.object({
+  spec: z.unknown(),
+  limit: z.number().int().min(1).max(100).default(10),
+  excludeJobId: id.optional(),
+}).strict();
+
+export const jobIdSchema = z.object({ id }).strict();
+/** A job by its id or by the shop's job number. */
+export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().trim().min(1) }).strict()]);
+export const restoreRevisionSchema = z.object({ id, revision: z.number().int().positive() }).strict();
+export const setJobStatusSchema = z.object({ id, status: jobStatusSchema, expectedRevision: z.number().int().positive().optional() }).strict();
+
+/** Costing is not built yet, so prices and document inputs are kept as the caller gives them (any JSON). */
+export const issueQuoteSchema = z.object({
+  jobId: id,
+  validityDays: z.number().int().min(1).max(365).optional(),
+  prices: z.json(),
+  quantityBreaks: z.array(z.json()).max(24),
+  document: z.json(),
+}).strict();
+export type IssueQuoteInput = z.input<typeof issueQuoteSchema>;
+
+export const listQuotesSchema = z.object({
+  jobId: id.optional(),
+  limit: z.number().int().min(1).max(500).default(50),
+  offset: z.number().int().min(0).default(0),
+}).strict();
+
+export const getQuoteSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().min(1) }).strict()]);
+
+/** 64 MiB of drawing is far past any real one; the cap keeps a wrong file from bloating the store. */
+export const MAX_ATTACHMENT_BYTES = 64 * 1024 * 1024;
+export const addAttachmentSchema = z.object({
+  jobId: id,
+  name: z.string().trim().min(1).max(255),
+  mimeType: z.string().regex(/^[\w.+-]+\/[\w.+-]+$/, 'a MIME type such as application/pdf'),
+  dataBase64: z.string().max(Math.ceil(MAX_ATTACHMENT_BYTES / 3) * 4).regex(/^[A-Za-z0-9+/]*={0,2}$/, 'base64 data'),
+}).strict();
+
+export const jobAttachmentsSchema = z.object({ jobId: id }).strict();
+
+export const exportJobsSchema = z.object({
+  format: z.enum(['json', 'csv']).default('json'),
+  /** Written here when given; otherwise the text comes back in the result. */
+  file: z.string().min(1).optional(),
+  status: statusFilterSchema.optional(),
+}).strict();
+
+export const importJobsSchema = z.object({
+  file: z.string().min(1).optional(),
+  text: z.string().optional(),
+  format: z.enum(['json', 'csv']).optional(),
+  /** Give imported jobs new numbers from this store's sequence instead of keeping theirs. */
+  renumber: z.boolean().default(false),
+}).strict().refine((i) => (i.file === undefined) !== (i.text === undefined), {
+  message: 'give either file or text', path: ['file'],
+});
+
+export const backupSchema = z.object({ file: z.string().min(1) }).strict();
+export const restoreSchema = z.object({ file: z.string().min(1) }).strict();
+export const saveSettingsSchema = z.object({ settings: z.record(z.string(), z.unknown()) }).strict();

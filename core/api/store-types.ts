@@ -1,0 +1,160 @@
+import type { Spec } from '../spec';
+import type { Settings } from '../settings/schema';
+import type { JobStatus } from './store-schemas';
+
+/** What the store returns. Shape numbers are internal units: mm and N/mm. */
+export interface Customer {
+  id: number;
+  name: string;
+  email: string;
+  phone: string;
+}
+
+export interface JobShape {
+  kind: string;
+  material: string;
+  materialFamily: string;
+  units: 'metric' | 'inch';
+  wireDiameter: number;
+  meanDiameter: number;
+  outerDiameter: number;
+  /** Free length (compression), free length inside the ends (extension), body length (torsion). */
+  freeLength: number;
+  activeCoils: number;
+  /** N/mm for compression and extension, N·mm per degree for torsion. */
+  rate: number;
+}
+
+export interface JobSummary {
+  id: number;
+  number: string;
+  customer: { id: number; name: string } | null;
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  status: JobStatus;
+  notes: string;
+  dueDate: string | null;
+  orderQuantity: number | null;
+  leadTimeDays: number | null;
+  /** How many times the job has been saved; the latest revision number. */
+  revision: number;
+  createdAt: string;
+  updatedAt: string;
+  shape: JobShape;
+}
+
+export interface Job extends JobSummary {
+  spec: Spec;
+}
+
+export interface JobPage {
+  jobs: JobSummary[];
+  total: number;
+  limit: number;
+  offset: number;
+}
+
+/** The fields of a job as one revision saved them. */
+export interface RevisionFields {
+  customerId: number | null;
+  customerName: string | null;
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  status: JobStatus;
+  notes: string;
+  dueDate: string | null;
+  orderQuantity: number | null;
+  leadTimeDays: number | null;
+}
+
+export interface JobRevision {
+  jobId: number;
+  revision: number;
+  savedAt: string;
+  /** "created", "saved", "status", "restored revision 3", "imported". */
+  reason: string;
+  fields: RevisionFields;
+  spec: Spec;
+}
+
+export interface TextHit {
+  job: JobSummary;
+  /** bm25 rank: lower is a better match. */
+  rank: number;
+}
+
+export type DimensionName = 'wireDiameter' | 'meanDiameter' | 'outerDiameter' | 'freeLength' | 'activeCoils' | 'rate';
+
+export interface SimilarJob {
+  id: number;
+  number: string;
+  job: JobSummary;
+  /** exp(−distance): 1 for the same spring, falling towards 0. */
+  score: number;
+  distance: number;
+  /** Per dimension: "same" or a signed percentage of the past job against the asked one, e.g. "+3 %". */
+  differences: Record<DimensionName, string> & { material: 'same' | 'same family' | 'other family' };
+  /** (past − asked) / asked per dimension. */
+  relative: Record<DimensionName, number>;
+  summary: string;
+}
+
+export interface QuoteSummary {
+  id: number;
+  number: string;
+  jobId: number;
+  jobRevision: number;
+  issuedAt: string;
+  validityDays: number;
+  validUntil: string;
+  currency: string;
+}
+
+export interface Quote extends QuoteSummary {
+  job: RevisionFields & { number: string };
+  spec: Spec;
+  settings: Settings;
+  prices: unknown;
+  quantityBreaks: unknown[];
+  document: unknown;
+}
+
+export interface Attachment {
+  id: number;
+  jobId: number;
+  name: string;
+  mimeType: string;
+  size: number;
+  sha256: string;
+  addedAt: string;
+}
+
+export interface AttachmentData extends Attachment {
+  dataBase64: string;
+}
+
+export interface ExportResult {
+  format: 'json' | 'csv';
+  count: number;
+  file?: string;
+  text?: string;
+}
+
+export interface ImportResult {
+  imported: { id: number; number: string }[];
+}
+
+export interface BackupResult {
+  file: string;
+  bytes: number;
+  version: number;
+}
+
+export interface RestoreResult {
+  restoredFrom: string;
+  /** The store as it was before the restore, kept beside it. */
+  previousKeptAs: string | null;
+  version: number;
+}

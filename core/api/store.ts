@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { method } from './contract';
+import type { Settings } from '../settings/schema';
+import * as s from './store-schemas';
+import type * as t from './store-types';
+
+export * from './store-schemas';
+export type * from './store-types';
+
+const none = z.object({}).strict();
+
+/** Job store methods: jobs and their history, search, settings, quotes, attachments, exchange, backups. */
+export const storeMethods = {
+  createJob: method<typeof s.jobInputSchema, t.Job>(s.jobInputSchema),
+  updateJob: method<typeof s.jobPatchSchema, t.Job>(s.jobPatchSchema),
+  getJob: method<typeof s.jobRefSchema, t.Job>(s.jobRefSchema),
+  listJobs: method<typeof s.listJobsSchema, t.JobPage>(s.listJobsSchema),
+  findJobs: method<typeof s.findJobsSchema, t.TextHit[]>(s.findJobsSchema),
+  similarJobs: method<typeof s.similarJobsSchema, t.SimilarJob[]>(s.similarJobsSchema),
+  jobRevisions: method<typeof s.jobIdSchema, t.JobRevision[]>(s.jobIdSchema),
+  restoreRevision: method<typeof s.restoreRevisionSchema, t.Job>(s.restoreRevisionSchema),
+  setJobStatus: method<typeof s.setJobStatusSchema, t.Job>(s.setJobStatusSchema),
+  listCustomers: method<typeof none, t.Customer[]>(none),
+  getSettings: method<typeof none, Settings>(none),
+  saveSettings: method<typeof s.saveSettingsSchema, Settings>(s.saveSettingsSchema),
+  issueQuote: method<typeof s.issueQuoteSchema, t.Quote>(s.issueQuoteSchema),
+  listQuotes: method<typeof s.listQuotesSchema, t.QuoteSummary[]>(s.listQuotesSchema),
+  getQuote: method<typeof s.getQuoteSchema, t.Quote>(s.getQuoteSchema),
+  addAttachment: method<typeof s.addAttachmentSchema, t.Attachment>(s.addAttachmentSchema),
+  listAttachments: method<typeof s.jobAttachmentsSchema, t.Attachment[]>(s.jobAttachmentsSchema),
+  getAttachment: method<typeof s.jobIdSchema, t.AttachmentData>(s.jobIdSchema),
+  exportJobs: method<typeof s.exportJobsSchema, t.ExportResult>(s.exportJobsSchema),
+  importJobs: method<typeof s.importJobsSchema, t.ImportResult>(s.importJobsSchema),
+  backup: method<typeof s.backupSchema, t.BackupResult>(s.backupSchema),
+  restore: method<typeof s.restoreSchema, t.RestoreResult>(s.restoreSchema),
+};

@@ -1,0 +1,44 @@
+/** The cautions every printed document carries (shop-practice notes §7, in the project's own words). */
+import type { NoticeModel } from './types';
+
+export const STORED_ENERGY_CAUTION =
+  'Springs store energy. A compressed, extended or wound spring can let it go suddenly while it is set, tested, ' +
+  'assembled or removed, and can injure people. Use guards and fixtures; never hold a loaded spring by hand.';
+
+export const REVIEW_CAUTION =
+  'The figures in this document support, and do not replace, review of the design by a qualified engineer, ' +
+  'the customer\'s approval of the drawing, and the standards, codes and regulations that apply where the ' +
+  'spring is used. Tolerance and process tables may be incomplete transcriptions: check them against the ' +
+  'current standard.';
+
+export function cautionNotice(): NoticeModel {
+  return { title: 'Caution', paragraphs: [STORED_ENERGY_CAUTION, REVIEW_CAUTION] };
+}
+
+/** What the floor must know before it starts, from the operations the routing holds. */
+export interface SafetyContext {
+  pressesToSolid: boolean;
+  grinds: boolean;
+  heatTreats: boolean;
+  electroplated: boolean;
+  /** The bake specification as named by the customer or the finish, never chosen here. */
+  bakeSpecification: string | null;
+}
+
+function platingNote(bake: string | null): string {
+  const named = bake
+    ? `Bake to the named specification: ${bake}. Start the bake within that specification's window after plating.`
+    : 'NO BAKE SPECIFICATION IS NAMED: do not release the lot to plating until the customer names one.';
+  return 'Hydrogen embrittlement: electroplated high-strength spring steel can crack suddenly, even long after ' +
+    `delivery and without warning. ${named} Baking lowers the risk but does not remove it; the bake is never ` +
+    'chosen by this software.';
+}
+
+export function safetyNotes(c: SafetyContext): string[] {
+  const notes = [STORED_ENERGY_CAUTION];
+  if (c.pressesToSolid) notes.push('Set removal: press to solid only in a guarded fixture; keep hands clear of the stroke.');
+  if (c.electroplated) notes.push(platingNote(c.bakeSpecification));
+  if (c.grinds) notes.push('Grinding wheels can burst if misused: check each wheel, its flanges and the guard before the run.');
+  if (c.heatTreats) notes.push('Ovens and plating lines are hot and use acids: follow the local occupational-safety rules.');
+  return notes;
+}

@@ -1,0 +1,40 @@
+import type { Settings } from '../settings/schema';
+import type { Spec } from '../spec';
+import type { Field, Letterhead } from './types';
+
+export function letterhead(settings: Settings): Letterhead {
+  const p = settings.shopProfile;
+  const contact = [p.phone && `Tel. ${p.phone}`, p.email && p.email].filter((s): s is string => Boolean(s));
+  return { name: p.name || 'Spring shop (name not set)', addressLines: [...p.addressLines], contact, logo: p.logo ?? null };
+}
+
+/** Fields whose value is empty are left off the page rather than printed blank. */
+export function present(fields: readonly Field[]): Field[] {
+  return fields.filter((f) => f.value.trim() !== '');
+}
+
+/** The drawing number with its revision: "KP-2210 rev. C". */
+export function drawingText(number: string, revision: string): string {
+  if (!number) return revision ? `rev. ${revision}` : '';
+  return revision ? `${number} rev. ${revision}` : number;
+}
+
+/** "compression" → "Compression spring", the drawing's heading when the part has no number. */
+export function kindTitle(kind: string): string {
+  return `${kind.slice(0, 1).toUpperCase()}${kind.slice(1)} spring`;
+}
+
+/**
+ * Finish, bake and tolerance grade, the same for every kind. An electroplated finish always shows its
+ * bake: the one the customer or the finish names, never one chosen here.
+ */
+export function orderFields(spec: Spec, settings: Settings): Field[] {
+  const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
+  const fields: Field[] = [{ label: 'Finish', value: finish?.name ?? (spec.finish && spec.finish !== 'none' ? spec.finish : 'none (plain)') }];
+  if (finish?.electroplated) {
+    const bake = spec.bakeSpecification ?? finish.bakeSpecification;
+    fields.push({ label: 'Hydrogen relief bake', value: bake ?? 'to be named by the customer' });
+  }
+  fields.push({ label: 'Tolerance grade', value: String(spec.toleranceGrade ?? settings.defaults.toleranceGrade) });
+  return fields;
+}

@@ -1,0 +1,13 @@
+/** Printed documents as data: pure builders, no PDF library; electron/documents draws them. */
+export type * from './types';
+export { DOCUMENT_VERSION } from './types';
+export { quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
+export type { QuoteInput, QuoteJob } from './quote';
+export { travellerDocument } from './traveller';
+export type { TravellerInput, TravellerJob } from './traveller';
+export { cautionNotice, safetyNotes, STORED_ENERGY_CAUTION, REVIEW_CAUTION } from './cautions';
+export { isQuoteDocument, parseQuoteDocument } from './guards';
+export * as documentText from './text';
+export { parsePrintFile, printableKind, travellerQuantity, isJobFile } from './job-file';
+export { documentKinds } from './spring';
+export type { PrintJob } from './job-file';

@@ -1,0 +1,94 @@
+/**
+ * What a document needs to know about a job, read from a file: a bare spec, or a job file as `jobs add`
+ * takes it ({customer:{name}, partNumber, drawing, revision, orderQuantity?, dueDate?, spec:{…}}).
+ */
+import { z } from 'zod';
+import type { FieldError, Result } from '../result';
+import { fail, fieldError, formatPath, ok } from '../result';
+import { parseSpec } from '../spec';
+import type { Spec } from '../spec';
+import { documentKinds } from './spring';
+
+export interface PrintJob {
+  /** The shop's job number; null for a job that is not in the store. */
+  number: string | null;
+  customerName: string | null;
+  customerLines: string[];
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  purchaseOrder?: string;
+  orderQuantity: number | null;
+  dueDate: string | null;
+  leadTimeDays: number | null;
+  spec: Spec;
+}
+
+const jobFileSchema = z.object({
+  customer: z.object({ name: z.string().trim().min(1).max(120), email: z.string().optional(), phone: z.string().optional() }).nullable().optional(),
+  partNumber: z.string().trim().max(64).default(''),
+  drawing: z.string().trim().max(64).optional(),
+  drawingNumber: z.string().trim().max(64).optional(),
+  revision: z.string().trim().max(16).optional(),
+  drawingRevision: z.string().trim().max(16).optional(),
+  purchaseOrder: z.string().trim().max(64).optional(),
+  orderQuantity: z.number().int().positive().nullable().optional(),
+  dueDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD').nullable().optional(),
+  leadTimeDays: z.number().int().min(0).max(3650).nullable().optional(),
+  spec: z.unknown(),
+});
+
+export const isJobFile = (raw: unknown): boolean =>
+  typeof raw === 'object' && raw !== null && !Array.isArray(raw) && !('kind' in raw) && 'spec' in raw;
+
+function prefixed(prefix: string, errors: FieldError[]): FieldError[] {
+  return errors.map((e) => ({ ...e, path: e.path ? `${prefix}.${e.path}`.replace('.[', '[') : prefix }));
+}
+
+function fromSpec(spec: Spec): PrintJob {
+  return {
+    number: null, customerName: null, customerLines: [], partNumber: '', drawingNumber: '', drawingRevision: '',
+    orderQuantity: null, dueDate: null, leadTimeDays: null, spec,
+  };
+}
+
+function jobOf(raw: unknown): Result<PrintJob> {
+  const parsed = jobFileSchema.safeParse(raw);
+  if (!parsed.success) return fail(parsed.error.issues.map((i) => fieldError('invalid-job-file', formatPath(i.path), i.message)));
+  const j = parsed.data;
+  const spec = parseSpec(j.spec);
+  if (!spec.ok) return fail(prefixed('spec', spec.errors));
+  const contact = [j.customer?.email, j.customer?.phone].filter((s): s is string => Boolean(s));
+  return ok({
+    ...fromSpec(spec.value),
+    customerName: j.customer?.name ?? null, customerLines: contact, partNumber: j.partNumber,
+    drawingNumber: j.drawingNumber ?? j.drawing ?? '', drawingRevision: j.drawingRevision ?? j.revision ?? '',
+    ...(j.purchaseOrder ? { purchaseOrder: j.purchaseOrder } : {}),
+    orderQuantity: j.orderQuantity ?? null, dueDate: j.dueDate ?? null, leadTimeDays: j.leadTimeDays ?? null,
+  });
+}
+
+/** A spring of a kind the documents do not cover yet is refused up front, naming the field. */
+export function printableKind(job: PrintJob, path = 'kind'): Result<PrintJob> {
+  if (documentKinds.includes(job.spec.kind)) return ok(job);
+  return fail([fieldError('unsupported-kind', path, `quotes and travellers cover ${documentKinds.join(', ')} springs so far, not ${job.spec.kind}`)]);
+}
+
+/** Reads a spec or a job file; every problem comes back with the field it concerns. */
+export function parsePrintFile(raw: unknown): Result<PrintJob> {
+  if (isJobFile(raw)) {
+    const job = jobOf(raw);
+    return job.ok ? printableKind(job.value, 'spec.kind') : job;
+  }
+  const spec = parseSpec(raw);
+  return spec.ok ? printableKind(fromSpec(spec.value)) : spec;
+}
+
+/** The quantity a traveller is for: the one asked for, the job's order, else the spec's first break. */
+export function travellerQuantity(job: PrintJob, asked?: number): Result<number> {
+  const q = asked ?? job.orderQuantity ?? job.spec.quantities?.[0];
+  if (q === undefined) {
+    return fail([fieldError('missing-quantity', 'orderQuantity', 'a traveller needs an order quantity: give orderQuantity in the job file or --quantity N')]);
+  }
+  return ok(q);
+}

@@ -1,0 +1,85 @@
+/** The shop traveller: what to make, from which wire, in which operations, what to check, and who signed. */
+import type { Finding } from '../result';
+import { planManufacture } from '../process/plan';
+import type { ManufacturingPlan } from '../process/plan';
+import type { Settings } from '../settings/schema';
+import type { Spec } from '../spec';
+import { cautionNotice, safetyNotes } from './cautions';
+import { drawingText, kindTitle, letterhead, present } from './common';
+import { springContent } from './spring';
+import { dayOf, piecesText } from './text';
+import {
+  INSPECTION_SIGN_OFF, MATERIAL_FILL_IN, inspectionTable, materialFields, operationModel, samplingSummary,
+} from './traveller-sections';
+import type { Field, TravellerDocument } from './types';
+import { DOCUMENT_VERSION } from './types';
+
+export interface TravellerJob {
+  /** The shop's job number (also the QR code), or null for a spring not in the store. */
+  number: string | null;
+  customerName: string | null;
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  purchaseOrder?: string;
+  orderQuantity: number;
+  dueDate: string | null;
+}
+
+export interface TravellerInput {
+  spec: Spec;
+  settings: Settings;
+  job: TravellerJob;
+  /** ISO timestamp of printing. */
+  printedAt: string;
+}
+
+function jobFields(job: TravellerJob, plan: ManufacturingPlan, printedAt: string): Field[] {
+  return present([
+    { label: 'Job', value: job.number ?? 'not in the job store' },
+    { label: 'Part number', value: job.partNumber },
+    { label: 'Drawing', value: drawingText(job.drawingNumber, job.drawingRevision) },
+    { label: 'Customer', value: job.customerName ?? '' },
+    { label: 'Customer PO', value: job.purchaseOrder ?? '' },
+    { label: 'Quantity ordered', value: `${piecesText(job.orderQuantity)} pcs` },
+    { label: 'Quantity to start', value: `${piecesText(plan.lotWire.startQuantity)} pcs (with scrap allowance)` },
+    { label: 'Due date', value: job.dueDate ?? 'not set' },
+    { label: 'Tolerance grade', value: String(plan.toleranceGrade) },
+    { label: 'Printed', value: dayOf(printedAt) },
+  ]);
+}
+
+function findingLines(findings: readonly Finding[]): string[] {
+  return findings
+    .filter((f) => f.severity === 'error' || f.severity === 'warning')
+    .map((f) => `${f.severity === 'error' ? 'ERROR' : 'Warning'}: ${f.message}${f.fix ? ` (${f.fix})` : ''}`);
+}
+
+function safety(spec: Spec, settings: Settings, plan: ManufacturingPlan): string[] {
+  const has = (kind: string) => plan.operations.some((op) => op.kind === kind);
+  const finish = settings.finishes.find((f) => f.id === spec.finish);
+  return safetyNotes({
+    pressesToSolid: has('set'), grinds: has('grind'), heatTreats: has('stress-relieve') || has('bake'),
+    electroplated: finish?.electroplated ?? false,
+    bakeSpecification: spec.bakeSpecification ?? finish?.bakeSpecification ?? null,
+  });
+}
+
+export function travellerDocument(input: TravellerInput): TravellerDocument {
+  const { spec, settings, job } = input;
+  const plan = planManufacture(spec, settings, job.orderQuantity);
+  const spring = springContent(spec, settings, job.partNumber || kindTitle(spec.kind));
+  return {
+    version: DOCUMENT_VERSION, type: 'traveller', paperSize: settings.defaults.paperSize, createdAt: input.printedAt,
+    title: 'Shop traveller', reference: `Traveller, job ${job.number ?? '(not stored)'}`,
+    letterhead: letterhead(settings), caution: cautionNotice(),
+    job: { number: job.number, fields: jobFields(job, plan, input.printedAt) },
+    qr: job.number,
+    material: { fields: materialFields(plan), fillIn: MATERIAL_FILL_IN },
+    operations: plan.operations.map((op) => operationModel(op, plan.units)),
+    inspection: { summary: samplingSummary(plan.inspection), table: inspectionTable(plan.inspection, plan.units), signOff: INSPECTION_SIGN_OFF },
+    figures: [spring.drawing, spring.diagram],
+    safety: safety(spec, settings, plan),
+    findings: findingLines(plan.findings),
+  };
+}

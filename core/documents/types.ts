@@ -1,0 +1,111 @@
+/**
+ * Printed documents as plain data: every text already formatted in the job's units, every figure an SVG
+ * string. A PDF writer draws a model and nothing else, so a model kept with an issued quote prints the same
+ * document years later, whatever has changed in the shop's prices or in the engine since.
+ */
+export type PaperSize = 'letter' | 'a4';
+
+export const DOCUMENT_VERSION = 1;
+
+/** A label and its value, both ready to print. */
+export interface Field {
+  label: string;
+  value: string;
+}
+
+export interface Column {
+  header: string;
+  /** Share of the table's width, relative to the other columns. */
+  weight: number;
+  align: 'left' | 'right' | 'center';
+}
+
+export interface TableModel {
+  columns: Column[];
+  /** One string per column. */
+  rows: string[][];
+}
+
+/** An SVG figure; width and height are its natural size, whose aspect ratio the page keeps. */
+export interface FigureModel {
+  caption: string;
+  svg: string;
+  width: number;
+  height: number;
+}
+
+export interface NoticeModel {
+  title: string;
+  paragraphs: string[];
+}
+
+export interface Letterhead {
+  name: string;
+  addressLines: string[];
+  /** Phone and e-mail, each already labelled. */
+  contact: string[];
+  /** A PNG, JPEG or SVG data URL, or null. */
+  logo: string | null;
+}
+
+export interface DocumentCommon {
+  version: typeof DOCUMENT_VERSION;
+  paperSize: PaperSize;
+  /** ISO timestamp of issue or print; also the PDF's creation date, so one model always gives one file. */
+  createdAt: string;
+  /** "Quotation", "Shop traveller". */
+  title: string;
+  /** What the footer of every page names beside "Page X of Y", e.g. "Quotation Q-26-0004". */
+  reference: string;
+  letterhead: Letterhead;
+  caution: NoticeModel;
+}
+
+export interface QuoteIssue {
+  /** The quote number, or "DRAFT" until the store issues it. */
+  number: string;
+  date: string;
+  validUntil: string;
+  validityDays: number;
+}
+
+export interface QuoteDocument extends DocumentCommon {
+  type: 'quote';
+  issue: QuoteIssue;
+  customer: { name: string; lines: string[] };
+  part: Field[];
+  specification: { heading: string; fields: Field[] };
+  drawing: FigureModel | null;
+  prices: { currency: string; table: TableModel; notes: string[] };
+  leadTime: string;
+  terms: string[];
+}
+
+/** One operation of the routing as the shop floor reads it, with the boxes the operator fills in. */
+export interface OperationModel {
+  sequence: string;
+  title: string;
+  workCentre: string;
+  outside: boolean;
+  /** Setup, run rate or batches, scrap allowance. */
+  fields: Field[];
+  settings: Field[];
+  notes: string[];
+  signOff: string[];
+}
+
+export interface TravellerDocument extends DocumentCommon {
+  type: 'traveller';
+  job: { number: string | null; fields: Field[] };
+  /** The text of the QR code (the job number), or null for a job not in the store. */
+  qr: string | null;
+  material: { fields: Field[]; fillIn: string[] };
+  operations: OperationModel[];
+  inspection: { summary: string[]; table: TableModel; signOff: string[] };
+  figures: FigureModel[];
+  safety: string[];
+  /** Review findings still open (errors and warnings), printed so nobody misses them on the floor. */
+  findings: string[];
+}
+
+export type PrintedDocument = QuoteDocument | TravellerDocument;

@@ -1,0 +1,56 @@
+/** RFC 4180 CSV: fields with a comma, quote or line break are quoted, quotes doubled; CRLF between rows. */
+export function csvField(value: unknown): string {
+  const text = value === null || value === undefined ? '' : String(value);
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+export function csvLine(values: readonly unknown[]): string {
+  return values.map(csvField).join(',');
+}
+
+export interface CsvRecord {
+  /** Line of the file the record starts on, counting from 1. */
+  line: number;
+  fields: string[];
+}
+
+export class CsvSyntaxError extends Error {
+  constructor(readonly line: number, message: string) {
+    super(`line ${line}: ${message}`);
+  }
+}
+
+/** Splits CSV text into records, keeping the line each starts on (quoted fields may span lines). */
+export function parseCsv(text: string): CsvRecord[] {
+  const records: CsvRecord[] = [];
+  let fields: string[] = [];
+  let field = '';
+  let quoted = false;
+  let line = 1;
+  let start = 1;
+  let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
+  const endRecord = () => {
+    fields.push(field);
+    if (!(fields.length === 1 && fields[0] === '')) records.push({ line: start, fields });
+    fields = [];
+    field = '';
+  };
+  for (; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quoted) {
+      if (ch === '"' && text[i + 1] === '"') { field += '"'; i++; }
+      else if (ch === '"') quoted = false;
+      else { if (ch === '\n') line++; field += ch; }
+    } else if (ch === '"' && field === '') quoted = true;
+    else if (ch === ',') { fields.push(field); field = ''; }
+    else if (ch === '\n' || ch === '\r') {
+      if (ch === '\r' && text[i + 1] === '\n') i++;
+      endRecord();
+      line++;
+      start = line;
+    } else field += ch;
+  }
+  if (quoted) throw new CsvSyntaxError(start, 'a quoted field is not closed');
+  if (field !== '' || fields.length > 0) endRecord();
+  return records;
+}

@@ -1,0 +1,62 @@
+import { z } from 'zod';
+import { customerRefSchema, jobInputSchema } from '../../core/api/store';
+import type { JobStatus } from '../../core/api/store';
+import type { Spec } from '../../core/spec';
+
+export const EXCHANGE_FORMAT = 'coilwright-jobs';
+export const EXCHANGE_VERSION = 1;
+
+/** One job in an export file: its current state, the customer by name, the spec as saved. */
+export interface JobRecord {
+  number: string;
+  customer: { name: string; email: string; phone: string } | null;
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  status: JobStatus;
+  notes: string;
+  dueDate: string | null;
+  orderQuantity: number | null;
+  leadTimeDays: number | null;
+  createdAt: string;
+  updatedAt: string;
+  spec: Spec;
+}
+
+export interface JobsDocument {
+  format: typeof EXCHANGE_FORMAT;
+  version: typeof EXCHANGE_VERSION;
+  exportedAt: string;
+  jobs: JobRecord[];
+}
+
+/** A record as import accepts it: the job input, customers by name only (ids are per store). */
+export const importRecordSchema = jobInputSchema.omit({ customerId: true }).extend({
+  customer: customerRefSchema.nullable().optional(),
+  number: z.string().trim().min(1).max(40).optional(),
+  createdAt: z.iso.datetime().optional(),
+  updatedAt: z.iso.datetime().optional(),
+}).strict();
+
+export const documentHeadSchema = z.object({
+  format: z.literal(EXCHANGE_FORMAT),
+  version: z.literal(EXCHANGE_VERSION),
+  exportedAt: z.string().optional(),
+  jobs: z.array(z.unknown()),
+}).strict();
+
+/**
+ * Column order of the CSV job list. Shape columns are in internal units (the length is the free length,
+ * or the body length of a torsion spring; the rate is N/mm, or N·mm per degree for torsion) and are
+ * ignored on import, where the spec column is the source.
+ */
+export const CSV_COLUMNS = [
+  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units', 'd_mm', 'D_mm',
+  'OD_mm', 'length_mm (L0; torsion: body)', 'activeCoils', 'rate (N/mm; torsion: N·mm/°)', 'spec',
+] as const;
+
+export const CSV_IMPORTED = new Set<string>([
+  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec',
+]);

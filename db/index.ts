@@ -1,0 +1,22 @@
+/** The job store: better-sqlite3 underneath, values (`{ ok, value } | { ok: false, error }`) on top. */
+export { openStore, tryOpenStore } from './open';
+export type { OpenOptions } from './open';
+export type { Store } from './store';
+export { inTransaction } from './store';
+export { StoreError } from './errors';
+export type { StoreResult } from './errors';
+export { inspectStoreFile } from './inspect';
+export { migrate, migrations, LATEST_VERSION, APPLICATION_ID, schemaVersion } from './migrations';
+export { createJob, updateJob, setJobStatus, restoreRevision } from './jobs/write';
+export { getJob, jobRevisions } from './jobs/read';
+export { listCustomers } from './jobs/customers';
+export { listJobs } from './search/list';
+export { findJobs } from './search/text';
+export { similarJobs } from './search/similar';
+export { getSettings, saveSettings } from './settings';
+export { issueQuote, getQuote, listQuotes } from './quotes';
+export { addAttachment, listAttachments, getAttachment } from './attachments';
+export { exportJobs, jobsDocument, jobsCsv } from './exchange/export';
+export { importJobs } from './exchange/import';
+export { backupStore, restoreStore, verifyBackup } from './backup';
+export { createDemoShop } from './demo';

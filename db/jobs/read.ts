@@ -1,0 +1,43 @@
+import type { Job, JobRevision, RevisionFields } from '../../core/api/store';
+import type { Spec } from '../../core/spec';
+import { failure, success } from '../errors';
+import type { StoreResult } from '../errors';
+import type { Store } from '../store';
+import type { JobRow } from './rows';
+import { JOB_FROM, SUMMARY_COLUMNS, toJob } from './rows';
+
+export function jobRow(store: Store, id: number): JobRow | undefined {
+  return store.sql(`SELECT ${SUMMARY_COLUMNS}, j.spec FROM ${JOB_FROM} WHERE j.id = ?`).get(id) as JobRow | undefined;
+}
+
+export function getJob(store: Store, ref: number | { id: number } | { number: string }): StoreResult<Job> {
+  if (typeof ref === 'object' && 'number' in ref) {
+    const found = store.sql('SELECT id FROM jobs WHERE number = ?').get(ref.number) as { id: number } | undefined;
+    if (!found) return failure('not-found', `no job numbered ${ref.number}`, 'number');
+    ref = found.id;
+  }
+  const id = typeof ref === 'number' ? ref : ref.id;
+  const row = jobRow(store, id);
+  return row ? success(toJob(row)) : failure('not-found', `no job with id ${id}`, 'id');
+}
+
+interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string }
+
+function toRevision(row: RevisionRow): JobRevision {
+  return {
+    jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason,
+    fields: JSON.parse(row.fields) as RevisionFields, spec: JSON.parse(row.spec) as Spec,
+  };
+}
+
+export function revisionRow(store: Store, jobId: number, revision: number): JobRevision | undefined {
+  const row = store.sql('SELECT * FROM job_revisions WHERE job_id = ? AND revision = ?').get(jobId, revision) as RevisionRow | undefined;
+  return row && toRevision(row);
+}
+
+/** Every saved revision of a job, newest first. */
+export function jobRevisions(store: Store, id: number): StoreResult<JobRevision[]> {
+  if (!jobRow(store, id)) return failure('not-found', `no job with id ${id}`, 'id');
+  const rows = store.sql('SELECT * FROM job_revisions WHERE job_id = ? ORDER BY revision DESC').all(id) as RevisionRow[];
+  return success(rows.map(toRevision));
+}

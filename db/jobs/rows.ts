@@ -1,0 +1,69 @@
+import type { Job, JobShape, JobStatus, JobSummary } from '../../core/api/store';
+import type { Spec } from '../../core/spec';
+
+/** A jobs row joined with its customer's name, as the SELECTs below read it. */
+export interface JobRow {
+  id: number;
+  number: string;
+  customer_id: number | null;
+  customer_name: string | null;
+  part_number: string;
+  drawing_number: string;
+  drawing_revision: string;
+  status: JobStatus;
+  notes: string;
+  due_date: string | null;
+  order_quantity: number | null;
+  lead_time_days: number | null;
+  revision: number;
+  created_at: string;
+  updated_at: string;
+  kind: string;
+  material: string;
+  material_family: string;
+  units: 'metric' | 'inch';
+  d: number;
+  mean_diameter: number;
+  free_length: number;
+  active_coils: number;
+  rate: number;
+  spec?: string;
+}
+
+export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
+  j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.revision, j.created_at,
+  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate`;
+
+export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
+
+export function shapeOf(row: JobRow): JobShape {
+  return {
+    kind: row.kind, material: row.material, materialFamily: row.material_family, units: row.units,
+    wireDiameter: row.d, meanDiameter: row.mean_diameter, outerDiameter: row.mean_diameter + row.d,
+    freeLength: row.free_length, activeCoils: row.active_coils, rate: row.rate,
+  };
+}
+
+export function toSummary(row: JobRow): JobSummary {
+  return {
+    id: row.id,
+    number: row.number,
+    customer: row.customer_id === null ? null : { id: row.customer_id, name: row.customer_name ?? '' },
+    partNumber: row.part_number,
+    drawingNumber: row.drawing_number,
+    drawingRevision: row.drawing_revision,
+    status: row.status,
+    notes: row.notes,
+    dueDate: row.due_date,
+    orderQuantity: row.order_quantity,
+    leadTimeDays: row.lead_time_days,
+    revision: row.revision,
+    createdAt: row.created_at,
+    updatedAt: row.updated_at,
+    shape: shapeOf(row),
+  };
+}
+
+export function toJob(row: JobRow): Job {
+  return { ...toSummary(row), spec: JSON.parse(row.spec ?? 'null') as Spec };
+}

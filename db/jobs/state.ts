@@ -1,0 +1,67 @@
+import type { JobShape, JobStatus, RevisionFields } from '../../core/api/store';
+import type { Spec } from '../../core/spec';
+import type { Store } from '../store';
+import type { JobRow } from './rows';
+import { shapeOf } from './rows';
+
+/** Everything one save of a job holds: what a revision keeps and what the jobs row shows. */
+export interface JobState {
+  customerId: number | null;
+  partNumber: string;
+  drawingNumber: string;
+  drawingRevision: string;
+  status: JobStatus;
+  notes: string;
+  dueDate: string | null;
+  orderQuantity: number | null;
+  leadTimeDays: number | null;
+  spec: Spec;
+  shape: JobShape;
+}
+
+export function stateOfRow(row: JobRow): JobState {
+  return {
+    customerId: row.customer_id,
+    partNumber: row.part_number,
+    drawingNumber: row.drawing_number,
+    drawingRevision: row.drawing_revision,
+    status: row.status,
+    notes: row.notes,
+    dueDate: row.due_date,
+    orderQuantity: row.order_quantity,
+    leadTimeDays: row.lead_time_days,
+    spec: JSON.parse(row.spec ?? 'null') as Spec,
+    shape: shapeOf(row),
+  };
+}
+
+export function revisionFields(store: Store, state: JobState): RevisionFields {
+  const customer = state.customerId === null
+    ? undefined
+    : store.sql('SELECT name FROM customers WHERE id = ?').get(state.customerId) as { name: string } | undefined;
+  return {
+    customerId: state.customerId,
+    customerName: customer?.name ?? null,
+    partNumber: state.partNumber,
+    drawingNumber: state.drawingNumber,
+    drawingRevision: state.drawingRevision,
+    status: state.status,
+    notes: state.notes,
+    dueDate: state.dueDate,
+    orderQuantity: state.orderQuantity,
+    leadTimeDays: state.leadTimeDays,
+  };
+}
+
+/** The row values in column order shared by INSERT and UPDATE below. */
+export function rowValues(state: JobState): unknown[] {
+  const s = state.shape;
+  return [
+    state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
+    JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays,
+    s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
+  ];
+}
+
+export const ROW_COLUMNS = `customer_id, part_number, drawing_number, drawing_revision, status, spec, notes, due_date,
+  order_quantity, lead_time_days, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate`;

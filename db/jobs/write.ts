@@ -1,0 +1,130 @@
+import type { Job, JobStatus } from '../../core/api/store';
+import { jobPatchSchema } from '../../core/api/store';
+import { StoreError, failure, invalid } from '../errors';
+import type { StoreResult } from '../errors';
+import type { Store } from '../store';
+import { inTransaction } from '../store';
+import { parseWith } from '../../core/validation';
+import { resolveCustomer } from './customers';
+import type { CheckedJob } from './input';
+import { checkNewJob, checkSpec } from './input';
+import { takeNumber } from './numbering';
+import { getJob, jobRow, revisionRow } from './read';
+import type { JobState } from './state';
+import { ROW_COLUMNS, revisionFields, rowValues, stateOfRow } from './state';
+
+function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
+  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
+    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec));
+}
+
+export interface NewJobOptions {
+  /** Keep this number (import) instead of taking the next from the sequence. */
+  number?: string | undefined;
+  reason?: string;
+  /** Keep these stamps (import); otherwise the store's clock. */
+  createdAt?: string | undefined;
+  updatedAt?: string | undefined;
+}
+
+/** Writes a checked job and its first revision. Call inside a transaction. */
+export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOptions = {}, path = ''): number {
+  const { fields } = checked;
+  const customerId = resolveCustomer(store, fields, path === '' ? 'customerId' : `${path}.customerId`) ?? null;
+  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape };
+  const number = options.number ?? takeNumber(store, 'jobs');
+  if (options.number !== undefined && store.sql('SELECT 1 FROM jobs WHERE number = ?').get(number) !== undefined) {
+    throw new StoreError('duplicate-number', `job number ${number} is already in this store`, path === '' ? 'number' : `${path}.number`);
+  }
+  const now = store.now().toISOString();
+  const created = options.createdAt ?? now;
+  const result = store.sql(`INSERT INTO jobs (number, ${ROW_COLUMNS}, revision, created_at, updated_at)
+                            VALUES (?, ${'?, '.repeat(19)}1, ?, ?)`)
+    .run(number, ...rowValues(state), created, options.updatedAt ?? created);
+  const id = Number(result.lastInsertRowid);
+  addRevision(store, id, 1, options.reason ?? 'created', state, now);
+  return id;
+}
+
+/** Runs a write; a StoreError thrown inside (after its transaction rolled back) becomes a value. */
+export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
+    throw e;
+  }
+}
+
+export function createJob(store: Store, raw: unknown, options: NewJobOptions = {}): StoreResult<Job> {
+  const checked = checkNewJob(raw);
+  if (!checked.ok) return invalid(checked.errors);
+  return attempt(() => getJob(store, inTransaction(store, () => writeNewJob(store, checked.value, options))));
+}
+
+/** Replaces the job's current state with `next` and adds it as a new revision. Inside a transaction. */
+function saveState(store: Store, id: number, current: number, next: JobState, reason: string): void {
+  const now = store.now().toISOString();
+  const setters = ROW_COLUMNS.split(',').map((c) => `${c.trim()} = ?`).join(', ');
+  store.sql(`UPDATE jobs SET ${setters}, revision = ?, updated_at = ? WHERE id = ?`)
+    .run(...rowValues(next), current + 1, now, id);
+  addRevision(store, id, current + 1, reason, next, now);
+}
+
+function loadForSave(store: Store, id: number, expectedRevision: number | undefined) {
+  const row = jobRow(store, id);
+  if (!row) throw new StoreError('not-found', `no job with id ${id}`, 'id');
+  if (expectedRevision !== undefined && expectedRevision !== row.revision) {
+    throw new StoreError('stale-revision',
+      `job ${row.number} was saved again since revision ${expectedRevision} (now ${row.revision}): reload it before saving`, 'expectedRevision');
+  }
+  return row;
+}
+
+/** A save: the fields given replace the current ones; a new revision records the result. */
+export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreResult<Job> {
+  const patch = parseWith(jobPatchSchema, raw);
+  if (!patch.ok) return invalid(patch.errors);
+  const { id, expectedRevision, spec: rawSpec, customer, customerId, ...fields } = patch.value;
+  const checked = rawSpec === undefined ? undefined : checkSpec(rawSpec, ['spec']);
+  if (checked && !checked.ok) return invalid(checked.errors);
+  if (customer && customerId !== undefined) {
+    return failure('customer-twice', 'give the customer by name or by id, not both', 'customerId');
+  }
+  return attempt(() => {
+    inTransaction(store, () => {
+      const row = loadForSave(store, id, expectedRevision);
+      const current = stateOfRow(row);
+      const defined = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
+      const next: JobState = { ...current, ...defined, ...(checked?.ok ? checked.value : {}) };
+      const resolved = resolveCustomer(store, { customer, customerId });
+      if (resolved !== undefined) next.customerId = resolved;
+      saveState(store, id, row.revision, next, reason);
+    });
+    return getJob(store, id);
+  });
+}
+
+export function setJobStatus(store: Store, input: { id: number; status: JobStatus; expectedRevision?: number }): StoreResult<Job> {
+  return updateJob(store, input, 'status');
+}
+
+/** Restoring never rewrites history: the old revision's content is saved again as a new revision. */
+export function restoreRevision(store: Store, input: { id: number; revision: number }): StoreResult<Job> {
+  const old = revisionRow(store, input.id, input.revision);
+  if (!old) {
+    return failure('not-found', `job ${input.id} has no revision ${input.revision}`, jobRow(store, input.id) ? 'revision' : 'id');
+  }
+  const checked = checkSpec(old.spec, ['spec']);
+  if (!checked.ok) return invalid(checked.errors);
+  return attempt(() => {
+    inTransaction(store, () => {
+      const row = loadForSave(store, input.id, undefined);
+      const { customerName: _name, ...fields } = old.fields;
+      const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
+      const next: JobState = { ...fields, customerId: exists ? fields.customerId : null, ...checked.value };
+      saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
+    });
+    return getJob(store, input.id);
+  });
+}

@@ -1,0 +1,54 @@
+import type Database from 'better-sqlite3';
+import { StoreError } from '../errors';
+import { updateToVersion0001 } from './0001-jobs';
+import { updateToVersion0002 } from './0002-search';
+import { updateToVersion0003 } from './0003-quotes';
+
+export interface Migration {
+  version: number;
+  name: string;
+  update(db: Database.Database): void;
+}
+
+/** The schema history, oldest first. Append only: a released migration is never edited. */
+export const migrations: readonly Migration[] = [
+  { version: 1, name: 'jobs', update: updateToVersion0001 },
+  { version: 2, name: 'search', update: updateToVersion0002 },
+  { version: 3, name: 'quotes', update: updateToVersion0003 },
+];
+
+/** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */
+export const APPLICATION_ID = 0x436f696c;
+
+export const LATEST_VERSION = migrations.reduce((max, m) => {
+  if (m.version <= max) throw new Error(`migration ${m.version} (${m.name}) is out of order`);
+  return m.version;
+}, 0);
+
+export function schemaVersion(db: Database.Database): number {
+  return db.pragma('user_version', { simple: true }) as number;
+}
+
+/**
+ * Brings the schema up to `target` (default: the latest) in one transaction: all pending migrations
+ * apply, or none do. A store from a newer version of the program is refused before anything is written.
+ */
+export function migrate(db: Database.Database, target = LATEST_VERSION): { from: number; to: number } {
+  const current = schemaVersion(db);
+  // Up to date: no write transaction, so opening never waits on another connection's write lock.
+  if (current >= target && current <= LATEST_VERSION) return { from: current, to: current };
+  return db.transaction(() => {
+    const from = schemaVersion(db);
+    if (from > LATEST_VERSION) {
+      throw new StoreError('store-too-new',
+        `this store has schema version ${from}; this version of Coilwright knows up to ${LATEST_VERSION}: update Coilwright to open it`);
+    }
+    if (from === 0) db.pragma(`application_id = ${APPLICATION_ID}`);
+    for (const m of migrations) {
+      if (m.version > from && m.version <= target) m.update(db);
+    }
+    const to = Math.max(from, target);
+    if (to !== from) db.pragma(`user_version = ${to}`);
+    return { from, to };
+  }).immediate();
+}

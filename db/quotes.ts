@@ -1,0 +1,89 @@
+import type { IssueQuoteInput, Quote, QuoteSummary, RevisionFields } from '../core/api/store';
+import { issueQuoteSchema, listQuotesSchema } from '../core/api/store';
+import type { Settings } from '../core/settings/schema';
+import type { Spec } from '../core/spec';
+import { failure, invalid, success } from './errors';
+import type { StoreResult } from './errors';
+import { takeNumber } from './jobs/numbering';
+import { jobRow } from './jobs/read';
+import { revisionFields, stateOfRow } from './jobs/state';
+import { attempt } from './jobs/write';
+import { readSettings } from './settings';
+import type { Store } from './store';
+import { inTransaction } from './store';
+import { parseWith } from '../core/validation';
+
+interface QuoteRow {
+  id: number; number: string; job_id: number; job_revision: number; issued_at: string; validity_days: number;
+  currency: string; job?: string; spec?: string; settings?: string; prices?: string; quantity_breaks?: string; document?: string;
+}
+
+const DAY_MS = 86_400_000;
+
+function toSummary(row: QuoteRow): QuoteSummary {
+  const validUntil = new Date(Date.parse(row.issued_at) + row.validity_days * DAY_MS).toISOString().slice(0, 10);
+  return {
+    id: row.id, number: row.number, jobId: row.job_id, jobRevision: row.job_revision, issuedAt: row.issued_at,
+    validityDays: row.validity_days, validUntil, currency: row.currency,
+  };
+}
+
+function toQuote(row: QuoteRow): Quote {
+  return {
+    ...toSummary(row),
+    job: JSON.parse(row.job!) as RevisionFields & { number: string },
+    spec: JSON.parse(row.spec!) as Spec,
+    settings: JSON.parse(row.settings!) as Settings,
+    prices: JSON.parse(row.prices!),
+    quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
+    document: JSON.parse(row.document!),
+  };
+}
+
+/**
+ * Issues a quote: copies the job as it stands, its spec, the whole shop settings and the caller's prices
+ * and document inputs into one row that can never change afterwards.
+ */
+export function issueQuote(store: Store, raw: IssueQuoteInput): StoreResult<Quote> {
+  const parsed = parseWith(issueQuoteSchema, raw);
+  if (!parsed.ok) return invalid(parsed.errors);
+  const input = parsed.value;
+  return attempt(() => {
+    const id = inTransaction(store, () => {
+      const row = jobRow(store, input.jobId);
+      if (!row) return undefined;
+      const settings = readSettings(store);
+      const number = takeNumber(store, 'quotes');
+      const job = { number: row.number, ...revisionFields(store, stateOfRow(row)) };
+      const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
+                                  settings, prices, quantity_breaks, document) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+        .run(number, row.id, row.revision, store.now().toISOString(), input.validityDays ?? settings.defaults.quoteValidityDays,
+          settings.defaults.currency, JSON.stringify(job), row.spec, JSON.stringify(settings), JSON.stringify(input.prices),
+          JSON.stringify(input.quantityBreaks), JSON.stringify(input.document));
+      return Number(result.lastInsertRowid);
+    });
+    return id === undefined ? failure('not-found', `no job with id ${input.jobId}`, 'jobId') : getQuote(store, { id });
+  });
+}
+
+export function getQuote(store: Store, key: { id: number } | { number: string }): StoreResult<Quote> {
+  const row = 'id' in key
+    ? store.sql('SELECT * FROM quotes WHERE id = ?').get(key.id)
+    : store.sql('SELECT * FROM quotes WHERE number = ?').get(key.number);
+  if (!row) return failure('not-found', `no quote ${'id' in key ? `with id ${key.id}` : key.number}`, 'id' in key ? 'id' : 'number');
+  return success(toQuote(row as QuoteRow));
+}
+
+const SUMMARY = 'id, number, job_id, job_revision, issued_at, validity_days, currency';
+
+/** Issued quotes, newest first, for one job or the whole shop. */
+export function listQuotes(store: Store, raw: unknown): StoreResult<QuoteSummary[]> {
+  const parsed = parseWith(listQuotesSchema, raw ?? {});
+  if (!parsed.ok) return invalid(parsed.errors);
+  const { jobId, limit, offset } = parsed.value;
+  const rows = (jobId === undefined
+    ? store.sql(`SELECT ${SUMMARY} FROM quotes ORDER BY issued_at DESC, id DESC LIMIT ? OFFSET ?`).all(limit, offset)
+    : store.sql(`SELECT ${SUMMARY} FROM quotes WHERE job_id = ? ORDER BY issued_at DESC, id DESC LIMIT ? OFFSET ?`).all(jobId, limit, offset)
+  ) as QuoteRow[];
+  return success(rows.map(toSummary));
+}

@@ -1,0 +1,18 @@
+import type { Result } from '../../core/result';
+import { fail, fieldError, ok } from '../../core/result';
+
+/**
+ * Turns what a user typed into a safe FTS5 MATCH expression. Each whitespace-separated word becomes a
+ * quoted phrase with a prefix star, so "spr" finds "spring" and "CS-10" finds "CS-1042"; the words
+ * are ANDed. Quoting means operators (AND, NEAR, column filters, brackets) in user text are plain text.
+ */
+export function matchExpression(text: string): Result<string> {
+  const words = text
+    .split(/\s+/)
+    .map((w) => w.replace(/\*+$/, ''))
+    .filter((w) => /[\p{L}\p{N}]/u.test(w));
+  if (words.length === 0) {
+    return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
+  }
+  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"*`).join(' '));
+}

@@ -1,0 +1,131 @@
+import type { JobShape, SimilarJob } from '../../core/api/store';
+import { similarJobsSchema } from '../../core/api/store';
+import { invalid, success } from '../errors';
+import type { StoreResult } from '../errors';
+import { checkSpec } from '../jobs/input';
+import type { JobRow } from '../jobs/rows';
+import { JOB_FROM, SUMMARY_COLUMNS, toSummary } from '../jobs/rows';
+import type { Store } from '../store';
+import { parseWith } from '../../core/validation';
+import type { ShapePoint } from './similarity';
+import { WEIGHTS, describeDifferences, distance } from './similarity';
+
+interface Candidate extends ShapePoint {
+  id: number;
+  kind: string;
+}
+
+const SHAPE_COLUMNS = `id, kind, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
+  family AS materialFamily`;
+
+/** R*Tree coordinate names and the spec dimension each one holds. */
+const BOX_DIMENSIONS = [
+  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'], ['rate', 'rate'],
+] as const;
+
+/**
+ * The geometric part of the distance, computed by SQLite on the R*Tree's own coordinates so that only
+ * jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative error
+ * below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
+ */
+const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c]) => `${WEIGHTS[dimensionOf(c)]} * abs(ln(${c}_min / ?))`).join(' + ');
+const GEOMETRY_MARGIN = 1e-5;
+
+function dimensionOf(column: (typeof BOX_DIMENSIONS)[number][0]): (typeof BOX_DIMENSIONS)[number][1] {
+  return BOX_DIMENSIONS.find(([c]) => c === column)![1];
+}
+
+/** Jobs inside the box around the asked spring (one range per coordinate) whose geometry is near enough. */
+export const BOX_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape
+  WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
+    AND ${GEOMETRY_SQL} <= ?`;
+
+const ALL_OF_KIND_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind = ?`;
+
+/** Every job of the kind, read straight through the jobs table: the bench's full-scan baseline. */
+export const SCAN_SQL = `SELECT id, kind, d AS wireDiameter, mean_diameter AS meanDiameter, free_length AS freeLength,
+  active_coils AS activeCoils, rate, material, material_family AS materialFamily FROM jobs NOT INDEXED WHERE kind = ?`;
+
+const START_RADIUS = 0.25;
+/** Past this radius the box holds nearly every job of the kind; reading them all is simpler. */
+const MAX_RADIUS = 6;
+
+/**
+ * A job at distance ≤ r has, in each dimension, w·|ln(p/a)| ≤ r, so p lies within a·e^(±r/w): the box.
+ * Inside it, SQLite drops jobs whose geometric distance alone is already over r.
+ */
+function boxParams(a: JobShape, radius: number): unknown[] {
+  const params: unknown[] = [];
+  for (const [, key] of BOX_DIMENSIONS) {
+    const spread = Math.exp(radius / WEIGHTS[key]);
+    params.push(a[key] * spread, a[key] / spread);
+  }
+  for (const [, key] of BOX_DIMENSIONS) params.push(a[key]);
+  params.push(radius + GEOMETRY_MARGIN);
+  return params;
+}
+
+type Scored = { id: number; distance: number };
+
+function topScored(asked: JobShape, candidates: Candidate[], limit: number, exclude?: number): Scored[] {
+  const scored: Scored[] = [];
+  for (const c of candidates) {
+    if (c.id !== exclude && c.kind === asked.kind) scored.push({ id: c.id, distance: distance(asked, c) });
+  }
+  scored.sort((x, y) => x.distance - y.distance || x.id - y.id);
+  return scored.slice(0, limit);
+}
+
+/**
+ * The nearest past jobs, exactly. A job left out by the query of radius r is farther than r, so once
+ * the limit-th best found is within r nothing left out can beat it. Until then the radius grows, by
+ * how many found jobs were within it, but never past the limit-th distance found so far: a query of
+ * that radius finds every job at least as near, so the loop always ends with the exact answer.
+ */
+export function nearestJobs(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
+  let radius = START_RADIUS;
+  while (radius <= MAX_RADIUS) {
+    const top = topScored(asked, store.sql(BOX_SQL).all(...boxParams(asked, radius)) as Candidate[], limit, exclude);
+    const kth = top.length === limit ? top[limit - 1]!.distance : Infinity;
+    if (kth <= radius) return top;
+    const within = top.filter((s) => s.distance <= radius).length;
+    radius = Math.min(kth, radius * widening(within, limit));
+  }
+  return topScored(asked, store.sql(ALL_OF_KIND_SQL).all(asked.kind) as Candidate[], limit, exclude);
+}
+
+/**
+ * How much to widen when too few jobs lie within the radius. Jobs found grow about as r⁴ (four
+ * independent dimensions: rate follows from the others), so aim a little past the limit, but never
+ * more than double: an overshoot reads thousands of jobs for nothing.
+ */
+function widening(within: number, limit: number): number {
+  if (within === 0) return 2;
+  return Math.min(2, Math.max(1.2, 1.1 * (limit / within) ** 0.25));
+}
+
+/** The same ranking by scoring every job of the kind: the baseline the pre-filter is measured against. */
+export function nearestJobsByScan(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
+  return topScored(asked, store.sql(SCAN_SQL).all(asked.kind) as Candidate[], limit, exclude);
+}
+
+function hits(store: Store, asked: JobShape, scored: Scored[]): SimilarJob[] {
+  if (scored.length === 0) return [];
+  const rows = store.sql(`SELECT ${SUMMARY_COLUMNS} FROM ${JOB_FROM} WHERE j.id IN (${scored.map(() => '?').join(',')})`)
+    .all(...scored.map((s) => s.id)) as JobRow[];
+  const byId = new Map(rows.map((r) => [r.id, toSummary(r)]));
+  return scored.map((s) => {
+    const job = byId.get(s.id)!;
+    return { id: s.id, number: job.number, job, score: Math.exp(-s.distance), distance: s.distance, ...describeDifferences(asked, job.shape) };
+  });
+}
+
+/** Past jobs of the same kind nearest to a spec, best first, each with how it differs. */
+export function similarJobs(store: Store, raw: unknown): StoreResult<SimilarJob[]> {
+  const parsed = parseWith(similarJobsSchema, raw);
+  if (!parsed.ok) return invalid(parsed.errors);
+  const checked = checkSpec(parsed.value.spec, ['spec']);
+  if (!checked.ok) return invalid(checked.errors);
+  const asked = checked.value.shape;
+  return success(hits(store, asked, nearestJobs(store, asked, parsed.value.limit, parsed.value.excludeJobId)));
+}

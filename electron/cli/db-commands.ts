@@ -1,0 +1,51 @@
+import type { Command } from './commands';
+import type { ParsedArgs } from './io';
+import { InputError, requireOption, toJson } from './io';
+import type { Caller } from './store-session';
+import { positional, raise, withStore } from './store-session';
+import { createDemoShop } from '../../db';
+
+type Sub = (args: ParsedArgs, call: Caller, out: (text: string) => void) => Promise<void>;
+
+const subcommands: Record<string, Sub> = {
+  backup: async (args, call, out) => out(toJson(await call('backup', { file: requireOption(args, 'out') }))),
+  restore: async (args, call, out) => out(toJson(await call('restore', { file: requireOption(args, 'from') }))),
+  export: async (args, call, out) => {
+    const file = args.options.get('out');
+    const result = await call('exportJobs', {
+      format: args.options.has('csv') ? 'csv' : 'json',
+      ...(typeof file === 'string' ? { file } : {}),
+    });
+    if (result.text !== undefined) out(result.text.replace(/\r?\n$/, ''));
+    else out(toJson({ format: result.format, count: result.count, file: result.file }));
+  },
+  import: async (args, call, out) => out(toJson(await call('importJobs', {
+    file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
+  }))),
+};
+
+export const dbCommand: Command = {
+  name: 'db',
+  usage: [
+    'db backup --db DB --out FILE     online backup of the store to a new file, verified',
+    '  db restore --db DB --from FILE  replace the store with a verified backup (the old one is kept beside it)',
+    '  db export --db DB [--out FILE] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV',
+    '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
+  ].join('\n'),
+  async run(args, out) {
+    const name = args.positional[0];
+    const sub = name === undefined ? undefined : subcommands[name];
+    if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
+    await withStore(args, (call) => sub(args, call, out));
+  },
+};
+
+export const demoCommand: Command = {
+  name: 'demo',
+  usage: 'demo --db FILE            create the DEMO shop (settings, customers, about 30 jobs) in a new store',
+  async run(args, out) {
+    const result = await withStore(args, async (_call, service) => createDemoShop(service.store()));
+    if (!result.ok) raise(result.error);
+    out(toJson({ file: requireOption(args, 'db'), ...result.value }));
+  },
+};

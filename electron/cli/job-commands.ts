@@ -1,0 +1,77 @@
+import type { JobStatus } from '../../core/api/store';
+import type { Command } from './commands';
+import type { ParsedArgs } from './io';
+import { InputError, readJson, toJson } from './io';
+import type { Caller } from './store-session';
+import { intOption, jobRef, positional, withStore } from './store-session';
+
+/** The job file of `jobs add` says "drawing" and "revision" for the drawing number and its revision. */
+function jobFileInput(raw: unknown): unknown {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+    throw new InputError([{ code: 'not-an-object', path: '', message: 'a job file must be a JSON object' }]);
+  }
+  const { drawing, revision, ...rest } = raw as Record<string, unknown>;
+  return {
+    ...rest,
+    ...(drawing === undefined ? {} : { drawingNumber: drawing }),
+    ...(revision === undefined ? {} : { drawingRevision: revision }),
+  };
+}
+
+/** A spec file, or a job file (as for `jobs add`) whose spec is used. */
+function specOf(raw: unknown): unknown {
+  const isJobFile = typeof raw === 'object' && raw !== null && !('kind' in raw) && 'spec' in raw;
+  return isJobFile ? (raw as { spec: unknown }).spec : raw;
+}
+
+async function jobId(call: Caller, text: string): Promise<number> {
+  return (await call('getJob', jobRef(text))).id;
+}
+
+type Sub = (args: ParsedArgs, call: Caller) => Promise<unknown>;
+
+const subcommands: Record<string, Sub> = {
+  add: async (args, call) => call('createJob', jobFileInput(readJson(positional(args, 1, 'FILE', 'jobs add'))) as never),
+  show: async (args, call) => call('getJob', jobRef(positional(args, 1, 'ID', 'jobs show'))),
+  list: async (args, call) => {
+    const status = args.options.get('status');
+    return call('listJobs', {
+      ...(typeof status === 'string' ? { status: status.split(',') as JobStatus[] } : {}),
+      ...(intOption(args, 'customer') !== undefined ? { customerId: intOption(args, 'customer') } : {}),
+      ...(typeof args.options.get('kind') === 'string' ? { kind: args.options.get('kind') as string } : {}),
+      ...(typeof args.options.get('sort') === 'string' ? { sort: args.options.get('sort') as never } : {}),
+      limit: intOption(args, 'limit') ?? 50,
+      offset: intOption(args, 'offset') ?? 0,
+    });
+  },
+  find: async (args, call) => call('findJobs', { text: args.positional.slice(1).join(' '), limit: intOption(args, 'limit') ?? 25 }),
+  similar: async (args, call) => {
+    const hits = await call('similarJobs', { spec: specOf(readJson(positional(args, 1, 'SPECFILE', 'jobs similar'))), limit: intOption(args, 'limit') ?? 10 });
+    return hits.map(({ job, ...hit }) => ({ ...hit, customer: job.customer?.name ?? null, partNumber: job.partNumber, status: job.status }));
+  },
+  revisions: async (args, call) => call('jobRevisions', { id: await jobId(call, positional(args, 1, 'ID', 'jobs revisions')) }),
+  status: async (args, call) => call('setJobStatus', {
+    id: await jobId(call, positional(args, 1, 'ID', 'jobs status')), status: positional(args, 2, 'STATUS', 'jobs status') as JobStatus,
+  }),
+  restore: async (args, call) => call('restoreRevision', {
+    id: await jobId(call, positional(args, 1, 'ID', 'jobs restore')), revision: Number(positional(args, 2, 'REVISION', 'jobs restore')),
+  }),
+};
+
+export const jobsCommand: Command = {
+  name: 'jobs',
+  usage: [
+    'jobs add FILE --db DB       store a job ({"customer":{"name":…},"partNumber":…,"drawing":…,"revision":…,"notes":…,"spec":{…}})',
+    '  jobs show ID|NUMBER --db DB, jobs list [--status S[,S]] [--customer ID] [--kind K] [--sort number|updated|customer]',
+    '  [--limit N] [--offset N] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
+    '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB',
+  ].join('\n'),
+  async run(args, out) {
+    const name = args.positional[0];
+    const sub = name === undefined ? undefined : subcommands[name];
+    if (!sub) {
+      throw new InputError([{ code: 'unknown-command', path: 'jobs', message: `jobs needs one of: ${Object.keys(subcommands).join(', ')}` }]);
+    }
+    out(toJson(await withStore(args, (call) => sub(args, call))));
+  },
+};

@@ -1,0 +1,68 @@
+import { parseSpec } from '../../core/spec';
+import type { Spec } from '../../core/spec';
+import { defaultSettings } from '../../core/settings/schema';
+import type { Settings } from '../../core/settings/schema';
+import { planInSpecUnits, planManufacture } from '../../core/process/plan';
+import { estimateCost } from '../../core/costing/estimate';
+import { StoreError, getSettings, openStore } from '../../db';
+import type { Command } from './commands';
+import type { ParsedArgs } from './io';
+import { InputError, readJson, toJson } from './io';
+import { intOption, positional } from './store-session';
+
+/** A spec file, or a job file whose `spec` (and `orderQuantity`) are used. */
+export function specAndQuantity(raw: unknown): { spec: Spec; orderQuantity?: number } {
+  const isJob = typeof raw === 'object' && raw !== null && !('kind' in raw) && 'spec' in raw;
+  const parsed = parseSpec(isJob ? (raw as { spec: unknown }).spec : raw);
+  if (!parsed.ok) throw new InputError(isJob ? parsed.errors.map((e) => ({ ...e, path: `spec.${e.path}` })) : parsed.errors);
+  const q = isJob ? (raw as { orderQuantity?: unknown }).orderQuantity : undefined;
+  return { spec: parsed.value, orderQuantity: typeof q === 'number' ? q : undefined };
+}
+
+/** The shop's settings from --db, or a new shop's defaults when no store is named. */
+export function settingsFor(args: ParsedArgs, required: boolean): Settings {
+  const file = args.options.get('db');
+  if (typeof file !== 'string') {
+    if (required) throw new InputError([{ code: 'missing-option', path: '--db', message: '--db is required' }]);
+    return defaultSettings();
+  }
+  try {
+    const store = openStore(file);
+    try {
+      const settings = getSettings(store);
+      if (!settings.ok) throw new InputError([{ code: settings.error.code, message: settings.error.message, path: '--db' }]);
+      return settings.value;
+    } finally {
+      store.close();
+    }
+  } catch (e) {
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: '--db' }]);
+    throw e;
+  }
+}
+
+/** Order quantity: --quantity, else the job file's, else the spec's first break, else 100. */
+function orderQuantity(args: ParsedArgs, fromFile: number | undefined, spec: Spec): number {
+  const q = intOption(args, 'quantity') ?? fromFile ?? spec.quantities?.[0] ?? 100;
+  if (!(q >= 1)) throw new InputError([{ code: 'invalid-option', path: '--quantity', message: 'the order quantity must be at least 1' }]);
+  return q;
+}
+
+export const sheetCommand: Command = {
+  name: 'sheet',
+  usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection (JSON)',
+  run(args, out) {
+    const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
+    const plan = planManufacture(spec, settingsFor(args, false), orderQuantity(args, fromFile, spec));
+    out(toJson(planInSpecUnits(plan)));
+  },
+};
+
+export const priceCommand: Command = {
+  name: 'price',
+  usage: 'price FILE --db DB               cost and unit price at each quantity break (JSON)',
+  run(args, out) {
+    const { spec } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'price')));
+    out(toJson(estimateCost(spec, settingsFor(args, true))));
+  },
+};

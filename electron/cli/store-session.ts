@@ -1,0 +1,58 @@
+import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '../../core/api';
+import { StoreError, openStore } from '../../db';
+import { createService, dispatch } from '../service';
+import type { Service } from '../service';
+import type { ParsedArgs } from './io';
+import { InputError, requireOption } from './io';
+
+/** Bad input becomes exit 2 with every field error; anything unexpected is exit 1. */
+export function raise(error: ApiError): never {
+  if (error.code === 'unexpected') throw new Error(error.message);
+  throw new InputError(error.details ?? [{ code: error.code, message: error.message, path: error.path }]);
+}
+
+export function openService(args: ParsedArgs): Service {
+  const file = requireOption(args, 'db');
+  try {
+    return createService(openStore(file));
+  } catch (e) {
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: '--db' }]);
+    throw e;
+  }
+}
+
+/** Opens the store named by --db, runs fn with a caller of the API, and always closes the store. */
+export async function withStore<T>(args: ParsedArgs, fn: (call: Caller, service: Service) => Promise<T>): Promise<T> {
+  const service = openService(args);
+  try {
+    return await fn(async (name, input) => {
+      const result = await dispatch(service.handlers, name, input);
+      if (!result.ok) raise(result.error);
+      return result.value as never;
+    }, service);
+  } finally {
+    service.close();
+  }
+}
+
+export type Caller = <K extends MethodName>(name: K, input: MethodInput<Contract[K]>) => Promise<MethodOutput<Contract[K]>>;
+
+export function intOption(args: ParsedArgs, name: string): number | undefined {
+  const v = args.options.get(name);
+  if (v === undefined) return undefined;
+  if (typeof v !== 'string' || !/^\d+$/.test(v)) {
+    throw new InputError([{ code: 'invalid-option', path: `--${name}`, message: `--${name} needs a whole number` }]);
+  }
+  return Number(v);
+}
+
+export function positional(args: ParsedArgs, index: number, name: string, command: string): string {
+  const v = args.positional[index];
+  if (v === undefined) throw new InputError([{ code: 'missing-argument', path: name, message: `${command} needs ${name}` }]);
+  return v;
+}
+
+/** "12" is a job id; anything else is a job number such as "J-26-0012". */
+export function jobRef(text: string): { id: number } | { number: string } {
+  return /^\d+$/.test(text) ? { id: Number(text) } : { number: text };
+}

@@ -1,0 +1,88 @@
+/** The quotation as a PDF, drawn from its document model alone (plus the embedded fonts). */
+import type { FigureModel, QuoteDocument } from '../../core/documents';
+import { figure } from './figure';
+import { FONT } from './fonts';
+import type { Doc } from './layout';
+import {
+  contentWidth, ensureSpace, heading, leftEdge, paragraphs, paragraphsHeight, put, roomLeft, space, textHeight,
+} from './layout';
+import { fieldGrid, fieldGridHeight } from './grid';
+import { notice } from './boxes';
+import { documentHeader } from './letterhead';
+import { finish, openDocument } from './page';
+import { colour, gap, size } from './style';
+import { drawTable, tableHeight } from './table';
+
+const DRAWING_MAX_HEIGHT = 260;
+const DRAWING_MIN_HEIGHT = 190;
+/** A heading, the caption under the figure and the gap after it. */
+const HEADING_ROOM = 50;
+
+function customerHeight(doc: Doc, m: QuoteDocument, width: number): number {
+  const lines = m.customer.lines.reduce((s, l) => s + textHeight(doc, l, width, FONT.body, size.small), 0);
+  return 10 + textHeight(doc, m.customer.name, width, FONT.bold, size.heading) + lines;
+}
+
+/** The customer on the left, the part on the right, side by side. */
+function addressee(doc: Doc, m: QuoteDocument): void {
+  const half = (contentWidth(doc) - 20) / 2;
+  const x = leftEdge(doc);
+  const right = x + half + 20;
+  const height = Math.max(customerHeight(doc, m, half), fieldGridHeight(doc, m.part, { columns: 1, width: half }));
+  ensureSpace(doc, height);
+  const y = doc.y;
+  let top = y + put(doc, 'Prepared for', x, y, half, { pt: size.small, fill: colour.muted });
+  top += put(doc, m.customer.name, x, top, half, { font: FONT.bold, pt: size.heading });
+  for (const line of m.customer.lines) top += put(doc, line, x, top, half, { pt: size.small });
+  doc.y = y;
+  fieldGrid(doc, m.part, { columns: 1, x: right, width: half, labelShare: 0.35 });
+  doc.y = y + height + gap.block;
+}
+
+const PRICE_PT = size.body + 0.5;
+const LEAD_TIME_GRID = { columns: 1, labelShare: 0.2 };
+
+/** Prices, their notes and the lead time stay together on one page. */
+function prices(doc: Doc, m: QuoteDocument): void {
+  const leadTime = [{ label: 'Lead time', value: m.leadTime }];
+  const height = tableHeight(doc, m.prices.table, { pt: PRICE_PT }) + 2 * gap.heading
+    + paragraphsHeight(doc, m.prices.notes, contentWidth(doc), { pt: size.small }) + fieldGridHeight(doc, leadTime, LEAD_TIME_GRID);
+  heading(doc, 'Prices', Math.min(height, 400));
+  drawTable(doc, m.prices.table, { pt: PRICE_PT });
+  space(doc, gap.heading);
+  paragraphs(doc, m.prices.notes, { pt: size.small, fill: colour.muted });
+  space(doc, gap.heading);
+  fieldGrid(doc, leadTime, LEAD_TIME_GRID);
+  space(doc);
+}
+
+/** The drawing fills what is left of the page when that is enough to read it, else it starts the next. */
+function drawing(doc: Doc, f: FigureModel): void {
+  const room = roomLeft(doc) - HEADING_ROOM;
+  const maxHeight = room >= DRAWING_MIN_HEIGHT ? Math.min(room, DRAWING_MAX_HEIGHT) : DRAWING_MAX_HEIGHT;
+  heading(doc, 'Drawing', maxHeight);
+  figure(doc, f, contentWidth(doc), maxHeight);
+}
+
+export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
+  const open = openDocument(m);
+  const { doc } = open;
+  documentHeader(doc, m.letterhead, {
+    title: m.title,
+    fields: [
+      { label: 'Quote no.', value: m.issue.number }, { label: 'Date', value: m.issue.date },
+      { label: 'Valid until', value: m.issue.validUntil },
+    ],
+  });
+  addressee(doc, m);
+  heading(doc, m.specification.heading);
+  fieldGrid(doc, m.specification.fields, { columns: 2 });
+  space(doc);
+  prices(doc, m);
+  if (m.drawing) drawing(doc, m.drawing);
+  heading(doc, 'Terms');
+  paragraphs(doc, m.terms, { bullet: true });
+  space(doc);
+  notice(doc, m.caution);
+  return finish(open, m);
+}

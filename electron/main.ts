@@ -1,0 +1,153 @@
+/**
+ * The desktop shell: one instance, one store in userData, the UI from app://coilwright/, every window
+ * sandboxed, every IPC call sender-checked and parsed, unexpected failures logged and shown once.
+ */
+import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session, shell } from 'electron';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
+import type { MenuCommand } from '../core/api/method-names';
+import { registerIpc } from './ipc';
+import { createService, dispatch } from './service';
+import type { Service } from './service';
+import { createDataActions } from './shell/data-actions';
+import { electronDialogs } from './shell/dialogs';
+import { createFaultReporter } from './shell/faults';
+import type { FaultReporter } from './shell/faults';
+import { openShopStore } from './shell/first-run';
+import { createLog } from './shell/logging';
+import type { Log } from './shell/logging';
+import { applicationMenu } from './shell/menu';
+import { chooseSqliteBinding } from './shell/native-binding';
+import { APP_SCHEME } from './shell/origin';
+import { registerPdfIpc } from './shell/pdf-ipc';
+import { createPdfPreviews } from './shell/pdf-preview';
+import type { PdfPreviews } from './shell/pdf-preview';
+import { createPdfShelf } from './shell/pdf-shelf';
+import { appProtocolHandler, registerAppScheme } from './shell/protocol';
+import { denyPermissions, hardenWebContents } from './shell/security';
+import { createMainWindow } from './shell/window';
+
+// Privileged schemes must be declared before the app is ready.
+registerAppScheme(protocol);
+
+// The bundles sit in dist/ under the app path, beside the built renderer (inside app.asar when packaged).
+const rendererDir = () => path.join(app.getAppPath(), 'dist', 'renderer');
+const preloadFile = () => path.join(app.getAppPath(), 'dist', 'electron', 'preload.cjs');
+let mainWindow: BrowserWindow | undefined;
+let started = false;
+
+const userFile = (...parts: string[]) => path.join(app.getPath('userData'), ...parts);
+const liveMainWindow = () => (mainWindow && !mainWindow.isDestroyed() ? mainWindow : undefined);
+
+/** A problem that leaves nothing to work with (no store, no UI): say what to do, then quit. */
+function stop(log: Log, title: string, message: string): void {
+  log.error('startup', new Error(`${title}: ${message}`));
+  dialog.showErrorBox(title, message);
+  app.quit();
+}
+
+/** The store, or the reason there is none; the Electron build of better-sqlite3 is checked first. */
+function openService(log: Log): Service | string {
+  const binding = chooseSqliteBinding({
+    electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
+  });
+  if (!binding.ok) return binding.error.message;
+  const opened = openShopStore(userFile('coilwright.db'));
+  if (!opened.ok) return opened.error.message;
+  if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
+  return createService(opened.value.store);
+}
+
+function showMainWindow(log: Log, faults: FaultReporter): void {
+  const existing = liveMainWindow();
+  if (existing) {
+    if (existing.isMinimized()) existing.restore();
+    existing.focus();
+    return;
+  }
+  mainWindow = createMainWindow({
+    preload: preloadFile(), stateFile: userFile('window-state.json'), log, onCrash: (e) => faults.report('renderer', e),
+  });
+}
+
+function sendCommand(previews: PdfPreviews, command: MenuCommand, windowId: number | undefined): void {
+  if (previews.menuCommand(command, windowId)) return;
+  liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command);
+}
+
+function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): void {
+  const data = createDataActions({
+    dialogs: electronDialogs(liveMainWindow),
+    call: (name, input) => dispatch(service.handlers, name, input, { onUnexpected: (m, e) => faults.report(`menu:${m}`, e) }),
+    notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
+    documentsDir: app.getPath('documents'),
+    today: () => new Date().toISOString().slice(0, 10),
+  });
+  const guard = (name: string, action: () => Promise<void>) => () => void action().catch((e: unknown) => faults.report(name, e));
+  const template = applicationMenu({ platform: process.platform, isDev: !app.isPackaged, appName: app.name }, {
+    command: (command, window) => sendCommand(previews, command, window?.id),
+    backup: guard('backup', data.backup),
+    restore: guard('restore', data.restore),
+    importJobs: guard('import', data.importJobs),
+    exportJobs: guard('export', data.exportJobs),
+  });
+  Menu.setApplicationMenu(Menu.buildFromTemplate(template));
+}
+
+/** The PDF writer's fonts: shipped as resources when packaged, assets/fonts of the project otherwise. */
+function locateFonts(): void {
+  process.env.COILWRIGHT_FONTS ??= app.isPackaged
+    ? path.join(process.resourcesPath, 'fonts')
+    : path.join(app.getAppPath(), 'assets', 'fonts');
+}
+
+function start(log: Log, faults: FaultReporter): void {
+  locateFonts();
+  if (!existsSync(path.join(rendererDir(), 'index.html'))) {
+    stop(log, 'Coilwright is not built', `No user interface in ${rendererDir()}. Run "npm run build" first.`);
+    return;
+  }
+  const service = openService(log);
+  if (typeof service === 'string') {
+    stop(log, 'The job store cannot be opened', service);
+    return;
+  }
+  app.on('will-quit', () => service.close());
+  denyPermissions(session.defaultSession);
+  const shelf = createPdfShelf();
+  const previews = createPdfPreviews(shelf, log);
+  protocol.handle(APP_SCHEME, appProtocolHandler({ root: rendererDir(), pdfs: shelf }));
+  const onUnexpected = (context: string, e: unknown) => faults.report(context, e);
+  registerIpc(ipcMain, service.handlers, { onUnexpected });
+  registerPdfIpc(ipcMain, previews, liveMainWindow, { onUnexpected });
+  installMenu(service, previews, faults);
+  started = true;
+  showMainWindow(log, faults);
+  app.on('activate', () => showMainWindow(log, faults));
+}
+
+function boot(): void {
+  if (!app.requestSingleInstanceLock()) {
+    app.quit();
+    return;
+  }
+  const log = createLog(userFile('logs'));
+  const faults = createFaultReporter(log, (detail) =>
+    dialog.showMessageBox({ type: 'error', title: 'Coilwright', message: 'Something went wrong', detail, buttons: ['OK'] }));
+  process.on('uncaughtException', (e) => faults.report('main', e));
+  process.on('unhandledRejection', (e) => faults.report('main', e));
+  app.on('web-contents-created', (_event, contents) => hardenWebContents(contents, {
+    openExternal: (url) => shell.openExternal(url),
+    onError: (e) => log.error('open-external', e),
+  }));
+  app.on('second-instance', () => {
+    if (started) showMainWindow(log, faults);
+  });
+  app.on('window-all-closed', () => {
+    if (process.platform !== 'darwin') app.quit();
+  });
+  app.whenReady().then(() => start(log, faults)).catch((e: unknown) => stop(log, 'Coilwright could not start', String(e)));
+}
+
+boot();

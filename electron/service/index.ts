@@ -1,0 +1,26 @@
+import type { OpenOptions, Store } from '../../db';
+import type { Handlers } from './dispatch';
+import { engineHandlers } from './engine';
+import type { StoreContext, TypedHandlers } from './store';
+import { storeHandlers } from './store';
+import { shopHandlers } from './shop';
+
+export { dispatch } from './dispatch';
+export type { Handlers } from './dispatch';
+
+/** The whole API over one store: engine methods plus store methods. `store()` is the store open now. */
+export interface Service {
+  handlers: Handlers;
+  store(): Store;
+  close(): void;
+}
+
+export function createService(store: Store, openOptions: OpenOptions = {}): Service {
+  const ctx: StoreContext = { store, openOptions };
+  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx) };
+  return {
+    handlers,
+    store: () => ctx.store,
+    close: () => ctx.store.close(),
+  };
+}

@@ -1,0 +1,53 @@
+import type { z } from 'zod';
+import type { ApiResult, Contract, MethodOutput } from '../../core/api';
+import type { storeMethods } from '../../core/api/store';
+import type { OpenOptions, Store } from '../../db';
+import {
+  addAttachment, backupStore, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
+  importJobs, issueQuote, jobRevisions, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
+  restoreStore, saveSettings, setJobStatus, similarJobs, updateJob,
+} from '../../db';
+
+type StoreMethodName = keyof typeof storeMethods;
+
+/** Handlers checked against the contract: each takes its method's parsed input and returns its output type. */
+export type TypedHandlers<K extends keyof Contract> = {
+  [P in K]: (input: z.output<Contract[P]['input']>) => ApiResult<MethodOutput<Contract[P]>> | Promise<ApiResult<MethodOutput<Contract[P]>>>;
+};
+
+/** The store the handlers work on; restore swaps it for the restored one. */
+export interface StoreContext {
+  store: Store;
+  openOptions?: OpenOptions;
+}
+
+export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName> {
+  return {
+    createJob: (input) => createJob(ctx.store, input),
+    updateJob: (input) => updateJob(ctx.store, input),
+    getJob: (input) => getJob(ctx.store, input),
+    listJobs: (input) => listJobs(ctx.store, input),
+    findJobs: (input) => findJobs(ctx.store, input),
+    similarJobs: (input) => similarJobs(ctx.store, input),
+    jobRevisions: (input) => jobRevisions(ctx.store, input.id),
+    restoreRevision: (input) => restoreRevision(ctx.store, input),
+    setJobStatus: (input) => setJobStatus(ctx.store, input),
+    listCustomers: () => ({ ok: true, value: listCustomers(ctx.store) }),
+    getSettings: () => getSettings(ctx.store),
+    saveSettings: (input) => saveSettings(ctx.store, input.settings),
+    issueQuote: (input) => issueQuote(ctx.store, input),
+    listQuotes: (input) => listQuotes(ctx.store, input),
+    getQuote: (input) => getQuote(ctx.store, input),
+    addAttachment: (input) => addAttachment(ctx.store, input),
+    listAttachments: (input) => listAttachments(ctx.store, input.jobId),
+    getAttachment: (input) => getAttachment(ctx.store, input.id),
+    exportJobs: (input) => exportJobs(ctx.store, input),
+    importJobs: (input) => importJobs(ctx.store, input),
+    backup: (input) => backupStore(ctx.store, input.file),
+    restore: async (input) => {
+      const outcome = await restoreStore(ctx.store, input.file, ctx.openOptions);
+      ctx.store = outcome.store;
+      return outcome.result;
+    },
+  };
+}

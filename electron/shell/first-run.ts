@@ -1,0 +1,49 @@
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { ApiError } from '../../core/api';
+import { createDemoShop, tryOpenStore } from '../../db';
+import type { OpenOptions, Store } from '../../db';
+
+export interface ShopStore {
+  store: Store;
+  /** Jobs put in by the demo shop on this open; 0 when the store already had a life of its own. */
+  demoJobs: number;
+}
+
+/** Nothing has been done in it yet: no job and no saved setting (so the demo cannot overwrite a shop's settings). */
+function isPristine(store: Store): boolean {
+  const count = (table: 'jobs' | 'settings') => (store.sql(`SELECT count(*) AS n FROM ${table}`).get() as { n: number }).n;
+  return count('jobs') === 0 && count('settings') === 0;
+}
+
+function openQuietly(file: string, options: OpenOptions): { ok: true; value: Store } | { ok: false; error: ApiError } {
+  try {
+    return tryOpenStore(file, options);
+  } catch (e) {
+    return { ok: false, error: { code: 'store-unopenable', message: `${file} cannot be opened: ${(e as Error).message}`, path: file } };
+  }
+}
+
+/**
+ * Opens the shop's store, creating its folder and the file when needed. A new or untouched store gets
+ * the demo shop, so the first start shows worked examples instead of an empty list. Shared by the
+ * desktop app and the web transport; it must not import electron.
+ */
+export function openShopStore(file: string, options: OpenOptions = {}):
+  { ok: true; value: ShopStore } | { ok: false; error: ApiError } {
+  try {
+    mkdirSync(path.dirname(file), { recursive: true });
+  } catch (e) {
+    return { ok: false, error: { code: 'store-folder', message: `cannot create ${path.dirname(file)}: ${(e as Error).message}`, path: file } };
+  }
+  const opened = openQuietly(file, options);
+  if (!opened.ok) return opened;
+  const store = opened.value;
+  if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
+  const demo = createDemoShop(store);
+  if (!demo.ok) {
+    store.close();
+    return demo;
+  }
+  return { ok: true, value: { store, demoJobs: demo.value.jobs } };
+}

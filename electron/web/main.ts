@@ -1,0 +1,52 @@
+/**
+ * `npm run web [-- --port N] [-- --db FILE] [-- --static DIR]`: the UI in any browser, served on
+ * 127.0.0.1 only. Prints the address to open (it carries this run's token).
+ */
+import { homedir } from 'node:os';
+import path from 'node:path';
+import { startWebServer } from './server';
+
+export interface WebArgs {
+  port: number;
+  dbFile: string;
+  staticDir: string;
+}
+
+export function parseWebArgs(argv: string[], defaults: { home: string; cwd: string }): WebArgs | string {
+  const args: WebArgs = {
+    port: 0,
+    dbFile: path.join(defaults.home, '.coilwright', 'coilwright.db'),
+    staticDir: path.join(defaults.cwd, 'dist', 'renderer'),
+  };
+  for (let i = 0; i < argv.length; i += 2) {
+    const [flag, value] = [argv[i], argv[i + 1]];
+    if (value === undefined) return `${flag} needs a value`;
+    if (flag === '--port' && /^\d{1,5}$/.test(value) && Number(value) <= 65535) args.port = Number(value);
+    else if (flag === '--db') args.dbFile = path.resolve(value);
+    else if (flag === '--static') args.staticDir = path.resolve(value);
+    else return `unknown or bad option ${flag} ${value}`;
+  }
+  return args;
+}
+
+async function run(): Promise<void> {
+  const args = parseWebArgs(process.argv.slice(2), { home: homedir(), cwd: process.cwd() });
+  if (typeof args === 'string') {
+    console.error(`${args}\nusage: npm run web -- [--port N] [--db FILE] [--static DIR]`);
+    process.exitCode = 2;
+    return;
+  }
+  const web = await startWebServer({ dbFile: args.dbFile, staticDir: args.staticDir, port: args.port });
+  console.log(`Coilwright is serving ${args.dbFile}\nOpen ${web.url}\n(Ctrl+C stops it)`);
+  const stop = () => void web.close().then(() => process.exit(0));
+  process.on('SIGINT', stop);
+  process.on('SIGTERM', stop);
+}
+
+const invokedDirectly = process.argv[1] !== undefined && /(web[\\/]main\.[cm]?[jt]s|web-server\.cjs)$/.test(process.argv[1]);
+if (invokedDirectly) {
+  run().catch((e: unknown) => {
+    console.error(`Coilwright could not start: ${(e as Error).message}`);
+    process.exitCode = 1;
+  });
+}

@@ -1,0 +1,161 @@
+import { createServer } from 'node:http';
+import type { IncomingMessage, Server, ServerResponse } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { ApiError } from '../../core/api';
+import { dispatch } from '../service/dispatch';
+import { createService } from '../service';
+import type { Service } from '../service';
+import { openShopStore } from '../shell/first-run';
+import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
+import { readJsonBody } from './body';
+import { sendFile, sendJson, sendText } from './respond';
+
+export const WEB_HOST = '127.0.0.1';
+
+export interface WebServerOptions {
+  dbFile: string;
+  /** The built renderer (dist/renderer). */
+  staticDir: string;
+  port?: number;
+  token?: string;
+  maxBodyBytes?: number;
+  /** Where unexpected failures go; stderr by default. */
+  onUnexpected?: (context: string, error: unknown) => void;
+}
+
+export interface WebServer {
+  /** http://127.0.0.1:PORT/?token=TOKEN: opening it sets the session cookie. */
+  url: string;
+  token: string;
+  port: number;
+  server: Server;
+  close(): Promise<void>;
+}
+
+interface Context {
+  service: Service;
+  staticDir: string;
+  token: string;
+  maxBodyBytes: number;
+  port: () => number;
+  onUnexpected: (context: string, error: unknown) => void;
+}
+
+const valueError = (code: string, message: string): { ok: false; error: ApiError } => ({ ok: false, error: { code, message, path: '' } });
+
+/** Only our own host names: a page on another name that resolves to 127.0.0.1 (DNS rebinding) is refused. */
+function knownHost(req: IncomingMessage, port: number): boolean {
+  return req.headers.host === `${WEB_HOST}:${port}` || req.headers.host === `localhost:${port}`;
+}
+
+/** A browser names the page that sent a POST; anything but this server is refused. */
+function foreignOrigin(req: IncomingMessage, port: number): boolean {
+  const origin = req.headers.origin;
+  return origin !== undefined && origin !== `http://${WEB_HOST}:${port}` && origin !== `http://localhost:${port}`;
+}
+
+async function callApi(ctx: Context, req: IncomingMessage, res: ServerResponse, method: string): Promise<void> {
+  if (!(req.headers['content-type'] ?? '').toLowerCase().startsWith('application/json')) {
+    return sendJson(res, 415, valueError('unsupported-media-type', 'send the input as application/json'));
+  }
+  if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
+  const body = await readJsonBody(req, ctx.maxBodyBytes);
+  if (!body.ok) return sendJson(res, body.status, { ok: false, error: body.error });
+  const result = await dispatch(ctx.service.handlers, method, body.value, { onUnexpected: (m, e) => ctx.onUnexpected(`api:${m}`, e) });
+  const status = !result.ok && result.error.code === 'unknown-method' ? 404 : 200;
+  sendJson(res, status, result);
+}
+
+async function routeApi(ctx: Context, req: IncomingMessage, res: ServerResponse, pathname: string): Promise<void> {
+  if (pathname === '/api/health' && req.method === 'GET') return sendJson(res, 200, { ok: true, value: { status: 'ok' } });
+  if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'API methods are called with POST'));
+  let method: string;
+  try {
+    method = decodeURIComponent(pathname.slice('/api/'.length));
+  } catch {
+    return sendJson(res, 404, valueError('unknown-method', 'no such API method'));
+  }
+  return callApi(ctx, req, res, method);
+}
+
+/** `/?token=…` swaps the token in the address for the cookie, then shows the app without it. */
+function acceptToken(ctx: Context, res: ServerResponse, given: string): void {
+  if (!sameToken(given, ctx.token)) return sendText(res, 401, 'wrong token');
+  res.writeHead(303, { location: '/', 'set-cookie': sessionCookie(ctx.token), 'cache-control': 'no-store' });
+  res.end();
+}
+
+async function route(ctx: Context, req: IncomingMessage, res: ServerResponse): Promise<void> {
+  if (!knownHost(req, ctx.port())) return sendText(res, 421, 'unknown host');
+  const raw = req.url ?? '/';
+  const query = raw.indexOf('?');
+  const pathname = query < 0 ? raw : raw.slice(0, query);
+  const given = new URLSearchParams(query < 0 ? '' : raw.slice(query + 1)).get('token');
+  if (pathname === '/' && given !== null && req.method === 'GET') return acceptToken(ctx, res, given);
+  const isApi = pathname.startsWith('/api/');
+  if (!isAuthorized(req, ctx.token)) {
+    return isApi ? sendJson(res, 401, valueError('unauthorized', 'open the address printed by "npm run web" first')) : sendText(res, 401, 'unauthorized');
+  }
+  if (isApi) return routeApi(ctx, req, res, pathname);
+  if (req.method !== 'GET' && req.method !== 'HEAD') return sendText(res, 405, 'method not allowed');
+  return sendFile(res, ctx.staticDir, pathname, req.method === 'HEAD');
+}
+
+function listen(server: Server, port: number): Promise<number> {
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, WEB_HOST, () => {
+      server.off('error', reject);
+      resolve((server.address() as AddressInfo).port);
+    });
+  });
+}
+
+function openService(dbFile: string): Service {
+  const opened = openShopStore(dbFile);
+  if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
+  return createService(opened.value.store);
+}
+
+/**
+ * The loopback web transport: the built UI and `POST /api/<method>` on 127.0.0.1 only, behind a
+ * per-run token. Every API outcome is an ApiResult value, as over IPC.
+ */
+export async function startWebServer(options: WebServerOptions): Promise<WebServer> {
+  const service = openService(options.dbFile);
+  let port = 0;
+  const ctx: Context = {
+    service,
+    staticDir: options.staticDir,
+    token: options.token ?? newToken(),
+    maxBodyBytes: options.maxBodyBytes ?? 5_000_000,
+    port: () => port,
+    onUnexpected: options.onUnexpected ?? ((context, e) => console.error(`[${context}]`, e)),
+  };
+  const server = createServer((req, res) => {
+    route(ctx, req, res).catch((e: unknown) => {
+      ctx.onUnexpected('web', e);
+      if (!res.headersSent) sendJson(res, 500, valueError('unexpected', 'the server failed to answer'));
+      else res.destroy();
+    });
+  });
+  try {
+    port = await listen(server, options.port ?? 0);
+  } catch (e) {
+    service.close();
+    throw e;
+  }
+  return {
+    url: `http://${WEB_HOST}:${port}/?token=${ctx.token}`,
+    token: ctx.token,
+    port,
+    server,
+    close: () => new Promise<void>((resolve) => {
+      server.closeAllConnections();
+      server.close(() => {
+        service.close();
+        resolve();
+      });
+    }),
+  };
+}

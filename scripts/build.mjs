@@ -1,0 +1,110 @@
+// Builds the desktop app into dist/: main and preload with esbuild, the renderer with vite.
+//   node scripts/build.mjs            all three
+//   node scripts/build.mjs main preload   only those
+// The preload runs sandboxed and may require nothing but 'electron', so the build fails if any npm
+// package ends up in it.
+import { build } from 'esbuild';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const at = (...parts) => path.join(root, ...parts);
+
+/** Runtime packages main loads from node_modules (native code, or data files they read themselves). */
+const mainExternals = ['electron', 'better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit'];
+
+/** In the Electron main bundle, db/ gets better-sqlite3 through the shim that picks the Electron build. */
+const electronSqlite = {
+  name: 'electron-sqlite',
+  setup(b) {
+    const shim = at('electron', 'shell', 'sqlite-electron.ts');
+    b.onResolve({ filter: /^better-sqlite3$/ }, (args) =>
+      (args.importer === shim ? { path: 'better-sqlite3', external: true } : { path: shim }));
+  },
+};
+
+const common = { bundle: true, format: 'cjs', logLevel: 'warning', absWorkingDir: root, legalComments: 'none' };
+
+/** esbuild options, exported so tests can build in memory exactly what ships. */
+export const mainOptions = {
+  ...common,
+  entryPoints: [at('electron', 'main.ts')],
+  outfile: at('dist', 'electron', 'main.cjs'),
+  platform: 'node',
+  target: 'node22',
+  external: mainExternals,
+  plugins: [electronSqlite],
+};
+
+export const preloadOptions = {
+  ...common,
+  entryPoints: [at('electron', 'preload.ts')],
+  outfile: at('dist', 'electron', 'preload.cjs'),
+  platform: 'browser',
+  target: 'chrome130',
+  external: ['electron'],
+  metafile: true,
+};
+
+export async function buildMain() {
+  await build(mainOptions);
+}
+
+export async function buildPreload() {
+  const result = await build(preloadOptions);
+  const packaged = Object.keys(result.metafile.inputs).filter((input) => input.includes('node_modules'));
+  if (packaged.length > 0) throw new Error(`the sandboxed preload must not bundle npm packages: ${packaged.join(', ')}`);
+}
+
+/** The loopback web transport (npm run web): plain Node, no electron. */
+export async function buildWebServer() {
+  await build({
+    ...common,
+    entryPoints: [at('electron', 'web', 'main.ts')],
+    outfile: at('dist', 'web', 'web-server.cjs'),
+    platform: 'node',
+    target: 'node20',
+    external: mainExternals,
+  });
+}
+
+/** The renderer engineer's renderer/vite.config.ts decides the output (dist/renderer by default). */
+export async function buildRenderer() {
+  const config = at('renderer', 'vite.config.ts');
+  if (!existsSync(at('renderer', 'index.html'))) {
+    console.warn('renderer: skipped (renderer/index.html does not exist yet)');
+    return false;
+  }
+  const { build: viteBuild } = await import('vite');
+  if (existsSync(config)) {
+    await viteBuild({ configFile: config });
+  } else {
+    const { default: react } = await import('@vitejs/plugin-react');
+    await viteBuild({ configFile: false, root: at('renderer'), base: './', plugins: [react()],
+      build: { outDir: at('dist', 'renderer'), emptyOutDir: true } });
+  }
+  return true;
+}
+
+const steps = { main: buildMain, preload: buildPreload, renderer: buildRenderer, web: buildWebServer };
+
+async function run(names) {
+  for (const name of names) {
+    const step = steps[name];
+    if (!step) throw new Error(`unknown build step "${name}" (known: ${Object.keys(steps).join(', ')})`);
+    const started = Date.now();
+    const done = await step().catch((e) => {
+      throw new Error(`${name}: ${e.message}`);
+    });
+    if (done !== false) console.log(`${name}: built in ${Date.now() - started} ms`);
+  }
+}
+
+if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  const names = process.argv.slice(2);
+  run(names.length > 0 ? names : ['main', 'preload', 'renderer']).catch((e) => {
+    console.error(`build failed: ${e.message}`);
+    process.exit(1);
+  });
+}

@@ -1,0 +1,102 @@
+import { spawnSync } from 'node:child_process';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { demoJobs } from '../../../db/demo/jobs';
+import { job, spec, tempDir } from './helpers';
+
+const root = resolve(__dirname, '../../..');
+
+function cli(...args: string[]): { code: number; out: string; err: string; json: () => unknown; errors: () => { code: string; path: string; message: string }[] } {
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'electron/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  return {
+    code: r.status ?? -1, out: r.stdout, err: r.stderr,
+    json: () => JSON.parse(r.stdout),
+    errors: () => (JSON.parse(r.stderr) as { errors: { code: string; path: string; message: string }[] }).errors,
+  };
+}
+
+function jobFile(dir: string, name: string, over: Record<string, unknown> = {}, specOver: Record<string, unknown> = {}): string {
+  const { drawingNumber, drawingRevision, ...rest } = job(over, specOver);
+  const file = join(dir, name);
+  writeFileSync(file, JSON.stringify({ ...rest, drawing: drawingNumber, revision: drawingRevision }));
+  return file;
+}
+
+describe('command line: jobs', () => {
+  it('adds, shows, lists, finds, compares and lists revisions', () => {
+    const dir = tempDir();
+    const db = join(dir, 'shop.db');
+    const added = cli('jobs', 'add', jobFile(dir, 'a.json', { partNumber: 'HX-10', notes: 'harrow tine' }), '--db', db);
+    expect(added.code).toBe(0);
+    const stored = added.json() as { id: number; number: string; drawingNumber: string; drawingRevision: string };
+    expect(stored).toMatchObject({ id: 1, number: 'J-26-0001', drawingNumber: 'FG-D-100', drawingRevision: 'A' });
+    expect(cli('jobs', 'add', jobFile(dir, 'b.json', { partNumber: 'HX-11' }, { freeLength: 56 }), '--db', db).code).toBe(0);
+    expect((cli('jobs', 'show', 'J-26-0002', '--db', db).json() as { partNumber: string }).partNumber).toBe('HX-11');
+    expect((cli('jobs', 'show', '1', '--db', db).json() as { partNumber: string }).partNumber).toBe('HX-10');
+    const list = cli('jobs', 'list', '--status', 'draft', '--db', db).json() as { total: number };
+    expect(list.total).toBe(2);
+    expect((cli('jobs', 'list', '--status', 'done', '--db', db).json() as { total: number }).total).toBe(0);
+    const found = cli('jobs', 'find', 'harr', '--db', db).json() as { job: { partNumber: string } }[];
+    expect(found.map((h) => h.job.partNumber)).toEqual(['HX-10']);
+    writeFileSync(join(dir, 'ask.json'), JSON.stringify(spec({ freeLength: 55 })));
+    const similar = cli('jobs', 'similar', join(dir, 'ask.json'), '--limit', '1', '--db', db).json() as Record<string, unknown>[];
+    expect(similar).toHaveLength(1);
+    expect(similar[0]).toMatchObject({ id: 2, number: 'J-26-0002', differences: { wireDiameter: 'same', freeLength: '+2 %' } });
+    expect(typeof similar[0]!.score).toBe('number');
+    const revisions = cli('jobs', 'revisions', '1', '--db', db).json() as { revision: number }[];
+    expect(revisions.map((r) => r.revision)).toEqual([1]);
+  });
+
+  it('exits 2 with the field of bad input on stderr', () => {
+    const dir = tempDir();
+    const db = join(dir, 'shop.db');
+    const bad = cli('jobs', 'add', jobFile(dir, 'bad.json', {}, { wireDiameter: 0 }), '--db', db);
+    expect(bad.code).toBe(2);
+    expect(bad.errors()[0]).toMatchObject({ path: 'spec.wireDiameter' });
+    expect(cli('jobs', 'show', '9', '--db', db).errors()[0]).toMatchObject({ code: 'not-found', path: 'id' });
+    expect(cli('jobs', 'list').errors()[0]).toMatchObject({ code: 'missing-option', path: '--db' });
+    writeFileSync(join(dir, 'text.db'), 'hello');
+    const refused = cli('jobs', 'list', '--db', join(dir, 'text.db'));
+    expect(refused.code).toBe(2);
+    expect(refused.errors()[0]).toMatchObject({ code: 'not-a-store', path: '--db' });
+  });
+});
+
+describe('command line: db and demo', () => {
+  it('creates the demo shop, backs it up, exports, imports and restores', () => {
+    const dir = tempDir();
+    const db = join(dir, 'demo.db');
+    const demo = cli('demo', '--db', db);
+    expect(demo.code).toBe(0);
+    const count = demoJobs.length;
+    expect(demo.json()).toMatchObject({ jobs: count });
+    expect(cli('demo', '--db', db).errors()[0]).toMatchObject({ code: 'store-not-empty' });
+
+    const backup = cli('db', 'backup', '--db', db, '--out', join(dir, 'demo-backup.db'));
+    expect(backup.code).toBe(0);
+    expect(existsSync(join(dir, 'demo-backup.db'))).toBe(true);
+
+    expect(cli('db', 'export', '--db', db, '--out', join(dir, 'jobs.json')).json()).toMatchObject({ format: 'json', count });
+    const csv = cli('db', 'export', '--db', db, '--csv');
+    expect(csv.code).toBe(0);
+    expect(csv.out.split('\r\n')).toHaveLength(count + 1);
+
+    const other = join(dir, 'other.db');
+    expect((cli('db', 'import', join(dir, 'jobs.json'), '--db', other).json() as { imported: unknown[] }).imported).toHaveLength(count);
+    const again = cli('db', 'import', join(dir, 'jobs.json'), '--db', other);
+    expect(again.code).toBe(2);
+    expect(again.errors()[0]).toMatchObject({ code: 'duplicate-number', path: 'jobs[0].number' });
+
+    expect(cli('jobs', 'add', jobFile(dir, 'x.json'), '--db', db).code).toBe(0);
+    const restored = cli('db', 'restore', '--db', db, '--from', join(dir, 'demo-backup.db'));
+    expect(restored.code).toBe(0);
+    expect((cli('jobs', 'list', '--db', db).json() as { total: number }).total).toBe(count);
+
+    writeFileSync(join(dir, 'junk.db'), 'junk');
+    const refused = cli('db', 'restore', '--db', db, '--from', join(dir, 'junk.db'));
+    expect(refused.code).toBe(2);
+    expect(refused.errors()[0]).toMatchObject({ code: 'not-a-store' });
+    expect(readFileSync(join(dir, 'junk.db'), 'utf8')).toBe('junk');
+  });
+});

@@ -1,0 +1,41 @@
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { methodNames } from '../../../core/api';
+import { openStore } from '../../../db';
+import { createService, dispatch } from '../../../electron/service';
+import { job, tempDir } from './helpers';
+
+describe('store service', () => {
+  it('answers every method of the contract', () => {
+    const service = createService(openStore(join(tempDir(), 'shop.db')));
+    expect(Object.keys(service.handlers).sort()).toEqual([...methodNames].sort());
+    service.close();
+  });
+
+  it('returns values for good and bad input alike, naming the field', async () => {
+    const service = createService(openStore(join(tempDir(), 'shop.db')));
+    const created = await dispatch(service.handlers, 'createJob', job());
+    expect(created).toMatchObject({ ok: true, value: { number: 'J-26-0001' } });
+    const bad = await dispatch(service.handlers, 'createJob', job({}, { ends: 'hooked' }));
+    expect(bad).toMatchObject({ ok: false, error: { path: 'spec.ends' } });
+    const unknown = await dispatch(service.handlers, 'listJobs', { colour: 'red' });
+    expect(unknown).toMatchObject({ ok: false, error: { path: 'colour', code: 'unknown-field' } });
+    const page = await dispatch(service.handlers, 'listJobs', {});
+    expect(page).toMatchObject({ ok: true, value: { total: 1 } });
+    service.close();
+  });
+
+  it('swaps to the restored store after a restore', async () => {
+    const dir = tempDir();
+    const service = createService(openStore(join(dir, 'shop.db')));
+    await dispatch(service.handlers, 'createJob', job({ partNumber: 'KEPT' }));
+    expect(await dispatch(service.handlers, 'backup', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
+    await dispatch(service.handlers, 'createJob', job({ partNumber: 'UNDONE' }));
+    const before = service.store();
+    expect(await dispatch(service.handlers, 'restore', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
+    expect(service.store()).not.toBe(before);
+    const page = await dispatch(service.handlers, 'listJobs', {});
+    expect(page.ok && (page.value as { jobs: { partNumber: string }[] }).jobs.map((j) => j.partNumber)).toEqual(['KEPT']);
+    service.close();
+  });
+});
