@@ -1,16 +1,19 @@
 import { engineMethods } from './engine';
 import { storeMethods } from './store';
 import { shopMethods } from './shop';
+import { documentMethods } from './documents';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
 export * from './store';
+export type { PrintedPdf } from './documents';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
 export const contract = {
   ...engineMethods,
   ...storeMethods,
   ...shopMethods,
+  ...documentMethods,
 };
 
 export type Contract = typeof contract;

@@ -1,14 +1,8 @@
 import { writeFileSync } from 'node:fs';
-import type { Job } from '../../core/api/store';
-import { estimateCost } from '../../core/costing/estimate';
-import type { CostEstimate } from '../../core/costing/types';
-import {
-  parsePrintFile, parseQuoteDocument, printableKind, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue,
-} from '../../core/documents';
-import type { PrintJob, QuoteDocument } from '../../core/documents';
+import { parsePrintFile } from '../../core/documents';
 import type { Result } from '../../core/result';
-import type { Settings } from '../../core/settings/schema';
 import { renderQuote, renderTraveller } from '../documents';
+import { draftQuote, travellerFor } from '../documents/printing';
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, requireOption, toJson } from './io';
@@ -20,31 +14,6 @@ function must<T>(result: Result<T>): T {
   return result.value;
 }
 
-async function storedJob(call: Caller, ref: string): Promise<{ job: Job; print: PrintJob }> {
-  const job = await call('getJob', jobRef(ref));
-  const customer = job.customer && (await call('listCustomers', {})).find((c) => c.id === job.customer!.id);
-  return {
-    job,
-    print: must(printableKind({
-      number: job.number, customerName: job.customer?.name ?? null,
-      customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
-      partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
-      orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec,
-    }, 'spec.kind')),
-  };
-}
-
-/** The job a document is for: a stored one with --job ID|NUMBER, or the spec or job file given. */
-async function printJob(args: ParsedArgs, call: Caller, command: string): Promise<{ job: Job | null; print: PrintJob }> {
-  const ref = args.options.get('job');
-  if (typeof ref === 'string') return storedJob(call, ref);
-  const file = args.positional[1];
-  if (file === undefined) {
-    throw new InputError([{ code: 'missing-argument', path: 'FILE', message: `${command} needs a spec or job FILE, or --job ID` }]);
-  }
-  return { job: null, print: must(parsePrintFile(readJson(file))) };
-}
-
 function write(file: string, pdf: Buffer): void {
   try {
     writeFileSync(file, pdf);
@@ -53,56 +22,46 @@ function write(file: string, pdf: Buffer): void {
   }
 }
 
-function draftQuote(print: PrintJob, settings: Settings, estimate: CostEstimate): QuoteDocument {
-  return quoteDocument({
-    spec: print.spec, settings, estimate, issuedAt: new Date().toISOString(), validityDays: settings.defaults.quoteValidityDays,
-    job: print,
-  });
-}
+const printFile = (args: ParsedArgs, command: string) => {
+  const file = args.positional[1];
+  if (file === undefined) {
+    throw new InputError([{ code: 'missing-argument', path: 'FILE', message: `${command} needs a spec or job FILE, or --job ID` }]);
+  }
+  return must(parsePrintFile(readJson(file)));
+};
 
-/** A stored job's quote is issued: the store keeps the estimate and the document model, immutable. */
-async function issue(call: Caller, job: Job, draft: QuoteDocument, estimate: CostEstimate): Promise<QuoteDocument> {
-  const quote = await call('issueQuote', {
-    jobId: job.id, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
-    quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)),
-  });
-  return withQuoteIssue(draft, quote);
-}
-
-/** A quote already issued prints from its snapshot alone, whatever the prices are today. */
-async function reprint(call: Caller, number: string): Promise<QuoteDocument> {
-  const quote = await call('getQuote', { number });
-  return withQuoteIssue(must(parseQuoteDocument(quote.document)), quote);
-}
-
+/** A stored job (--job ID|NUMBER) goes through the API, which issues its quote; a file prints as a draft. */
 async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string, unknown>> {
   const out = requireOption(args, 'out');
-  const stored = args.options.get('quote');
-  if (typeof stored === 'string') {
-    const model = await reprint(call, stored);
-    write(out, await renderQuote(model));
-    return { file: out, quote: model.issue.number, reprint: true };
+  const number = args.options.get('quote');
+  const ref = args.options.get('job');
+  if (typeof number === 'string' || typeof ref === 'string') {
+    const printed = typeof number === 'string'
+      ? await call('reprintQuote', { number })
+      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id });
+    write(out, Buffer.from(printed.base64, 'base64'));
+    return { file: out, quote: printed.reference, issued: typeof number !== 'string', reprint: typeof number === 'string' };
   }
-  const { job, print } = await printJob(args, call, 'print quote');
-  const settings = await call('getSettings', {});
-  const estimate = estimateCost(print.spec, settings);
-  const draft = draftQuote(print, settings, estimate);
-  const model = job ? await issue(call, job, draft, estimate) : draft;
+  const print = printFile(args, 'print quote');
+  const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date());
   write(out, await renderQuote(model));
-  return { file: out, quote: model.issue.number, issued: job !== null, missing: estimate.missing };
+  return { file: out, quote: model.issue.number, issued: false, missing: estimate.missing };
 }
 
 async function printTraveller(args: ParsedArgs, call: Caller): Promise<Record<string, unknown>> {
   const out = requireOption(args, 'out');
-  const { print } = await printJob(args, call, 'print traveller');
-  const quantity = must(travellerQuantity(print, intOption(args, 'quantity')));
-  const settings = await call('getSettings', {});
-  const model = travellerDocument({
-    spec: print.spec, settings, printedAt: new Date().toISOString(),
-    job: { ...print, orderQuantity: quantity },
-  });
+  const quantity = intOption(args, 'quantity');
+  const ref = args.options.get('job');
+  if (typeof ref === 'string') {
+    const jobId = (await call('getJob', jobRef(ref))).id;
+    const printed = await call('printTraveller', { jobId, ...(quantity === undefined ? {} : { quantity }) });
+    write(out, Buffer.from(printed.base64, 'base64'));
+    return { file: out, job: printed.reference, findings: printed.findings };
+  }
+  const print = printFile(args, 'print traveller');
+  const model = must(travellerFor(print, await call('getSettings', {}), quantity, new Date()));
   write(out, await renderTraveller(model));
-  return { file: out, job: print.number, quantity, findings: model.findings };
+  return { file: out, job: print.number, quantity: quantity ?? print.orderQuantity ?? print.spec.quantities?.[0], findings: model.findings };
 }
 
 const subcommands: Record<string, (args: ParsedArgs, call: Caller) => Promise<Record<string, unknown>>> = {

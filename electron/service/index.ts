@@ -4,6 +4,7 @@ import { engineHandlers } from './engine';
 import type { StoreContext, TypedHandlers } from './store';
 import { storeHandlers } from './store';
 import { shopHandlers } from './shop';
+import { documentHandlers } from './documents';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
@@ -17,7 +18,7 @@ export interface Service {
 
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
-  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx) };
+  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx) };
   return {
     handlers,
     store: () => ctx.store,

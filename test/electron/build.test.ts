@@ -28,7 +28,7 @@ describe('the main bundle', () => {
 
   it('loads only electron, the native/data-file packages and Node built-ins at run time', async () => {
     const { required } = await bundle(options.mainOptions);
-    const allowed = new Set(['electron', 'better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'qrcode']);
+    const allowed = new Set(['electron', 'better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit']);
     expect(required.filter((r) => !allowed.has(r) && !r.startsWith('node:'))).toEqual([]);
   });
 });

@@ -1,0 +1,22 @@
+import { z } from 'zod';
+import { method } from './contract';
+
+const jobId = z.number().int().positive();
+
+/** A printed document: the PDF as base64 (it crosses IPC and HTTP as JSON), a file name, and what it printed. */
+export interface PrintedPdf {
+  base64: string;
+  fileName: string;
+  /** The quote number for an issued quote; the job number for a traveller. */
+  reference: string;
+  /** Open review findings printed on the document, as printed. */
+  findings: string[];
+}
+
+/** Documents for stored jobs: the traveller, a newly issued quote, and the reprint of an issued one. */
+export const documentMethods = {
+  printTraveller: method<z.ZodObject<{ jobId: typeof jobId; quantity: z.ZodOptional<typeof jobId> }>, PrintedPdf>(
+    z.object({ jobId, quantity: jobId.optional() }).strict()),
+  printQuote: method<z.ZodObject<{ jobId: typeof jobId }>, PrintedPdf>(z.object({ jobId }).strict()),
+  reprintQuote: method<z.ZodObject<{ number: z.ZodString }>, PrintedPdf>(z.object({ number: z.string().min(1).max(40) }).strict()),
+};

@@ -1,0 +1,49 @@
+import type { Customer, Job, Quote } from '../../core/api/store';
+import { estimateCost } from '../../core/costing/estimate';
+import type { CostEstimate } from '../../core/costing/types';
+import { parseQuoteDocument, printableKind, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
+import type { PrintJob, QuoteDocument, TravellerDocument } from '../../core/documents';
+import type { Result } from '../../core/result';
+import type { Settings } from '../../core/settings/schema';
+
+/**
+ * The printing steps shared by the API (the app's Print menu) and the command line: what a document
+ * says about a stored job, the draft and issued quote, and the traveller for a quantity.
+ */
+export function storedPrintJob(job: Job, customers: readonly Customer[]): Result<PrintJob> {
+  const customer = job.customer && customers.find((c) => c.id === job.customer!.id);
+  return printableKind({
+    number: job.number, customerName: job.customer?.name ?? null,
+    customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
+    partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
+    orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec,
+  }, 'spec.kind');
+}
+
+export function draftQuote(print: PrintJob, settings: Settings, now: Date): { model: QuoteDocument; estimate: CostEstimate } {
+  const estimate = estimateCost(print.spec, settings);
+  const model = quoteDocument({
+    spec: print.spec, settings, estimate, issuedAt: now.toISOString(), validityDays: settings.defaults.quoteValidityDays, job: print,
+  });
+  return { model, estimate };
+}
+
+/** What the store keeps when a quote is issued: the estimate and the document model, as plain JSON. */
+export function quoteSnapshot(jobId: number, draft: QuoteDocument, estimate: CostEstimate) {
+  return {
+    jobId, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
+    quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)),
+  };
+}
+
+/** An issued quote prints from its snapshot alone, whatever the prices are today. */
+export function issuedQuoteDocument(quote: Quote): Result<QuoteDocument> {
+  const model = parseQuoteDocument(quote.document);
+  return model.ok ? { ok: true, value: withQuoteIssue(model.value, quote) } : model;
+}
+
+export function travellerFor(print: PrintJob, settings: Settings, quantity: number | undefined, now: Date): Result<TravellerDocument> {
+  const q = travellerQuantity(print, quantity);
+  if (!q.ok) return q;
+  return { ok: true, value: travellerDocument({ spec: print.spec, settings, printedAt: now.toISOString(), job: { ...print, orderQuantity: q.value } }) };
+}
