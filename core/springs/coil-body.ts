@@ -71,3 +71,4 @@ export function coilBody(spec: CoilBodySpec): CoilBody | undefined {
     wire: resolved.props, wireFindings: resolved.findings,
   };
 }
+

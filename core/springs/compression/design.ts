@@ -48,8 +48,11 @@ export function compressionDesign(spec: CompressionSpec): CompressionDesign | un
   const mm = millimetresPer(spec.units);
   const inactive = endForms[spec.ends].inactiveCoils;
   const nt = spec.totalCoils ?? (spec.activeCoils ?? Number.NaN) + inactive;
+  // Fields listed one by one: an object spread of the body made these objects' shapes unstable and the
+  // analysis several times slower (npm run bench).
   return {
-    ...body, nt, na: nt - inactive,
+    units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
+    wire: body.wire, wireFindings: body.wireFindings, nt, na: nt - inactive,
     coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active',
     ends: spec.ends, L0: spec.freeLength * mm, loads: loadsInternal(spec, mm),
     seating: spec.seating, duty: dutyInternal(spec, mm), freeParameters: spec.freeParameters,

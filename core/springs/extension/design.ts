@@ -47,7 +47,8 @@ export function extensionDesign(spec: ExtensionSpec): ExtensionDesign | undefine
     ? spec.duty
     : { ...spec.duty, between: [spec.duty.between[0] * mm, spec.duty.between[1] * mm] as [number, number] };
   return {
-    ...body,
+    units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
+    wire: body.wire, wireFindings: body.wireFindings,
     nb: spec.bodyCoils,
     ends: [endOf(spec.ends[0], body.d, mm), endOf(spec.ends[1], body.d, mm)],
     specifiedFreeLength: spec.freeLength === undefined ? null : spec.freeLength * mm,

@@ -32,7 +32,8 @@ export function torsionDesign(spec: TorsionSpec): TorsionDesign | undefined {
     bendRadius: spec.legs[i].bendRadius === undefined ? null : spec.legs[i].bendRadius! * mm,
   });
   return {
-    ...body, nb: spec.bodyCoils, legs: [leg(0), leg(1)],
+    units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
+    wire: body.wire, wireFindings: body.wireFindings, nb: spec.bodyCoils, legs: [leg(0), leg(1)],
     freeAngle: spec.freeAngle ?? null, freeAngleTolerance: spec.freeAngleTolerance ?? null,
     windDirection: spec.windDirection, loadDirection: spec.loadDirection,
     arborDiameter: spec.arborDiameter === undefined ? null : spec.arborDiameter * mm,
