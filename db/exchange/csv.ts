@@ -1,8 +1,18 @@
+/**
+ * Text that a spreadsheet would run as a formula (=, +, -, @, tab or CR first) is written behind an
+ * apostrophe, which spreadsheets show as plain text; reading strips it again.
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
 /** RFC 4180 CSV: fields with a comma, quote or line break are quoted, quotes doubled; CRLF between rows. */
 export function csvField(value: unknown): string {
-  const text = value === null || value === undefined ? '' : String(value);
+  const raw = value === null || value === undefined ? '' : String(value);
+  const text = typeof value === 'string' && FORMULA_START.test(raw) ? `'${raw}` : raw;
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
+
+/** The text a field held before csvField guarded it. */
+export const unguarded = (field: string): string => (field.startsWith("'") && FORMULA_START.test(field.slice(1)) ? field.slice(1) : field);
 
 export function csvLine(values: readonly unknown[]): string {
   return values.map(csvField).join(',');

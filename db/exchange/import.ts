@@ -11,7 +11,7 @@ import { attempt, writeNewJob } from '../jobs/write';
 import type { Store } from '../store';
 import { inTransaction } from '../store';
 import { parseWith, zodErrors } from '../../core/validation';
-import { CsvSyntaxError, parseCsv } from './csv';
+import { CsvSyntaxError, parseCsv, unguarded } from './csv';
 import { CSV_IMPORTED, documentHeadSchema, importRecordSchema } from './document';
 
 interface ImportItem {
@@ -97,7 +97,7 @@ function csvItems(text: string): Result<ImportItem[]> {
     header.fields.forEach((column, i) => {
       const blankOptional = (row.fields[i] ?? '') === '' && ['number', 'createdAt', 'updatedAt'].includes(column);
       if (!CSV_IMPORTED.has(column) || blankOptional) return;
-      const value = csvValue(column, row.fields[i] ?? '', at);
+      const value = csvValue(column, unguarded(row.fields[i] ?? ''), at);
       if (value.ok) raw[column] = value.value;
       else errors.push(...value.errors);
     });

@@ -2,7 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createJob, exportJobs, importJobs, listJobs } from '../../../db';
-import { parseCsv } from '../../../db/exchange/csv';
+import { csvField, parseCsv, unguarded } from '../../../db/exchange/csv';
 import type { Store } from '../../../db';
 import { job, spec, tempDir, tempStore, value } from './helpers';
 
@@ -81,5 +81,15 @@ describe('export and import', () => {
     expect(importJobs(store, { text: '{ nope' })).toMatchObject({ ok: false, error: { code: 'invalid-json' } });
     expect(importJobs(store, { text: JSON.stringify({ format: 'coilwright-jobs', version: 1, jobs: [{ spec: spec(), extra: 1 }] }) }))
       .toMatchObject({ ok: false, error: { code: 'unknown-field', path: 'jobs[0].extra' } });
+  });
+});
+
+describe('CSV and spreadsheets', () => {
+  it('writes text a spreadsheet would run as a formula behind an apostrophe, and reads it back unchanged', () => {
+    const guarded = csvField('=HYPERLINK("http://x")');
+    expect(guarded.startsWith('"\'=')).toBe(true);
+    expect(unguarded(parseCsv(guarded)[0]!.fields[0]!)).toBe('=HYPERLINK("http://x")');
+    expect(csvField(-5)).toBe('-5');
+    expect(unguarded("'plain")).toBe("'plain");
   });
 });
