@@ -1,5 +1,4 @@
-/** What a compression spring puts on a document: its data in trade terms and its two figures. */
-import { compressionDrawing, loadDeflectionDiagram } from '../drawing';
+/** What a compression spring puts on a document: its data in trade terms. */
 import { formatQuantity } from '../format';
 import type { Settings } from '../settings/schema';
 import type { CompressionSpec } from '../spec';
@@ -7,10 +6,7 @@ import type { CompressionReport } from '../springs/compression/report';
 import { findGrade } from '../materials';
 import { orderFields } from './common';
 import { piecesText, plainText, wordText } from './text';
-import type { Field, FigureModel } from './types';
-
-const DRAWING = { width: 520, height: 300 };
-const DIAGRAM = { width: 480, height: 260 };
+import type { Field } from './types';
 
 function loadFields(r: CompressionReport): Field[] {
   return r.loads.map((l, i) => {
@@ -33,7 +29,7 @@ export function compressionFields(spec: CompressionSpec, r: CompressionReport, s
   const grade = findGrade(spec.material);
   return [
     { label: 'Material', value: grade ? `${grade.name}` : spec.material },
-    { label: 'Wire Ø d', value: len(r.outerDiameter - r.meanDiameter) },
+    { label: 'Wire Ø d', value: len(r.wireDiameter) },
     { label: 'Outside Ø De', value: len(r.outerDiameter) },
     { label: 'Inside Ø Di', value: len(r.innerDiameter) },
     { label: 'Free length L0', value: len(r.freeLength) },
@@ -47,16 +43,4 @@ export function compressionFields(spec: CompressionSpec, r: CompressionReport, s
     { label: 'Duty', value: dutyText(spec) },
     ...orderFields(spec, settings),
   ];
-}
-
-export function compressionDrawingFigure(spec: CompressionSpec, r: CompressionReport, title: string): FigureModel {
-  const svg = compressionDrawing(r, {
-    ...DRAWING, title, ends: spec.ends, diameter: spec.innerDiameter !== undefined ? 'inner' : 'outer',
-    directionOfWind: spec.directionOfWind ?? 'either',
-  });
-  return { caption: 'Spring drawing (dimensions at free length)', svg, ...DRAWING };
-}
-
-export function compressionDiagramFigure(r: CompressionReport): FigureModel {
-  return { caption: 'Load–length diagram', svg: loadDeflectionDiagram(r, DIAGRAM), ...DIAGRAM };
 }

@@ -8,6 +8,5 @@ export type { TravellerInput, TravellerJob } from './traveller';
 export { cautionNotice, safetyNotes, STORED_ENERGY_CAUTION, REVIEW_CAUTION } from './cautions';
 export { isQuoteDocument, parseQuoteDocument } from './guards';
 export * as documentText from './text';
-export { parsePrintFile, printableKind, travellerQuantity, isJobFile } from './job-file';
-export { documentKinds } from './spring';
+export { parsePrintFile, travellerQuantity, isJobFile } from './job-file';
 export type { PrintJob } from './job-file';

@@ -7,7 +7,6 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, formatPath, ok } from '../result';
 import { parseSpec } from '../spec';
 import type { Spec } from '../spec';
-import { documentKinds } from './spring';
 
 export interface PrintJob {
   /** The shop's job number; null for a job that is not in the store. */
@@ -68,20 +67,13 @@ function jobOf(raw: unknown): Result<PrintJob> {
   });
 }
 
-/** A spring of a kind the documents do not cover yet is refused up front, naming the field. */
-export function printableKind(job: PrintJob, path = 'kind'): Result<PrintJob> {
-  if (documentKinds.includes(job.spec.kind)) return ok(job);
-  return fail([fieldError('unsupported-kind', path, `quotes and travellers cover ${documentKinds.join(', ')} springs so far, not ${job.spec.kind}`)]);
-}
-
 /** Reads a spec or a job file; every problem comes back with the field it concerns. */
 export function parsePrintFile(raw: unknown): Result<PrintJob> {
   if (isJobFile(raw)) {
-    const job = jobOf(raw);
-    return job.ok ? printableKind(job.value, 'spec.kind') : job;
+    return jobOf(raw);
   }
   const spec = parseSpec(raw);
-  return spec.ok ? printableKind(fromSpec(spec.value)) : spec;
+  return spec.ok ? ok(fromSpec(spec.value)) : spec;
 }
 
 /** The quantity a traveller is for: the one asked for, the job's order, else the spec's first break. */

@@ -6,8 +6,32 @@ import { analyseSpec } from '../calculate';
 import type { SpringReport } from '../calculate';
 import type { Settings } from '../settings/schema';
 import type { Spec, SpringKind } from '../spec';
-import { compressionDiagramFigure, compressionDrawingFigure, compressionFields } from './compression';
+import { springDiagram, springDrawing, specDrawingOptions } from '../drawing';
+import { compressionFields } from './compression';
+import { extensionFields, torsionFields } from './kinds';
 import type { Field, FigureModel } from './types';
+
+const DRAWING = { width: 520, height: 300 };
+const DIAGRAM = { width: 480, height: 260 };
+
+const headings: Record<SpringKind, string> = {
+  compression: 'Helical compression spring',
+  extension: 'Helical extension spring',
+  torsion: 'Helical torsion spring',
+};
+
+const diagramCaptions: Record<SpringKind, string> = {
+  compression: 'Load–length diagram',
+  extension: 'Load–length diagram (lengths inside the ends)',
+  torsion: 'Torque–angle diagram',
+};
+
+function fieldsFor(spec: Spec, report: SpringReport, settings: Settings): Field[] {
+  if (spec.kind === 'compression' && report.kind === 'compression') return compressionFields(spec, report, settings);
+  if (spec.kind === 'extension' && report.kind === 'extension') return extensionFields(spec, report, settings);
+  if (spec.kind === 'torsion' && report.kind === 'torsion') return torsionFields(spec, report, settings);
+  throw new Error(`report of kind ${report.kind} for a ${spec.kind} spec`);
+}
 
 export interface SpringContent {
   heading: string;
@@ -18,19 +42,13 @@ export interface SpringContent {
   report: SpringReport;
 }
 
-/** The kinds quotes and travellers can print so far (each needs its data block and drawings). */
-export const documentKinds: readonly SpringKind[] = ['compression'];
-
 export function springContent(spec: Spec, settings: Settings, title: string): SpringContent {
-  if (spec.kind === 'compression') {
-    const report = analyseSpec(spec);
-    return {
-      heading: 'Helical compression spring',
-      fields: compressionFields(spec, report, settings),
-      drawing: compressionDrawingFigure(spec, report, title),
-      diagram: compressionDiagramFigure(report),
-      report,
-    };
-  }
-  throw new Error(`quotes and travellers do not cover ${spec.kind} springs yet (only ${documentKinds.join(', ')})`);
+  const report = analyseSpec(spec);
+  return {
+    heading: headings[spec.kind],
+    fields: fieldsFor(spec, report, settings),
+    drawing: { caption: 'Spring drawing (dimensions at free position)', svg: springDrawing(report, { ...DRAWING, title, ...specDrawingOptions(spec) }), ...DRAWING },
+    diagram: { caption: diagramCaptions[spec.kind], svg: springDiagram(report, DIAGRAM), ...DIAGRAM },
+    report,
+  };
 }

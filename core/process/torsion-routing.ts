@@ -5,6 +5,7 @@ import type { Operation } from './types';
 import { coilerPiecesPerHour, machinePiecesPerHour } from './work-centre';
 import type { Draft, RoutingChoices } from './operations';
 import { finishOperations, inspect, machineOperation, pack, sequenced, stressRelieve } from './operations';
+import { TORSION_TOLERANCE_SOURCE } from './torsion-inspection';
 
 function coil(settings: Settings, x: TorsionDesign, r: TorsionReport): Draft {
   return machineOperation(settings, x, 'coil', 'Coil with legs', [
@@ -30,6 +31,8 @@ export function torsionRouting(settings: Settings, x: TorsionDesign, r: TorsionR
   const drafts: Draft[] = [coil(settings, x, r)];
   if (x.legs.some((l) => l.form !== 'tangent')) drafts.push(formLegs(settings, x));
   drafts.push(stressRelieve(settings, x, c), ...finishOperations(x, c));
-  drafts.push(inspect(settings, x, 'Torque test at angle, free-angle check', 'wind once to the largest working angle on an arbor'), pack(settings, x));
+  const test = inspect(settings, x, 'Torque test at angle, free-angle check', 'wind once to the largest working angle on an arbor');
+  test.notes.push(`limits not on the drawing are ${TORSION_TOLERANCE_SOURCE}`);
+  drafts.push(test, pack(settings, x));
   return sequenced(drafts);
 }

@@ -1,7 +1,7 @@
 import type { Customer, Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
-import { parseQuoteDocument, printableKind, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
+import { parseQuoteDocument, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
 import type { PrintJob, QuoteDocument, TravellerDocument } from '../../core/documents';
 import type { Result } from '../../core/result';
 import type { Settings } from '../../core/settings/schema';
@@ -10,14 +10,14 @@ import type { Settings } from '../../core/settings/schema';
  * The printing steps shared by the API (the app's Print menu) and the command line: what a document
  * says about a stored job, the draft and issued quote, and the traveller for a quantity.
  */
-export function storedPrintJob(job: Job, customers: readonly Customer[]): Result<PrintJob> {
+export function storedPrintJob(job: Job, customers: readonly Customer[]): PrintJob {
   const customer = job.customer && customers.find((c) => c.id === job.customer!.id);
-  return printableKind({
+  return {
     number: job.number, customerName: job.customer?.name ?? null,
     customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
     partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
     orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec,
-  }, 'spec.kind');
+  };
 }
 
 export function draftQuote(print: PrintJob, settings: Settings, now: Date): { model: QuoteDocument; estimate: CostEstimate } {

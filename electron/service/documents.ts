@@ -17,11 +17,10 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
   const jobAndSettings = (id: number) => {
     const job = getJob(ctx.store, id);
     if (!job.ok) return job;
-    const print = asApi(storedPrintJob(job.value, listCustomers(ctx.store)));
-    if (!print.ok) return print;
+    const print = storedPrintJob(job.value, listCustomers(ctx.store));
     const settings = getSettings(ctx.store);
     if (!settings.ok) return settings;
-    return { ok: true as const, job: job.value, print: print.value, settings: settings.value };
+    return { ok: true as const, job: job.value, print, settings: settings.value };
   };
   return {
     printTraveller: async ({ jobId, quantity }) => {
