@@ -29,10 +29,10 @@ function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Miss
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
       message: `no price for ${plan.material.grade} at ${plan.material.wireDiameter.toFixed(2)} mm: material is not costed` });
-    return { item: `Wire ${plan.material.name}`, basis: `${kg.toFixed(2)} kg, no price on file`, amount: 0, group: 'material' };
+    return { item: `Wire: ${plan.material.name}`, basis: `${kg.toFixed(2)} kg, no price on file`, amount: 0, group: 'material' };
   }
   return {
-    item: `Wire ${plan.material.name}`,
+    item: `Wire: ${plan.material.name}`,
     basis: `${kg.toFixed(2)} kg (${plan.lotWire.startQuantity} pcs started incl. scrap + setup wire) × ${money(price.pricePerKg)}/kg, ` +
       `${price.supplier || 'supplier not named'} ${price.date}`,
     amount: kg * price.pricePerKg, group: 'material',

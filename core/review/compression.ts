@@ -2,6 +2,7 @@ import type { Finding } from '../result';
 import { formatQuantity, significant } from '../format';
 import type { CompressionDesign } from '../springs/compression/design';
 import type { CompressionReport } from '../springs/compression/report';
+import type { FreeParameter } from '../spec/compression';
 import { endForms } from '../springs/compression/ends';
 import { SURGE_MARGIN } from '../springs/compression/surge';
 import { reviewLimits as lim } from './limits';
@@ -94,6 +95,10 @@ function reviewLoads(x: CompressionDesign, r: CompressionReport, out: Sink): voi
   });
 }
 
+const freeParameterWords: Record<FreeParameter, string> = {
+  wireDiameter: 'wire diameter', diameter: 'coil diameter', coils: 'coils', freeLength: 'free length',
+};
+
 function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
   if (forced.length === 0) return;
@@ -103,7 +108,7 @@ function reviewDetermination(x: CompressionDesign, out: Sink): void {
   if (missing.length === 0) return;
   add(out, 'warning', 'over-determined', `loads[${forced[0]!.i}].force`,
     `the drawing fixes wire, coil diameter, coils and free length and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
-    `per EN 15800 let the maker adjust ${missing.join(', ')} (free parameters), or accept a wider load tolerance`);
+    `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m as FreeParameter]).join(' and ')} (free parameters), or accept a wider load tolerance`);
 }
 
 function reviewManufacture(x: CompressionDesign, r: CompressionReport, out: Sink): void {
