@@ -25,10 +25,8 @@ export interface JobShape {
   rate: number;
 }
 
-export interface JobSummary {
-  id: number;
-  number: string;
-  customer: { id: number; name: string } | null;
+/** What the estimator types about a job besides its spec: the same fields in a job, a revision and an export record. */
+export interface JobDetails {
   partNumber: string;
   drawingNumber: string;
   drawingRevision: string;
@@ -37,6 +35,12 @@ export interface JobSummary {
   dueDate: string | null;
   orderQuantity: number | null;
   leadTimeDays: number | null;
+}
+
+export interface JobSummary extends JobDetails {
+  id: number;
+  number: string;
+  customer: { id: number; name: string } | null;
   /** How many times the job has been saved; the latest revision number. */
   revision: number;
   createdAt: string;
@@ -56,17 +60,9 @@ export interface JobPage {
 }
 
 /** The fields of a job as one revision saved them. */
-export interface RevisionFields {
+export interface RevisionFields extends JobDetails {
   customerId: number | null;
   customerName: string | null;
-  partNumber: string;
-  drawingNumber: string;
-  drawingRevision: string;
-  status: JobStatus;
-  notes: string;
-  dueDate: string | null;
-  orderQuantity: number | null;
-  leadTimeDays: number | null;
 }
 
 export interface JobRevision {

@@ -1,23 +1,15 @@
 import { z } from 'zod';
 import { customerRefSchema, jobInputSchema } from '../../core/api/store';
-import type { JobStatus } from '../../core/api/store';
+import type { JobDetails } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
 export const EXCHANGE_VERSION = 1;
 
 /** One job in an export file: its current state, the customer by name, the spec as saved. */
-export interface JobRecord {
+export interface JobRecord extends JobDetails {
   number: string;
   customer: { name: string; email: string; phone: string } | null;
-  partNumber: string;
-  drawingNumber: string;
-  drawingRevision: string;
-  status: JobStatus;
-  notes: string;
-  dueDate: string | null;
-  orderQuantity: number | null;
-  leadTimeDays: number | null;
   createdAt: string;
   updatedAt: string;
   spec: Spec;

@@ -1,4 +1,4 @@
-import type { Job, JobShape, JobStatus, JobSummary } from '../../core/api/store';
+import type { Job, JobDetails, JobShape, JobStatus, JobSummary } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
 
 /** A jobs row joined with its customer's name, as the SELECTs below read it. */
@@ -36,6 +36,15 @@ export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS custome
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
 
+/** The typed fields of a job, from its row. */
+export function jobDetailsOfRow(row: JobRow): JobDetails {
+  return {
+    partNumber: row.part_number, drawingNumber: row.drawing_number, drawingRevision: row.drawing_revision,
+    status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
+    leadTimeDays: row.lead_time_days,
+  };
+}
+
 export function shapeOf(row: JobRow): JobShape {
   return {
     kind: row.kind, material: row.material, materialFamily: row.material_family, units: row.units,
@@ -49,14 +58,7 @@ export function toSummary(row: JobRow): JobSummary {
     id: row.id,
     number: row.number,
     customer: row.customer_id === null ? null : { id: row.customer_id, name: row.customer_name ?? '' },
-    partNumber: row.part_number,
-    drawingNumber: row.drawing_number,
-    drawingRevision: row.drawing_revision,
-    status: row.status,
-    notes: row.notes,
-    dueDate: row.due_date,
-    orderQuantity: row.order_quantity,
-    leadTimeDays: row.lead_time_days,
+    ...jobDetailsOfRow(row),
     revision: row.revision,
     createdAt: row.created_at,
     updatedAt: row.updated_at,

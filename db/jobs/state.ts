@@ -1,20 +1,12 @@
-import type { JobShape, JobStatus, RevisionFields } from '../../core/api/store';
+import type { JobDetails, JobShape, RevisionFields } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
 import type { Store } from '../store';
 import type { JobRow } from './rows';
-import { shapeOf } from './rows';
+import { jobDetailsOfRow, shapeOf } from './rows';
 
 /** Everything one save of a job holds: what a revision keeps and what the jobs row shows. */
-export interface JobState {
+export interface JobState extends JobDetails {
   customerId: number | null;
-  partNumber: string;
-  drawingNumber: string;
-  drawingRevision: string;
-  status: JobStatus;
-  notes: string;
-  dueDate: string | null;
-  orderQuantity: number | null;
-  leadTimeDays: number | null;
   spec: Spec;
   shape: JobShape;
 }
@@ -22,14 +14,7 @@ export interface JobState {
 export function stateOfRow(row: JobRow): JobState {
   return {
     customerId: row.customer_id,
-    partNumber: row.part_number,
-    drawingNumber: row.drawing_number,
-    drawingRevision: row.drawing_revision,
-    status: row.status,
-    notes: row.notes,
-    dueDate: row.due_date,
-    orderQuantity: row.order_quantity,
-    leadTimeDays: row.lead_time_days,
+    ...jobDetailsOfRow(row),
     spec: JSON.parse(row.spec ?? 'null') as Spec,
     shape: shapeOf(row),
   };
