@@ -4,8 +4,9 @@ import type { BenchRow, BenchSuite } from './harness';
 import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
+import { rendererSuite } from './suites/renderer';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

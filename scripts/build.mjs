@@ -69,9 +69,9 @@ export async function buildWebServer() {
   });
 }
 
-/** The renderer engineer's renderer/vite.config.ts decides the output (dist/renderer by default). */
+/** The renderer engineer's renderer/vite.config.mts decides the output (dist/renderer by default). */
 export async function buildRenderer() {
-  const config = at('renderer', 'vite.config.ts');
+  const config = at('renderer', 'vite.config.mts');
   if (!existsSync(at('renderer', 'index.html'))) {
     console.warn('renderer: skipped (renderer/index.html does not exist yet)');
     return false;

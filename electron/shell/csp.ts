@@ -1,10 +1,11 @@
 /**
  * The one Content-Security-Policy, sent as a response header by the app:// protocol and by the web
  * transport. React's style props are set through the CSSOM, which CSP does not restrict, so no
- * 'unsafe-inline' is needed for them.
+ * 'unsafe-inline' is needed for them. Images may also come from data: URLs, so the shop's logo (kept as a
+ * data URL in settings) can be shown.
  */
 export const CONTENT_SECURITY_POLICY =
-  "default-src 'self'; script-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'";
+  "default-src 'self'; script-src 'self'; img-src 'self' data:; object-src 'none'; base-uri 'none'; frame-ancestors 'none'";
 
 /** Headers every UI response carries. */
 export const uiHeaders: Readonly<Record<string, string>> = {

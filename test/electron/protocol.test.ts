@@ -47,7 +47,7 @@ describe('the app:// handler', () => {
   });
 
   it('uses the strict policy from the design', () => {
-    expect(CONTENT_SECURITY_POLICY).toBe("default-src 'self'; script-src 'self'; object-src 'none'; base-uri 'none'; frame-ancestors 'none'");
+    expect(CONTENT_SECURITY_POLICY).toBe("default-src 'self'; script-src 'self'; img-src 'self' data:; object-src 'none'; base-uri 'none'; frame-ancestors 'none'");
   });
 
   it('serves index.html for the root and for routes of the UI', async () => {

@@ -1,0 +1,109 @@
+import type { ReactNode } from 'react';
+import { describedBy, FieldFrame } from './Field';
+import { useFormField } from './scope';
+
+interface BaseProps {
+  path: string;
+  label: ReactNode;
+  hint?: ReactNode;
+  wide?: boolean;
+  disabled?: boolean;
+}
+
+interface TextProps extends BaseProps {
+  value: string;
+  onChange(value: string): void;
+  unit?: string;
+  /** A number: decimal keypad, figures aligned right. */
+  numeric?: boolean;
+  type?: 'text' | 'date' | 'email' | 'tel';
+  list?: string;
+  placeholder?: string;
+  autoFocus?: boolean;
+}
+
+/** A text or number field; numbers stay text so whatever is typed survives until it parses. */
+export function TextField({ path, label, hint, wide, value, onChange, unit, numeric, type = 'text', list, placeholder, disabled, autoFocus }: TextProps) {
+  const f = useFormField(path);
+  const hintId = hint ? `${f.id}-hint` : undefined;
+  return (
+    <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} unit={unit} wide={wide}>
+      <input
+        id={f.id} ref={f.ref} type={type} value={value} list={list} placeholder={placeholder} disabled={disabled}
+        inputMode={numeric ? 'decimal' : undefined} autoComplete="off" spellCheck={false} autoFocus={autoFocus}
+        className={numeric ? 'input input--number' : 'input'} data-path={path}
+        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
+        onChange={(e) => onChange(e.target.value)} onBlur={f.onBlur}
+      />
+    </FieldFrame>
+  );
+}
+
+export interface Choice<T extends string> {
+  value: T;
+  label: string;
+}
+
+interface SelectProps<T extends string> extends BaseProps {
+  value: T;
+  choices: readonly Choice<T>[];
+  onChange(value: T): void;
+}
+
+export function SelectField<T extends string>({ path, label, hint, wide, value, choices, onChange, disabled }: SelectProps<T>) {
+  const f = useFormField(path);
+  const hintId = hint ? `${f.id}-hint` : undefined;
+  return (
+    <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} wide={wide}>
+      <select
+        id={f.id} ref={f.ref} value={value} disabled={disabled} className="input" data-path={path}
+        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
+        onChange={(e) => onChange(e.target.value as T)} onBlur={f.onBlur}
+      >
+        {choices.map((c) => <option key={c.value} value={c.value}>{c.label}</option>)}
+      </select>
+    </FieldFrame>
+  );
+}
+
+interface CheckProps extends Omit<BaseProps, 'wide'> {
+  checked: boolean;
+  onChange(checked: boolean): void;
+}
+
+export function CheckField({ path, label, hint, checked, onChange, disabled }: CheckProps) {
+  const f = useFormField(path);
+  const hintId = hint ? `${f.id}-hint` : undefined;
+  return (
+    <div className={`field field--check${f.error ? ' field--error' : ''}`}>
+      <input
+        id={f.id} ref={f.ref} type="checkbox" checked={checked} disabled={disabled} data-path={path}
+        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
+        onChange={(e) => onChange(e.target.checked)} onBlur={f.onBlur}
+      />
+      <label htmlFor={f.id} className="field__label">{label}</label>
+      {hint ? <p className="field__hint" id={hintId}>{hint}</p> : null}
+      {f.error ? <p className="field__error" id={f.errorId}>{f.error.message}</p> : null}
+    </div>
+  );
+}
+
+interface AreaProps extends BaseProps {
+  value: string;
+  rows?: number;
+  onChange(value: string): void;
+}
+
+export function TextAreaField({ path, label, hint, value, rows = 3, onChange, disabled }: AreaProps) {
+  const f = useFormField(path);
+  const hintId = hint ? `${f.id}-hint` : undefined;
+  return (
+    <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} wide>
+      <textarea
+        id={f.id} ref={f.ref} value={value} rows={rows} disabled={disabled} className="input" data-path={path}
+        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
+        onChange={(e) => onChange(e.target.value)} onBlur={f.onBlur}
+      />
+    </FieldFrame>
+  );
+}

@@ -1,0 +1,18 @@
+import type { ApiResult, PrintedPdf } from '../../core/api';
+import { useApi } from '../api';
+
+export type DocumentKind = 'quote' | 'traveller';
+
+export interface Printer {
+  /** A new quote is issued (numbered, its prices kept) and printed; a traveller prints for `quantity` or the job's order. */
+  print(kind: DocumentKind, jobId: number, quantity?: number): Promise<ApiResult<PrintedPdf>>;
+  reprint(quoteNumber: string): Promise<ApiResult<PrintedPdf>>;
+}
+
+export function usePrinter(): Printer {
+  const api = useApi();
+  return {
+    print: (kind, jobId, quantity) => (kind === 'quote' ? api.printQuote({ jobId }) : api.printTraveller({ jobId, quantity })),
+    reprint: (number) => api.reprintQuote({ number }),
+  };
+}

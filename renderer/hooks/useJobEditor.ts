@@ -1,0 +1,193 @@
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import type { ApiError, Job, JobRevision } from '../../core/api';
+import type { UnitSystem } from '../../core/units';
+import { useApi } from '../api';
+import type { FormError } from '../model/errors';
+import { friendlyError } from '../model/errors';
+import type { Evaluation } from '../model/evaluate';
+import { evaluateDraft } from '../model/evaluate';
+import type { JobDraft } from '../model/job-draft';
+import { emptyJobDraft, jobDraftOf, jobFieldsOf, sameAsStored } from '../model/job-draft';
+import type { SpecDraft } from '../model/spec-draft';
+import { draftFromSpec, emptySpecDraft } from '../model/spec-draft';
+import { redoTarget, timelineOf, undoTarget } from '../model/timeline';
+
+/** Quiet time after the last keystroke before a valid form is saved as a new revision. */
+export const AUTOSAVE_MS = 900;
+
+export interface Drafts {
+  job: JobDraft;
+  spec: SpecDraft;
+}
+
+const draftsOf = (job: Job): Drafts => ({ job: jobDraftOf(job), spec: draftFromSpec(job.spec) });
+
+export interface EditorDefaults {
+  units: UnitSystem;
+  toleranceGrade: 1 | 2 | 3 | null;
+}
+
+/** The job being edited: drafts, live evaluation, autosave into revisions, undo and redo over them. */
+export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onCreated: (job: Job) => void) {
+  const api = useApi();
+  const [job, setJob] = useState<Job | null>(null);
+  const [drafts, setDrafts] = useState<Drafts>(() => ({ job: emptyJobDraft(), spec: emptySpecDraft(defaults.units, defaults.toleranceGrade) }));
+  const [loadError, setLoadError] = useState<ApiError | null>(null);
+  const [loading, setLoading] = useState(jobId !== null);
+  const [revisions, setRevisions] = useState<JobRevision[]>([]);
+  const [version, setVersion] = useState(0);
+  const [savedVersion, setSavedVersion] = useState(0);
+  const [saving, setSaving] = useState(false);
+  const [saveError, setSaveError] = useState<ApiError | null>(null);
+
+  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec), [drafts.spec]);
+  const jobCheck = useMemo(() => jobFieldsOf(drafts.job), [drafts.job]);
+  const valid = evaluation.spec !== null && jobCheck.errors.length === 0;
+
+  // The latest state for async work (saves, undo) that outlives the render it started in.
+  const live = useRef({ job, drafts, version, savedVersion });
+  const inFlight = useRef<Promise<boolean> | null>(null);
+
+  const adopt = useCallback((j: Job, replaceDrafts: boolean) => {
+    live.current.job = j;
+    setJob(j);
+    if (replaceDrafts) {
+      const next = live.current.version + 1;
+      const d = draftsOf(j);
+      live.current.version = next;
+      live.current.savedVersion = next;
+      live.current.drafts = d;
+      setDrafts(d);
+      setVersion(next);
+      setSavedVersion(next);
+    }
+  }, []);
+
+  const loadRevisions = useCallback(async (id: number): Promise<JobRevision[]> => {
+    const r = await api.jobRevisions({ id });
+    if (!r.ok) return [];
+    setRevisions(r.value);
+    return r.value;
+  }, [api]);
+
+  useEffect(() => {
+    if (jobId === null) return;
+    let current = true;
+    void api.getJob({ id: jobId }).then((r) => {
+      if (!current) return;
+      setLoading(false);
+      if (!r.ok) { setLoadError(r.error); return; }
+      adopt(r.value, true);
+      void loadRevisions(r.value.id);
+    });
+    return () => { current = false; };
+  }, [api, jobId, adopt, loadRevisions]);
+
+  const edit = useCallback((change: (d: Drafts) => Drafts) => {
+    const next = change(live.current.drafts);
+    live.current.drafts = next;
+    live.current.version += 1;
+    setDrafts(next);
+    setVersion(live.current.version);
+    setSaveError(null);
+  }, []);
+
+  const saveOnce = useCallback(async (): Promise<boolean> => {
+    const s = { ...live.current };
+    if (s.version === s.savedVersion) return true;
+    const spec = evaluateDraft(s.drafts.spec).spec;
+    const fields = jobFieldsOf(s.drafts.job);
+    if (!spec || fields.errors.length > 0) return false;
+    const at = s.version;
+    const input = { ...fields.fields, spec };
+    if (s.job && sameAsStored(s.job, input)) {
+      // Typed back to what is stored: nothing to save, and no empty step in the history.
+      live.current.savedVersion = at;
+      setSavedVersion(at);
+      return true;
+    }
+    setSaving(true);
+    const r = s.job
+      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input })
+      : await api.createJob(input);
+    setSaving(false);
+    if (!r.ok) { setSaveError(r.error); return false; }
+    const created = s.job === null;
+    adopt(r.value, false);
+    live.current.savedVersion = at;
+    setSavedVersion(at);
+    setSaveError(null);
+    if (created) onCreated(r.value);
+    await loadRevisions(r.value.id);
+    return true;
+  }, [api, adopt, loadRevisions, onCreated]);
+
+  /** Saves now if there is anything to save; saves never overlap. */
+  const save = useCallback(async (): Promise<boolean> => {
+    while (inFlight.current) await inFlight.current;
+    const p = saveOnce();
+    inFlight.current = p;
+    try {
+      return await p;
+    } finally {
+      inFlight.current = null;
+    }
+  }, [saveOnce]);
+
+  const dirty = version !== savedVersion;
+  useEffect(() => {
+    if (!dirty || !valid) return;
+    const timer = setTimeout(() => void save(), AUTOSAVE_MS);
+    return () => clearTimeout(timer);
+  }, [dirty, valid, version, save]);
+
+  /** Back to the last saved state, dropping what was typed since. */
+  const revert = useCallback(() => {
+    if (live.current.job) adopt(live.current.job, true);
+  }, [adopt]);
+
+  const restoreNow = useCallback(async (id: number, revision: number): Promise<void> => {
+    const r = await api.restoreRevision({ id, revision });
+    if (!r.ok) { setSaveError(r.error); return; }
+    adopt(r.value, true);
+    await loadRevisions(id);
+  }, [api, adopt, loadRevisions]);
+
+  /** Undo or redo: a pending change is saved first (it becomes the step), or dropped when it cannot be saved. */
+  const step = useCallback(async (pick: typeof undoTarget): Promise<void> => {
+    if (live.current.version !== live.current.savedVersion && !(await save())) {
+      revert();
+      return;
+    }
+    const j = live.current.job;
+    if (!j) return;
+    const target = pick(timelineOf(await loadRevisions(j.id)));
+    if (target !== null) await restoreNow(j.id, target);
+  }, [loadRevisions, restoreNow, revert, save]);
+
+  /** Restores a revision from the history; what was typed since the last save is saved first. */
+  const restore = useCallback(async (revision: number): Promise<void> => {
+    if (!(await save())) revert();
+    const j = live.current.job;
+    if (j) await restoreNow(j.id, revision);
+  }, [restoreNow, revert, save]);
+
+  const timeline = useMemo(() => timelineOf(revisions), [revisions]);
+  const serverErrors: FormError[] = useMemo(() => {
+    if (!saveError) return [];
+    const list = saveError.details && saveError.details.length > 0 ? saveError.details : [saveError];
+    return list.filter((e) => e.path !== '').map(friendlyError);
+  }, [saveError]);
+
+  return {
+    job, drafts, edit, version, evaluation, jobCheck, valid, dirty, saving, saveError, serverErrors, loading, loadError,
+    revisions, save, revert, restore,
+    undo: () => step(undoTarget), redo: () => step(redoTarget),
+    canUndo: job !== null && (dirty || undoTarget(timeline) !== null),
+    canRedo: job !== null && !dirty && redoTarget(timeline) !== null,
+    /** Saves what is pending; false when the form cannot be saved as it stands (leaving would lose it). */
+    settle: save,
+  };
+}
+
+export type JobEditor = ReturnType<typeof useJobEditor>;

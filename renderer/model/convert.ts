@@ -1,0 +1,38 @@
+import type { Quantity, UnitSystem } from '../../core/units';
+import { fromInternal, toInternal } from '../../core/units';
+import { numberText, parseNumber } from './numbers';
+
+/** Converts the text of one field between unit systems; text that is not a number is kept as typed. */
+export function convertText(text: string, quantity: Quantity, from: UnitSystem, to: UnitSystem): string {
+  if (from === to) return text;
+  const parsed = parseNumber(text);
+  if (!parsed.ok || parsed.value === undefined) return text;
+  return numberText(fromInternal(toInternal(parsed.value, quantity, from), quantity, to));
+}
+
+/** Collects field errors while a draft turns into the raw object the schema checks. */
+export class RawBuilder {
+  readonly errors: { code: string; path: string; message: string }[] = [];
+
+  /** The number in `text`, or undefined when empty or not a number (then an error names `path`). */
+  number(path: string, text: string): number | undefined {
+    const parsed = parseNumber(text);
+    if (parsed.ok) return parsed.value;
+    this.errors.push({ code: 'not-a-number', path, message: parsed.message });
+    return undefined;
+  }
+
+  /** Like `number`, but an empty field is an error too. */
+  required(path: string, text: string, what: string): number | undefined {
+    if (text.trim() === '') {
+      this.errors.push({ code: 'required', path, message: `${what} is needed` });
+      return undefined;
+    }
+    return this.number(path, text);
+  }
+}
+
+/** Drops keys whose value is undefined, so optional fields are left out rather than sent as nothing. */
+export function compact<T extends Record<string, unknown>>(value: T): Partial<T> {
+  return Object.fromEntries(Object.entries(value).filter(([, v]) => v !== undefined)) as Partial<T>;
+}

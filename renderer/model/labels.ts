@@ -1,0 +1,65 @@
+import type { JobStatus } from '../../core/api';
+import type { CompressionEnds, FreeParameter, Seating } from '../../core/spec';
+
+export const statusLabels: Record<JobStatus, string> = {
+  draft: 'Draft', quoted: 'Quoted', ordered: 'Ordered', 'in-production': 'In production', done: 'Done', lost: 'Lost',
+};
+
+export const kindLabels: Record<string, string> = { compression: 'Compression', extension: 'Extension', torsion: 'Torsion' };
+
+export const endsLabels: Record<CompressionEnds, string> = {
+  'closed-ground': 'Closed, ground', closed: 'Closed', 'open-ground': 'Open, ground', open: 'Open',
+};
+
+export const seatingLabels: Record<Seating, string> = {
+  'both-fixed': 'Both ends on parallel plates (ν 0.5)', 'fixed-hinged': 'One plate, one pivot (ν 0.7)',
+  'both-hinged': 'Both ends pivoting (ν 1)', 'fixed-free': 'One end free (ν 2)',
+};
+
+export const freeParameterLabels: Record<FreeParameter, string> = {
+  wireDiameter: 'Wire diameter', diameter: 'Coil diameter', coils: 'Number of coils', freeLength: 'Free length',
+};
+
+export const dimensionLabels = {
+  wireDiameter: 'd', outerDiameter: 'OD', meanDiameter: 'D', freeLength: 'L0', activeCoils: 'n', rate: 'R',
+} as const;
+
+const fieldNames: Record<string, string> = {
+  material: 'wire grade', wireDiameter: 'wire diameter', outerDiameter: 'outside diameter', innerDiameter: 'inside diameter',
+  meanDiameter: 'mean diameter', totalCoils: 'total coils', activeCoils: 'active coils', ends: 'ends', freeLength: 'free length',
+  seating: 'seating', finish: 'finish', bakeSpecification: 'bake specification', aql: 'AQL', quantities: 'quantities',
+  toleranceGrade: 'tolerance grade', 'duty.cycles': 'cycles', 'duty.frequency': 'frequency', 'duty.between[0]': 'working length L1',
+  'duty.between[1]': 'working length L2', 'serviceTemperature.min': 'lowest service temperature',
+  'serviceTemperature.max': 'highest service temperature', partNumber: 'part number', 'customer.name': 'customer',
+  orderQuantity: 'order quantity', leadTimeDays: 'lead time', dueDate: 'due date', bodyCoils: 'body coils',
+  initialTension: 'initial tension', mechanicalStop: 'mechanical stop', loopAngle: 'loop angle',
+  loopAngleTolerance: 'loop angle tolerance', arborDiameter: 'arbor diameter', freeAngle: 'free angle',
+  freeAngleTolerance: 'free angle tolerance', loadDirection: 'load direction', windDirection: 'direction of wind',
+  directionOfWind: 'direction of wind', duty: 'duty', 'duty.type': 'duty',
+};
+
+/** A spec or job path in words, for "go to" buttons: "loads[1].force" → "force F2". */
+export function fieldName(path: string): string {
+  const load = /^loads\[(\d+)\]\.(length|force|tolerancePercent)$/.exec(path);
+  if (load) {
+    const n = Number(load[1]) + 1;
+    return load[2] === 'length' ? `test length L${n}` : load[2] === 'force' ? `force F${n}` : `tolerance on F${n}`;
+  }
+  const angle = /^loads\[(\d+)\]\.(angle|torque)$/.exec(path);
+  if (angle) return angle[2] === 'angle' ? `working angle α${Number(angle[1]) + 1}` : `torque M${Number(angle[1]) + 1}`;
+  const part = /^(ends|legs)\[(\d+)\](?:\.(\w+))?$/.exec(path);
+  if (part) {
+    const which = `${part[2] === '0' ? 'first' : 'second'} ${part[1] === 'ends' ? 'end' : 'leg'}`;
+    return part[3] ? `${which}: ${part[3] === 'bendRadius' ? 'bend radius' : part[3]}` : which;
+  }
+  const override = /^materialOverrides\.(\w+)$/.exec(path);
+  if (override) return `certificate ${override[1]}`;
+  return fieldNames[path] ?? path;
+}
+
+export const extensionEndLabels: Record<string, string> = {
+  'machine-loop': 'Machine loop', 'full-loop': 'Full loop', 'crossover-loop': 'Crossover loop', 'side-loop': 'Side loop',
+  'extended-hook': 'Extended hook',
+};
+
+export const legFormLabels: Record<string, string> = { tangent: 'Straight, tangent', radial: 'Straight, radial', hooked: 'Hooked' };

@@ -1,0 +1,88 @@
+import type { JobSummary } from '../../../core/api';
+import { formatQuantity } from '../../../core/format';
+import { kindLabels, statusLabels } from '../../model/labels';
+
+export type SortKey = 'number' | 'updated' | 'customer';
+export interface Sort {
+  key: SortKey;
+  direction: 'asc' | 'desc';
+}
+
+interface JobTableProps {
+  jobs: JobSummary[];
+  /** Null while the rows are text-search hits, which come in order of match. */
+  sort: Sort | null;
+  onSort(key: SortKey): void;
+  selected: ReadonlySet<number>;
+  onSelect(id: number, on: boolean): void;
+  onSelectAll(on: boolean): void;
+  onOpen(id: number): void;
+  onSimilar(job: JobSummary): void;
+}
+
+function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sort: Sort | null; onSort(k: SortKey): void }) {
+  const on = sort?.key === k;
+  const aria = on ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none';
+  return (
+    <th scope="col" aria-sort={sort ? aria : undefined}>
+      {sort ? (
+        <button type="button" className="sort" onClick={() => onSort(k)}>
+          {label} <span aria-hidden="true">{on ? (sort.direction === 'asc' ? '▲' : '▼') : '↕'}</span>
+        </button>
+      ) : label}
+    </th>
+  );
+}
+
+const day = (iso: string) => iso.slice(0, 10);
+
+export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar }: JobTableProps) {
+  const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
+  return (
+    <table className="table jobs" aria-label="Jobs">
+      <thead>
+        <tr>
+          <th scope="col" className="check">
+            <input type="checkbox" aria-label="Select every job on this page" checked={all} onChange={(e) => onSelectAll(e.target.checked)} />
+          </th>
+          <SortHeader label="Job" k="number" sort={sort} onSort={onSort} />
+          <SortHeader label="Customer" k="customer" sort={sort} onSort={onSort} />
+          <th scope="col">Part / drawing</th>
+          <th scope="col">Status</th>
+          <th scope="col">Spring</th>
+          <th scope="col" className="num">d</th>
+          <th scope="col" className="num">OD</th>
+          <th scope="col" className="num">L0</th>
+          <th scope="col" className="num">Rate</th>
+          <SortHeader label="Updated" k="updated" sort={sort} onSort={onSort} />
+          <th scope="col"><span className="sr-only">Actions</span></th>
+        </tr>
+      </thead>
+      <tbody>
+        {jobs.map((j) => {
+          const u = j.shape.units;
+          // A torsion spring is compared on its body length and its rate per degree (see db/jobs/shape).
+          const torsion = j.shape.kind === 'torsion';
+          return (
+            <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={selected.has(j.id) ? 'is-selected' : undefined}>
+              <td className="check">
+                <input type="checkbox" aria-label={`Select job ${j.number}`} checked={selected.has(j.id)} onChange={(e) => onSelect(j.id, e.target.checked)} />
+              </td>
+              <td><button type="button" className="link" onClick={() => onOpen(j.id)} aria-label={`Open job ${j.number}`}>{j.number}</button></td>
+              <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
+              <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
+              <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
+              <td>{kindLabels[j.shape.kind] ?? j.shape.kind}<br /><span className="muted">{j.shape.material}</span></td>
+              <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
+              <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
+              <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{torsion ? <><br /><span className="muted">body</span></> : null}</td>
+              <td className="num">{formatQuantity(j.shape.rate, torsion ? 'torqueRatePerDegree' : 'rate', u)}</td>
+              <td className="nowrap">{day(j.updatedAt)}</td>
+              <td><button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button></td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}

@@ -1,0 +1,106 @@
+import { useEffect, useRef, useState } from 'react';
+import type { JobStatus, JobSummary } from '../../../core/api';
+import { useApi } from '../../api';
+import { ScreenHeading } from '../../components/ScreenHeading';
+import { useCommand } from '../../hooks/commands';
+import { useNavigation } from '../../hooks/navigation';
+import { useQuery } from '../../hooks/useQuery';
+import { useShopData } from '../../hooks/shop-data';
+import { SimilarJobsDialog } from '../shared/SimilarJobs';
+import { BatchPrint } from './BatchPrint';
+import type { Filters } from './JobFilters';
+import { FilterBar, noFilters } from './JobFilters';
+import type { Sort, SortKey } from './JobTable';
+import { JobTable } from './JobTable';
+import { Pager } from './Pager';
+
+export const PAGE_SIZE = 50;
+
+const matches = (j: JobSummary, f: Filters): boolean =>
+  (f.status === '' || j.status === f.status) && (f.kind === '' || j.shape.kind === f.kind)
+  && (f.material === '' || j.shape.material === f.material) && (f.customerId === '' || String(j.customer?.id) === f.customerId);
+
+function useJobRows(text: string, filters: Filters, sort: Sort, page: number) {
+  const api = useApi();
+  const searching = text.trim() !== '';
+  const input = {
+    status: (filters.status || undefined) as JobStatus | undefined, kind: filters.kind || undefined,
+    material: filters.material || undefined, customerId: filters.customerId ? Number(filters.customerId) : undefined,
+    sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, offset: page * PAGE_SIZE,
+  };
+  const list = useQuery(searching ? null : JSON.stringify(input), () => api.listJobs(input));
+  const found = useQuery(searching ? text.trim() : null, () => api.findJobs({ text: text.trim(), limit: 200 }), 120);
+  if (searching) {
+    const jobs = (found.value ?? []).map((h) => h.job).filter((j) => matches(j, filters));
+    return { searching, jobs, total: jobs.length, state: found.state, error: found.error, reload: found.reload };
+  }
+  return { searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, state: list.state, error: list.error, reload: list.reload };
+}
+
+/** The job book: search by text, filter, sort, page, find similar springs, print travellers for a selection. */
+export function JobsScreen() {
+  const api = useApi();
+  const nav = useNavigation();
+  const [text, setText] = useState('');
+  const [filters, setFilters] = useState<Filters>(noFilters);
+  const [sort, setSort] = useState<Sort>({ key: 'updated', direction: 'desc' });
+  const [page, setPage] = useState(0);
+  const [selected, setSelected] = useState<ReadonlySet<number>>(new Set());
+  const [similar, setSimilar] = useState<{ spec: unknown; id: number; number: string } | null>(null);
+  const [similarError, setSimilarError] = useState<string | null>(null);
+  const searchRef = useRef<HTMLInputElement>(null);
+  const rows = useJobRows(text, filters, sort, page);
+  const { refresh } = useShopData();
+  // Customers added with a job since the list was last open belong in the customer filter.
+  useEffect(() => refresh(), [refresh]);
+  useCommand('find', () => searchRef.current?.focus());
+  useCommand('data-changed', rows.reload);
+
+  const onSort = (key: SortKey) => {
+    setSort((s) => (s.key === key ? { key, direction: s.direction === 'asc' ? 'desc' : 'asc' } : { key, direction: key === 'updated' ? 'desc' : 'asc' }));
+    setPage(0);
+  };
+  const select = (id: number, on: boolean) => setSelected((s) => {
+    const next = new Set(s);
+    if (on) next.add(id); else next.delete(id);
+    return next;
+  });
+  const openSimilar = async (j: JobSummary) => {
+    setSimilarError(null);
+    const r = await api.getJob({ id: j.id });
+    if (r.ok) setSimilar({ spec: r.value.spec, id: j.id, number: j.number });
+    else setSimilarError(r.error.message);
+  };
+
+  return (
+    <section className="screen" aria-labelledby="jobs-title">
+      <div className="screen__head">
+        <ScreenHeading id="jobs-title">Jobs</ScreenHeading>
+        <div className="screen__actions">
+          <BatchPrint selected={selected} onDone={() => setSelected(new Set())} />
+          <button type="button" className="button button--primary" onClick={() => nav.newJob()}>New job</button>
+        </div>
+      </div>
+      <FilterBar text={text} onText={(t) => { setText(t); setPage(0); }} filters={filters}
+        onFilters={(f) => { setFilters(f); setPage(0); }} searchRef={searchRef} />
+      <p className="listing-status" role="status" aria-live="polite">
+        {rows.state === 'loading' && rows.jobs.length === 0 ? 'Loading jobs…'
+          : rows.searching ? `${rows.total} job${rows.total === 1 ? '' : 's'} match “${text.trim()}”, best match first`
+            : `${rows.total} job${rows.total === 1 ? '' : 's'}`}
+        {selected.size > 0 ? ` · ${selected.size} selected` : ''}
+      </p>
+      {rows.error ? <p className="error-text" role="alert">{rows.error.message}</p> : null}
+      {similarError ? <p className="error-text" role="alert">{similarError}</p> : null}
+      <div className="table-wrap">
+        <JobTable
+          jobs={rows.jobs} sort={rows.searching ? null : sort} onSort={onSort} selected={selected} onSelect={select}
+          onSelectAll={(on) => rows.jobs.forEach((j) => select(j.id, on))} onOpen={(id) => nav.openJob(id)} onSimilar={(j) => void openSimilar(j)}
+        />
+        {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
+      </div>
+      {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} onPage={setPage} />}
+      <SimilarJobsDialog open={similar !== null} onClose={() => setSimilar(null)} spec={similar?.spec ?? null}
+        excludeJobId={similar?.id} subject={`job ${similar?.number ?? ''}`} />
+    </section>
+  );
+}

@@ -1,0 +1,39 @@
+import type { JobEditor } from '../../hooks/useJobEditor';
+
+function saveStatus(e: JobEditor, problems: number): { text: string; tone: 'ok' | 'busy' | 'warn' | 'error' } {
+  if (e.saving) return { text: 'Saving…', tone: 'busy' };
+  if (e.saveError) return { text: `Not saved: ${e.saveError.message}`, tone: 'error' };
+  if (e.dirty && !e.valid) {
+    return { text: `Not saved yet: ${problems} field${problems === 1 ? '' : 's'} to complete or correct`, tone: 'warn' };
+  }
+  if (e.dirty) return { text: 'Saving shortly…', tone: 'busy' };
+  if (e.job) return { text: `Saved · revision ${e.job.revision} · ${e.job.updatedAt.slice(11, 16)} UTC`, tone: 'ok' };
+  return { text: 'New job: it saves itself once the spring is complete', tone: 'warn' };
+}
+
+interface ToolbarProps {
+  editor: JobEditor;
+  problems: number;
+  onSave(): void;
+  onSimilar(): void;
+}
+
+export function Toolbar({ editor, problems, onSave, onSimilar }: ToolbarProps) {
+  const status = saveStatus(editor, problems);
+  const job = editor.job;
+  return (
+    <div className="toolbar">
+      <div className="toolbar__title">
+        <span className="toolbar__number">{job ? job.number : 'New job'}</span>
+        <span className="toolbar__sub">{job ? [job.customer?.name, job.partNumber].filter(Boolean).join(' · ') || 'no customer yet' : 'not in the store yet'}</span>
+      </div>
+      <p className={`save-status save-status--${status.tone}`} role="status" aria-live="polite" data-save={status.tone}>{status.text}</p>
+      <div className="toolbar__actions">
+        <button type="button" className="button" onClick={() => void editor.undo()} disabled={!editor.canUndo} aria-keyshortcuts="Control+Z">Undo</button>
+        <button type="button" className="button" onClick={() => void editor.redo()} disabled={!editor.canRedo} aria-keyshortcuts="Control+Shift+Z">Redo</button>
+        <button type="button" className="button" onClick={onSimilar} disabled={!editor.evaluation.spec} aria-keyshortcuts="Alt+S">Find similar</button>
+        <button type="button" className="button button--primary" onClick={onSave} aria-keyshortcuts="Control+S">Save now</button>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,13 @@
+import { SelectField } from '../../../components/form/inputs';
+import type { OrderDraft } from '../../../model/spec-draft';
+import type { Edit } from './edit';
+import { editSpec } from './edit';
+
+/** Hand of wind as the order states it (compression and extension; a torsion spring's wind is part of its spec). */
+export function WindSelect({ order, edit }: { order: OrderDraft; edit: Edit }) {
+  return (
+    <SelectField path="spec.directionOfWind" label="Direction of wind" value={order.directionOfWind}
+      onChange={(v) => editSpec(edit)((s) => ({ ...s, order: { ...s.order, directionOfWind: v } }))}
+      choices={[{ value: '', label: 'not stated' }, { value: 'right', label: 'right hand' }, { value: 'left', label: 'left hand' }, { value: 'either', label: 'either' }]} />
+  );
+}

@@ -1,0 +1,29 @@
+import type { Job } from '../../../../core/api';
+import { useApi } from '../../../api';
+import { useQuery } from '../../../hooks/useQuery';
+
+/** The quotes issued for a job, newest first, each reprinted from its own snapshot. */
+export function IssuedQuotes({ job, refresh, disabled, onReprint }: { job: Job; refresh: number; disabled: boolean; onReprint(number: string): void }) {
+  const api = useApi();
+  const quotes = useQuery(`quotes-${job.id}-${job.revision}-${refresh}`, () => api.listQuotes({ jobId: job.id }));
+  return (
+    <section className="panel" aria-labelledby="quotes-title">
+      <h3 id="quotes-title" className="panel__title">Issued quotes</h3>
+      {quotes.value && quotes.value.length === 0 ? <p className="muted">No quote issued for this job yet.</p> : null}
+      {quotes.value && quotes.value.length > 0 ? (
+        <table className="table">
+          <thead><tr><th scope="col">Quote</th><th scope="col">Issued</th><th scope="col">Valid until</th><th scope="col" className="num">Job revision</th><th scope="col">Currency</th><th scope="col"><span className="sr-only">Actions</span></th></tr></thead>
+          <tbody>
+            {quotes.value.map((q) => (
+              <tr key={q.id}>
+                <td>{q.number}</td><td>{q.issuedAt.slice(0, 10)}</td><td>{q.validUntil.slice(0, 10)}</td><td className="num">{q.jobRevision}</td><td>{q.currency}</td>
+                <td><button type="button" className="button button--small" disabled={disabled} onClick={() => onReprint(q.number)}>Reprint {q.number}</button></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : null}
+      {quotes.error ? <p className="error-text" role="alert">{quotes.error.message}</p> : null}
+    </section>
+  );
+}

@@ -1,0 +1,70 @@
+import type { SpringReport } from '../../../../core/calculate';
+import { formatQuantity } from '../../../../core/format';
+import { loadRows, readouts, stressBars } from './readout-data';
+
+/** The figures an estimator checks first, in the job's units. `r` in internal units. */
+export function KeyFigures({ r }: { r: SpringReport }) {
+  return (
+    <section className="panel" aria-labelledby="figures-title">
+      <h3 id="figures-title" className="panel__title">Key figures</h3>
+      <dl className="figures">
+        {readouts(r).map((f) => (
+          <div key={f.name} className="figures__item" data-figure={f.symbol}>
+            <dt>{f.name} <span className="figures__symbol">{f.symbol}</span></dt>
+            <dd>{f.value}</dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}
+
+/** Load at each test point against what the drawing asks. */
+export function LoadTable({ r }: { r: SpringReport }) {
+  const rows = loadRows(r);
+  if (rows.length === 0) return null;
+  const torsion = r.kind === 'torsion';
+  return (
+    <table className="table table--compact loadtable" aria-label={torsion ? 'Torques at the working angles' : 'Forces at the test lengths'}>
+      <thead><tr><th scope="col">Test</th><th scope="col" className="num">{torsion ? 'Deflection' : 'Length'}</th><th scope="col" className="num">{torsion ? 'Torque' : 'Force'}</th><th scope="col" className="num">Asked</th><th scope="col">Within?</th></tr></thead>
+      <tbody>
+        {rows.map((row) => (
+          <tr key={row.point}>
+            <th scope="row">{row.point}</th><td className="num">{row.at}</td><td className="num">{row.load}</td><td className="num">{row.asked}</td>
+            <td>{row.within === null ? '—' : row.within ? 'yes' : <strong className="error-text">no</strong>}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+const band = (ratio: number): 'ok' | 'near' | 'over' => (ratio > 1 ? 'over' : ratio >= 0.85 ? 'near' : 'ok');
+
+/** A bar's full width is 125 % of the allowable; the mark at 80 % of the width is the allowable itself. */
+export function StressBars({ r }: { r: SpringReport }) {
+  const u = r.units;
+  return (
+    <section className="panel" aria-labelledby="stress-title">
+      <h3 id="stress-title" className="panel__title">Stress against allowable</h3>
+      {stressBars(r).length === 0 ? <p className="muted">Give a working {r.kind === 'torsion' ? 'angle' : 'length'} to see its stress.</p> : null}
+      <ul className="bars">
+        {stressBars(r).map((b) => {
+          const ratio = b.value / b.allowable;
+          const text = `${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`;
+          return (
+            <li key={b.label} className={`bar bar--${band(ratio)}`}>
+              <span className="bar__label">{b.label}</span>
+              <div className="bar__track" role="meter" aria-label={`${b.label}, ${b.basis}`} aria-valuemin={0}
+                aria-valuemax={Math.round(b.allowable)} aria-valuenow={Math.round(b.value)} aria-valuetext={text}>
+                <div className="bar__fill" style={{ width: `${Math.min(100, (ratio / 1.25) * 100)}%` }} />
+                <div className="bar__limit" aria-hidden="true" />
+              </div>
+              <span className="bar__value">{text}</span>
+            </li>
+          );
+        })}
+      </ul>
+    </section>
+  );
+}
