@@ -1,24 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { field, fillSpring, launch, openPage, screenshot, startShop, UI_TEST_TIMEOUT } from './support';
-import type { Shop } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { field, fillSpring, screenshot, shopSession, UI_TEST_TIMEOUT } from './support';
 
 /** The cautions show where they matter: always stored energy and review; near solid, plating and stops when they apply. */
 describe('cautions beside the results', { timeout: UI_TEST_TIMEOUT }, () => {
-  let shop: Shop;
-  let browser: Browser;
+  const session = shopSession();
   let page: Page;
   let errors: string[];
 
-  beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
-  });
+  beforeAll(() => { ({ page, errors } = session); });
 
   const caution = (title: string) => page.getByRole('complementary', { name: `Caution: ${title}` });
 

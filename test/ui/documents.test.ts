@@ -1,9 +1,8 @@
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { PDFParse } from 'pdf-parse';
-import type { Browser, Download, Page } from 'playwright-core';
-import { launch, openPage, screenshot, startShop } from './support';
-import type { Shop } from './support';
+import type { Download, Page } from 'playwright-core';
+import { screenshot, shopSession } from './support';
 
 async function pdfOf(download: Download): Promise<{ bytes: Buffer; text: string }> {
   const bytes = readFileSync(await download.path());
@@ -21,20 +20,11 @@ const PDF_TEST_TIMEOUT = 90_000;
 
 /** Travellers and quotes as PDFs, one job at a time and for a selection of jobs. */
 describe('printed documents', { timeout: PDF_TEST_TIMEOUT }, () => {
-  let shop: Shop;
-  let browser: Browser;
+  const session = shopSession();
   let page: Page;
   let errors: string[];
 
-  beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
-  });
+  beforeAll(() => { ({ page, errors } = session); });
 
   /** Opens the demo job of a drawing number (unique among the demo jobs) and gives its job number. */
   const openDemoJob = async (drawing: string): Promise<string> => {

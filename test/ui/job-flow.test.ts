@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { field, fillSpring, launch, openPage, savedJobNumber, screenshot, startShop, UI_TEST_TIMEOUT } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { field, fillSpring, savedJobNumber, screenshot, shopSession, UI_TEST_TIMEOUT } from './support';
 import type { Shop } from './support';
 
 function expectNear(text: string, expected: number): void {
@@ -9,21 +9,13 @@ function expectNear(text: string, expected: number): void {
 
 /** A job from an empty form through units, saving, a restart of the service, search and undo. */
 describe('a job from an empty form to the store and back', { timeout: UI_TEST_TIMEOUT }, () => {
+  const session = shopSession();
   let shop: Shop;
-  let browser: Browser;
   let page: Page;
   let errors: string[];
   let number = '';
 
-  beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
-  });
+  beforeAll(() => { ({ shop, page, errors } = session); });
 
   it('shows results and a finding as the spring is typed, and a finding leads to its field', async () => {
     await page.getByRole('button', { name: /^New job/ }).first().click();

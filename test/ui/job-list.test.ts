@@ -1,21 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launch, openPage, startShop, UI_TEST_TIMEOUT } from './support';
-import type { Shop } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { shopSession, UI_TEST_TIMEOUT } from './support';
 
 const numbers = (page: Page) => page.locator('table.jobs tbody tr td:nth-child(2)').allTextContents();
 
 /** The job list over the demo shop plus twenty more jobs: filters, sorting and pages. */
 describe('the job list', { timeout: UI_TEST_TIMEOUT }, () => {
-  let shop: Shop;
-  let browser: Browser;
+  const session = shopSession();
   let page: Page;
   let errors: string[];
 
   beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
+    ({ page, errors } = session);
     // Through the same API the page uses, so the list holds more than one page of jobs.
     const made = await page.evaluate(async () => {
       let ok = 0;
@@ -29,10 +25,6 @@ describe('the job list', { timeout: UI_TEST_TIMEOUT }, () => {
     expect(made).toBe(20);
     await page.reload();
     await page.locator('table.jobs tbody tr').first().waitFor();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
   });
 
   it('pages through the jobs fifty at a time', async () => {

@@ -1,7 +1,7 @@
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { fillSpring, launch, openPage, savedJobNumber, screenshot, startShop, UI_TEST_TIMEOUT, unnamedControls } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { fillSpring, savedJobNumber, screenshot, shopSession, UI_TEST_TIMEOUT, unnamedControls } from './support';
 import type { Shop } from './support';
 
 /** The accessible name (or the text) of the element that has the keyboard focus. */
@@ -22,20 +22,12 @@ async function tabTo(page: Page, name: RegExp, limit = 60): Promise<void> {
 }
 
 describe('keyboard and accessible names', { timeout: UI_TEST_TIMEOUT }, () => {
+  const session = shopSession();
   let shop: Shop;
-  let browser: Browser;
   let page: Page;
   let errors: string[];
 
-  beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
-  });
+  beforeAll(() => { ({ shop, page, errors } = session); });
 
   it('reaches the main actions without a mouse', async () => {
     await expect(focusedName(page)).resolves.toBe('Jobs');

@@ -1,26 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { field, fillSpring, launch, openPage, savedJobNumber, screenshot, startShop, UI_TEST_TIMEOUT } from './support';
-import type { Shop } from './support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { field, fillSpring, savedJobNumber, screenshot, shopSession, UI_TEST_TIMEOUT } from './support';
 
 /** The shop's settings feed the price: a machine rate changed on the settings screen moves the cost. */
 describe('settings and the cost of a job', { timeout: UI_TEST_TIMEOUT }, () => {
-  let shop: Shop;
-  let browser: Browser;
+  const session = shopSession();
   let page: Page;
   let errors: string[];
   let number = '';
   let priceAt100 = 0;
 
-  beforeAll(async () => {
-    shop = await startShop();
-    browser = await launch();
-    ({ page, errors } = await openPage(browser, shop.web.url));
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await shop?.close();
-  });
+  beforeAll(() => { ({ page, errors } = session); });
 
   const unitPriceAt = async (quantity: number): Promise<number> => {
     const cell = page.locator(`[data-unit-price="${quantity}"]`);

@@ -5,6 +5,7 @@
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { chromium } from 'playwright-core';
 import type { Browser, Page } from 'playwright-core';
 import { startWebServer } from '../../electron/web/server';
@@ -165,4 +166,27 @@ export async function unnamedControls(page: Page): Promise<{ count: number; unna
   }
   await cdp.detach();
   return { count: controls.length, unnamed };
+}
+
+/** A shop (temporary store behind the web transport) and a Chromium page on it, for one describe block. */
+export interface Session {
+  shop: Shop;
+  browser: Browser;
+  page: Page;
+  errors: string[];
+}
+
+/** Registers the hooks that start the shop and the browser before the block's tests and close them after. */
+export function shopSession(): Session {
+  const session = {} as Session;
+  beforeAll(async () => {
+    session.shop = await startShop();
+    session.browser = await launch();
+    Object.assign(session, await openPage(session.browser, session.shop.web.url));
+  });
+  afterAll(async () => {
+    await session.browser?.close();
+    await session.shop?.close();
+  });
+  return session;
 }
