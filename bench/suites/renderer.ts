@@ -27,7 +27,7 @@ const row = (name: string, value: number, unit: string, target?: string, pass?: 
 /** The production build, by the vite command line (vite itself stays out of the bench bundle). */
 function buildRenderer(out: string): void {
   const vite = join(process.cwd(), 'node_modules', 'vite', 'bin', 'vite.js');
-  const r = spawnSync(process.execPath, [vite, 'build', '--config', 'renderer/vite.config.ts', '--logLevel', 'error'], {
+  const r = spawnSync(process.execPath, [vite, 'build', '--config', 'renderer/vite.config.mts', '--logLevel', 'error'], {
     env: { ...process.env, CW_RENDERER_OUT: out, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' }, encoding: 'utf8',
   });
   if (r.status !== 0) throw new Error(`renderer build failed:\n${r.stderr}${r.stdout}`);
