@@ -8,7 +8,7 @@ export const STORED_ENERGY_CAUTION =
 export const REVIEW_CAUTION =
   'The figures in this document support, and do not replace, review of the design by a qualified engineer, ' +
   'the customer\'s approval of the drawing, and the standards, codes and regulations that apply where the ' +
-  'spring is used. Tolerance and process tables may be incomplete transcriptions: check them against the ' +
+  'spring is used. Tolerance and process tables are reproduced from third-party reprints and may be incomplete: check them against the ' +
   'current standard.';
 
 export function cautionNotice(): NoticeModel {

@@ -287,7 +287,7 @@ describe('table integrity', () => {
     expect(indexBands[indexBands.length - 1]?.upTo).toBe(reviewLimits.en15800.w.max);
   });
 
-  it('coil-diameter deviations never fall as D, the index or the grade number grow (catches transcription slips)', () => {
+  it('coil-diameter deviations never fall as D, the index or the grade number grow (catches copying slips)', () => {
     const rows = coilDiameterTable.rows;
     for (const g of [1, 2, 3] as const) {
       for (let i = 0; i < rows.length; i++) {
