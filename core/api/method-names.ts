@@ -28,7 +28,7 @@ export const PDF_SAVE_CHANNEL = 'pdf:save';
 
 /** What the menu asks the renderer to do. Backup, restore, import and export run in main; then 'data-changed'. */
 export const menuCommands = [
-  'new-job', 'open-job', 'find-similar', 'save', 'print-quote', 'print-traveller', 'settings', 'data-changed',
+  'new-job', 'open-job', 'find-similar', 'save', 'undo', 'redo', 'print-quote', 'print-traveller', 'settings', 'data-changed',
 ] as const;
 export type MenuCommand = (typeof menuCommands)[number];
 

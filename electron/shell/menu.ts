@@ -48,10 +48,19 @@ function fileMenu(ctx: MenuContext, actions: MenuActions): Item {
   };
 }
 
-const editMenu: Item = {
-  label: '&Edit',
-  submenu: [{ role: 'undo' }, { role: 'redo' }, separator, { role: 'cut' }, { role: 'copy' }, { role: 'paste' }, separator, { role: 'selectAll' }],
-};
+/**
+ * Undo and redo go to the renderer, which undoes the text being typed in a field and otherwise steps the
+ * job back a revision: a role item would swallow the key and only ever undo text.
+ */
+function editMenu(actions: MenuActions): Item {
+  return {
+    label: '&Edit',
+    submenu: [
+      commandItem(actions, 'Undo', 'undo', 'CmdOrCtrl+Z'), commandItem(actions, 'Redo', 'redo', 'CmdOrCtrl+Shift+Z'), separator,
+      { role: 'cut' }, { role: 'copy' }, { role: 'paste' }, separator, { role: 'selectAll' },
+    ],
+  };
+}
 
 function viewMenu(ctx: MenuContext): Item {
   const dev: Item[] = ctx.isDev ? [{ role: 'reload' }, { role: 'forceReload' }, { role: 'toggleDevTools' }, separator] : [];
@@ -73,6 +82,6 @@ function macAppMenu(ctx: MenuContext, actions: MenuActions): Item {
 
 /** The application menu with the usual accelerators; on macOS Settings and Quit sit in the app menu. */
 export function applicationMenu(ctx: MenuContext, actions: MenuActions): Item[] {
-  const main = [fileMenu(ctx, actions), editMenu, viewMenu(ctx)];
+  const main = [fileMenu(ctx, actions), editMenu(actions), viewMenu(ctx)];
   return ctx.platform === 'darwin' ? [macAppMenu(ctx, actions), ...main, { role: 'windowMenu' }] : main;
 }

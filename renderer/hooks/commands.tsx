@@ -11,7 +11,7 @@ export type Command =
 /** The application menu's commands (core/api/method-names) as commands of the UI. */
 export function commandOfMenu(menu: string): Command | null {
   const map: Record<string, Command> = {
-    'new-job': 'new-job', 'open-job': 'find', 'find-similar': 'find-similar', save: 'save', 'print-quote': 'print-quote',
+    'new-job': 'new-job', 'open-job': 'find', 'find-similar': 'find-similar', save: 'save', undo: 'undo', redo: 'redo', 'print-quote': 'print-quote',
     'print-traveller': 'print-traveller', settings: 'settings', 'data-changed': 'data-changed',
   };
   return map[menu] ?? null;
@@ -84,7 +84,7 @@ export const shortcuts: { command: Command; keys: string; what: string }[] = [
   { command: 'shortcuts', keys: 'F1', what: 'This list' },
 ];
 
-const typing = (target: EventTarget | null): boolean => {
+export const typing = (target: EventTarget | null): boolean => {
   const el = target as HTMLElement | null;
   return !!el && (el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable);
 };

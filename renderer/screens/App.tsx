@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { usePlatform } from '../api';
-import { CommandProvider, commandOfKey, commandOfMenu, useCommand, useCommandBus } from '../hooks/commands';
+import { CommandProvider, commandOfKey, commandOfMenu, typing, useCommand, useCommandBus } from '../hooks/commands';
 import type { LeaveGuard, Navigation, Route } from '../hooks/navigation';
 import { NavigationContext, openingKey } from '../hooks/navigation';
 import { ShopDataProvider } from '../hooks/shop-data';
@@ -74,7 +74,9 @@ function Shell() {
   }), [platform, bus]);
   useEffect(() => platform.onMenuCommand((menu) => {
     const command = commandOfMenu(menu);
-    if (command === 'data-changed') bus.broadcast(command);
+    // The menu's Undo/Redo in a field undo the typing there, as the platform's own Edit menu would.
+    if ((command === 'undo' || command === 'redo') && typing(document.activeElement)) document.execCommand(command);
+    else if (command === 'data-changed') bus.broadcast(command);
     else if (command) bus.publish(command);
   }), [platform, bus]);
 

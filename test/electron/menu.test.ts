@@ -23,6 +23,7 @@ describe('the application menu', () => {
     expect(accelerators).toEqual({
       'New job': 'CmdOrCtrl+N', 'Open job…': 'CmdOrCtrl+O', 'Find similar…': 'CmdOrCtrl+Shift+F', Save: 'CmdOrCtrl+S',
       'Print quote…': 'CmdOrCtrl+P', 'Print traveller…': 'CmdOrCtrl+Shift+P', 'Settings…': 'CmdOrCtrl+,',
+      Undo: 'CmdOrCtrl+Z', Redo: 'CmdOrCtrl+Shift+Z',
     });
   });
 
@@ -31,7 +32,8 @@ describe('the application menu', () => {
     const template = applicationMenu({ platform: 'linux', isDev: false, appName: 'Coilwright' }, a);
     const window = { id: 7 };
     const expected: [string, string][] = [['New job', 'new-job'], ['Open job…', 'open-job'], ['Find similar…', 'find-similar'],
-      ['Save', 'save'], ['Print quote…', 'print-quote'], ['Print traveller…', 'print-traveller'], ['Settings…', 'settings']];
+      ['Save', 'save'], ['Print quote…', 'print-quote'], ['Print traveller…', 'print-traveller'], ['Settings…', 'settings'],
+      ['Undo', 'undo'], ['Redo', 'redo']];
     for (const [label, command] of expected) {
       click(byLabel(template, label), window);
       expect(a.command).toHaveBeenLastCalledWith(command, window);
@@ -49,9 +51,10 @@ describe('the application menu', () => {
     expect(a.command).not.toHaveBeenCalled();
   });
 
-  it('uses roles for editing and quitting', () => {
+  it('uses roles for clipboard editing and quitting; undo and redo go to the renderer, which knows what has focus', () => {
     const roles = items(win).map((i) => i.role).filter(Boolean);
-    expect(roles).toEqual(expect.arrayContaining(['undo', 'redo', 'cut', 'copy', 'paste', 'selectAll', 'quit', 'togglefullscreen', 'zoomIn']));
+    expect(roles).toEqual(expect.arrayContaining(['cut', 'copy', 'paste', 'selectAll', 'quit', 'togglefullscreen', 'zoomIn']));
+    expect(roles).not.toContain('undo');
   });
 
   it('offers reload and developer tools only in development', () => {

@@ -1,4 +1,6 @@
 /** The renderer's form model, without a browser: drafts, unit conversion, error placement, undo over revisions. */
+import { menuCommands } from '../../core/api/method-names';
+import { commandOfMenu } from '../../renderer/hooks/commands';
 import { describe, expect, it } from 'vitest';
 import type { Job } from '../../core/api';
 import type { Spec } from '../../core/spec';
@@ -137,5 +139,14 @@ describe('paths into settings', () => {
     expect(getAt(next, 'machines[0].wireRange.max')).toBe(3);
     expect(getAt(original, 'machines[0].wireRange.max')).toBe(2);
     expect(getAt(setAt(next, 'machines[0].id', undefined), 'machines[0]')).toEqual({ wireRange: { min: 0, max: 3 } });
+  });
+});
+
+describe('the application menu\'s commands', () => {
+  it('map to the UI\'s commands, undo and redo included, and nothing else', () => {
+    for (const menu of menuCommands) expect(commandOfMenu(menu), menu).not.toBeNull();
+    expect(commandOfMenu('undo')).toBe('undo');
+    expect(commandOfMenu('redo')).toBe('redo');
+    expect(commandOfMenu('format-disk')).toBeNull();
   });
 });
