@@ -37,10 +37,13 @@ function grind(settings: Settings, x: CompressionDesign, r: CompressionReport): 
   ], machinePiecesPerHour);
 }
 
+/** Presses to solid at set removal; some makers press several times (common practice, shop-practice notes §3.4). */
+export const SET_STROKES = 3;
+
 function presetToSolid(settings: Settings, x: CompressionDesign, r: CompressionReport): Draft {
   const op = machineOperation(settings, x, 'set', 'Set removal (press to solid)', [
     { label: 'Press to', value: r.solidLength, quantity: 'length' },
-    { label: 'Strokes', value: 3, quantity: 'count' },
+    { label: 'Strokes', value: SET_STROKES, quantity: 'count' },
     { label: 'Expected set', value: r.setRemoval.expectedSet ?? 0, quantity: 'length' },
     { label: 'Free length after set', value: r.freeLength, quantity: 'length' },
   ], machinePiecesPerHour);
