@@ -103,12 +103,14 @@ function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
   if (forced.length === 0) return;
   const free = new Set(x.freeParameters);
-  const needed = forced.length >= 2 ? ['freeLength', 'coils', 'wireDiameter'] : free.has('freeLength') ? ['freeLength'] : ['coils', 'wireDiameter'];
-  const missing = needed.filter((p) => !free.has(p as never));
+  // EN 15800 (from memory): one force with L0 fixed frees n and d; two forces free L0, n and d.
+  const needed: FreeParameter[] = forced.length >= 2 ? ['freeLength', 'coils', 'wireDiameter']
+    : free.has('freeLength') ? ['freeLength'] : ['coils', 'wireDiameter'];
+  const missing = needed.filter((p) => !free.has(p));
   if (missing.length === 0) return;
   add(out, 'warning', 'over-determined', `loads[${forced[0]!.i}].force`,
     `the drawing fixes wire, coil diameter, coils and free length and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
-    `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m as FreeParameter]).join(' and ')} (free parameters), or accept a wider load tolerance`);
+    `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m]).join(' and ')} (free parameters), or accept a wider load tolerance`);
 }
 
 function reviewManufacture(x: CompressionDesign, r: CompressionReport, out: Sink): void {

@@ -58,6 +58,16 @@ describe('compression report in the spec\'s units', () => {
     for (const f of r.findings) expect(f.path).toBeTypeOf('string');
   });
 
+  it('a drawing fixing geometry and a force is over-determined until the EN 15800 free parameters are released', () => {
+    const codes = (input: CompressionSpecInput) => analyseSpec(spec(input)).findings.map((f) => f.code);
+    expect(codes({ ...valveSpringMetric, freeParameters: [] })).toContain('over-determined');
+    expect(codes({ ...valveSpringMetric, freeParameters: ['coils', 'wireDiameter'] })).not.toContain('over-determined');
+    expect(codes({ ...valveSpringMetric, freeParameters: ['freeLength'] })).not.toContain('over-determined');
+    const twoForces = { ...valveSpringMetric, loads: [{ length: 45, force: 38 }, { length: 35, force: 64 }] };
+    expect(codes({ ...twoForces, freeParameters: ['coils', 'wireDiameter'] })).toContain('over-determined');
+    expect(codes({ ...twoForces, freeParameters: ['freeLength', 'coils', 'wireDiameter'] })).not.toContain('over-determined');
+  });
+
   it('a force outside its tolerance is an error finding on that load, with a free length that fixes it', () => {
     const r = analyseSpec(spec({ ...valveSpringMetric, loads: [{ length: 35, force: 200, tolerancePercent: 5 }] }));
     const f = r.findings.find((x) => x.code === 'load-outside-tolerance');
