@@ -1,8 +1,8 @@
-import type { Finding } from '../../result';
+import type { CoilReport } from '../report-base';
+import { coilReportQuantities } from '../report-base';
 import type { QuantityMap } from '../../units';
 import type { FatigueResult } from '../fatigue';
 import { fatigueQuantities } from '../fatigue';
-import type { StrengthBasis } from '../../materials/types';
 import type { CompressionEnds } from '../../spec/compression';
 
 export interface CompressionLoadResult {
@@ -33,16 +33,9 @@ export interface SetRemovalResult {
 }
 
 /** Analysis of one compression spring. Internal units here; `compressionReportQuantities` converts out. */
-export interface CompressionReport {
+export interface CompressionReport extends CoilReport {
   kind: 'compression';
-  units: 'metric' | 'inch';
-  material: string;
-  wireDiameter: number;
   ends: CompressionEnds;
-  springIndex: number;
-  meanDiameter: number;
-  outerDiameter: number;
-  innerDiameter: number;
   activeCoils: number;
   totalCoils: number;
   freeLength: number;
@@ -51,11 +44,8 @@ export interface CompressionReport {
   solidLength: number;
   solidForce: number;
   storedEnergyAtSolid: number;
-  tensileStrength: number;
-  tensileStrengthBasis: StrengthBasis;
   tensileStrengthSource: string;
   shearModulus: number;
-  elasticModulus: number;
   density: number;
   stressCorrectionFactor: number;
   wahlFactor: number;
@@ -71,17 +61,15 @@ export interface CompressionReport {
   slenderness: number;
   outerDiameterAtSolid: number;
   naturalFrequency: number;
-  wireLength: number;
-  mass: number;
   setRemoval: SetRemovalResult;
   fatigue: FatigueResult | null;
-  findings: Finding[];
 }
 
 export const compressionReportQuantities: QuantityMap = {
-  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', freeLength: 'length',
+  ...coilReportQuantities,
+  freeLength: 'length',
   pitch: 'length', rate: 'rate', solidLength: 'length', solidForce: 'force', storedEnergyAtSolid: 'energy',
-  tensileStrength: 'stress', shearModulus: 'stress', elasticModulus: 'stress', density: 'density',
+  shearModulus: 'stress', density: 'density',
   stressAtSolid: 'stress', stressAtSolidUncorrected: 'stress', allowableStress: 'stress',
   allowableStressSetRemoved: 'stress',
   loads: {
@@ -89,7 +77,7 @@ export const compressionReportQuantities: QuantityMap = {
     specifiedForce: 'force',
   },
   minimumWorkingLength: 'length', coilGapSum: 'length', bucklingDeflection: 'length',
-  outerDiameterAtSolid: 'length', wireLength: 'length', mass: 'mass',
+  outerDiameterAtSolid: 'length',
   setRemoval: { coiledFreeLength: 'length', expectedSet: 'length' },
   fatigue: fatigueQuantities,
 };

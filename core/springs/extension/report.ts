@@ -1,6 +1,6 @@
-import type { Finding } from '../../result';
+import type { CoilReport } from '../report-base';
+import { coilReportQuantities } from '../report-base';
 import type { QuantityMap } from '../../units';
-import type { StrengthBasis } from '../../materials/types';
 import type { FatigueResult } from '../fatigue';
 import { fatigueQuantities } from '../fatigue';
 import type { ExtensionEndForm } from '../../spec/extension';
@@ -20,16 +20,9 @@ export interface ExtensionLoadResult {
 export type ExtensionGoverning = 'body' | 'hook-torsion' | 'hook-bending';
 
 /** Analysis of an extension spring, internal units; lengths are inside the ends. */
-export interface ExtensionReport {
+export interface ExtensionReport extends CoilReport {
   kind: 'extension';
-  units: 'metric' | 'inch';
-  material: string;
-  wireDiameter: number;
   ends: [ExtensionEndForm, ExtensionEndForm];
-  springIndex: number;
-  meanDiameter: number;
-  outerDiameter: number;
-  innerDiameter: number;
   bodyCoils: number;
   activeCoils: number;
   rate: number;
@@ -42,10 +35,7 @@ export interface ExtensionReport {
   initialTensionStress: number;
   initialTensionStressRange: { min: number; max: number };
   loads: ExtensionLoadResult[];
-  tensileStrength: number;
-  tensileStrengthBasis: StrengthBasis;
   shearModulus: number;
-  elasticModulus: number;
   stressCorrectionFactor: number;
   hookBendingFactor: number;
   hookTorsionFactor: number;
@@ -61,21 +51,18 @@ export interface ExtensionReport {
   maximumSafeExtension: number;
   maximumSafeLength: number;
   governing: ExtensionGoverning;
-  wireLength: number;
-  mass: number;
   fatigue: FatigueResult | null;
-  findings: Finding[];
 }
 
 export const extensionReportQuantities: QuantityMap = {
-  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', rate: 'rate',
+  ...coilReportQuantities,
+  rate: 'rate',
   bodyLength: 'length', loopHeights: 'length', freeLength: 'length', specifiedFreeLength: 'length',
   initialTension: 'force', initialTensionStress: 'stress', initialTensionStressRange: { min: 'stress', max: 'stress' },
   loads: { length: 'length', extension: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress', specifiedForce: 'force' },
-  tensileStrength: 'stress', shearModulus: 'stress', elasticModulus: 'stress', hookBendRadius: 'length',
+  shearModulus: 'stress', hookBendRadius: 'length',
   bodyStress: 'stress', hookBendingStress: 'stress', hookTorsionStress: 'stress',
   allowables: { body: 'stress', hookTorsion: 'stress', hookBending: 'stress', bodyEn: 'stress' },
   maximumSafeForce: 'force', maximumSafeExtension: 'length', maximumSafeLength: 'length',
-  wireLength: 'length', mass: 'mass',
   fatigue: fatigueQuantities,
 };

@@ -1,6 +1,6 @@
-import type { Finding } from '../../result';
+import type { CoilReport } from '../report-base';
+import { coilReportQuantities } from '../report-base';
 import type { QuantityMap } from '../../units';
-import type { StrengthBasis } from '../../materials/types';
 
 export interface TorsionLoadResult {
   angle: number;
@@ -15,15 +15,8 @@ export interface TorsionLoadResult {
 }
 
 /** Analysis of a torsion spring, internal units (mm, N·mm, MPa, degrees). */
-export interface TorsionReport {
+export interface TorsionReport extends CoilReport {
   kind: 'torsion';
-  units: 'metric' | 'inch';
-  material: string;
-  wireDiameter: number;
-  springIndex: number;
-  meanDiameter: number;
-  outerDiameter: number;
-  innerDiameter: number;
   bodyCoils: number;
   activeCoils: number;
   legLengths: [number, number];
@@ -45,9 +38,6 @@ export interface TorsionReport {
   arborClearanceFraction: number | null;
   bodyLength: number;
   bodyLengthAtLoad: number;
-  tensileStrength: number;
-  tensileStrengthBasis: StrengthBasis;
-  elasticModulus: number;
   allowableStress: number;
   allowableStressEn: number;
   allowableSource: string;
@@ -55,20 +45,17 @@ export interface TorsionReport {
   maximumSafeAngle: number;
   windDirection: 'right' | 'left';
   loadDirection: 'closing' | 'opening';
-  wireLength: number;
-  mass: number;
   /** Cyclic duty: the highest corrected stress against the repeated-bending limit for the cycles. */
   fatigue: { stressMax: number; limit: number; fractionOfTensile: number; cycles: number; peened: boolean; source: string; verdict: 'pass' | 'fail' } | null;
-  findings: Finding[];
 }
 
 export const torsionReportQuantities: QuantityMap = {
-  wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', legLengths: 'length',
+  ...coilReportQuantities,
+  legLengths: 'length',
   ratePerTurn: 'torqueRatePerTurn', ratePerDegree: 'torqueRatePerDegree', ratePerDegreeTheoretical: 'torqueRatePerDegree',
   loads: { torque: 'torque', stress: 'stress', stressEn: 'stress', specifiedTorque: 'torque' },
   meanDiameterAtLoad: 'length', insideDiameterAtLoad: 'length', outsideDiameterAtLoad: 'length',
   arborDiameter: 'length', arborClearance: 'length', bodyLength: 'length', bodyLengthAtLoad: 'length',
-  tensileStrength: 'stress', elasticModulus: 'stress', allowableStress: 'stress', allowableStressEn: 'stress',
-  wireLength: 'length', mass: 'mass',
+  allowableStress: 'stress', allowableStressEn: 'stress',
   fatigue: { stressMax: 'stress', limit: 'stress' },
 };
