@@ -47,6 +47,9 @@ function reviewStresses(x: ExtensionDesign, r: ExtensionReport, out: Sink): void
   }
 }
 
+/** A drawing length within 2 % of what the coils make is taken as agreeing (common practice). */
+const DRAWING_LENGTH_MATCH = 0.02;
+
 function reviewGeometry(x: ExtensionDesign, r: ExtensionReport, out: Sink): void {
   const u = x.units;
   r.loads.forEach((l, i) => {
@@ -61,10 +64,15 @@ function reviewGeometry(x: ExtensionDesign, r: ExtensionReport, out: Sink): void
         'adjust the body coils or the initial tension');
     }
   });
-  if (r.specifiedFreeLength !== null && Math.abs(r.specifiedFreeLength - r.freeLength) > 0.02 * r.freeLength) {
+  if (r.specifiedFreeLength !== null && Math.abs(r.specifiedFreeLength - r.freeLength) > DRAWING_LENGTH_MATCH * r.freeLength) {
     add(out, 'warning', 'free-length-mismatch', 'freeLength',
       `the drawing's free length ${formatQuantity(r.specifiedFreeLength, 'length', u)} differs from the ${formatQuantity(r.freeLength, 'length', u)} the body and ends make`,
       'change the body coils or the loop heights, or make the free length a reference dimension');
+  }
+  if (x.specifiedBodyLength !== null && Math.abs(x.specifiedBodyLength - r.bodyLength) > DRAWING_LENGTH_MATCH * r.bodyLength) {
+    add(out, 'warning', 'body-length-mismatch', 'bodyLength',
+      `the drawing's body length ${formatQuantity(x.specifiedBodyLength, 'length', u)} differs from (Nb + 1)·d = ${formatQuantity(r.bodyLength, 'length', u)}`,
+      `${(x.specifiedBodyLength / x.d - 1).toFixed(1)} body coils give that body length close-wound`);
   }
   x.ends.forEach((end, i) => {
     if (!end.bendRadiusAssumed && end.bendRadius < lim.minimumHookBendRadius * x.d) {

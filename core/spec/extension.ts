@@ -31,6 +31,8 @@ export const extensionSpecSchema = z
     ends: z.tuple([extensionEndSchema, extensionEndSchema]),
     /** The drawing's free length inside the ends, when it gives one; checked against the one the ends make. */
     freeLength: positive.optional(),
+    /** The drawing's body length, when it gives one instead of (or as well as) the free length; checked against (Nb + 1)·d. */
+    bodyLength: positive.optional(),
     /** Force the coils are wound together with; omit to have the preferred window's centre proposed. */
     initialTension: nonNegative.optional(),
     loads: z.array(extensionLoadSchema).max(8).default([]),

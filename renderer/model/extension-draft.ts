@@ -22,6 +22,7 @@ export interface ExtensionDraft {
   bodyCoils: string;
   ends: [EndDraft, EndDraft];
   freeLength: string;
+  bodyLength: string;
   initialTension: string;
   loads: LoadDraft[];
   loopAngle: string;
@@ -34,7 +35,7 @@ const emptyEnd = (): EndDraft => ({ form: 'machine-loop', gap: '', extension: ''
 
 export function emptyExtension(): ExtensionDraft {
   return {
-    bodyCoils: '', ends: [emptyEnd(), emptyEnd()], freeLength: '', initialTension: '', loads: [emptyLoad()],
+    bodyCoils: '', ends: [emptyEnd(), emptyEnd()], freeLength: '', bodyLength: '', initialTension: '', loads: [emptyLoad()],
     loopAngle: '', loopAngleTolerance: '', mechanicalStop: false, duty: emptyDuty(),
   };
 }
@@ -46,7 +47,7 @@ function endFromSpec(e: ExtensionEndInput): EndDraft {
 
 export function extensionFromSpec(s: ExtensionSpec): ExtensionDraft {
   return {
-    bodyCoils: numberText(s.bodyCoils), ends: [endFromSpec(s.ends[0]), endFromSpec(s.ends[1])], freeLength: numberText(s.freeLength),
+    bodyCoils: numberText(s.bodyCoils), ends: [endFromSpec(s.ends[0]), endFromSpec(s.ends[1])], freeLength: numberText(s.freeLength), bodyLength: numberText(s.bodyLength),
     initialTension: numberText(s.initialTension), loads: loadsFromSpec(s.loads), loopAngle: numberText(s.loopAngle),
     loopAngleTolerance: numberText(s.loopAngleTolerance), mechanicalStop: s.mechanicalStop, duty: dutyFromSpec(s.duty, numberText),
   };
@@ -56,7 +57,7 @@ export function convertExtension(d: ExtensionDraft, from: UnitSystem, to: UnitSy
   const length = (t: string) => convertText(t, 'length', from, to);
   const end = (e: EndDraft): EndDraft => ({ ...e, gap: length(e.gap), extension: length(e.extension), bendRadius: length(e.bendRadius) });
   return {
-    ...d, ends: [end(d.ends[0]), end(d.ends[1])], freeLength: length(d.freeLength),
+    ...d, ends: [end(d.ends[0]), end(d.ends[1])], freeLength: length(d.freeLength), bodyLength: length(d.bodyLength),
     initialTension: convertText(d.initialTension, 'force', from, to), loads: convertLoads(d.loads, from, to),
     duty: { ...d.duty, between: [length(d.duty.between[0]), length(d.duty.between[1])] },
   };
@@ -77,6 +78,7 @@ export function extensionRaw(d: ExtensionDraft, b: RawBuilder): KindRaw {
     bodyCoils: b.required('bodyCoils', d.bodyCoils, 'the number of body coils'),
     ends: [endRaw(d.ends[0], 0, b), endRaw(d.ends[1], 1, b)],
     freeLength: b.number('freeLength', d.freeLength),
+    bodyLength: b.number('bodyLength', d.bodyLength),
     initialTension: b.number('initialTension', d.initialTension),
     loads: loadsRaw(d.loads, b, rows),
     loopAngle: b.number('loopAngle', d.loopAngle),
@@ -88,7 +90,7 @@ export function extensionRaw(d: ExtensionDraft, b: RawBuilder): KindRaw {
 }
 
 export function extensionPaths(d: ExtensionDraft): string[] {
-  const paths = ['bodyCoils', 'freeLength', 'initialTension', 'loopAngle', 'loopAngleTolerance', 'mechanicalStop', 'directionOfWind', ...dutyPaths(d.duty)];
+  const paths = ['bodyCoils', 'freeLength', 'bodyLength', 'initialTension', 'loopAngle', 'loopAngleTolerance', 'mechanicalStop', 'directionOfWind', ...dutyPaths(d.duty)];
   for (const i of [0, 1]) paths.push(`ends[${i}]`, `ends[${i}].gap`, `ends[${i}].extension`, `ends[${i}].bendRadius`);
   d.loads.forEach((_, i) => paths.push(`loads[${i}].length`, `loads[${i}].force`, `loads[${i}].tolerancePercent`));
   return paths;

@@ -32,7 +32,7 @@ const fieldNames: Record<string, string> = {
   'duty.between[1]': 'working length L2', 'serviceTemperature.min': 'lowest service temperature',
   'serviceTemperature.max': 'highest service temperature', partNumber: 'part number', 'customer.name': 'customer',
   orderQuantity: 'order quantity', leadTimeDays: 'lead time', dueDate: 'due date', bodyCoils: 'body coils',
-  initialTension: 'initial tension', mechanicalStop: 'mechanical stop', loopAngle: 'loop angle',
+  initialTension: 'initial tension', bodyLength: 'body length', mechanicalStop: 'mechanical stop', loopAngle: 'loop angle',
   loopAngleTolerance: 'loop angle tolerance', arborDiameter: 'arbor diameter', freeAngle: 'free angle',
   freeAngleTolerance: 'free angle tolerance', loadDirection: 'load direction', windDirection: 'direction of wind',
   directionOfWind: 'direction of wind', duty: 'duty', 'duty.type': 'duty',

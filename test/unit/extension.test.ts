@@ -95,6 +95,15 @@ describe('extension analysis of the contract example', () => {
     expect(bad.findings.find((f) => f.code === 'hook-bend-tight')!.path).toBe('ends[0].bendRadius');
   });
 
+  it('checks the drawing\'s free and body lengths against what the coils and loops make', () => {
+    const codes = (input: ExtensionSpecInput) => analyseSpec(spec(input)).findings.map((f) => f.code);
+    expect(codes({ ...drawbarExtension, freeLength: 53.25, bodyLength: 32.25 })).not.toEqual(expect.arrayContaining(['free-length-mismatch']));
+    expect(codes({ ...drawbarExtension, bodyLength: 32.25 })).not.toContain('body-length-mismatch');
+    const off = analyseSpec(spec({ ...drawbarExtension, freeLength: 60, bodyLength: 36 })).findings;
+    expect(off.map((f) => f.code)).toEqual(expect.arrayContaining(['free-length-mismatch', 'body-length-mismatch']));
+    expect(off.find((f) => f.code === 'body-length-mismatch')!.fix).toMatch(/^23\.0 body coils/);
+  });
+
   it('initial tension above the window cannot be coiled in: an error', () => {
     const bad = analyseSpec(spec({ ...drawbarExtension, initialTension: 60 }));
     expect(bad.findings.find((f) => f.code === 'initial-tension-too-high')?.severity).toBe('error');

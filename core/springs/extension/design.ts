@@ -19,6 +19,7 @@ export interface ExtensionDesign extends CoilBody {
   nb: number;
   ends: [ExtensionEnd, ExtensionEnd];
   specifiedFreeLength: number | null;
+  specifiedBodyLength: number | null;
   initialTension: number | null;
   loads: { length: number; force?: number; tolerancePercent?: number }[];
   loopAngle: number | null;
@@ -52,6 +53,7 @@ export function extensionDesign(spec: ExtensionSpec): ExtensionDesign | undefine
     nb: spec.bodyCoils,
     ends: [endOf(spec.ends[0], body.d, mm), endOf(spec.ends[1], body.d, mm)],
     specifiedFreeLength: spec.freeLength === undefined ? null : spec.freeLength * mm,
+    specifiedBodyLength: spec.bodyLength === undefined ? null : spec.bodyLength * mm,
     initialTension: spec.initialTension === undefined ? null : spec.initialTension * N,
     loads: spec.loads.map((l) => ({ length: l.length * mm, force: l.force === undefined ? undefined : l.force * N, tolerancePercent: l.tolerancePercent })),
     loopAngle: spec.loopAngle ?? null,

@@ -54,6 +54,8 @@ export const ExtensionSections = memo(function ExtensionSections({ spring, order
         <div className="grid grid--4">
           <TextField path="spec.freeLength" label="Free length inside ends" unit={length} numeric value={spring.freeLength}
             hint="Leave empty to take the one the ends make" onChange={(v) => set((k) => ({ ...k, freeLength: v }))} />
+          <TextField path="spec.bodyLength" label="Body length" unit={length} numeric value={spring.bodyLength}
+            hint="If the drawing gives it" onChange={(v) => set((k) => ({ ...k, bodyLength: v }))} />
           <TextField path="spec.initialTension" label="Initial tension" unit={unitSymbol('force', units)} numeric value={spring.initialTension}
             hint="Leave empty to have one proposed" onChange={(v) => set((k) => ({ ...k, initialTension: v }))} />
           <TextField path="spec.loopAngle" label="Loop angle" unit="°" numeric value={spring.loopAngle} onChange={(v) => set((k) => ({ ...k, loopAngle: v }))} />
