@@ -11,10 +11,9 @@ import { diameterLabel, lengthText, loadRows, parameterRows } from './compressio
 import { leader, linearDimension } from './dimension';
 import type { Hand } from './coils';
 import type { TableRow } from './table';
-import { cellPadding, dataTable } from './table';
+import { dataBlock } from './common';
 import type { Point } from './svg';
-import { group, svgDocument, textWidth } from './svg';
-import { fontSize } from './style';
+import { group, svgDocument } from './svg';
 
 export interface CompressionDrawingOptions {
   width?: number;
@@ -83,28 +82,6 @@ function wireLeader({ report, g, v, hand }: DimensionInput): string {
   return leader(tip, { x: tip.x + 14, y: tip.y - 18 }, `d = ${lengthText(report, g.d)}`);
 }
 
-/** First column as wide as its longest entry; a three-column block splits the rest for L and F. */
-function columnWidths(rows: TableRow[], width: number, size: number): number[] {
-  const ruled = rows.filter((r) => r.cells.length > 1);
-  const first = Math.max(...ruled.map((r) => textWidth(r.cells[0] ?? '', size))) + 2 * cellPadding;
-  const cells = Math.max(...ruled.map((r) => r.cells.length));
-  const rest = width - first;
-  return cells === 3 ? [first, rest * 0.45, rest * 0.55] : [first, rest];
-}
-
-function dataBlock(rows: TableRow[][], x: number, width: number, height: number): string {
-  const count = rows.reduce((sum, r) => sum + r.length, 0);
-  const gap = 6;
-  const rowHeight = Math.min(13, (height - 2 * margin - gap * (rows.length - 1)) / Math.max(1, count));
-  const size = Math.min(fontSize.small, rowHeight * 0.68);
-  let y = margin;
-  return rows.filter((r) => r.length > 0).map((r) => {
-    const table = dataTable({ x, y }, r, { columns: columnWidths(r, width, size), rowHeight, size });
-    y += table.height + gap;
-    return table.markup;
-  }).join('');
-}
-
 /** `report` in internal units, as `analyseSpec` gives it; texts come out in the spec's own units. */
 export function compressionDrawing(report: CompressionReport, options: CompressionDrawingOptions = {}): string {
   const width = options.width ?? 480;
@@ -121,6 +98,6 @@ export function compressionDrawing(report: CompressionReport, options: Compressi
   return svgDocument(width, height, [
     springView(g, hand, v),
     group([...lengthDimensions(input), diameterDimension(input), wireLeader(input)], 'dimensions'),
-    dataBlock(rows, width - margin - tableWidth, tableWidth, height),
+    dataBlock(rows, { left: width - margin - tableWidth, top: margin, width: tableWidth, height: height - 2 * margin }),
   ]);
 }
