@@ -10,11 +10,9 @@ import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
 import type { Page } from 'playwright-core';
 import { openStore } from '../../db';
-import { checkNewJob } from '../../db/jobs/input';
-import { writeNewJob } from '../../db/jobs/write';
 import { startWebServer } from '../../electron/web/server';
 import type { BenchRow, BenchSuite } from '../harness';
-import { benchJob, lcg } from './store-data';
+import { fillWithJobs } from './store-data';
 
 const JOBS = 10_000;
 const LOADS = 7;
@@ -41,14 +39,7 @@ function gzippedBytes(out: string): number {
 
 function fillStore(file: string): void {
   const store = openStore(file);
-  const random = lcg(424242);
-  store.db.transaction(() => {
-    for (let i = 0; i < JOBS; i++) {
-      const checked = checkNewJob(benchJob(i, random));
-      if (!checked.ok) throw new Error(`bench job ${i}: ${JSON.stringify(checked.errors)}`);
-      writeNewJob(store, checked.value);
-    }
-  }).immediate();
+  fillWithJobs(store, JOBS, 424242);
   store.close();
 }
 

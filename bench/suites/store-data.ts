@@ -1,5 +1,8 @@
 import type { JobStatus } from '../../core/api/store';
 import { jobStatuses } from '../../core/api/store';
+import type { Store } from '../../db';
+import { checkNewJob } from '../../db/jobs/input';
+import { writeNewJob } from '../../db/jobs/write';
 
 /** Generated jobs for the store bench: invented customers, parts and notes, varied springs. */
 const grades = ['en10270-1-sh', 'en10270-1-dh', 'en10270-3-1.4310', 'en10270-2-vdsicr', 'astm-a228'];
@@ -69,4 +72,16 @@ export function benchQueries(random: () => number, count: number): string[] {
       default: return `D${String(n * 7 % 1000003).padStart(7, '0').slice(0, 5)}`;
     }
   });
+}
+
+/** Writes `count` generated jobs in one transaction, through the store's own checks and write path. */
+export function fillWithJobs(store: Store, count: number, seed: number): void {
+  const random = lcg(seed);
+  store.db.transaction(() => {
+    for (let i = 0; i < count; i++) {
+      const checked = checkNewJob(benchJob(i, random));
+      if (!checked.ok) throw new Error(`bench job ${i}: ${JSON.stringify(checked.errors)}`);
+      writeNewJob(store, checked.value);
+    }
+  }).immediate();
 }

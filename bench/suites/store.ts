@@ -4,26 +4,18 @@ import { join } from 'node:path';
 import type { JobShape } from '../../core/api/store';
 import type { Store } from '../../db';
 import { findJobs, listJobs, openStore } from '../../db';
-import { checkNewJob, checkSpec } from '../../db/jobs/input';
-import { writeNewJob } from '../../db/jobs/write';
+import { checkSpec } from '../../db/jobs/input';
 import { nearestJobs, nearestJobsByScan } from '../../db/search/similar';
 import type { BenchRow, BenchSuite } from '../harness';
 import { latencies } from '../harness';
-import { benchJob, benchQueries, benchSpec, lcg } from './store-data';
+import { benchQueries, benchSpec, fillWithJobs, lcg } from './store-data';
 
 const JOBS = Number(process.env.COILWRIGHT_BENCH_JOBS ?? 100_000);
 
 /** Writes the generated jobs through the store's own checks and write path, in one transaction. */
 function generate(store: Store): number {
-  const random = lcg(20260301);
   const t0 = performance.now();
-  store.db.transaction(() => {
-    for (let i = 0; i < JOBS; i++) {
-      const checked = checkNewJob(benchJob(i, random));
-      if (!checked.ok) throw new Error(`bench job ${i}: ${JSON.stringify(checked.errors)}`);
-      writeNewJob(store, checked.value);
-    }
-  }).immediate();
+  fillWithJobs(store, JOBS, 20260301);
   return performance.now() - t0;
 }
 
