@@ -2,8 +2,8 @@ import type { IpcMainInvokeEvent } from 'electron';
 import { methodNames } from '../core/api';
 import type { ApiResult } from '../core/api';
 import { apiChannel } from '../core/api/method-names';
-import { dispatch } from './service/dispatch';
-import type { Handlers } from './service/dispatch';
+import { dispatch } from '../service/api/dispatch';
+import type { Handlers } from '../service/api/dispatch';
 import { isAppUrl } from './shell/origin';
 
 /** The part of ipcMain used here, so tests hand in a recorder. */

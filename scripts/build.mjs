@@ -61,7 +61,7 @@ export async function buildPreload() {
 export async function buildWebServer() {
   await build({
     ...common,
-    entryPoints: [at('electron', 'web', 'main.ts')],
+    entryPoints: [at('service', 'web', 'main.ts')],
     outfile: at('dist', 'web', 'web-server.cjs'),
     platform: 'node',
     target: 'node20',

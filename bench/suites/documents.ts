@@ -9,8 +9,8 @@ import { settingsSchema } from '../../core/settings/schema';
 import type { Settings } from '../../core/settings/schema';
 import { parseSpec } from '../../core/spec';
 import type { Spec } from '../../core/spec';
-import { renderTraveller } from '../../electron/documents';
-import { FONT, registerFonts } from '../../electron/documents/fonts';
+import { renderTraveller } from '../../service/pdf';
+import { FONT, registerFonts } from '../../service/pdf/fonts';
 import type { BenchRow, BenchSuite } from '../harness';
 
 /** DEMO DATA: an invented shop for timing only. */

@@ -10,7 +10,7 @@ import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
 import type { Page } from 'playwright-core';
 import { openStore } from '../../db';
-import { startWebServer } from '../../electron/web/server';
+import { startWebServer } from '../../service/web/server';
 import type { BenchRow, BenchSuite } from '../harness';
 import { fillWithJobs } from './store-data';
 

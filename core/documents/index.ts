@@ -1,4 +1,4 @@
-/** Printed documents as data: pure builders, no PDF library; electron/documents draws them. */
+/** Printed documents as data: pure builders, no PDF library; service/pdf draws them. */
 export type * from './types';
 export { DOCUMENT_VERSION } from './types';
 export { quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';

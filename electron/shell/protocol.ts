@@ -1,10 +1,10 @@
 import { readFile } from 'node:fs/promises';
 import type { Protocol } from 'electron';
-import { pdfHeaders, uiHeaders } from './csp';
+import { pdfHeaders, uiHeaders } from '../../service/host/csp';
 import { APP_HOST, APP_SCHEME } from './origin';
 import type { PdfShelf } from './pdf-shelf';
 import { PDF_PATH_PREFIX, pdfIdOf } from './pdf-shelf';
-import { resolveStaticFile } from './static-files';
+import { resolveStaticFile } from '../../service/host/static-files';
 
 /** Must run before the app is ready: app:// behaves like https (relative URLs, fetch, a secure context). */
 export function registerAppScheme(protocol: Pick<Protocol, 'registerSchemesAsPrivileged'>): void {

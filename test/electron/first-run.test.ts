@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { listJobs, openStore, saveSettings, getSettings } from '../../db';
-import { openShopStore } from '../../electron/shell/first-run';
+import { openShopStore } from '../../service/host/first-run';
 
 let dir: string;
 beforeEach(() => { dir = mkdtempSync(path.join(os.tmpdir(), 'cw-first-run-')); });

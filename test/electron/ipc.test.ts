@@ -7,8 +7,8 @@ import { apiChannel } from '../../core/api/method-names';
 import { openStore } from '../../db';
 import { isTrustedSender, registerIpc } from '../../electron/ipc';
 import type { IpcMainLike } from '../../electron/ipc';
-import { createService } from '../../electron/service';
-import type { Handlers, Service } from '../../electron/service';
+import { createService } from '../../service/api';
+import type { Handlers, Service } from '../../service/api';
 import { valveSpringMetric } from '../fixtures/specs';
 import { ipcEvent } from './electron-mock';
 

@@ -6,7 +6,7 @@ import type { MenuItemConstructorOptions } from 'electron';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { methodNames } from '../../core/api';
 import { apiChannel } from '../../core/api/method-names';
-import { CONTENT_SECURITY_POLICY } from '../../electron/shell/csp';
+import { CONTENT_SECURITY_POLICY } from '../../service/host/csp';
 import { FakeBrowserWindow, FakeWebContents, captured, electron, ipcEvent, navigationEvent, paths } from './electron-mock';
 
 vi.mock('electron', async () => (await import('./electron-mock')).electron);

@@ -2,11 +2,11 @@ import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { CONTENT_SECURITY_POLICY } from '../../electron/shell/csp';
+import { CONTENT_SECURITY_POLICY } from '../../service/host/csp';
 import { createPdfShelf } from '../../electron/shell/pdf-shelf';
 import { pdfUrl } from '../../electron/shell/pdf-shelf';
 import { appProtocolHandler, registerAppScheme } from '../../electron/shell/protocol';
-import { resolveStaticFile } from '../../electron/shell/static-files';
+import { resolveStaticFile } from '../../service/host/static-files';
 
 let base: string;
 let root: string;

@@ -7,7 +7,7 @@ import { valveSpringMetric } from '../fixtures/specs';
 
 const root = join(__dirname, '..', '..');
 const cli = (args: string[], input?: string) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'electron/cli/main.ts', ...args], { cwd: root, encoding: 'utf8', input });
+  spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8', input });
 
 describe('command line: calc and materials', () => {
   const dir = mkdtempSync(join(tmpdir(), 'coilwright-cli-'));

@@ -7,7 +7,7 @@ import { drawbarExtension, lidTorsion, valveSpringMetric } from '../fixtures/spe
 
 const root = join(__dirname, '..', '..');
 const cli = (args: string[]) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'electron/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
 
 describe('command line: sheet and price', () => {
   const dir = mkdtempSync(join(tmpdir(), 'coilwright-plan-'));

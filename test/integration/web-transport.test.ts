@@ -4,10 +4,10 @@ import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CONTENT_SECURITY_POLICY } from '../../electron/shell/csp';
-import { startWebServer } from '../../electron/web/server';
-import type { WebServer } from '../../electron/web/server';
-import { parseWebArgs } from '../../electron/web/main';
+import { CONTENT_SECURITY_POLICY } from '../../service/host/csp';
+import { startWebServer } from '../../service/web/server';
+import type { WebServer } from '../../service/web/server';
+import { parseWebArgs } from '../../service/web/main';
 import { valveSpringMetric } from '../fixtures/specs';
 
 let dir: string;

@@ -8,8 +8,8 @@ import { join, resolve } from 'node:path';
 import { afterAll, beforeAll } from 'vitest';
 import { chromium } from 'playwright-core';
 import type { Browser, Page } from 'playwright-core';
-import { startWebServer } from '../../electron/web/server';
-import type { WebServer } from '../../electron/web/server';
+import { startWebServer } from '../../service/web/server';
+import type { WebServer } from '../../service/web/server';
 
 /** Per test: a busy two-core machine runs several Chromiums at once, so steps take longer than alone. */
 export const UI_TEST_TIMEOUT = 60_000;

@@ -8,7 +8,7 @@ import { job, spec, tempDir } from './helpers';
 const root = resolve(__dirname, '../../..');
 
 function cli(...args: string[]): { code: number; out: string; err: string; json: () => unknown; errors: () => { code: string; path: string; message: string }[] } {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'electron/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
   return {
     code: r.status ?? -1, out: r.stdout, err: r.stderr,
     json: () => JSON.parse(r.stdout),

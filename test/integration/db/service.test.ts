@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { methodNames } from '../../../core/api';
 import { openStore } from '../../../db';
-import { createService, dispatch } from '../../../electron/service';
+import { createService, dispatch } from '../../../service/api';
 import { job, tempDir } from './helpers';
 
 describe('store service', () => {

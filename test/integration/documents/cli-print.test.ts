@@ -8,7 +8,7 @@ import { inchSpec, shop, valveSpec } from './fixtures';
 import { pdfText, root } from './helpers';
 
 const cli = (args: string[]) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'electron/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
 
 const isPdf = (file: string) => readFileSync(file).subarray(0, 5).toString() === '%PDF-';
 

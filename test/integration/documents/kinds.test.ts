@@ -3,7 +3,7 @@ import { quoteDocument, travellerDocument } from '../../../core/documents';
 import { estimateCost } from '../../../core/costing/estimate';
 import { formatQuantity } from '../../../core/format';
 import { planManufacture } from '../../../core/process/plan';
-import { renderQuote, renderTraveller } from '../../../electron/documents';
+import { renderQuote, renderTraveller } from '../../../service/pdf';
 import { drawbarExtension, lidTorsion } from '../../fixtures/specs';
 import { settingsWith, specOf } from './fixtures';
 import { ISSUED_AT, pdfText } from './helpers';

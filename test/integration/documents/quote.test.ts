@@ -6,7 +6,7 @@ import { documentText } from '../../../core/documents';
 import { estimateCost } from '../../../core/costing/estimate';
 import type { Settings } from '../../../core/settings/schema';
 import type { Spec } from '../../../core/spec';
-import { renderQuote } from '../../../electron/documents';
+import { renderQuote } from '../../../service/pdf';
 import { settingsWith, specOf, valveSpec } from './fixtures';
 import { ISSUED_AT, norm, pageSizes, pdfText } from './helpers';
 

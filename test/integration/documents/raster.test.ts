@@ -3,7 +3,7 @@ import { readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { travellerDocument } from '../../../core/documents';
-import { renderTraveller } from '../../../electron/documents';
+import { renderTraveller } from '../../../service/pdf';
 import { settingsWith, specOf, valveSpec } from './fixtures';
 import { ISSUED_AT, artifactDir } from './helpers';
 

@@ -7,7 +7,7 @@ import { documentText } from '../../../core/documents';
 import { estimateCost } from '../../../core/costing/estimate';
 import { createJob, getQuote, issueQuote, openStore, saveSettings } from '../../../db';
 import type { Store } from '../../../db';
-import { renderQuote, renderTraveller } from '../../../electron/documents';
+import { renderQuote, renderTraveller } from '../../../service/pdf';
 import { settingsWith, shop, specOf, valveSpec } from './fixtures';
 import { ISSUED_AT, pdfText } from './helpers';
 

@@ -3,8 +3,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createDemoShop, openStore } from '../../../db';
-import { createService, dispatch } from '../../../electron/service';
-import type { Service } from '../../../electron/service';
+import { createService, dispatch } from '../../../service/api';
+import type { Service } from '../../../service/api';
 
 describe('printing through the API (what the app\'s Print menu calls)', () => {
   const dir = mkdtempSync(join(tmpdir(), 'coilwright-print-api-'));

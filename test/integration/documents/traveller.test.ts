@@ -5,7 +5,7 @@ import { formatQuantity } from '../../../core/format';
 import { planManufacture } from '../../../core/process/plan';
 import type { Settings } from '../../../core/settings/schema';
 import type { Spec } from '../../../core/spec';
-import { renderTraveller } from '../../../electron/documents';
+import { renderTraveller } from '../../../service/pdf';
 import { inchSpec, setSpringSpec, settingsWith, specOf, valveSpec } from './fixtures';
 import { ISSUED_AT, norm, pageSizes, pdfText } from './helpers';
 

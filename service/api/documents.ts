@@ -3,8 +3,8 @@ import type { ApiResult } from '../../core/api';
 import type { documentMethods, PrintedPdf } from '../../core/api/documents';
 import type { Result } from '../../core/result';
 import { getJob, getQuote, getSettings, issueQuote, listCustomers } from '../../db';
-import { renderQuote, renderTraveller } from '../documents';
-import { draftQuote, issuedQuoteDocument, quoteSnapshot, storedPrintJob, travellerFor } from '../documents/printing';
+import { renderQuote, renderTraveller } from '../pdf';
+import { draftQuote, issuedQuoteDocument, quoteSnapshot, storedPrintJob, travellerFor } from '../pdf/printing';
 import type { StoreContext, TypedHandlers } from './store';
 
 const asApi = <T>(r: Result<T>): ApiResult<T> => (r.ok ? r : { ok: false, error: inputError(r.errors) });

@@ -1,7 +1,7 @@
 import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '../../core/api';
 import { StoreError, openStore } from '../../db';
-import { createService, dispatch } from '../service';
-import type { Service } from '../service';
+import { createService, dispatch } from '../api';
+import type { Service } from '../api';
 import type { ParsedArgs } from './io';
 import { InputError, requireOption } from './io';
 

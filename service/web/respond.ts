@@ -1,7 +1,7 @@
 import { createReadStream } from 'node:fs';
 import type { ServerResponse } from 'node:http';
-import { uiHeaders } from '../shell/csp';
-import { resolveStaticFile } from '../shell/static-files';
+import { uiHeaders } from '../host/csp';
+import { resolveStaticFile } from '../host/static-files';
 
 export function sendJson(res: ServerResponse, status: number, value: unknown): void {
   const body = JSON.stringify(value);

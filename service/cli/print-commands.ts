@@ -1,8 +1,8 @@
 import { writeFileSync } from 'node:fs';
 import { parsePrintFile } from '../../core/documents';
 import type { Result } from '../../core/result';
-import { renderQuote, renderTraveller } from '../documents';
-import { draftQuote, travellerFor } from '../documents/printing';
+import { renderQuote, renderTraveller } from '../pdf';
+import { draftQuote, travellerFor } from '../pdf/printing';
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, requireOption, toJson } from './io';
