@@ -1,13 +1,14 @@
 import type { JobDetails, JobShape, RevisionFields } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
 import type { Store } from '../store';
 import type { JobRow } from './rows';
-import { jobDetailsOfRow, shapeOf } from './rows';
+import { jobDetailsOfRow, shapeOf, storedSpecOf } from './rows';
+import { carriedSpec } from './stored-spec';
 
 /** Everything one save of a job holds: what a revision keeps and what the jobs row shows. */
 export interface JobState extends JobDetails {
   customerId: number | null;
-  spec: Spec;
+  /** A checked spec whenever it is new; carried over as stored when a save leaves it alone and it no longer reads. */
+  spec: unknown;
   shape: JobShape;
 }
 
@@ -15,7 +16,7 @@ export function stateOfRow(row: JobRow): JobState {
   return {
     customerId: row.customer_id,
     ...jobDetailsOfRow(row),
-    spec: JSON.parse(row.spec ?? 'null') as Spec,
+    spec: carriedSpec(storedSpecOf(row)),
     shape: shapeOf(row),
   };
 }
