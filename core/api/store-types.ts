@@ -158,6 +158,18 @@ export interface ImportResult {
   imported: { id: number; number: string }[];
 }
 
+/** A re-index of the search numbers: how many jobs were looked at, recomputed, moved, and which could not be. */
+export interface ReindexResult {
+  /** The engine version the recomputed numbers now carry. */
+  engineVersion: number;
+  checked: number;
+  reindexed: number;
+  /** Jobs whose numbers came out different from what the index held. */
+  changed: number;
+  /** Jobs left as they were because their stored spec no longer reads. */
+  problems: StoredProblem[];
+}
+
 export interface BackupResult {
   file: string;
   bytes: number;

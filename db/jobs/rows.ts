@@ -30,12 +30,13 @@ export interface JobRow {
   free_length: number;
   active_coils: number;
   rate: number;
+  shape_engine: number | null;
   spec: string;
 }
 
 export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
   j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.revision, j.created_at,
-  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.spec`;
+  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.shape_engine, j.spec`;
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
 

@@ -10,6 +10,8 @@ export interface JobState extends JobDetails {
   /** A checked spec whenever it is new; carried over as stored when a save leaves it alone and it no longer reads. */
   spec: unknown;
   shape: JobShape;
+  /** The engine version that computed the shape columns; null for rows indexed before it was recorded. */
+  shapeEngine: number | null;
 }
 
 export function stateOfRow(row: JobRow): JobState {
@@ -18,6 +20,7 @@ export function stateOfRow(row: JobRow): JobState {
     ...jobDetailsOfRow(row),
     spec: carriedSpec(storedSpecOf(row)),
     shape: shapeOf(row),
+    shapeEngine: row.shape_engine,
   };
 }
 
@@ -46,8 +49,12 @@ export function rowValues(state: JobState): unknown[] {
     state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
     JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays,
     s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
+    state.shapeEngine,
   ];
 }
 
 export const ROW_COLUMNS = `customer_id, part_number, drawing_number, drawing_revision, status, spec, notes, due_date,
-  order_quantity, lead_time_days, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate`;
+  order_quantity, lead_time_days, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate,
+  shape_engine`;
+
+export const ROW_PLACEHOLDERS = ROW_COLUMNS.split(',').map(() => '?').join(', ');

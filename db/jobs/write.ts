@@ -13,7 +13,7 @@ import { getJob, jobRow, revisionRow } from './read';
 import type { JobRow } from './rows';
 import { storedSpecOf } from './rows';
 import type { JobState } from './state';
-import { ROW_COLUMNS, revisionFields, rowValues, stateOfRow } from './state';
+import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
   store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
@@ -33,7 +33,7 @@ export interface NewJobOptions {
 export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOptions = {}, path = ''): number {
   const { fields } = checked;
   const customerId = resolveCustomer(store, fields, path === '' ? 'customerId' : `${path}.customerId`) ?? null;
-  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape };
+  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape, shapeEngine: checked.shapeEngine };
   const number = options.number ?? takeNumber(store, 'jobs');
   if (options.number !== undefined && store.sql('SELECT 1 FROM jobs WHERE number = ?').get(number) !== undefined) {
     throw new StoreError('duplicate-number', `job number ${number} is already in this store`, path === '' ? 'number' : `${path}.number`);
@@ -41,7 +41,7 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   const now = store.now().toISOString();
   const created = options.createdAt ?? now;
   const result = store.sql(`INSERT INTO jobs (number, ${ROW_COLUMNS}, revision, created_at, updated_at)
-                            VALUES (?, ${'?, '.repeat(19)}1, ?, ?)`)
+                            VALUES (?, ${ROW_PLACEHOLDERS}, 1, ?, ?)`)
     .run(number, ...rowValues(state), created, options.updatedAt ?? created);
   const id = Number(result.lastInsertRowid);
   addRevision(store, id, 1, options.reason ?? 'created', state, now);
