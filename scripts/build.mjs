@@ -70,7 +70,7 @@ export async function buildWebServer() {
 }
 
 /** The renderer engineer's renderer/vite.config.mts decides the output (dist/renderer by default). */
-export async function buildRenderer() {
+export async function buildRenderer({ quiet = false } = {}) {
   const config = at('renderer', 'vite.config.mts');
   if (!existsSync(at('renderer', 'index.html'))) {
     console.warn('renderer: skipped (renderer/index.html does not exist yet)');
@@ -78,7 +78,7 @@ export async function buildRenderer() {
   }
   const { build: viteBuild } = await import('vite');
   if (existsSync(config)) {
-    await viteBuild({ configFile: config });
+    await viteBuild({ configFile: config, ...(quiet ? { logLevel: 'warn' } : {}) });
   } else {
     const { default: react } = await import('@vitejs/plugin-react');
     await viteBuild({ configFile: false, root: at('renderer'), base: './', plugins: [react()],
