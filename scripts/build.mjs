@@ -1,6 +1,6 @@
 // Builds the desktop app into dist/: main and preload with esbuild, the renderer with vite.
 //   node scripts/build.mjs            all three
-//   node scripts/build.mjs main preload   only those
+//   node scripts/build.mjs main preload   only those (also: web, cli)
 // The preload runs sandboxed and may require nothing but 'electron', so the build fails if any npm
 // package ends up in it.
 import { build } from 'esbuild';
@@ -69,6 +69,20 @@ export async function buildWebServer() {
   });
 }
 
+/** The command line as one bundle: `npm run cli` runs it (scripts/cli.mjs rebuilds it when a source is newer). */
+export const cliOptions = {
+  ...common,
+  entryPoints: [at('service', 'cli', 'main.ts')],
+  outfile: at('dist', 'cli', 'cli.cjs'),
+  platform: 'node',
+  target: 'node20',
+  external: mainExternals.filter((name) => name !== 'electron'),
+};
+
+export async function buildCli() {
+  await build(cliOptions);
+}
+
 /** The renderer engineer's renderer/vite.config.mts decides the output (dist/renderer by default). */
 export async function buildRenderer({ quiet = false } = {}) {
   const config = at('renderer', 'vite.config.mts');
@@ -87,7 +101,7 @@ export async function buildRenderer({ quiet = false } = {}) {
   return true;
 }
 
-const steps = { main: buildMain, preload: buildPreload, renderer: buildRenderer, web: buildWebServer };
+const steps = { main: buildMain, preload: buildPreload, renderer: buildRenderer, web: buildWebServer, cli: buildCli };
 
 async function run(names) {
   for (const name of names) {
