@@ -17,7 +17,7 @@ const spec = (input: CompressionSpecInput): CompressionSpec => {
 describe('compression analysis of the reference spring (d 2, D 20, n 8)', () => {
   const r = analyseSpec(spec(referenceSpring));
 
-  it('rate, surge frequency and minimum gaps match the engineering notes §8 rows 19 and 21 (derived)', () => {
+  it('rate, surge frequency and minimum gaps match Shigley 9e Eqs. 10-9, 10-25 and FEBROTEC\'s Sa rule (derived)', () => {
     expect(r.rate).toBeCloseTo(2.547, 3);
     expect(r.naturalFrequency / 226.6).toBeCloseTo(1, 2);
     expect(r.coilGapSum).toBeCloseTo(4.0, 10);
