@@ -30,6 +30,13 @@ function stale() {
   return Math.max(...sources, ...SOURCES.map((d) => newestIn(path.join(root, d)))) > built;
 }
 
-if (stale()) await (await import('./build.mjs')).buildCli();
+if (stale()) {
+  try {
+    await (await import('./build.mjs')).buildCli();
+  } catch (e) {
+    console.error(`The command line could not be built from the sources: ${e.errors?.[0]?.text ?? e.message}`);
+    process.exit(1);
+  }
+}
 const { runCli } = createRequire(import.meta.url)(bundle);
 process.exitCode = await runCli(process.argv.slice(2));
