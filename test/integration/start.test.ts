@@ -1,7 +1,7 @@
-import { spawn } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { chmodSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { electronRuntime } from '../../scripts/electron-runtime.mjs';
 
@@ -58,5 +58,24 @@ describe('npm start without Electron\'s runtime', () => {
     } finally {
       process.kill(-child.pid!, 'SIGTERM');
     }
+  }, 240_000);
+});
+
+describe('npm start with Electron\'s runtime present', () => {
+  it('builds and hands the app folder to the runtime, as `electron .` always did (a stand-in binary, never Electron)', () => {
+    const dist = mkdtempSync(join(dir, 'runtime-'));
+    const pathTxt = join(root, 'node_modules', 'electron', 'path.txt');
+    const name = existsSync(pathTxt) ? readFileSync(pathTxt, 'utf8').trim() : 'electron';
+    const marker = join(dir, 'launched.txt');
+    mkdirSync(dirname(join(dist, name)), { recursive: true });
+    writeFileSync(join(dist, name), `#!/bin/sh\necho "$PWD $@" > "${marker}"\n`);
+    chmodSync(join(dist, name), 0o755);
+    const run = spawnSync(process.execPath, ['scripts/start.mjs'], {
+      cwd: root, encoding: 'utf8', env: { ...process.env, ELECTRON_OVERRIDE_DIST_PATH: dist, BROWSER: 'none' },
+    });
+    expect(run.status, run.stderr).toBe(0);
+    expect(run.stdout).not.toMatch(/not available/);
+    expect(readFileSync(marker, 'utf8').trim()).toBe(`${root} .`);
+    expect(existsSync(join(root, 'dist', 'electron', 'main.cjs'))).toBe(true);
   }, 240_000);
 });
