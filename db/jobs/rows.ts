@@ -1,4 +1,4 @@
-import type { Job, JobDetails, JobShape, JobStatus, JobSummary } from '../../core/api/store';
+import type { Job, JobDetails, JobShape, JobStatus, JobSummary, StoredProblem } from '../../core/api/store';
 import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { StoredSpec } from './stored-spec';
@@ -62,7 +62,27 @@ export function storedSpecOf(row: JobRow): StoredSpec {
   return readStoredSpec(row.spec, `job ${row.number}`);
 }
 
-export function toSummary(row: JobRow, stored: StoredSpec = storedSpecOf(row)): JobSummary {
+/**
+ * Whether a listed job's spec reads, remembered by its text: a list or search page re-reads the same specs
+ * often, and the answer cannot change while this program runs (its grades and spec version are fixed).
+ */
+const listedProblems = new Map<string, StoredProblem | null>();
+const LISTED_LIMIT = 10_000;
+
+function listedProblem(row: JobRow): StoredProblem | null {
+  const key = `${row.number}\n${row.spec}`;
+  let problem = listedProblems.get(key);
+  if (problem === undefined) {
+    const stored = storedSpecOf(row);
+    problem = stored.ok ? null : stored.problem;
+    if (listedProblems.size >= LISTED_LIMIT) listedProblems.clear();
+    listedProblems.set(key, problem);
+  }
+  return problem;
+}
+
+export function toSummary(row: JobRow, stored?: StoredSpec): JobSummary {
+  const problem = stored ? (stored.ok ? null : stored.problem) : listedProblem(row);
   return {
     id: row.id,
     number: row.number,
@@ -72,7 +92,7 @@ export function toSummary(row: JobRow, stored: StoredSpec = storedSpecOf(row)): 
     createdAt: row.created_at,
     updatedAt: row.updated_at,
     shape: shapeOf(row),
-    ...(stored.ok ? {} : { problem: stored.problem }),
+    ...(problem ? { problem } : {}),
   };
 }
 
