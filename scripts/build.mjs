@@ -4,7 +4,7 @@
 // The preload runs sandboxed and may require nothing but 'electron', so the build fails if any npm
 // package ends up in it.
 import { build } from 'esbuild';
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -79,8 +79,13 @@ export const cliOptions = {
   external: mainExternals.filter((name) => name !== 'electron'),
 };
 
+/** Written beside and renamed into place, so a command starting meanwhile never reads half a bundle. */
 export async function buildCli() {
-  await build(cliOptions);
+  const [output] = (await build({ ...cliOptions, write: false })).outputFiles;
+  const partial = `${cliOptions.outfile}.${process.pid}.tmp`;
+  mkdirSync(path.dirname(cliOptions.outfile), { recursive: true });
+  writeFileSync(partial, output.contents);
+  renameSync(partial, cliOptions.outfile);
 }
 
 /** The renderer engineer's renderer/vite.config.mts decides the output (dist/renderer by default). */

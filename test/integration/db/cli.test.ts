@@ -8,7 +8,7 @@ import { job, spec, tempDir } from './helpers';
 const root = resolve(__dirname, '../../..');
 
 function cli(...args: string[]): { code: number; out: string; err: string; json: () => unknown; errors: () => { code: string; path: string; message: string }[] } {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  const r = spawnSync(process.execPath, ['scripts/cli.mjs', ...args], { cwd: root, encoding: 'utf8' });
   return {
     code: r.status ?? -1, out: r.stdout, err: r.stderr,
     json: () => JSON.parse(r.stdout),
@@ -75,6 +75,10 @@ describe('command line: db and demo', () => {
     const count = demoJobs.length;
     expect(demo.json()).toMatchObject({ jobs: count });
     expect(cli('demo', '--db', db).errors()[0]).toMatchObject({ code: 'store-not-empty' });
+
+    // The demo shop was indexed by this engine: nothing is stale until --all asks for every job.
+    expect(cli('db', 'reindex', '--db', db).json()).toMatchObject({ checked: 0, reindexed: 0, problems: [] });
+    expect(cli('db', 'reindex', '--all', '--db', db).json()).toMatchObject({ checked: count, reindexed: count, changed: 0 });
 
     const backup = cli('db', 'backup', '--db', db, '--out', join(dir, 'demo-backup.db'));
     expect(backup.code).toBe(0);
