@@ -1,5 +1,4 @@
 import type { StoredProblem } from '../../core/api/store';
-import type { Result } from '../../core/result';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 
@@ -10,11 +9,12 @@ function problem(code: string, path: string, message: string): StoredProblem {
   return { code, path, message };
 }
 
-function parseJson(text: string): Result<unknown> {
+/** The column is CHECKed as JSON, but a damaged page or an outside edit can still leave text that is not. */
+function parseJson(text: string): { ok: true; value: unknown } | { ok: false } {
   try {
     return { ok: true, value: JSON.parse(text) };
   } catch {
-    return { ok: false, errors: [] };
+    return { ok: false };
   }
 }
 
