@@ -67,3 +67,10 @@ export const torsionAllowables: Readonly<Record<GradeFamily, Readonly<{ bending:
 export const EN_EXTENSION_STATIC_FRACTION = 0.45;
 /** EN 13906-3: permissible static bending stress of cold-coiled torsion springs ≈ 0.7·Rm (from memory). */
 export const EN_TORSION_STATIC_FRACTION = 0.7;
+
+/**
+ * EN 13906-1: permissible uncorrected torsional stress at solid length of cold-coiled compression springs,
+ * τc,zul ≈ 0.56·Rm (from memory; the standard reads it off material figures).
+ */
+export const EN_COMPRESSION_SOLID_FRACTION = 0.56;
+export const EN_COMPRESSION_SOLID_SOURCE = 'EN 13906-1, permissible stress at solid τc,zul ≈ 0.56·Rm on the uncorrected stress, from memory';

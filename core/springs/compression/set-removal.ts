@@ -1,10 +1,10 @@
 /**
  * Set removal (presetting) by an elastic–perfectly-plastic round bar in torsion.
  *
- * The wire yields when the uncorrected stress 8FD/(πd³) reaches τY. Pressing a spring whose deflection s
- * would cause the elastic stress τe > τY leaves the permanent set s_set = s·(1 − 4r/3 + r⁴/3), r = τY/τe
- * (torsion of a round bar with an elastic core of radius r·c; derived from the bar formulas
- * T = (4/3)·TY·(1 − r³/4) and the elastic spring-back T/(GJ)).
+ * The wire yields when the basis stress (a fixed multiple of 8FD/(πd³)) reaches τY. Pressing a spring whose
+ * deflection s would cause the elastic stress τe > τY leaves the permanent set s_set = s·(1 − 4r/3 + r⁴/3),
+ * r = τY/τe (torsion of a round bar with an elastic core of radius r·c; derived from the bar formulas
+ * T = (4/3)·TY·(1 − r³/4) and the elastic spring-back T/(GJ), Kukta & Kirane, "Torsion – plastic behaviour").
  *
  * Stress is proportional to deflection, so with sY the deflection at which yield starts (τe = τY), the
  * finished length to solid is s − s_set = 4sY/3 − sY⁴/(3s³). Setting that equal to the finished deflection
@@ -34,3 +34,22 @@ export function solveCoiledDeflection(finishedDeflection: number, yieldDeflectio
   const s = sY * Math.cbrt(sY / denominator);
   return { coiledDeflection: s, expectedSet: s - s0, reachable: true };
 }
+
+/** Presses to solid at set removal; some makers press several times (common practice, shop-practice notes §3.4). */
+export const SET_STROKES = 3;
+
+/**
+ * Physical limits of a coiled length (common trade practice, stated here so a planner can check them):
+ * - the coiled pitch of the active coils at most 0.65 × the mean diameter (helix angle about 12°): beyond it
+ *   the pitch tool of an ordinary coiler runs out and the close-coiled formulas no longer hold;
+ * - the set at most the finished spring's own deflection to solid (coiled deflection at most twice the
+ *   finished one): a larger set is outside what presetting controls and what the model predicts.
+ */
+export const coiledLimits = { maximumPitchPerMeanDiameter: 0.65, maximumSetPerFinishedDeflection: 1 } as const;
+
+/** Why a method gives no coiled length. */
+export type CoiledBound = 'beyond-fully-plastic' | 'set-over-deflection' | 'pitch-over-coiler';
+
+export type SetRemovalMethod = 'handbook' | 'en13906';
+/** Which method's verdict routes the job: one of them, or the stricter of the two. */
+export type SetRemovalGoverning = SetRemovalMethod | 'stricter';
