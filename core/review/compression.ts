@@ -11,7 +11,8 @@ import type { UnitSystem } from '../units';
 import type { SetRemovalResult, SetRemovalVerdict } from '../springs/compression/report';
 import { coiledLimits } from '../springs/compression/set-removal';
 import type { CoiledBound, SetRemovalMethod } from '../springs/compression/set-removal';
-import { add, reviewIndex, reviewServiceTemperature } from './common';
+import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
+import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
 
 const methodNames: Record<SetRemovalMethod, string> = { handbook: 'handbook method', en13906: 'EN 13906-1 static method' };
@@ -193,11 +194,13 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
       `natural frequency ${significant(r.naturalFrequency)} Hz is under ${SURGE_MARGIN}× the operating ${significant(x.duty.frequency)} Hz: surge raises stresses`,
       'raise the natural frequency: heavier wire, smaller coil diameter, fewer coils');
   }
+  if (!hasSteelFatigueData(x.wire.family)) {
+    add(out, 'warning', 'no-fatigue-data', 'duty', noFatigueData(x.wire.gradeName), NO_FATIGUE_DATA_FIX);
+    return;
+  }
   const f = r.fatigue;
   if (f && f.verdict !== 'pass') {
-    add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty',
-      `infinite-life check ${f.verdict}: Goodman safety factor ${significant(f.goodmanSafetyFactor)}, ` +
-      `Gerber ${significant(f.gerberSafetyFactor)} (Zimmerli data, ${f.peened ? 'peened' : 'not peened'})`,
+    add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', fatigueWords(f, x.units),
       f.peened ? 'reduce the stroke stress: more coils or a larger coil diameter' : 'shot peen, or reduce the stroke stress');
   }
 }

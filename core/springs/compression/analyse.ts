@@ -1,6 +1,6 @@
 import { bergstraesser, directShear, wahl } from '../factors';
 import { coilWireLength, helicalRate, torsionStressPerForce, wireMass } from '../helix';
-import { fatigueCheck } from '../fatigue';
+import { fatigueCheck, finiteLife, hasSteelFatigueData } from '../fatigue';
 import { bucklingDeflection, seatingCoefficient, slendernessLimit } from './buckling';
 import { minimumCoilGapSum, outsideDiameterGrowth } from './clearance';
 import { endForms, maximumSolidLength, solidLength } from './ends';
@@ -116,11 +116,11 @@ export function analyseCompression(x: CompressionDesign, governedBy: SetRemovalG
   const gaps = minimumCoilGapSum(D, d, na, x.duty.type === 'cyclic');
   const loads: CompressionLoadResult[] = [];
   for (let i = 0; i < x.loads.length; i++) loads.push(loadResult(x, rate, perForce, k, i));
-  const fatigue = x.duty.type === 'cyclic'
+  const fatigue = x.duty.type === 'cyclic' && hasSteelFatigueData(wire.family)
     ? fatigueCheck(
       k * perForce * rate * (L0 - x.duty.between[0]),
       k * perForce * rate * (L0 - x.duty.between[1]),
-      wire.tensileStrength, x.duty.peened)
+      wire.tensileStrength, x.duty.peened, finiteLife('compression', x.duty.cycles, x.duty.peened, wire.tensileStrength))
     : null;
   const sK = bucklingDeflection(L0, D, nu, wire.shearModulus, wire.elasticModulus);
   return {
