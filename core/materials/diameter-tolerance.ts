@@ -20,6 +20,6 @@ export const wireDiameterToleranceSource: Sourced = {
 
 /** ± deviation of the wire diameter at nominal d (mm). */
 export function wireDiameterTolerance(d: number): number {
-  for (const [upTo, plusMinus] of bands) if (d <= upTo) return plusMinus;
+  for (let i = 0; i < bands.length - 1; i++) if (d <= bands[i]![0]) return bands[i]![1];
   return bands[bands.length - 1]![1];
 }

@@ -66,14 +66,15 @@ function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): v
 function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const s = r.setRemoval;
   const u = x.units;
-  const both = `${methodLine(s.methods.handbook, u)}; ${methodLine(s.methods.en13906, u)}; ${governingWords(s)}`;
   if (!s.achievable) {
     add(out, 'error', 'solid-stress-over-set-removed-allowable', 'freeLength',
-      `stress at solid is over the allowable after set removal: the spring would take a set in use (${both})`,
+      `stress at solid ${formatQuantity(s.stressAtSolid, 'stress', u)} is over the allowable after set removal ` +
+      `${formatQuantity(s.allowableAfter, 'stress', u)} (${methodNames[s.governing]}; ${governingWords(s)}): the spring would take a set in use`,
       'shorten the free length, add coils, use heavier wire or a stronger grade, or add a stop before solid');
     return;
   }
   if (!s.required) return;
+  const both = `${methodLine(s.methods.handbook, u)}; ${methodLine(s.methods.en13906, u)}; ${governingWords(s)}`;
   if (s.bound !== null) {
     add(out, 'error', 'coiled-length-out-of-bounds', 'freeLength', `${boundWords[s.bound].message} (${both})`, boundWords[s.bound].fix);
   } else {

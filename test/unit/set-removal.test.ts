@@ -212,3 +212,23 @@ describe('the coiler\'s settings for the coiled spring', () => {
     expect(plan.wireLengthPerPiece).toBe(r.coiler.wireLength);
   });
 });
+
+describe('set removal in the spec\'s units', () => {
+  it('an inch spec reports the same coiled length, pitch and set, in inches', async () => {
+    const { calculate } = await import('../../core/calculate');
+    const a = { d: 2, index: 8, na: 8 };
+    const metricInput = input(a, at(a, 1.2));
+    const inchInput = {
+      ...metricInput, units: 'inch' as const, wireDiameter: 2 / 25.4, meanDiameter: 16 / 25.4, freeLength: at(a, 1.2) / 25.4,
+      materialOverrides: { shearModulus: G / 0.006894757293168361, elasticModulus: 206000 / 0.006894757293168361,
+        tensileStrength: RM / 0.006894757293168361, density: 7.85 / 27.679904710203125 },
+    };
+    const m = calculate(metricInput);
+    const i = calculate(inchInput);
+    if (!m.ok || !i.ok || m.value.kind !== 'compression' || i.value.kind !== 'compression') throw new Error('expected reports');
+    expect(i.value.coiler.freeLength! * 25.4).toBeCloseTo(m.value.coiler.freeLength!, 6);
+    expect(i.value.coiler.pitch! * 25.4).toBeCloseTo(m.value.coiler.pitch!, 6);
+    expect(i.value.setRemoval.methods.en13906.coiledFreeLength! * 25.4).toBeCloseTo(m.value.setRemoval.methods.en13906.coiledFreeLength!, 6);
+    expect(i.value.setRemoval.expectedSet! * 25.4).toBeCloseTo(m.value.setRemoval.expectedSet!, 6);
+  });
+});

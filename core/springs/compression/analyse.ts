@@ -5,7 +5,7 @@ import { bucklingDeflection, seatingCoefficient, slendernessLimit } from './buck
 import { minimumCoilGapSum, outsideDiameterGrowth } from './clearance';
 import { endForms, maximumSolidLength, solidLength } from './ends';
 import { naturalFrequency } from './surge';
-import { coiledLimits, SET_STROKES, solveCoiledDeflection } from './set-removal';
+import { coiledDeflectionFor, coiledLimits, SET_STROKES } from './set-removal';
 import type { CoiledBound, SetRemovalGoverning, SetRemovalMethod } from './set-removal';
 import { EN_COMPRESSION_SOLID_FRACTION, EN_COMPRESSION_SOLID_SOURCE } from '../../materials/allowables';
 import { wireDiameterTolerance } from '../../materials/diameter-tolerance';
@@ -51,19 +51,22 @@ function verdict(x: CompressionDesign, m: MethodLimits, Ls: number, perDeflectio
   const s0 = x.L0 - Ls;
   const stressAtSolid = m.factor * perDeflection * s0;
   const sY = m.before / (m.factor * perDeflection);
-  const solution = solveCoiledDeflection(s0, sY);
-  const coiled = solution.reachable ? Ls + solution.coiledDeflection : null;
+  const required = s0 > sY;
+  const coiledDeflection = coiledDeflectionFor(s0, sY);
+  const reachable = !Number.isNaN(coiledDeflection);
+  const expectedSet = coiledDeflection - s0;
+  const coiled = reachable ? Ls + coiledDeflection : null;
   const coiledPitch = coiled === null ? null : endForms[x.ends].pitch(coiled, x.d, x.na);
   const bound: CoiledBound | null = coiled === null ? 'beyond-fully-plastic'
-    : solution.expectedSet > coiledLimits.maximumSetPerFinishedDeflection * s0 ? 'set-over-deflection'
-      : solution.expectedSet > 0 && (coiledPitch ?? 0) > coiledLimits.maximumPitchPerMeanDiameter * x.D ? 'pitch-over-coiler' : null;
+    : expectedSet > coiledLimits.maximumSetPerFinishedDeflection * s0 ? 'set-over-deflection'
+      : required && (coiledPitch ?? 0) > coiledLimits.maximumPitchPerMeanDiameter * x.D ? 'pitch-over-coiler' : null;
   return {
     method: m.method, basis: m.basis, stressAtSolid, allowableBefore: m.before, allowableAfter: m.after,
-    required: s0 > sY, ratio: stressAtSolid / m.before,
+    required, ratio: stressAtSolid / m.before,
     coiledFreeLength: bound === null ? coiled : null,
-    expectedSet: solution.reachable ? solution.expectedSet : null,
+    expectedSet: reachable ? expectedSet : null,
     coiledPitch,
-    setFraction: solution.reachable && solution.coiledDeflection > 0 ? solution.expectedSet / solution.coiledDeflection : null,
+    setFraction: reachable && coiledDeflection > 0 ? expectedSet / coiledDeflection : null,
     achievable: stressAtSolid <= m.after,
     bound,
   };
@@ -82,7 +85,14 @@ function setRemoval(x: CompressionDesign, Ls: number, perDeflection: number, c: 
   const en13906 = verdict(x, en, Ls, perDeflection);
   const governing: SetRemovalMethod = governedBy !== 'stricter' ? governedBy
     : strictness(en13906) > strictness(handbook) ? 'en13906' : 'handbook';
-  return { ...(governing === 'handbook' ? handbook : en13906), governing, governedBy, methods: { handbook, en13906 } };
+  const v = governing === 'handbook' ? handbook : en13906;
+  // Fields listed one by one: a spread here made the analysis several times slower (npm run bench).
+  return {
+    method: v.method, basis: v.basis, stressAtSolid: v.stressAtSolid, allowableBefore: v.allowableBefore,
+    allowableAfter: v.allowableAfter, required: v.required, ratio: v.ratio, coiledFreeLength: v.coiledFreeLength,
+    expectedSet: v.expectedSet, coiledPitch: v.coiledPitch, setFraction: v.setFraction, achievable: v.achievable,
+    bound: v.bound, governing, governedBy, methods: { handbook, en13906 },
+  };
 }
 
 function coilerSettings(x: CompressionDesign, set: SetRemovalResult, finishedPitch: number): CoilerSettings {

@@ -25,14 +25,20 @@ export function permanentSet(deflection: number, yieldDeflection: number): numbe
   return deflection * (1 - (4 * r) / 3 + r ** 4 / 3);
 }
 
-export function solveCoiledDeflection(finishedDeflection: number, yieldDeflection: number): SetRemovalSolution {
+/** The coiled deflection to solid for a finished one (NaN beyond the fully plastic section); allocation-free for the engine. */
+export function coiledDeflectionFor(finishedDeflection: number, yieldDeflection: number): number {
   const s0 = finishedDeflection;
   const sY = yieldDeflection;
-  if (s0 <= sY) return { coiledDeflection: s0, expectedSet: 0, reachable: true };
+  if (s0 <= sY) return s0;
   const denominator = 4 * sY - 3 * s0;
-  if (denominator <= 0) return { coiledDeflection: Number.NaN, expectedSet: Number.NaN, reachable: false };
-  const s = sY * Math.cbrt(sY / denominator);
-  return { coiledDeflection: s, expectedSet: s - s0, reachable: true };
+  return denominator > 0 ? sY * Math.cbrt(sY / denominator) : Number.NaN;
+}
+
+export function solveCoiledDeflection(finishedDeflection: number, yieldDeflection: number): SetRemovalSolution {
+  const s = coiledDeflectionFor(finishedDeflection, yieldDeflection);
+  return Number.isNaN(s)
+    ? { coiledDeflection: Number.NaN, expectedSet: Number.NaN, reachable: false }
+    : { coiledDeflection: s, expectedSet: s - finishedDeflection, reachable: true };
 }
 
 /** Presses to solid at set removal; some makers press several times (common practice, shop-practice notes §3.4). */
