@@ -14,7 +14,7 @@ function coil(settings: Settings, x: CompressionDesign, r: CompressionReport, c:
     { label: 'Wire diameter', value: x.d, quantity: 'length' },
     { label: 'Total coils', value: k.totalCoils, quantity: 'count' },
     { label: 'Active coils', value: k.activeCoils, quantity: 'count' },
-    lengthOrHeld('Pitch (active coils, as coiled)', k.pitch),
+    lengthOrHeld('Pitch as coiled', k.pitch),
     { label: 'Ends', value: x.ends },
     { label: 'Direction of wind', value: c.directionOfWind },
     lengthOrHeld('Coiled free length', k.freeLength),

@@ -205,7 +205,7 @@ describe('the coiler\'s settings for the coiled spring', () => {
     const plan = planManufacture(spec(input(a, L0)), defaultSettings(), 100);
     const value = (kind: string, label: string) => plan.operations.find((o) => o.kind === kind)!.settings.find((s) => s.label === label)?.value;
     expect(value('coil', 'Coiled free length')).toBe(r.coiler.freeLength);
-    expect(value('coil', 'Pitch (active coils, as coiled)')).toBe(r.coiler.pitch);
+    expect(value('coil', 'Pitch as coiled')).toBe(r.coiler.pitch);
     expect(value('coil', 'Wire per piece')).toBe(r.coiler.wireLength);
     expect(value('set', 'Expected set')).toBe(r.coiler.expectedSet);
     expect(value('set', 'Strokes')).toBe(SET_STROKES);

@@ -15,7 +15,7 @@ import { ISSUED_AT, norm, pdfText, root } from './helpers';
 /** The coiler's settings for a spring that needs set removal, as the setter reads them. */
 const read = [
   { kind: 'coil', label: 'Coiled free length' },
-  { kind: 'coil', label: 'Pitch (active coils, as coiled)' },
+  { kind: 'coil', label: 'Pitch as coiled' },
   { kind: 'coil', label: 'Wire per piece' },
   { kind: 'coil', label: 'Total coils' },
   { kind: 'coil', label: 'Active coils' },
