@@ -1,0 +1,64 @@
+import type { FieldError, Result } from '../result';
+import { fail, fieldError, formatPath, ok } from '../result';
+import type { Spec } from '../spec';
+import { formatQuantity } from '../format';
+import { fromInternal, toInternal } from '../units';
+import { zodErrors } from '../validation';
+import { setModelValues } from '../process/set-model-values';
+import type { FirstOffFields } from './record';
+import { firstOffFieldsSchema } from './record';
+
+type Path = readonly PropertyKey[];
+
+const at = (prefix: Path, ...rest: PropertyKey[]) => formatPath([...prefix, ...rest]);
+
+/**
+ * What the measured values must satisfy against the job's spring, beyond each being a positive number.
+ * Pressing to solid only shortens a spring, and never below its solid length: so the set lies between
+ * zero and the coiled deflection to solid (coiled free length − solid length).
+ */
+function physicalErrors(f: FirstOffFields, spec: Spec, solidLength: number, prefix: Path): FieldError[] {
+  const u = spec.units;
+  const solid = fromInternal(solidLength, 'length', u);
+  const solidText = formatQuantity(solidLength, 'length', u);
+  const errors: FieldError[] = [];
+  if (f.coiledFreeLength <= solid) {
+    errors.push(fieldError('coiled-below-solid', at(prefix, 'coiledFreeLength'),
+      `the coiled free length used must be longer than the solid length (${solidText})`));
+  }
+  if (f.freeLengthAfterSet > f.coiledFreeLength) {
+    errors.push(fieldError('negative-set', at(prefix, 'freeLengthAfterSet'),
+      'the free length after set removal is longer than the coiled free length used: pressing to solid cannot lengthen a spring; check both values'));
+  } else if (f.freeLengthAfterSet < solid) {
+    const deflection = formatQuantity(toInternal(Math.max(0, f.coiledFreeLength - solid), 'length', u), 'length', u);
+    errors.push(fieldError('set-beyond-deflection', at(prefix, 'freeLengthAfterSet'),
+      `the set (coiled − measured) is larger than the coiled deflection to solid (${deflection}): a spring cannot end below its solid length (${solidText})`));
+  }
+  if (f.outerDiameter <= spec.wireDiameter) {
+    errors.push(fieldError('diameter-below-wire', at(prefix, 'outerDiameter'), 'the outside diameter must be larger than the wire diameter'));
+  }
+  f.forces.forEach((force, i) => {
+    if (force.length >= f.freeLengthAfterSet || force.length <= solid) {
+      errors.push(fieldError('test-length-outside-travel', at(prefix, 'forces', i, 'length'),
+        `a test length lies between the solid length (${solidText}) and the free length after set removal`));
+    }
+  });
+  return errors;
+}
+
+/** Checks a first-off record against the job's spec; every problem is a field error under `prefix`. */
+export function checkFirstOff(raw: unknown, spec: Spec, prefix: Path = []): Result<FirstOffFields> {
+  const parsed = firstOffFieldsSchema.safeParse(raw);
+  if (!parsed.success) return fail(zodErrors(parsed.error, prefix));
+  const f = parsed.data;
+  const model = setModelValues(spec);
+  if (!model) {
+    return fail([fieldError('not-compression', at(prefix, 'jobId'), 'first-off records of set removal are kept for compression springs only')]);
+  }
+  if (f.units !== spec.units) {
+    return fail([fieldError('other-unit-system', at(prefix, 'units'),
+      `the job is in ${spec.units} units: enter the record in ${spec.units} units, not ${f.units}`)]);
+  }
+  const errors = physicalErrors(f, spec, model.solidLength, prefix);
+  return errors.length > 0 ? fail(errors) : ok(f);
+}
