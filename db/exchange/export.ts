@@ -12,6 +12,8 @@ import { parseWith } from '../../core/validation';
 import { csvLine } from './csv';
 import type { JobRecord, JobsDocument } from './document';
 import { CSV_COLUMNS, EXCHANGE_FORMAT, EXCHANGE_VERSION } from './document';
+import type { FirstOffExport } from './first-off';
+import { firstOffByJob } from './first-off';
 
 type ExportRow = JobRow & { customer_email: string | null; customer_phone: string | null };
 
@@ -23,7 +25,7 @@ function exportRows(store: Store, status: JobStatus | JobStatus[] | undefined): 
     .all(...where.params) as ExportRow[];
 }
 
-function toRecord(row: ExportRow): JobRecord {
+function toRecord(row: ExportRow, firstOff: FirstOffExport[] | undefined): JobRecord {
   return {
     number: row.number,
     customer: row.customer_name === null ? null
@@ -32,13 +34,15 @@ function toRecord(row: ExportRow): JobRecord {
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
     leadTimeDays: row.lead_time_days, createdAt: row.created_at, updatedAt: row.updated_at,
     spec: JSON.parse(row.spec!) as Spec,
+    ...(firstOff ? { firstOff } : {}),
   };
 }
 
 export function jobsDocument(store: Store, status?: JobStatus | JobStatus[]): JobsDocument {
+  const firstOff = firstOffByJob(store);
   return {
     format: EXCHANGE_FORMAT, version: EXCHANGE_VERSION, exportedAt: store.now().toISOString(),
-    jobs: exportRows(store, status).map(toRecord),
+    jobs: exportRows(store, status).map((row) => toRecord(row, firstOff.get(row.id))),
   };
 }
 
