@@ -89,6 +89,8 @@ export function calibrationRules(u: UnitSystem): string[] {
   ];
 }
 
+export const NO_RECORDS = 'no first-off records of similar compression springs of the same grade family: the model\'s coiled free length stands';
+
 type Exclusion = SetCalibration['excluded'][number];
 
 /** Why a record is not evidence for this spring, or null when it is. */
@@ -146,7 +148,7 @@ const stands = (reason: string): Outcome => ({ status: 'model', reason, calibrat
 
 /** Given a fit, the calibrated values, or why the model's value stands. */
 function calibrate(model: SetModelValues, fit: SetFit | null, u: UnitSystem): Outcome {
-  if (!fit) return stands('no first-off records of similar compression springs of the same grade family: the model\'s coiled free length stands');
+  if (!fit) return stands(NO_RECORDS);
   if (fit.relativeSpread !== null && fit.relativeSpread > RULES.maxRelativeSpread.value) {
     return stands(`the records disagree too much to trust: their spread about the fit is ${pct(fit.relativeSpread)} of the typical predicted set `
       + `(limit ${pct(RULES.maxRelativeSpread.value)}): the model's coiled free length stands; check the records`);
@@ -191,13 +193,13 @@ export function calibrateSet(target: CalibrationTarget, past: readonly PastFirst
   const base = {
     units: u, freeLength: model?.freeLength ?? null,
     model: { coiledFreeLength: model?.coiledFreeLength ?? null, expectedSet: model?.expectedSet ?? null },
-    rules: calibrationRules(u), caution: CALIBRATION_CAUTION,
   };
+  const tail = { rules: calibrationRules(u), caution: CALIBRATION_CAUTION };
   const early = notCalibratable(model);
-  if (early) return { ...base, ...early, fit: null, evidence: [], excluded: [] };
+  if (early) return { ...early, ...base, fit: null, evidence: [], excluded: [], ...tail };
   const { used, excluded } = selectEvidence(target, past);
   const fit = fitOf(used);
-  return { ...base, ...calibrate(model!, fit, u), fit, evidence: used, excluded };
+  return { ...calibrate(model!, fit, u), ...base, fit, evidence: used, excluded, ...tail };
 }
 
 const calibrationQuantities: QuantityMap = {
