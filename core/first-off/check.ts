@@ -46,19 +46,23 @@ function physicalErrors(f: FirstOffFields, spec: Spec, solidLength: number, pref
   return errors;
 }
 
+/** Values in another unit system than the job's would be read at the wrong scale: refused, whatever else is wrong. */
+function unitsError(raw: unknown, spec: Spec, prefix: Path): FieldError[] {
+  const units = typeof raw === 'object' && raw !== null ? (raw as { units?: unknown }).units : undefined;
+  if ((units !== 'metric' && units !== 'inch') || units === spec.units) return [];
+  return [fieldError('other-unit-system', at(prefix, 'units'), `the job is in ${spec.units} units: enter the record in ${spec.units} units, not ${units}`)];
+}
+
 /** Checks a first-off record against the job's spec; every problem is a field error under `prefix`. */
 export function checkFirstOff(raw: unknown, spec: Spec, prefix: Path = []): Result<FirstOffFields> {
-  const parsed = firstOffFieldsSchema.safeParse(raw);
-  if (!parsed.success) return fail(zodErrors(parsed.error, prefix));
-  const f = parsed.data;
   const model = setModelValues(spec);
   if (!model) {
     return fail([fieldError('not-compression', at(prefix, 'jobId'), 'first-off records of set removal are kept for compression springs only')]);
   }
-  if (f.units !== spec.units) {
-    return fail([fieldError('other-unit-system', at(prefix, 'units'),
-      `the job is in ${spec.units} units: enter the record in ${spec.units} units, not ${f.units}`)]);
-  }
-  const errors = physicalErrors(f, spec, model.solidLength, prefix);
-  return errors.length > 0 ? fail(errors) : ok(f);
+  const units = unitsError(raw, spec, prefix);
+  const parsed = firstOffFieldsSchema.safeParse(raw);
+  if (!parsed.success) return fail([...units, ...zodErrors(parsed.error, prefix)]);
+  if (units.length > 0) return fail(units);
+  const errors = physicalErrors(parsed.data, spec, model.solidLength, prefix);
+  return errors.length > 0 ? fail(errors) : ok(parsed.data);
 }

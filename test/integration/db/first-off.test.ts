@@ -66,6 +66,8 @@ describe('first-off records', () => {
       expect(missing.error.details!.map((e) => e.path).sort()).toEqual(['coiledFreeLength', 'freeLengthAfterSet', 'measuredBy', 'measuredOn', 'outerDiameter']);
       expect(missing.error.details!.find((e) => e.path === 'outerDiameter')!.message).toMatch(/outside diameter is missing/);
     }
+    const inch = recordFirstOff(store, { jobId: j.id, units: 'inch', coiledFreeLength: 2.4 });
+    expect(inch.ok ? [] : inch.error.details!.map((e) => e.path)).toEqual(expect.arrayContaining(['units', 'freeLengthAfterSet']));
     expect(countRecords(store)).toBe(0);
   });
 
