@@ -24,6 +24,9 @@ interface RecordRow {
   recorded_at: string;
 }
 
+/** The job a record names; the rest is checked against that job's spring. */
+const jobRefSchema = firstOffInputSchema.pick({ jobId: true }).loose();
+
 const RECORD_SELECT = `SELECT r.*, j.number AS job_number FROM first_off_records r JOIN jobs j ON j.id = r.job_id`;
 
 /** The set a record shows, to a millionth of its unit: the readings are gauge values, not float noise. */
@@ -57,9 +60,12 @@ function recordById(store: Store, id: number): FirstOffRecord {
  * revision. A record with any field error is refused whole: nothing is written.
  */
 export function recordFirstOff(store: Store, raw: unknown): StoreResult<FirstOffRecord> {
-  const parsed = parseWith(firstOffInputSchema, raw);
-  if (!parsed.ok) return invalid(parsed.errors);
-  const { jobId, ...fields } = parsed.value;
+  const ref = jobRefSchema.safeParse(raw);
+  if (!ref.success) {
+    const parsed = parseWith(firstOffInputSchema, raw);
+    return invalid(parsed.ok ? [] : parsed.errors);
+  }
+  const { jobId, ...fields } = ref.data;
   const job = store.sql('SELECT revision, spec FROM jobs WHERE id = ?').get(jobId) as { revision: number; spec: string } | undefined;
   if (!job) return failure('not-found', `no job with id ${jobId}`, 'jobId');
   const checked = checkFirstOff(fields, JSON.parse(job.spec) as Spec);
