@@ -3,12 +3,11 @@ import { NO_RECORDS, calibrateSet, calibrationInSpecUnits } from '../../core/pro
 import { setModelValues } from '../../core/process/set-model-values';
 import { findGrade } from '../../core/materials';
 import type { Spec } from '../../core/spec';
-import { StoreError, openStore, setCalibration } from '../../db';
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
 import type { Caller } from './store-session';
-import { jobRef, positional, raise, withStore } from './store-session';
+import { jobRef, positional, withStore } from './store-session';
 
 /** The record file may name its job itself; --job ID|NUMBER names it on the command line instead. */
 async function recordInput(args: ParsedArgs, call: Caller): Promise<unknown> {
@@ -52,25 +51,10 @@ export const firstOffCommand: Command = {
   },
 };
 
-/** The calibration `sheet` prints beside the plan: from the store named by --db, else the model's value with why. */
-export function sheetCalibration(args: ParsedArgs, spec: Spec): SetCalibration {
-  const file = args.options.get('db');
-  if (typeof file !== 'string') {
-    const target = { materialFamily: findGrade(spec.material)?.family ?? 'unknown', units: spec.units, model: setModelValues(spec) };
-    const c = calibrationInSpecUnits(calibrateSet(target, []));
-    return c.reason === NO_RECORDS ? { ...c, reason: 'no job store named (--db), so no first-off records: the model\'s coiled free length stands' } : c;
-  }
-  try {
-    const store = openStore(file);
-    try {
-      const result = setCalibration(store, { spec });
-      if (!result.ok) raise(result.error);
-      return result.value;
-    } finally {
-      store.close();
-    }
-  } catch (e) {
-    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: '--db' }]);
-    throw e;
-  }
+/** The calibration `sheet` prints beside the plan: through the API over the store named by --db, else the model's value with why. */
+export async function sheetCalibration(args: ParsedArgs, spec: Spec): Promise<SetCalibration> {
+  if (typeof args.options.get('db') === 'string') return withStore(args, (call) => call('setCalibration', { spec }));
+  const target = { materialFamily: findGrade(spec.material)?.family ?? 'unknown', units: spec.units, model: setModelValues(spec) };
+  const c = calibrationInSpecUnits(calibrateSet(target, []));
+  return c.reason === NO_RECORDS ? { ...c, reason: 'no job store named (--db), so no first-off records: the model\'s coiled free length stands' } : c;
 }

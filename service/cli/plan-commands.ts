@@ -52,10 +52,10 @@ function orderQuantity(args: ParsedArgs, fromFile: number | undefined, spec: Spe
 export const sheetCommand: Command = {
   name: 'sheet',
   usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
-  run(args, out) {
+  async run(args, out) {
     const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
     const plan = planManufacture(spec, settingsFor(args, false), orderQuantity(args, fromFile, spec));
-    out(toJson({ ...planInSpecUnits(plan), setCalibration: sheetCalibration(args, spec) }));
+    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec) }));
   },
 };
 
