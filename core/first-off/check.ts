@@ -2,6 +2,7 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, formatPath, ok } from '../result';
 import type { Spec } from '../spec';
 import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 import { fromInternal, toInternal } from '../units';
 import { zodErrors } from '../validation';
 import { setModelValues } from '../process/set-model-values';
@@ -13,12 +14,10 @@ type Path = readonly PropertyKey[];
 const at = (prefix: Path, ...rest: PropertyKey[]) => formatPath([...prefix, ...rest]);
 
 /**
- * What the measured values must satisfy against the job's spring, beyond each being a positive number.
- * Pressing to solid only shortens a spring, and never below its solid length: so the set lies between
- * zero and the coiled deflection to solid (coiled free length − solid length).
+ * The lengths against the job's spring. Pressing to solid only shortens a spring, and never below its solid
+ * length: so the set lies between zero and the coiled deflection to solid (coiled free length − solid length).
  */
-function physicalErrors(f: FirstOffFields, spec: Spec, solidLength: number, prefix: Path): FieldError[] {
-  const u = spec.units;
+function lengthErrors(f: FirstOffFields, u: UnitSystem, solidLength: number, prefix: Path): FieldError[] {
   const solid = fromInternal(solidLength, 'length', u);
   const solidText = formatQuantity(solidLength, 'length', u);
   const errors: FieldError[] = [];
@@ -34,16 +33,30 @@ function physicalErrors(f: FirstOffFields, spec: Spec, solidLength: number, pref
     errors.push(fieldError('set-beyond-deflection', at(prefix, 'freeLengthAfterSet'),
       `the set (coiled − measured) is larger than the coiled deflection to solid (${deflection}): a spring cannot end below its solid length (${solidText})`));
   }
-  if (f.outerDiameter <= spec.wireDiameter) {
-    errors.push(fieldError('diameter-below-wire', at(prefix, 'outerDiameter'), 'the outside diameter must be larger than the wire diameter'));
-  }
+  return errors;
+}
+
+/** Each test length lies within the spring's travel: below the measured free length, above solid. */
+function testLengthErrors(f: FirstOffFields, u: UnitSystem, solidLength: number, prefix: Path): FieldError[] {
+  const solid = fromInternal(solidLength, 'length', u);
+  const errors: FieldError[] = [];
   f.forces.forEach((force, i) => {
     if (force.length >= f.freeLengthAfterSet || force.length <= solid) {
       errors.push(fieldError('test-length-outside-travel', at(prefix, 'forces', i, 'length'),
-        `a test length lies between the solid length (${solidText}) and the free length after set removal`));
+        `a test length lies between the solid length (${formatQuantity(solidLength, 'length', u)}) and the free length after set removal`));
     }
   });
   return errors;
+}
+
+function physicalErrors(f: FirstOffFields, spec: Spec, solidLength: number, prefix: Path): FieldError[] {
+  const errors = lengthErrors(f, spec.units, solidLength, prefix);
+  if (f.outerDiameter <= spec.wireDiameter) {
+    errors.push(fieldError('diameter-below-wire', at(prefix, 'outerDiameter'), 'the outside diameter must be larger than the wire diameter'));
+  }
+  // A test length is judged against a believable free length only.
+  const freeLengthBad = errors.some((e) => e.path === at(prefix, 'freeLengthAfterSet'));
+  return freeLengthBad ? errors : [...errors, ...testLengthErrors(f, spec.units, solidLength, prefix)];
 }
 
 /** Values in another unit system than the job's would be read at the wrong scale: refused, whatever else is wrong. */

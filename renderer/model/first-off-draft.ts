@@ -20,10 +20,13 @@ export const emptyFirstOffDraft = (testLengths: number, today: string, measuredB
   measuredOn: today, measuredBy, notes: '',
 });
 
-/** The paths the form has a field for (the API's own paths, so its errors land beside the fields). */
+/**
+ * The paths the form has a field for (the API's own paths, so its errors land beside the fields). A test
+ * length's row is `forces[i]`: errors on its force and on its length both belong there.
+ */
 export function firstOffPaths(testLengths: number): string[] {
   return ['coiledFreeLength', 'freeLengthAfterSet', 'outerDiameter', 'measuredOn', 'measuredBy', 'notes', 'units', 'jobId',
-    ...Array.from({ length: testLengths }, (_, i) => `forces[${i}].force`)];
+    ...Array.from({ length: testLengths }, (_, i) => `forces[${i}]`)];
 }
 
 /**
@@ -42,7 +45,7 @@ export function firstOffInputOf(draft: FirstOffDraft, jobId: number, units: Unit
     jobId, units,
     coiledFreeLength: num(draft.coiledFreeLength, 'coiledFreeLength'),
     freeLengthAfterSet: num(draft.freeLengthAfterSet, 'freeLengthAfterSet'),
-    forces: testLengths.map((length, i) => ({ length, force: num(draft.forces[i] ?? '', `forces[${i}].force`) })),
+    forces: testLengths.map((length, i) => ({ length, force: num(draft.forces[i] ?? '', `forces[${i}]`) })),
     outerDiameter: num(draft.outerDiameter, 'outerDiameter'),
     measuredOn: draft.measuredOn.trim(), measuredBy: draft.measuredBy, notes: draft.notes,
   };
@@ -50,7 +53,7 @@ export function firstOffInputOf(draft: FirstOffDraft, jobId: number, units: Unit
 }
 
 type TextKey = Exclude<keyof FirstOffDraft, 'forces'>;
-const forcePath = /^forces\[(\d+)\]\.force$/;
+const forcePath = /^forces\[(\d+)\]$/;
 
 /** The text of the field a path names. */
 export function draftValue(draft: FirstOffDraft, path: string): string {

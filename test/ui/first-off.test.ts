@@ -30,15 +30,19 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
     await field(page, 'Outside diameter').fill('24.04');
     await field(page, 'Measured by').fill('R. Demo');
     await page.getByRole('button', { name: 'Record first-off' }).click();
-    await expect(page.locator('#first-off-forces-0-force-error').textContent()).resolves.toBe('a number, e.g. 2.5');
+    const forceRow = page.locator('tr', { has: field(page, 'Force at L1 = 45.00 mm') });
+    await expect(forceRow.locator('.field__error').textContent()).resolves.toBe('a number, e.g. 2.5');
 
     await field(page, 'Force at L1 = 45.00 mm').fill('152');
     await page.getByRole('button', { name: 'Record first-off' }).click();
     const message = page.locator('#first-off-freeLengthAfterSet-error');
     await message.waitFor();
     await expect(message.textContent()).resolves.toMatch(/larger than the coiled deflection to solid/);
+    await expect(forceRow.locator('.field__error').count()).resolves.toBe(0);
+    await expect(page.locator('.form-errors').count()).resolves.toBe(0);
     await expect(field(page, 'Free length after set removal').getAttribute('aria-describedby')).resolves.toContain('first-off-freeLengthAfterSet-error');
     await expect(page.getByText('None yet.').isVisible()).resolves.toBe(true);
+    await screenshot(page, 'workspace-first-off-refused');
   });
 
   it('records the corrected first-off and lists it with its set', async () => {

@@ -37,10 +37,10 @@ describe('checking a first-off record against its job', () => {
 describe('the first-off form model', () => {
   it('sends blanks as missing and keeps text that is not a number beside its field', () => {
     let d = emptyFirstOffDraft(2, '2026-05-04', 'R. Demo');
-    d = withDraftValue(withDraftValue(d, 'forces[1].force', '3,5'), 'coiledFreeLength', '2.45');
-    expect(draftValue(d, 'forces[1].force')).toBe('3,5');
-    expect(firstOffInputOf(d, 7, 'inch', [1.8, 1.5])).toMatchObject({ input: null, errors: [{ path: 'forces[1].force' }] });
-    d = withDraftValue(d, 'forces[1].force', '3.5');
+    d = withDraftValue(withDraftValue(d, 'forces[1]', '3,5'), 'coiledFreeLength', '2.45');
+    expect(draftValue(d, 'forces[1]')).toBe('3,5');
+    expect(firstOffInputOf(d, 7, 'inch', [1.8, 1.5])).toMatchObject({ input: null, errors: [{ path: 'forces[1]' }] });
+    d = withDraftValue(d, 'forces[1]', '3.5');
     const { input } = firstOffInputOf(d, 7, 'inch', [1.8, 1.5]);
     expect(input).toMatchObject({ jobId: 7, units: 'inch', coiledFreeLength: 2.45, freeLengthAfterSet: undefined,
       forces: [{ length: 1.8, force: undefined }, { length: 1.5, force: 3.5 }] });

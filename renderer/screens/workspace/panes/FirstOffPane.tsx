@@ -53,7 +53,7 @@ function measuredLines(job: Job, plan: ManufacturingPlan | null, testLengths: re
     { path: 'freeLengthAfterSet', label: 'Free length after set removal', unit: mm, gauge: free?.gauge ?? 'height gauge',
       nominal: nominal(free), limits: limitsText(free, u) },
     ...testLengths.map((length, i) => ({
-      path: `forces[${i}].force`, label: `Force at L${i + 1} = ${shown(length, 'length', u)}`, unit: unitSymbol('force', u),
+      path: `forces[${i}]`, label: `Force at L${i + 1} = ${shown(length, 'length', u)}`, unit: unitSymbol('force', u),
       gauge: forces[i]?.gauge ?? 'load tester', nominal: nominal(forces[i]), limits: limitsText(forces[i], u),
     })),
     { path: 'outerDiameter', label: 'Outside diameter', unit: mm, gauge: od?.gauge ?? 'calliper', nominal: nominal(od), limits: limitsText(od, u) },

@@ -17,8 +17,8 @@ export function MeasuredRow({ line, value, onChange }: { line: MeasuredLine; val
   return (
     <tr className={f.error ? 'is-invalid' : undefined}>
       <th scope="row"><label htmlFor={f.id}>{line.label}</label></th>
-      <td className="num">{line.nominal}</td>
-      <td>{line.limits}</td>
+      <td className="num nowrap">{line.nominal}</td>
+      <td className="nowrap">{line.limits}</td>
       <td className="muted">{line.gauge}</td>
       <td className={`first-off__measured${f.error ? ' field--error' : ''}`}>
         <div className="field__control">
