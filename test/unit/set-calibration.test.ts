@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { ratioThroughOrigin } from '../../core/process/ratio-fit';
 import { calibrateSet, calibrationInSpecUnits } from '../../core/process/set-calibration';
 import type { CalibrationTarget, PastFirstOff } from '../../core/process/set-calibration';
@@ -77,6 +78,20 @@ describe('calibrating the coiled free length by first-off records', () => {
     const c = calibrateSet(target, past);
     expect(c.calibrated!.coiledFreeLength).toBeCloseTo(60 + 2.8, 12);
     expect(c.model.coiledFreeLength).toBe(62);
+  });
+
+  it('for any consistent records, lands between the model and the data, and on the data from full weight on', () => {
+    const full = CALIBRATION_RULES.recordsForFullWeight.value;
+    fc.assert(fc.property(
+      fc.double({ min: 0.5, max: 2, noNaN: true }),
+      fc.array(fc.double({ min: 0.1, max: 5, noNaN: true }), { minLength: 1, maxLength: 8 }),
+      (ratio, predicted) => {
+        const c = calibrateSet(target, predicted.map((p) => record({ ratio, predicted: p })));
+        const set = c.calibrated!.expectedSet;
+        expect(Math.min(2, 2 * ratio) - 1e-9).toBeLessThanOrEqual(set);
+        expect(set).toBeLessThanOrEqual(Math.max(2, 2 * ratio) + 1e-9);
+        if (predicted.length >= full) expect(set).toBeCloseTo(2 * ratio, 9);
+      }), { numRuns: 200 });
   });
 
   it('moves a fraction records ÷ full weight of the way after fewer records', () => {
