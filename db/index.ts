@@ -21,3 +21,5 @@ export { exportJobs, jobsDocument, jobsCsv } from './exchange/export';
 export { importJobs } from './exchange/import';
 export { backupStore, restoreStore, verifyBackup } from './backup';
 export { createDemoShop } from './demo';
+export { recordFirstOff, listFirstOff } from './first-off/records';
+export { setCalibration } from './first-off/calibration';
