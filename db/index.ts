@@ -20,3 +20,5 @@ export { exportJobs, jobsDocument, jobsCsv } from './exchange/export';
 export { importJobs } from './exchange/import';
 export { backupStore, restoreStore, verifyBackup } from './backup';
 export { createDemoShop } from './demo';
+export { adoptDesign, jobRequirement } from './jobs/requirements';
+export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';

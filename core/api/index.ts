@@ -2,6 +2,7 @@ import { engineMethods } from './engine';
 import { storeMethods } from './store';
 import { shopMethods } from './shop';
 import { documentMethods } from './documents';
+import { designMethods } from './design';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
@@ -14,6 +15,7 @@ export const contract = {
   ...storeMethods,
   ...shopMethods,
   ...documentMethods,
+  ...designMethods,
 };
 
 export type Contract = typeof contract;

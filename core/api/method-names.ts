@@ -12,6 +12,7 @@ export const apiMethodNames = [
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
   'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'backup', 'restore',
   'manufacturingPlan', 'costEstimate', 'printTraveller', 'printQuote', 'reprintQuote',
+  'designSprings', 'adoptDesign', 'jobRequirement',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

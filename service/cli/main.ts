@@ -4,9 +4,10 @@ import { jobsCommand } from './job-commands';
 import { dbCommand, demoCommand } from './db-commands';
 import { priceCommand, sheetCommand } from './plan-commands';
 import { printCommand } from './print-commands';
+import { designCommand } from './design-commands';
 import { EXIT, InputError, parseArgs, toJson } from './io';
 
-const commands: Command[] = [calcCommand, materialsCommand, sheetCommand, priceCommand, jobsCommand, dbCommand, demoCommand, printCommand];
+const commands: Command[] = [calcCommand, materialsCommand, sheetCommand, priceCommand, jobsCommand, dbCommand, demoCommand, printCommand, designCommand];
 
 function usage(): string {
   return ['usage: npm run -s cli -- <command> …', ...commands.map((c) => `  ${c.usage}`)].join('\n');

@@ -21,11 +21,11 @@ describe('migration 0003 (quotes)', () => {
     db.close();
   });
 
-  it('is the latest, and a migration run brings a new file straight to it in one go', () => {
-    expect(LATEST_VERSION).toBe(3);
+  it('a migration run brings a new file straight to the latest in one go', () => {
+    expect(LATEST_VERSION).toBeGreaterThanOrEqual(3);
     const db = new Database(join(tempDir(), 'all.db'));
-    expect(migrate(db)).toEqual({ from: 0, to: 3 });
-    expect(migrate(db)).toEqual({ from: 3, to: 3 });
+    expect(migrate(db)).toEqual({ from: 0, to: LATEST_VERSION });
+    expect(migrate(db)).toEqual({ from: LATEST_VERSION, to: LATEST_VERSION });
     db.close();
   });
 });

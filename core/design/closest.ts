@@ -1,0 +1,52 @@
+import type { RequirementInternal } from '../requirement';
+import type { DesignPoint } from './space';
+import type { LimitCode, Miss } from './misses';
+import type { WireChoice } from './wire-sizes';
+
+/** The design point that came nearest to meeting the requirement, and how often each limit ruled points out. */
+export class Closest {
+  point: DesignPoint | null = null;
+  wire: WireChoice | null = null;
+  misses: Miss[] = [];
+  score = Infinity;
+  readonly counts = new Map<LimitCode, number>();
+
+  constructor(readonly req: RequirementInternal) {}
+
+  private count(misses: readonly Miss[]): void {
+    const seen = new Set<LimitCode>();
+    for (const m of misses) {
+      if (seen.has(m.limit)) continue;
+      seen.add(m.limit);
+      this.counts.set(m.limit, (this.counts.get(m.limit) ?? 0) + 1);
+    }
+  }
+
+  private take(score: number, misses: Miss[], point: DesignPoint | null, wire: WireChoice | null): void {
+    if (score >= this.score) return;
+    this.score = score;
+    this.misses = misses;
+    this.point = point;
+    this.wire = wire;
+  }
+
+  /** A point that missed: its score is its worst relative miss, plus a little for each further miss. */
+  offer(point: DesignPoint, misses: Miss[]): void {
+    this.count(misses);
+    let worst = 0;
+    for (const m of misses) worst = Math.max(worst, m.relative);
+    this.take(worst + 1e-3 * (misses.length - 1), misses, point, null);
+  }
+
+  /** A wire for which the envelope and the preferred index leave no mean diameter at all. */
+  offerEmptyRange(wire: WireChoice, range: { lo: number; hi: number }): void {
+    const miss: Miss = {
+      limit: 'envelope', path: 'envelope', quantity: 'length', value: range.lo, bound: range.hi, sense: 'max',
+      relative: (range.lo - range.hi) / Math.max(range.hi, 1e-9),
+      note: `wire ${wire.d} mm needs a mean diameter of at least ${range.lo.toFixed(2)} mm; the envelope leaves at most ${range.hi.toFixed(2)} mm`,
+    };
+    this.count([miss]);
+    // A wire that fits nowhere is a poorer near miss than any point that was tried.
+    this.take(miss.relative + 1, [miss], null, wire);
+  }
+}

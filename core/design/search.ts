@@ -1,0 +1,110 @@
+import type { Settings } from '../settings/schema';
+import type { Requirement, RequirementInternal } from '../requirement';
+import { requirementInternal } from '../requirement';
+import { wireProperties } from '../materials';
+import type { WireProperties } from '../materials/types';
+import { analyseSpec } from '../calculate';
+import type { CompressionReport } from '../springs/compression/report';
+import type { CompressionSpec, CompressionEnds } from '../spec/compression';
+import { endForms } from '../springs/compression/ends';
+import type { DesignPoint, DesignSteps } from './space';
+import { designPoint, meanDiameterGrid, meanDiameterRange, pointSpec } from './space';
+import { screenPoint } from './screen';
+import { requirementMisses } from './accept';
+import type { Miss } from './misses';
+import type { WireChoice } from './wire-sizes';
+import { wireChoices } from './wire-sizes';
+import { Closest } from './closest';
+
+/** A design the engine accepted: the point, its spec and the engine's report. */
+export interface AcceptedDesign {
+  point: DesignPoint;
+  spec: CompressionSpec;
+  report: CompressionReport;
+}
+
+/** The designs of one wire, end type and peening worth costing: the least wire, and the least wire without set removal. */
+export interface CombinationResult {
+  wire: WireChoice;
+  ends: CompressionEnds;
+  peened: boolean;
+  designs: AcceptedDesign[];
+}
+
+export interface SearchOutcome {
+  req: RequirementInternal;
+  combinations: CombinationResult[];
+  closest: Closest;
+  stats: { wires: number; combinations: number; points: number; engineRuns: number };
+}
+
+interface Context {
+  r: Requirement;
+  req: RequirementInternal;
+  steps: DesignSteps;
+  closest: Closest;
+  stats: SearchOutcome['stats'];
+}
+
+function engineCheck(ctx: Context, point: DesignPoint): AcceptedDesign | null {
+  ctx.stats.engineRuns++;
+  const spec = pointSpec(ctx.r, point);
+  const report = analyseSpec(spec);
+  const misses: Miss[] = requirementMisses(ctx.req, report);
+  if (misses.length === 0) return { point, spec, report };
+  ctx.closest.offer(point, misses);
+  return null;
+}
+
+/** Walks one combination's diameters; the engine then judges survivors in order of wire used. */
+function searchCombination(ctx: Context, wire: WireChoice, props: WireProperties, grid: number[], ends: CompressionEnds, peened: boolean): CombinationResult {
+  const inactive = endForms[ends].inactiveCoils;
+  const survivors: { point: DesignPoint; wireLength: number }[] = [];
+  for (const D of grid) {
+    ctx.stats.points++;
+    const point = designPoint(ctx.req, props, wire.grade.id, wire.d, D, ends, inactive, ctx.steps, peened);
+    const s = screenPoint(ctx.req, props, point);
+    if (s.misses.length === 0) survivors.push({ point, wireLength: s.wireLength });
+    else ctx.closest.offer(point, s.misses);
+  }
+  survivors.sort((a, b) => a.wireLength - b.wireLength);
+  const designs: AcceptedDesign[] = [];
+  for (const s of survivors) {
+    const accepted = engineCheck(ctx, s.point);
+    if (!accepted) continue;
+    if (designs.length === 0) designs.push(accepted);
+    if (!accepted.report.setRemoval.required) {
+      if (designs[0] !== accepted) designs.push(accepted);
+      break;
+    }
+  }
+  return { wire, ends, peened, designs };
+}
+
+/**
+ * Every wire × end type (× peened, when cyclic duty allows it): the mean diameters in the envelope, the
+ * coils for the rate, screened with the engine's formulas, the survivors analysed and reviewed by the engine.
+ */
+export function searchCompression(r: Requirement, settings: Settings): SearchOutcome {
+  const req = requirementInternal(r);
+  const ctx: Context = { r, req, steps: settings.design, closest: new Closest(req), stats: { wires: 0, combinations: 0, points: 0, engineRuns: 0 } };
+  const wires = wireChoices(req, settings);
+  ctx.stats.wires = wires.length;
+  const peening = req.duty.type === 'cyclic' && req.duty.peeningAllowed ? [false, true] : [false];
+  const combinations: CombinationResult[] = [];
+  for (const wire of wires) {
+    const props = wireProperties(wire.grade.id, wire.d)!.props;
+    const range = meanDiameterRange(req, wire.d);
+    const grid = meanDiameterGrid(range, settings.design.diameterStep);
+    if (grid.length === 0) ctx.closest.offerEmptyRange(wire, range);
+    for (const ends of req.ends) {
+      for (const peened of peening) {
+        ctx.stats.combinations++;
+        if (grid.length === 0) continue;
+        const found = searchCombination(ctx, wire, props, grid, ends, peened);
+        if (found.designs.length > 0) combinations.push(found);
+      }
+    }
+  }
+  return { req, combinations, closest: ctx.closest, stats: ctx.stats };
+}

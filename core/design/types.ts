@@ -1,0 +1,82 @@
+import type { CompressionSpec } from '../spec/compression';
+import type { LimitCode } from './misses';
+
+/** Key figures of a designed spring, in the requirement's units. */
+export interface CandidateFigures {
+  material: string;
+  gradeName: string;
+  wireDiameter: number;
+  outerDiameter: number;
+  innerDiameter: number;
+  meanDiameter: number;
+  springIndex: number;
+  ends: CompressionSpec['ends'];
+  activeCoils: number;
+  totalCoils: number;
+  freeLength: number;
+  solidLength: number;
+  rate: number;
+  forces: { length: number; force: number; asked: number }[];
+  /** Corrected stress at solid ÷ allowable before set removal. */
+  stressRatio: number;
+  /** Allowable ÷ stress at the shortest working length, less one: the search's second ranking key. */
+  stressMargin: number;
+  setRemoval: boolean;
+  shotPeened: boolean;
+  wireLengthPerPiece: number;
+  massPerPiece: number;
+  fatigueSafetyFactor: number | null;
+}
+
+export interface DesignCandidate {
+  rank: number;
+  spec: CompressionSpec;
+  figures: CandidateFigures;
+  quantity: number;
+  unitPrice: number;
+  currency: string;
+  /** False when the costing lacked a price or machine; such designs rank after the fully priced ones. */
+  priced: boolean;
+  missing: string[];
+  /** Why it ranks below the first (empty for the first). */
+  reasons: string[];
+  /** Notes and accepted warnings of the maker's review, for the estimator to read. */
+  remarks: string[];
+}
+
+/** A limit the requirement misses, with the amount, in the requirement's units. */
+export interface LimitMiss {
+  limit: LimitCode;
+  label: string;
+  path: string;
+  value: number;
+  bound: number;
+  unit: string;
+  /** By how much the value misses the bound (same unit), and as a percentage of the bound. */
+  by: number;
+  byPercent: number;
+  message: string;
+}
+
+/** Why no design meets the requirement: the closest point found and what it misses. */
+export interface Infeasibility {
+  message: string;
+  binding: LimitMiss;
+  closest: { material: string; wireDiameter: number; meanDiameter: number | null; ends: string | null; misses: LimitMiss[] } | null;
+  /** How many design points each limit ruled out, most first. */
+  limitsHit: { limit: LimitCode; label: string; points: number }[];
+}
+
+export interface DesignAnswer {
+  kind: 'compression';
+  units: CompressionSpec['units'];
+  mainQuantity: number;
+  currency: string;
+  candidates: DesignCandidate[];
+  /** Every design that met the requirement (one per wire, end type and peening), before the limit. */
+  feasibleCount: number;
+  searched: { wires: number; combinations: number; points: number; engineRuns: number; costed: number };
+  infeasible: Infeasibility | null;
+  clearanceRule: string;
+  caution: string;
+}
