@@ -5,8 +5,9 @@ import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { designSuite } from './suites/design';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, designSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -14,11 +14,11 @@ export class Closest {
   constructor(readonly req: RequirementInternal) {}
 
   private count(misses: readonly Miss[]): void {
-    const seen = new Set<LimitCode>();
-    for (const m of misses) {
-      if (seen.has(m.limit)) continue;
-      seen.add(m.limit);
-      this.counts.set(m.limit, (this.counts.get(m.limit) ?? 0) + 1);
+    for (let i = 0; i < misses.length; i++) {
+      const limit = misses[i]!.limit;
+      let repeated = false;
+      for (let j = 0; j < i; j++) if (misses[j]!.limit === limit) repeated = true;
+      if (!repeated) this.counts.set(limit, (this.counts.get(limit) ?? 0) + 1);
     }
   }
 
@@ -38,6 +38,14 @@ export class Closest {
     this.take(worst + 1e-3 * (misses.length - 1), misses, point, null);
   }
 
+  /** A grade ruled out as a whole (duty, temperature): a poorer near miss than any point that was tried. */
+  offerWire(wire: WireChoice, misses: Miss[]): void {
+    this.count(misses);
+    let worst = 0;
+    for (const m of misses) worst = Math.max(worst, m.relative);
+    this.take(worst + 10, misses, null, wire);
+  }
+
   /** A wire for which the envelope and the preferred index leave no mean diameter at all. */
   offerEmptyRange(wire: WireChoice, range: { lo: number; hi: number }): void {
     const miss: Miss = {
@@ -46,7 +54,7 @@ export class Closest {
       note: `wire ${wire.d} mm needs a mean diameter of at least ${range.lo.toFixed(2)} mm; the envelope leaves at most ${range.hi.toFixed(2)} mm`,
     };
     this.count([miss]);
-    // A wire that fits nowhere is a poorer near miss than any point that was tried.
-    this.take(miss.relative + 1, [miss], null, wire);
+    // A wire that fits nowhere is a poorer near miss than any point tried or any grade ruled out.
+    this.take(miss.relative + 20, [miss], null, wire);
   }
 }

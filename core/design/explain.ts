@@ -51,8 +51,10 @@ export function explainInfeasible(req: RequirementInternal, closest: Closest, wi
   const where = p
     ? `${gradeName} ${d} ${unitSymbol('length', req.units)} wire, ${p.ends} ends, mean diameter ${significant(fromInternal(p.D, 'length', req.units))} ${unitSymbol('length', req.units)}`
     : `${gradeName} ${d} ${unitSymbol('length', req.units)} wire`;
+  const most = limitsHit.slice(0, 3).map((l) => `${l.label} (${l.points})`).join(', ');
   return {
-    message: `No design meets the requirement. The binding limit is the ${binding.label}. Closest: ${where}: ${misses.map((m) => m.message).join('; ')}.`,
+    message: `No design meets the requirement. The binding limit is the ${binding.label}. Closest: ${where}: ${misses.map((m) => m.message).join('; ')}. `
+      + `Limits that ruled out the most designs tried: ${most}.`,
     binding,
     closest: {
       material: wire.grade, wireDiameter: fromInternal(wire.d, 'length', req.units),

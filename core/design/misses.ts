@@ -16,8 +16,10 @@ export const limitLabels = {
   'solid-stress': 'stress at solid after set removal',
   'working-stress': 'stress at the shortest working length',
   'stress-ratio': 'maximum stress ratio',
-  fatigue: 'fatigue life',
+  fatigue: 'fatigue safety factor (Goodman, infinite life)',
   review: 'the maker\'s review',
+  'grade-duty': 'grade fit for cyclic duty',
+  'grade-temperature': 'grade service temperature',
   'no-wire': 'wire to choose from',
 } as const;
 

@@ -1,5 +1,5 @@
 import type { RequirementInternal } from '../requirement';
-import type { WireProperties } from '../materials/types';
+import type { WireGrade, WireProperties } from '../materials/types';
 import { bergstraesser } from '../springs/factors';
 import { coilWireLength, helicalRate, torsionStressPerForce } from '../springs/helix';
 import { endForms, solidLength } from '../springs/compression/ends';
@@ -74,6 +74,21 @@ function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProper
     if (f.verdict !== 'pass') push(out, underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
   }
   return required;
+}
+
+/** Limits that rule out a whole grade: cyclic duty on a grade not made for it, a service temperature outside its range. */
+export function gradeMisses(req: RequirementInternal, grade: WireGrade): Miss[] {
+  const out: Miss[] = [];
+  if (req.duty.type === 'cyclic' && !grade.dynamicGrade) {
+    out.push({ limit: 'grade-duty', path: 'duty', quantity: 'count', value: 0, bound: 1, sense: 'min', relative: 1,
+      note: `${grade.name} is not a grade for cyclic duty` });
+  }
+  const t = req.serviceTemperature;
+  if (t) {
+    push(out, overMax('grade-temperature', 'serviceTemperature.max', 'temperature', t.max, grade.serviceTemperature.max));
+    push(out, underMin('grade-temperature', 'serviceTemperature.min', 'temperature', t.min, grade.serviceTemperature.min));
+  }
+  return out;
 }
 
 export function screenPoint(req: RequirementInternal, wire: WireProperties, p: DesignPoint): Screened {

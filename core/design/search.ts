@@ -8,8 +8,8 @@ import type { CompressionReport } from '../springs/compression/report';
 import type { CompressionSpec, CompressionEnds } from '../spec/compression';
 import { endForms } from '../springs/compression/ends';
 import type { DesignPoint, DesignSteps } from './space';
-import { designPoint, meanDiameterGrid, meanDiameterRange, pointSpec } from './space';
-import { screenPoint } from './screen';
+import { designPoint, isEmptyGrid, meanDiameterGrid, meanDiameterRange, necessaryDiameterRange, pointSpec } from './space';
+import { gradeMisses, screenPoint } from './screen';
 import { requirementMisses } from './accept';
 import type { Miss } from './misses';
 import type { WireChoice } from './wire-sizes';
@@ -57,8 +57,12 @@ function engineCheck(ctx: Context, point: DesignPoint): AcceptedDesign | null {
 }
 
 /** Walks one combination's diameters; the engine then judges survivors in order of wire used. */
-function searchCombination(ctx: Context, wire: WireChoice, props: WireProperties, grid: number[], ends: CompressionEnds, peened: boolean): CombinationResult {
+function searchCombination(ctx: Context, wire: WireChoice, props: WireProperties, range: { lo: number; hi: number }, ends: CompressionEnds, peened: boolean): CombinationResult {
   const inactive = endForms[ends].inactiveCoils;
+  const necessary = meanDiameterGrid(necessaryDiameterRange(ctx.req, props, wire.d, ends, ctx.steps.coilStep, range), ctx.steps.diameterStep);
+  // Nothing can pass: the envelope's two edges still show the estimator what the wire misses, and by how much.
+  const envelope = necessary.length > 0 ? [] : meanDiameterGrid(range, ctx.steps.diameterStep);
+  const grid = necessary.length > 0 ? necessary : [...new Set([envelope[0]!, envelope[envelope.length - 1]!])];
   const survivors: { point: DesignPoint; wireLength: number }[] = [];
   for (const D of grid) {
     ctx.stats.points++;
@@ -93,15 +97,18 @@ export function searchCompression(r: Requirement, settings: Settings): SearchOut
   const peening = req.duty.type === 'cyclic' && req.duty.peeningAllowed ? [false, true] : [false];
   const combinations: CombinationResult[] = [];
   for (const wire of wires) {
-    const props = wireProperties(wire.grade.id, wire.d)!.props;
     const range = meanDiameterRange(req, wire.d);
-    const grid = meanDiameterGrid(range, settings.design.diameterStep);
-    if (grid.length === 0) ctx.closest.offerEmptyRange(wire, range);
+    const unfit = gradeMisses(req, wire.grade);
+    const empty = isEmptyGrid(range, settings.design.diameterStep);
+    if (unfit.length > 0) ctx.closest.offerWire(wire, unfit);
+    else if (empty) ctx.closest.offerEmptyRange(wire, range);
+    let props: WireProperties | undefined;
     for (const ends of req.ends) {
       for (const peened of peening) {
         ctx.stats.combinations++;
-        if (grid.length === 0) continue;
-        const found = searchCombination(ctx, wire, props, grid, ends, peened);
+        if (empty || unfit.length > 0) continue;
+        props ??= wireProperties(wire.grade.id, wire.d)!.props;
+        const found = searchCombination(ctx, wire, props, range, ends, peened);
         if (found.designs.length > 0) combinations.push(found);
       }
     }

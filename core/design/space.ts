@@ -6,6 +6,7 @@ import { fromInternal, toInternal } from '../units';
 import { helicalRate } from '../springs/helix';
 import { reviewLimits } from '../review/limits';
 import { guideClearance } from './clearance';
+import { endForms } from '../springs/compression/ends';
 
 /**
  * The design space the search walks, defined once so the search and any check of it agree: for one wire
@@ -45,12 +46,43 @@ export function meanDiameterRange(req: RequirementInternal, d: number): { lo: nu
   return { lo, hi };
 }
 
+/**
+ * The envelope's diameters narrowed by two necessary conditions, so the walk skips diameters that cannot
+ * pass. Above: the uncorrected stress 8·F·D/(π·d³) of the least force allowed at the shortest load length
+ * must stay within the allowable after set removal, the largest allowable the review uses. Below: the solid
+ * length d·(na + inactive coils + solid allowance), with na at most half a coil step under the exact count,
+ * must stay under the shortest working length and the maximum solid length.
+ */
+export function necessaryDiameterRange(
+  req: RequirementInternal, wire: WireProperties, d: number, ends: CompressionEnds, coilStep: number, range: { lo: number; hi: number },
+): { lo: number; hi: number } {
+  const shortest = req.loads[req.loads.length - 1]!;
+  const leastForce = shortest.force * (1 - shortest.tolerancePercent / 100);
+  const allowable = wire.allowableStaticFraction.afterSetRemoval * wire.tensileStrength;
+  const hi = leastForce > 0 ? (allowable * Math.PI * d ** 3) / (8 * leastForce) : Infinity;
+  const form = endForms[ends];
+  const cap = Math.min(req.deepestLength, req.envelope.maxSolidLength ?? Infinity);
+  const coils = cap / d - form.inactiveCoils - form.solidExtra + coilStep / 2;
+  const lo = coils > 0 ? Math.cbrt((wire.shearModulus * d ** 4) / (8 * req.rate * coils)) : Infinity;
+  return { lo: Math.max(range.lo, lo * (1 - 1e-9)), hi: Math.min(range.hi, hi * (1 + 1e-9)) };
+}
+
 export function meanDiameterGrid(range: { lo: number; hi: number }, step: number): number[] {
   const out: number[] = [];
   const first = Math.ceil(range.lo / step - 1e-9);
   const last = Math.floor(range.hi / step + 1e-9);
-  for (let i = last; i >= first; i--) out.push(Number((i * step).toFixed(6)));
+  for (let i = last; i >= first; i--) out.push(Math.round(i * step * 1e6) / 1e6);
   return out;
+}
+
+export function isEmptyGrid(range: { lo: number; hi: number }, step: number): boolean {
+  return Math.ceil(range.lo / step - 1e-9) > Math.floor(range.hi / step + 1e-9);
+}
+
+/** A length rounded to `places` decimals, the way the spec states it. */
+export function toPlaces(value: number, places: number): number {
+  const scale = 10 ** places;
+  return Math.round(value * scale) / scale;
 }
 
 /** Active coils for the asked rate, to the nearest coil step (at least one step). */
@@ -79,7 +111,7 @@ export function centredFreeLength(req: RequirementInternal, rate: number): numbe
 /** Rounds an internal length to the trade's precision in the requirement's units and back. */
 export function roundedLength(req: RequirementInternal, mm: number): number {
   const places = lengthDecimals[req.units];
-  const shown = Number(fromInternal(mm, 'length', req.units).toFixed(places));
+  const shown = toPlaces(fromInternal(mm, 'length', req.units), places);
   return toInternal(shown, 'length', req.units);
 }
 
@@ -105,7 +137,7 @@ export function pointSpec(r: Requirement, p: DesignPoint): CompressionSpec {
   return {
     kind: 'compression', version: 1, units: r.units, material: p.grade,
     wireDiameter: out(p.d, r.units), outerDiameter: out(p.D + p.d, r.units),
-    totalCoils: p.nt, ends: p.ends, freeLength: Number(out(p.L0, r.units).toFixed(places)),
+    totalCoils: p.nt, ends: p.ends, freeLength: toPlaces(out(p.L0, r.units), places),
     loads: loads.map((l) => ({ length: l.length, force: l.force, ...(l.tolerancePercent !== undefined ? { tolerancePercent: l.tolerancePercent } : {}) })),
     seating: r.seating, duty,
     freeParameters: loads.length >= 2 ? ['freeLength', 'coils', 'wireDiameter'] : ['freeLength'],
