@@ -5,6 +5,7 @@ import { coilWireLength, helicalRate, torsionStressPerForce } from '../springs/h
 import { endForms, solidLength } from '../springs/compression/ends';
 import { minimumCoilGapSum, outsideDiameterGrowth } from '../springs/compression/clearance';
 import { fatigueCheck, fatigueCriteria } from '../springs/fatigue';
+import { solveCoiledDeflection } from '../springs/compression/set-removal';
 import { reviewLimits } from '../review/limits';
 import { boreLimit, rodLimit } from './clearance';
 import type { DesignPoint } from './space';
@@ -53,6 +54,17 @@ function loadMisses(req: RequirementInternal, rate: number, L0: number, out: Mis
   }
 }
 
+/**
+ * The review's set-removal rules with the engine's own set model: the set must reach the trade's share of the
+ * deflection to solid, and the stress ratio must stay within its maximum. `yieldShare` is the uncorrected
+ * stress at solid over the yield the model uses, i.e. the deflection to solid over the yield deflection.
+ */
+function setRemovalMisses(ratio: number, yieldShare: number, out: Miss[]): void {
+  push(out, overMax('set-removal', 'maxStressRatio', 'ratio', ratio, reviewLimits.maximumSetRatio));
+  const s = solveCoiledDeflection(yieldShare, 1);
+  if (s.reachable) push(out, underMin('set-removal', 'envelope', 'ratio', s.expectedSet / s.coiledDeflection, reviewLimits.minimumSetFraction));
+}
+
 function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProperties, rate: number, Ls: number, out: Miss[]): boolean {
   const k = bergstraesser(p.D / p.d);
   const perForce = torsionStressPerForce(p.D, p.d);
@@ -67,6 +79,7 @@ function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProper
     const stressed = share * (required ? solidU : k * solidU);
     push(out, overMax('working-stress', 'function', 'stress', stressed, required ? after : before));
   }
+  if (required) setRemovalMisses(k * solidU / before, solidU / before, out);
   if (req.maxStressRatio !== null) push(out, overMax('stress-ratio', 'maxStressRatio', 'ratio', (k * solidU) / before, req.maxStressRatio));
   if (req.duty.type === 'cyclic') {
     const [a, b] = req.duty.between;
