@@ -61,6 +61,7 @@ describe('design from the customer\'s requirement', { timeout: UI_TEST_TIMEOUT }
     const number = await savedJobNumber(page);
     expect(number).toMatch(/^J-\d\d-\d{4}$/);
     await expect(field(page, 'Total coils Nt').inputValue()).resolves.toBe(coils);
+    await expect(field(page, 'Part number').inputValue()).resolves.toBe('VS-20 (demo)');
     await expect(field(page, 'Free length L0 (mm)').inputValue()).resolves.toBe(String(Number(freeLength)));
     const chosen = await field(page, 'Wire grade').evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent ?? '');
     expect(chosen).toContain(grade.replace(/ \(.*\)$/, ''));
