@@ -1,6 +1,6 @@
 import { designFromRequirement, designPoint, standardWireSizes, meanDiameterGrid, meanDiameterRange, pointSpec, requirementMisses, wireChoices } from '../../core/design';
 import { parseRequirement, requirementInternal } from '../../core/requirement';
-import type { Requirement } from '../../core/requirement';
+import type { CompressionRequirement } from '../../core/requirement';
 import { settingsSchema } from '../../core/settings/schema';
 import type { Settings } from '../../core/settings/schema';
 import { wireProperties } from '../../core/materials';
@@ -19,14 +19,14 @@ const raw = {
   choices: { wireSizes: 'preferred', ends: ['closed-ground', 'closed', 'open-ground', 'open'], quantities: [1000] },
 };
 
-function requirement(): Requirement {
+function requirement(): CompressionRequirement {
   const r = parseRequirement(raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
+  if (!r.ok || r.value.kind !== 'compression') throw new Error(JSON.stringify(r));
   return r.value;
 }
 
 /** The same space with the full engine (spec, analysis, review, requirement check) at every grid point. */
-function engineEverywhere(r: Requirement, settings: Settings): number {
+function engineEverywhere(r: CompressionRequirement, settings: Settings): number {
   const req = requirementInternal(r);
   let feasible = 0;
   for (const wire of wireChoices(req, settings)) {

@@ -1,17 +1,14 @@
-import type { RequirementInternal } from '../requirement';
-import type { DesignPoint } from './space';
+import type { PointKey } from './frame';
 import type { LimitCode, Miss } from './misses';
 import type { WireChoice } from './wire-sizes';
 
 /** The design point that came nearest to meeting the requirement, and how often each limit ruled points out. */
 export class Closest {
-  point: DesignPoint | null = null;
+  point: PointKey | null = null;
   wire: WireChoice | null = null;
   misses: Miss[] = [];
   score = Infinity;
   readonly counts = new Map<LimitCode, number>();
-
-  constructor(readonly req: RequirementInternal) {}
 
   private count(misses: readonly Miss[]): void {
     for (let i = 0; i < misses.length; i++) {
@@ -22,7 +19,7 @@ export class Closest {
     }
   }
 
-  private take(score: number, misses: Miss[], point: DesignPoint | null, wire: WireChoice | null): void {
+  private take(score: number, misses: Miss[], point: PointKey | null, wire: WireChoice | null): void {
     if (score >= this.score) return;
     this.score = score;
     this.misses = misses;
@@ -31,7 +28,7 @@ export class Closest {
   }
 
   /** A point that missed: its score is its worst relative miss, plus a little for each further miss. */
-  offer(point: DesignPoint, misses: Miss[]): void {
+  offer(point: PointKey, misses: Miss[]): void {
     this.count(misses);
     let worst = 0;
     for (const m of misses) worst = Math.max(worst, m.relative);

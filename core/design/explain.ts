@@ -1,4 +1,6 @@
-import type { RequirementInternal } from '../requirement';
+import type { UnitSystem } from '../units';
+
+type RequirementInternal = { units: UnitSystem };
 import type { Quantity } from '../units';
 import { fromInternal, unitSymbol } from '../units';
 import { significant } from '../format';

@@ -16,6 +16,8 @@ export const limitLabels = {
   'solid-stress': 'stress at solid after set removal',
   'working-stress': 'stress at the shortest working length',
   'stress-ratio': 'maximum stress ratio',
+  'initial-tension': 'initial tension (the customer\'s window and the preferred window for the index)',
+  'hook-stress': 'stress in the loops',
   'set-removal': 'set removal within the trade\'s rules (set at least 10 % of the deflection to solid, stress ratio at most 1.3)',
   fatigue: 'fatigue safety factor (Goodman, infinite life)',
   review: 'the maker\'s review',

@@ -1,32 +1,21 @@
 import type { Settings } from '../settings/schema';
 import { estimateCost } from '../costing/estimate';
 import type { PriceBreak } from '../costing/types';
-import type { AcceptedDesign, CombinationResult } from './search';
-import type { RequirementInternal } from '../requirement';
+import type { AcceptedDesign, CombinationResult } from './frame';
 
 /** A design with its price at the main break, as the shop's own costing gives it for the spec alone. */
 export interface PricedDesign extends AcceptedDesign {
   price: PriceBreak;
   priced: boolean;
   missing: string[];
-  stressMargin: number;
-}
-
-/** Allowable ÷ stress at the shortest working length, less one, as the review compares them. */
-export function stressMargin(req: RequirementInternal, d: AcceptedDesign): number {
-  const r = d.report;
-  const share = (r.freeLength - req.deepestLength) / (r.freeLength - r.solidLength);
-  const set = r.setRemoval.required;
-  const stressed = share * (set ? r.stressAtSolidUncorrected : r.stressAtSolid);
-  return (set ? r.allowableStressSetRemoved : r.allowableStress) / stressed - 1;
 }
 
 /** Costs one design alone with the public costing, at one quantity. */
-export function priceDesign(req: RequirementInternal, d: AcceptedDesign, settings: Settings, quantity: number): PricedDesign {
+export function priceDesign(d: AcceptedDesign, settings: Settings, quantity: number): PricedDesign {
   const estimate = estimateCost(d.spec, settings, [quantity]);
   return {
     ...d, price: estimate.breaks[0]!, priced: estimate.missing.length === 0,
-    missing: estimate.missing.map((m) => m.message), stressMargin: stressMargin(req, d),
+    missing: estimate.missing.map((m) => m.message),
   };
 }
 
@@ -48,10 +37,10 @@ export function withoutNeedlessPeening(found: readonly CombinationResult[]): Com
 }
 
 /** The cheapest design of each combination (its designs share a routing but for set removal), ranked. */
-export function rankCombinations(req: RequirementInternal, found: readonly CombinationResult[], settings: Settings, quantity: number): PricedDesign[] {
+export function rankCombinations(found: readonly CombinationResult[], settings: Settings, quantity: number): PricedDesign[] {
   const best: PricedDesign[] = [];
   for (const c of withoutNeedlessPeening(found)) {
-    const priced = c.designs.map((d) => priceDesign(req, d, settings, quantity)).sort(compareDesigns);
+    const priced = c.designs.map((d) => priceDesign(d, settings, quantity)).sort(compareDesigns);
     best.push(priced[0]!);
   }
   return best.sort(compareDesigns);

@@ -90,7 +90,7 @@ function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProper
 }
 
 /** Limits that rule out a whole grade: cyclic duty on a grade not made for it, a service temperature outside its range. */
-export function gradeMisses(req: RequirementInternal, grade: WireGrade): Miss[] {
+export function gradeMisses(req: Pick<RequirementInternal, 'duty' | 'serviceTemperature'>, grade: WireGrade): Miss[] {
   const out: Miss[] = [];
   if (req.duty.type === 'cyclic' && !grade.dynamicGrade) {
     out.push({ limit: 'grade-duty', path: 'duty', quantity: 'count', value: 0, bound: 1, sense: 'min', relative: 1,

@@ -1,11 +1,12 @@
 import type { Settings } from '../settings/schema';
-import type { Requirement, RequirementInternal } from '../requirement';
+import type { CompressionRequirement, RequirementInternal } from '../requirement';
 import { requirementInternal } from '../requirement';
 import { wireProperties } from '../materials';
 import type { WireProperties } from '../materials/types';
 import { analyseSpec } from '../calculate';
 import type { CompressionReport } from '../springs/compression/report';
-import type { CompressionSpec, CompressionEnds } from '../spec/compression';
+import type { CompressionEnds } from '../spec/compression';
+import type { AcceptedDesign, CombinationResult, SearchStats } from './frame';
 import { endForms } from '../springs/compression/ends';
 import type { DesignPoint, DesignSteps } from './space';
 import { designPoint, isEmptyGrid, meanDiameterGrid, meanDiameterRange, necessaryDiameterRange, pointSpec } from './space';
@@ -15,35 +16,21 @@ import type { Miss } from './misses';
 import type { WireChoice } from './wire-sizes';
 import { wireChoices } from './wire-sizes';
 import { Closest } from './closest';
-
-/** A design the engine accepted: the point, its spec and the engine's report. */
-export interface AcceptedDesign {
-  point: DesignPoint;
-  spec: CompressionSpec;
-  report: CompressionReport;
-}
-
-/** The designs of one wire, end type and peening worth costing: the least wire, and the least wire without set removal. */
-export interface CombinationResult {
-  wire: WireChoice;
-  ends: CompressionEnds;
-  peened: boolean;
-  designs: AcceptedDesign[];
-}
+import { compressionFigures } from './figures';
 
 export interface SearchOutcome {
   req: RequirementInternal;
   combinations: CombinationResult[];
   closest: Closest;
-  stats: { wires: number; combinations: number; points: number; engineRuns: number };
+  stats: SearchStats;
 }
 
 interface Context {
-  r: Requirement;
+  r: CompressionRequirement;
   req: RequirementInternal;
   steps: DesignSteps;
   closest: Closest;
-  stats: SearchOutcome['stats'];
+  stats: SearchStats;
 }
 
 function engineCheck(ctx: Context, point: DesignPoint): AcceptedDesign | null {
@@ -51,9 +38,21 @@ function engineCheck(ctx: Context, point: DesignPoint): AcceptedDesign | null {
   const spec = pointSpec(ctx.r, point);
   const report = analyseSpec(spec);
   const misses: Miss[] = requirementMisses(ctx.req, report);
-  if (misses.length === 0) return { point, spec, report };
+  if (misses.length === 0) {
+    const margin = stressMargin(ctx.req, report);
+    return { point, spec, report, setRemoval: report.setRemoval.required, stressMargin: margin, wireLength: report.wireLength,
+      figures: compressionFigures(report, ctx.req.units, margin, point.peened) };
+  }
   ctx.closest.offer(point, misses);
   return null;
+}
+
+/** Allowable ÷ stress at the shortest working length, less one, as the review compares them. */
+export function stressMargin(req: RequirementInternal, r: CompressionReport): number {
+  const share = (r.freeLength - req.deepestLength) / (r.freeLength - r.solidLength);
+  const set = r.setRemoval.required;
+  const stressed = share * (set ? r.stressAtSolidUncorrected : r.stressAtSolid);
+  return (set ? r.allowableStressSetRemoved : r.allowableStress) / stressed - 1;
 }
 
 /** Walks one combination's diameters; the engine then judges survivors in order of wire used. */
@@ -77,7 +76,7 @@ function searchCombination(ctx: Context, wire: WireChoice, props: WireProperties
     const accepted = engineCheck(ctx, s.point);
     if (!accepted) continue;
     if (designs.length === 0) designs.push(accepted);
-    if (!accepted.report.setRemoval.required) {
+    if (!accepted.setRemoval) {
       if (designs[0] !== accepted) designs.push(accepted);
       break;
     }
@@ -89,9 +88,9 @@ function searchCombination(ctx: Context, wire: WireChoice, props: WireProperties
  * Every wire × end type (× peened, when cyclic duty allows it): the mean diameters in the envelope, the
  * coils for the rate, screened with the engine's formulas, the survivors analysed and reviewed by the engine.
  */
-export function searchCompression(r: Requirement, settings: Settings): SearchOutcome {
+export function searchCompression(r: CompressionRequirement, settings: Settings): SearchOutcome {
   const req = requirementInternal(r);
-  const ctx: Context = { r, req, steps: settings.design, closest: new Closest(req), stats: { wires: 0, combinations: 0, points: 0, engineRuns: 0 } };
+  const ctx: Context = { r, req, steps: settings.design, closest: new Closest(), stats: { wires: 0, combinations: 0, points: 0, engineRuns: 0 } };
   const wires = wireChoices(req, settings);
   ctx.stats.wires = wires.length;
   const peening = req.duty.type === 'cyclic' && req.duty.peeningAllowed ? [false, true] : [false];

@@ -1,5 +1,5 @@
 import type { CompressionEnds, CompressionSpec } from '../spec/compression';
-import type { Requirement, RequirementInternal } from '../requirement';
+import type { CompressionRequirement, RequirementInternal } from '../requirement';
 import type { WireProperties } from '../materials/types';
 import { lengthDecimals } from '../format';
 import { fromInternal, toInternal } from '../units';
@@ -124,10 +124,10 @@ export function designPoint(
   return { grade, d, D, ends, na, nt: na + inactive, L0: roundedLength(req, centredFreeLength(req, rate)), peened };
 }
 
-const out = (v: number, units: Requirement['units']) => fromInternal(v, 'length', units);
+const out = (v: number, units: CompressionRequirement['units']) => fromInternal(v, 'length', units);
 
 /** The spec of a design point, in the requirement's units, with the requirement's loads, duty and order choices. */
-export function pointSpec(r: Requirement, p: DesignPoint): CompressionSpec {
+export function pointSpec(r: CompressionRequirement, p: DesignPoint): CompressionSpec {
   const f = r.function;
   const loads = f.type === 'two-loads' ? f.loads : [f.load];
   const duty: CompressionSpec['duty'] = r.duty.type === 'static' ? { type: 'static' }

@@ -1,4 +1,4 @@
-import type { CompressionSpec } from '../spec/compression';
+import type { Spec } from '../spec';
 import type { LimitCode } from './misses';
 
 /** Key figures of a designed spring, in the requirement's units. */
@@ -10,15 +10,21 @@ export interface CandidateFigures {
   innerDiameter: number;
   meanDiameter: number;
   springIndex: number;
-  ends: CompressionSpec['ends'];
+  /** The end type; for an extension spring, the loop at both ends. */
+  ends: string;
   activeCoils: number;
+  /** Total coils of a compression spring, body coils of an extension spring. */
   totalCoils: number;
+  /** Inside the ends for an extension spring. */
   freeLength: number;
-  solidLength: number;
+  /** Compression only. */
+  solidLength: number | null;
   rate: number;
+  /** Extension only: the force the coils are wound together with. */
+  initialTension: number | null;
   forces: { length: number; force: number; asked: number }[];
-  /** Corrected stress at solid ÷ allowable before set removal. */
-  stressRatio: number;
+  /** Compression: corrected stress at solid ÷ allowable before set removal. */
+  stressRatio: number | null;
   /** Allowable ÷ stress at the shortest working length, less one: the search's second ranking key. */
   stressMargin: number;
   setRemoval: boolean;
@@ -30,7 +36,7 @@ export interface CandidateFigures {
 
 export interface DesignCandidate {
   rank: number;
-  spec: CompressionSpec;
+  spec: Spec;
   figures: CandidateFigures;
   quantity: number;
   unitPrice: number;
@@ -68,8 +74,8 @@ export interface Infeasibility {
 }
 
 export interface DesignAnswer {
-  kind: 'compression';
-  units: CompressionSpec['units'];
+  kind: Spec['kind'];
+  units: Spec['units'];
   mainQuantity: number;
   currency: string;
   candidates: DesignCandidate[];

@@ -2,7 +2,15 @@ import type { Settings } from '../settings/schema';
 import { wireGrades } from '../materials';
 import type { WireGrade } from '../materials/types';
 import { wirePrice } from '../costing/estimate';
-import type { RequirementInternal } from '../requirement';
+import type { GradeFamily } from '../materials/types';
+import type { WireSizeSource } from '../requirement';
+
+/** What the wire list reads from a requirement of any kind. */
+export interface WireAsk {
+  grades?: string[] | undefined;
+  families?: GradeFamily[] | undefined;
+  wireSizes: WireSizeSource;
+}
 
 /**
  * Nominal wire diameters (mm) as EN 10270-1 lists them in its strength table: 0.30 to 0.45 in 0.05 steps,
@@ -27,7 +35,7 @@ export interface WireChoice {
   d: number;
 }
 
-function allowedGrades(req: RequirementInternal): WireGrade[] {
+function allowedGrades(req: WireAsk): WireGrade[] {
   return wireGrades.filter((g) =>
     (req.grades === undefined || req.grades.includes(g.id)) && (req.families === undefined || req.families.includes(g.family)));
 }
@@ -38,7 +46,7 @@ const inRange = (g: WireGrade, d: number) => d >= g.diameterRange.min * (1 - 1e-
  * The wires to try: each stocked grade and size ("stock"), the standard sizes the price list covers
  * ("priced"), or every standard size the grade is made in ("preferred"); always inside the grade's range.
  */
-export function wireChoices(req: RequirementInternal, settings: Settings): WireChoice[] {
+export function wireChoices(req: WireAsk, settings: Settings): WireChoice[] {
   const grades = allowedGrades(req);
   const out: WireChoice[] = [];
   if (req.wireSizes === 'stock') {

@@ -1,15 +1,24 @@
 import type { Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
+import { z } from 'zod';
 import { compressionRequirementSchema } from './schema';
-import type { Requirement } from './schema';
 import { compressionRequirementErrors } from './rules';
+import { extensionRequirementSchema } from './extension';
+import { extensionRequirementErrors } from './extension-rules';
 
 export * from './schema';
+export * from './extension';
 export { requirementInternal } from './internal';
 export type { RequirementInternal } from './internal';
+export { extensionRequirementInternal } from './extension-internal';
+export type { ExtensionRequirementInternal } from './extension-internal';
 
-export const requirementKinds = ['compression'] as const;
+/** The requirement of any kind the search designs. */
+export const requirementSchema = z.discriminatedUnion('kind', [compressionRequirementSchema, extensionRequirementSchema]);
+export type Requirement = z.infer<typeof requirementSchema>;
+
+export const requirementKinds = ['compression', 'extension'] as const;
 
 /** Validates raw input as a requirement. Never throws: every problem comes back with the field it concerns. */
 export function parseRequirement(raw: unknown): Result<Requirement> {
@@ -17,14 +26,14 @@ export function parseRequirement(raw: unknown): Result<Requirement> {
     return fail([fieldError('not-an-object', '', 'a requirement must be a JSON object')]);
   }
   const kind = (raw as { kind?: unknown }).kind;
-  if (kind !== 'compression') {
-    const known = kind === 'extension' || kind === 'torsion';
-    return fail([fieldError(known ? 'kind-not-searched' : 'invalid-kind', 'kind', known
-      ? `designing ${String(kind)} springs from a requirement is not available yet: only compression`
+  if (kind !== 'compression' && kind !== 'extension') {
+    return fail([fieldError(kind === 'torsion' ? 'kind-not-searched' : 'invalid-kind', 'kind', kind === 'torsion'
+      ? 'designing torsion springs from a requirement is not available yet: compression and extension only'
       : `kind must be one of: ${requirementKinds.join(', ')}`)]);
   }
-  const parsed = compressionRequirementSchema.safeParse(raw);
+  const parsed = requirementSchema.safeParse(raw);
   if (!parsed.success) return fail(zodErrors(parsed.error));
-  const errors = compressionRequirementErrors(parsed.data);
-  return errors.length > 0 ? fail(errors) : ok(parsed.data);
+  const r = parsed.data;
+  const errors = r.kind === 'compression' ? compressionRequirementErrors(r) : extensionRequirementErrors(r);
+  return errors.length > 0 ? fail(errors) : ok(r);
 }

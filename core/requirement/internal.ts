@@ -3,10 +3,11 @@ import { toInternal } from '../units';
 import { DEFAULT_LOAD_TOLERANCE_PERCENT } from '../springs/specified';
 import type { CompressionEnds, Seating } from '../spec/compression';
 import type { GradeFamily } from '../materials/types';
-import type { Requirement, WireSizeSource } from './schema';
+import type { CompressionRequirement, WireSizeSource } from './schema';
 
 /** A requirement in internal units (mm, N, N/mm, °C), with the target rate and the loads longest first. */
 export interface RequirementInternal {
+  kind: 'compression';
   units: UnitSystem;
   envelope: { bore?: number; maxOuterDiameter?: number; rod?: number; minInnerDiameter?: number; maxSolidLength?: number; maxFreeLength?: number };
   /** Longest length first; each with its tolerance (± %) and its path in the requirement. */
@@ -27,7 +28,7 @@ export interface RequirementInternal {
   wireSizes: WireSizeSource;
 }
 
-export function requirementInternal(r: Requirement): RequirementInternal {
+export function requirementInternal(r: CompressionRequirement): RequirementInternal {
   const mm = (v: number | undefined) => (v === undefined ? undefined : toInternal(v, 'length', r.units));
   const N = (v: number) => toInternal(v, 'force', r.units);
   const f = r.function;
@@ -43,7 +44,7 @@ export function requirementInternal(r: Requirement): RequirementInternal {
   const e = r.envelope;
   const t = r.serviceTemperature;
   return {
-    units: r.units,
+    kind: 'compression', units: r.units,
     envelope: { bore: mm(e.bore), maxOuterDiameter: mm(e.maxOuterDiameter), rod: mm(e.rod), minInnerDiameter: mm(e.minInnerDiameter),
       maxSolidLength: mm(e.maxSolidLength), maxFreeLength: mm(e.maxFreeLength) },
     loads, rate,

@@ -88,6 +88,3 @@ export type CompressionRequirementInput = z.input<typeof compressionRequirementS
 export type LoadPoint = z.infer<typeof loadPointSchema>;
 export type WireSizeSource = z.infer<typeof wireSizeSourceSchema>;
 
-/** Kinds a requirement may name; only compression is searched so far. */
-export const requirementSchema = compressionRequirementSchema;
-export type Requirement = CompressionRequirement;

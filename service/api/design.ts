@@ -2,9 +2,7 @@ import { inputError } from '../../core/api';
 import type { designMethods } from '../../core/api/design';
 import { designFromRequirement } from '../../core/design';
 import { parseRequirement } from '../../core/requirement';
-import { requirementInternal } from '../../core/requirement';
-import { requirementMisses } from '../../core/design';
-import { analyseSpec } from '../../core/calculate';
+import { specMisses } from '../../core/design';
 import { parseSpec } from '../../core/spec';
 import type { FieldError } from '../../core/result';
 import { adoptDesign, getSettings, jobRequirement } from '../../db';
@@ -26,10 +24,7 @@ export function designHandlers(ctx: StoreContext): TypedHandlers<keyof typeof de
       if (!r.ok) return { ok: false, error: inputError(under('requirement', r.errors)) };
       const s = parseSpec(spec);
       if (!s.ok) return { ok: false, error: inputError(under('spec', s.errors)) };
-      if (s.value.kind !== 'compression') {
-        return { ok: false, error: { code: 'kind-mismatch', message: 'the spec is not of the requirement\'s kind', path: 'spec.kind' } };
-      }
-      const misses = requirementMisses(requirementInternal(r.value), analyseSpec(s.value));
+      const misses = specMisses(r.value, s.value);
       if (misses.length > 0) {
         return { ok: false, error: { code: 'spec-misses-requirement', path: 'spec',
           message: `the spec does not meet the requirement (${misses.map((m) => m.note ?? m.limit).join('; ')}): run the design search again` } };

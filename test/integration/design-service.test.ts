@@ -40,7 +40,7 @@ describe('design methods over the store (demo shop)', () => {
     const made = await dispatch(service.handlers, 'adoptDesign', { requirement: valveSeat, spec: second.spec, job: { partNumber: 'VS-20 (demo)' } });
     expect(made.ok).toBe(true);
     const job = (made as { value: Job }).value;
-    expect(job.spec).toMatchObject({ material: second.spec.material, totalCoils: second.spec.totalCoils, freeLength: second.spec.freeLength });
+    expect(job.spec).toEqual(second.spec);
     const kept = await dispatch(service.handlers, 'jobRequirement', { jobId: job.id });
     expect(kept).toMatchObject({ ok: true, value: { jobId: job.id, jobRevision: 1, requirement: { envelope: { bore: 20 } } } });
 
@@ -56,7 +56,7 @@ describe('design methods over the store (demo shop)', () => {
   it('refuses a spec that does not meet the requirement, and writes nothing', async () => {
     const service = await demoService();
     const a = ((await dispatch(service.handlers, 'designSprings', { requirement: valveSeat })) as { value: DesignAnswer }).value;
-    const spoiled = { ...a.candidates[0]!.spec, totalCoils: a.candidates[0]!.spec.totalCoils! + 3 };
+    const spoiled = { ...a.candidates[0]!.spec, totalCoils: a.candidates[0]!.figures.totalCoils + 3 };
     const before = await dispatch(service.handlers, 'listJobs', {});
     const refused = await dispatch(service.handlers, 'adoptDesign', { requirement: valveSeat, spec: spoiled });
     expect(refused).toMatchObject({ ok: false, error: { code: 'spec-misses-requirement', path: 'spec' } });
@@ -82,6 +82,14 @@ describe('command line: design', () => {
     expect(a.candidates.length).toBe(4);
     for (const c of a.candidates) expect(c.spec).toMatchObject({ kind: 'compression', units: 'metric' });
     expect(a.caution).toMatch(/qualified engineer/);
+  });
+
+  it('designs the example extension spring the same way', () => {
+    const run = cli(['design', join(root, 'examples', 'lid-stay.requirement.json'), '--db', db, '--limit', '2']);
+    expect(run.status, run.stderr).toBe(0);
+    const a = JSON.parse(run.stdout) as DesignAnswer;
+    expect(a.kind).toBe('extension');
+    expect(a.candidates.map((c) => c.spec.kind)).toEqual(['extension', 'extension']);
   });
 
   it('answers bad input with field errors and exit code 2', () => {

@@ -154,8 +154,8 @@ function searched(raw: RequirementInput) {
   const out = new Map<string, { least: number; leastWithoutSet: number }>();
   for (const c of searchCompression(requirementOf(raw), demoShop).combinations) {
     const key = `${c.wire.grade.id}|${c.wire.d}|${c.ends}|${c.peened}`;
-    const noSet = c.designs.find((d) => !d.report.setRemoval.required);
-    out.set(key, { least: c.designs[0]!.report.wireLength, leastWithoutSet: noSet ? noSet.report.wireLength : Infinity });
+    const noSet = c.designs.find((d) => !d.setRemoval);
+    out.set(key, { least: c.designs[0]!.wireLength, leastWithoutSet: noSet ? noSet.wireLength : Infinity });
   }
   return out;
 }

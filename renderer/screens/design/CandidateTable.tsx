@@ -39,7 +39,7 @@ export function CandidateTable({ answer, busy, onMake }: Props) {
                 <td className="num">{f.totalCoils}</td>
                 <td>{f.ends}</td>
                 <td className="num">{len(f.freeLength)}</td>
-                <td className="num">{len(f.solidLength)}</td>
+                <td className="num">{f.solidLength === null ? '—' : len(f.solidLength)}</td>
                 <td className="num">{f.forces.map((x) => significant(x.force)).join(' / ')}</td>
                 <td>{[f.setRemoval ? 'set removal' : '', f.shotPeened ? 'shot peened' : ''].filter(Boolean).join(', ') || '—'}</td>
                 <td className="num">{significant(100 * f.stressMargin, 2)} %</td>
