@@ -68,4 +68,27 @@ describe('design from the customer\'s requirement', { timeout: UI_TEST_TIMEOUT }
     await screenshot(page, 'design-job');
     expect(errors).toEqual([]);
   });
+
+  it('designs an extension spring in the same screen', async () => {
+    await page.getByRole('button', { name: 'Design from requirement' }).click();
+    await page.getByRole('heading', { name: 'Design from the customer\'s requirement', level: 1 }).waitFor();
+    await field(page, 'Kind of spring').selectOption('extension');
+    await field(page, 'Units').selectOption('metric');
+    await fill('Maximum OD (mm)', '14');
+    await fill('Maximum free length inside the ends (mm)', '55');
+    await fill('Length L1 (mm)', '60');
+    await fill('Force F1 (N)', '20');
+    await fill('Length L2 (mm)', '80');
+    await fill('Force F2 (N)', '45');
+    await page.getByLabel('The assembly has a stop').check();
+    await field(page, 'Wire to try').selectOption('priced');
+    await page.getByRole('button', { name: 'Find designs' }).click();
+    const table = page.getByRole('table', { name: 'Designs that meet the requirement, cheapest first' });
+    await table.waitFor();
+    await expect(table.getByRole('columnheader', { name: 'Body coils' }).count()).resolves.toBe(1);
+    expect(await table.locator('tbody tr').count()).toBeGreaterThan(0);
+    await table.scrollIntoViewIfNeeded();
+    await screenshot(page, 'design-extension');
+    expect(errors).toEqual([]);
+  });
 });

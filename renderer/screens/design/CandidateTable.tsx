@@ -22,7 +22,7 @@ export function CandidateTable({ answer, busy, onMake }: Props) {
         <thead>
           <tr>
             <th className="num">#</th><th>Wire</th><th className="num">d ({mm})</th><th className="num">OD ({mm})</th>
-            <th className="num">Total coils</th><th>Ends</th><th className="num">L0 ({mm})</th><th className="num">Solid ({mm})</th>
+            <th className="num">{answer.kind === 'extension' ? 'Body coils' : 'Total coils'}</th><th>Ends</th><th className="num">L0 ({mm})</th><th className="num">{answer.kind === 'extension' ? `Initial tension (${unitSymbol('force', u)})` : `Solid (${mm})`}</th>
             <th className="num">Forces ({unitSymbol('force', u)})</th><th>Process</th><th className="num">Margin</th>
             <th className="num">Unit price at {answer.mainQuantity}</th><th>Why it ranks lower</th><th><span className="sr-only">Action</span></th>
           </tr>
@@ -39,7 +39,7 @@ export function CandidateTable({ answer, busy, onMake }: Props) {
                 <td className="num">{f.totalCoils}</td>
                 <td>{f.ends}</td>
                 <td className="num">{len(f.freeLength)}</td>
-                <td className="num">{f.solidLength === null ? '—' : len(f.solidLength)}</td>
+                <td className="num">{f.solidLength !== null ? len(f.solidLength) : f.initialTension !== null ? significant(f.initialTension) : '—'}</td>
                 <td className="num">{f.forces.map((x) => significant(x.force)).join(' / ')}</td>
                 <td>{[f.setRemoval ? 'set removal' : '', f.shotPeened ? 'shot peened' : ''].filter(Boolean).join(', ') || '—'}</td>
                 <td className="num">{significant(100 * f.stressMargin, 2)} %</td>
