@@ -92,6 +92,19 @@ describe('command line: design', () => {
     expect(a.candidates.map((c) => c.spec.kind)).toEqual(['extension', 'extension']);
   });
 
+  it('runs the search again for a job from the requirement kept with it', async () => {
+    const service = createService(openStore(db));
+    const a = ((await dispatch(service.handlers, 'designSprings', { requirement: valveSeat })) as { value: DesignAnswer }).value;
+    const made = (await dispatch(service.handlers, 'adoptDesign', { requirement: valveSeat, spec: a.candidates[0]!.spec })) as { value: Job };
+    service.close();
+    const run = cli(['design', '--job', String(made.value.id), '--db', db, '--limit', '2']);
+    expect(run.status, run.stderr).toBe(0);
+    expect((JSON.parse(run.stdout) as DesignAnswer).candidates[0]!.spec).toEqual(a.candidates[0]!.spec);
+    const none = cli(['design', '--job', '1', '--db', db]);
+    expect(none.status).toBe(2);
+    expect(JSON.parse(none.stderr).errors[0].code).toBe('no-requirement');
+  });
+
   it('answers bad input with field errors and exit code 2', () => {
     const file = join(dir, 'bad.requirement.json');
     writeFileSync(file, JSON.stringify({ ...valveSeat, function: { type: 'two-loads', loads: [{ length: 40, force: 60 }] } }));
