@@ -9,6 +9,7 @@ import { analyseSpec } from '../calculate';
 import { REVIEW_CAUTION, STORED_ENERGY_CAUTION } from '../documents/cautions';
 import { searchCompression } from './search';
 import { searchExtension } from './extension-search';
+import { searchTorsion, torsionMisses, torsionRequirementInternal } from './torsion-search';
 import { rankCombinations } from './rank';
 import { lossReasons } from './reasons';
 import { explainInfeasible } from './explain';
@@ -22,6 +23,7 @@ export type * from './types';
 export type { Miss } from './misses';
 export { searchCompression } from './search';
 export { searchExtension } from './extension-search';
+export { searchTorsion } from './torsion-search';
 export { requirementMisses } from './accept';
 export { guideClearance } from './clearance';
 export { standardWireSizes, wireChoices } from './wire-sizes';
@@ -42,6 +44,7 @@ export function specMisses(r: Requirement, spec: Spec): Miss[] {
   }
   if (r.kind === 'compression' && spec.kind === 'compression') return requirementMisses(requirementInternal(r), analyseSpec(spec));
   if (r.kind === 'extension' && spec.kind === 'extension') return extensionMisses(extensionRequirementInternal(r), analyseSpec(spec));
+  if (r.kind === 'torsion' && spec.kind === 'torsion') return torsionMisses(torsionRequirementInternal(r), analyseSpec(spec));
   return [];
 }
 
@@ -56,7 +59,8 @@ export function designFromRequirement(raw: unknown, settings: Settings, limit = 
   const finish = finishError(r, settings);
   if (finish) return fail([finish]);
   const quantity = r.choices.mainQuantity ?? r.choices.quantities?.[0] ?? DEFAULT_QUANTITIES[0]!;
-  const outcome = r.kind === 'compression' ? searchCompression(r, settings) : searchExtension(r, settings);
+  const outcome = r.kind === 'compression' ? searchCompression(r, settings)
+    : r.kind === 'extension' ? searchExtension(r, settings) : searchTorsion(r, settings);
   const ranked = rankCombinations(outcome.combinations, settings, quantity);
   const top = ranked.slice(0, limit);
   const reasons = lossReasons(top, settings, quantity);

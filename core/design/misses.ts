@@ -18,6 +18,7 @@ export const limitLabels = {
   'stress-ratio': 'maximum stress ratio',
   'initial-tension': 'initial tension (the customer\'s window and the preferred window for the index)',
   'hook-stress': 'stress in the loops',
+  arbor: 'arbor clearance (at least 10 % of the loaded inside diameter)',
   'set-removal': 'set removal within the trade\'s rules (set at least 10 % of the deflection to solid, stress ratio at most 1.3)',
   fatigue: 'fatigue safety factor (Goodman, infinite life)',
   review: 'the maker\'s review',

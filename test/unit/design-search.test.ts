@@ -55,9 +55,9 @@ describe('the requirement input', () => {
     expect(r.ok ? [] : r.errors.map((e) => e.path)).toEqual(['choices.finish']);
   });
 
-  it('says plainly that only compression springs are searched', () => {
-    const r = parseRequirement({ ...valveSeat, kind: 'torsion' });
-    expect(r.ok ? '' : r.errors[0]!.code).toBe('kind-not-searched');
+  it('names the kinds it knows for an unknown kind', () => {
+    const r = parseRequirement({ ...valveSeat, kind: 'leaf' });
+    expect(r.ok ? '' : r.errors[0]!.message).toBe('kind must be one of: compression, extension, torsion');
   });
 });
 
