@@ -6,8 +6,9 @@ import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { cliSuite } from './suites/cli';
+import { designSuite } from './suites/design';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, designSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];
