@@ -18,50 +18,69 @@ interface Candidate extends ShapePoint {
 const SHAPE_COLUMNS = `id, kind, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
   family AS materialFamily`;
 
-/** R*Tree coordinate names and the spec dimension each one holds. */
+/** R*Tree coordinate names and the spec dimension each one holds; the rate is scored from its stored value. */
 const BOX_DIMENSIONS = [
-  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'], ['rate', 'rate'],
+  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'],
 ] as const;
 
 /**
- * The geometric part of the distance, computed by SQLite on the R*Tree's own coordinates so that only
- * jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative error
- * below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
+ * The geometric part of the distance, computed by SQLite on the R*Tree's coordinates and the stored rate,
+ * so that only jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative
+ * error below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
  */
-const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c]) => `${WEIGHTS[dimensionOf(c)]} * abs(ln(${c}_min / ?))`).join(' + ');
+const GEOMETRY_SQL = [
+  ...BOX_DIMENSIONS.map(([c, key]) => `${WEIGHTS[key]} * abs(ln(${c}_min / ?))`),
+  `${WEIGHTS.rate} * abs(ln(rate / ?))`,
+].join(' + ');
 const GEOMETRY_MARGIN = 1e-5;
 
-function dimensionOf(column: (typeof BOX_DIMENSIONS)[number][0]): (typeof BOX_DIMENSIONS)[number][1] {
-  return BOX_DIMENSIONS.find(([c]) => c === column)![1];
-}
-
-/** Jobs inside the box around the asked spring (one range per coordinate) whose geometry is near enough. */
+/**
+ * Jobs of the asked kind inside the box around the asked spring (one range per coordinate) whose geometry
+ * is near enough. The kind is the tree's first dimension, so a rare kind reads only its own jobs.
+ */
 export const BOX_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape
-  WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
+  WHERE kind_min <= ? AND kind_max >= ?
+    AND ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
     AND ${GEOMETRY_SQL} <= ?`;
 
-const ALL_OF_KIND_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind = ?`;
+const ALL_OF_KIND_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind_min <= ? AND kind_max >= ? AND kind = ?`;
 
-/** Every job of the kind, read straight through the jobs table: the bench's full-scan baseline. */
-export const SCAN_SQL = `SELECT id, kind, d AS wireDiameter, mean_diameter AS meanDiameter, free_length AS freeLength,
-  active_coils AS activeCoils, rate, material, material_family AS materialFamily FROM jobs NOT INDEXED WHERE kind = ?`;
+/** Every job of the kind, read straight through the shape table's stored values: the bench's full-scan baseline. */
+export const SCAN_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind = ?`;
 
-const START_RADIUS = 0.25;
+const KIND_CODE_SQL = 'SELECT code FROM spring_kind_codes WHERE kind = ?';
+const KIND_COUNT_SQL = 'SELECT coalesce(sum(n), 0) AS n FROM job_counts WHERE kind = ?';
+
 /** Past this radius the box holds nearly every job of the kind; reading them all is simpler. */
 const MAX_RADIUS = 6;
+
+/**
+ * Where the search starts. Jobs within distance r grow about as N·r⁴ (four independent dimensions: the
+ * rate follows from them), so a radius that finds about `limit` jobs among N of the kind scales as
+ * (limit/N)^¼. DENSITY_RADIUS is that radius for one job per job of the kind, measured on the bench's
+ * generated store; the search stays exact whatever the start, only its cost depends on it.
+ */
+const DENSITY_RADIUS = 1.1;
+const START_RADIUS_RANGE = [0.02, 0.5] as const;
+
+export function startRadius(limit: number, jobsOfKind: number): number {
+  if (jobsOfKind <= 0) return START_RADIUS_RANGE[1];
+  const r = DENSITY_RADIUS * (limit / jobsOfKind) ** 0.25;
+  return Math.min(START_RADIUS_RANGE[1], Math.max(START_RADIUS_RANGE[0], r));
+}
 
 /**
  * A job at distance ≤ r has, in each dimension, w·|ln(p/a)| ≤ r, so p lies within a·e^(±r/w): the box.
  * Inside it, SQLite drops jobs whose geometric distance alone is already over r.
  */
-function boxParams(a: JobShape, radius: number): unknown[] {
-  const params: unknown[] = [];
+function boxParams(a: JobShape, code: number, radius: number): unknown[] {
+  const params: unknown[] = [code, code];
   for (const [, key] of BOX_DIMENSIONS) {
     const spread = Math.exp(radius / WEIGHTS[key]);
     params.push(a[key] * spread, a[key] / spread);
   }
   for (const [, key] of BOX_DIMENSIONS) params.push(a[key]);
-  params.push(radius + GEOMETRY_MARGIN);
+  params.push(a.rate, radius + GEOMETRY_MARGIN);
   return params;
 }
 
@@ -83,15 +102,17 @@ function topScored(asked: JobShape, candidates: Candidate[], limit: number, excl
  * that radius finds every job at least as near, so the loop always ends with the exact answer.
  */
 export function nearestJobs(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
-  let radius = START_RADIUS;
+  const code = (store.sql(KIND_CODE_SQL).get(asked.kind) as { code: number } | undefined)?.code ?? 0;
+  const jobsOfKind = (store.sql(KIND_COUNT_SQL).get(asked.kind) as { n: number }).n;
+  let radius = startRadius(limit, jobsOfKind);
   while (radius <= MAX_RADIUS) {
-    const top = topScored(asked, store.sql(BOX_SQL).all(...boxParams(asked, radius)) as Candidate[], limit, exclude);
+    const top = topScored(asked, store.sql(BOX_SQL).all(...boxParams(asked, code, radius)) as Candidate[], limit, exclude);
     const kth = top.length === limit ? top[limit - 1]!.distance : Infinity;
     if (kth <= radius) return top;
     const within = top.filter((s) => s.distance <= radius).length;
     radius = Math.min(kth, radius * widening(within, limit));
   }
-  return topScored(asked, store.sql(ALL_OF_KIND_SQL).all(asked.kind) as Candidate[], limit, exclude);
+  return topScored(asked, store.sql(ALL_OF_KIND_SQL).all(code, code, asked.kind) as Candidate[], limit, exclude);
 }
 
 /**
