@@ -1,7 +1,10 @@
 import type Database from 'better-sqlite3';
 
-/** Kinds as numbers for the shape index's kind dimension; a new kind adds its row in its own migration. */
-export const KIND_CODES = [['compression', 1], ['extension', 2], ['torsion', 3]] as const;
+/** The kinds with a shape index of their own; a new kind adds its table in its own migration. */
+export const SHAPE_KINDS = ['compression', 'extension', 'torsion'] as const;
+
+/** The R*Tree of one kind's jobs: the name is built from the fixed list above, never from input. */
+export const shapeTable = (kind: (typeof SHAPE_KINDS)[number]): string => `job_shape_${kind}`;
 
 /** Every sort the job list offers, plain and under each single filter, each served by one index. */
 const LIST_INDEXES = `
@@ -20,12 +23,34 @@ const LIST_INDEXES = `
   CREATE INDEX jobs_by_material_customer ON jobs (material, customer_key, number);
 `;
 
-/** A kind with no code yet is indexed under 0: still found, since scoring checks the kind itself. */
-const KIND_CODE = 'coalesce((SELECT code FROM spring_kind_codes WHERE kind = new.kind), 0)';
+const SHAPE_VALUES = `new.id, new.d, new.d, new.mean_diameter, new.mean_diameter, new.free_length, new.free_length,
+  new.active_coils, new.active_coils, new.rate, new.rate, new.material, new.material_family, new.d, new.mean_diameter,
+  new.free_length, new.active_coils, new.rate`;
 
-const SHAPE_ROW = `${KIND_CODE}, ${KIND_CODE}, new.d, new.d, new.mean_diameter,
-  new.mean_diameter, new.free_length, new.free_length, new.active_coils, new.active_coils, new.kind, new.material,
-  new.material_family, new.d, new.mean_diameter, new.free_length, new.active_coils, new.rate`;
+/** One R*Tree per kind, kept by triggers that put each job in its own kind's tree. */
+function shapeTables(): string {
+  const tables = SHAPE_KINDS.map((kind) => `
+    CREATE VIRTUAL TABLE ${shapeTable(kind)} USING rtree(
+      id, d_min, d_max, dm_min, dm_max, l0_min, l0_max, na_min, na_max, rate_min, rate_max,
+      +material TEXT, +family TEXT, +d REAL, +dm REAL, +l0 REAL, +na REAL, +rate REAL
+    );
+    INSERT INTO ${shapeTable(kind)} SELECT id, d, d, mean_diameter, mean_diameter, free_length, free_length,
+      active_coils, active_coils, rate, rate, material, material_family, d, mean_diameter, free_length, active_coils, rate
+      FROM jobs WHERE kind = '${kind}';`).join('\n');
+  const put = SHAPE_KINDS.map((kind) => `INSERT INTO ${shapeTable(kind)} SELECT ${SHAPE_VALUES} WHERE new.kind = '${kind}';`).join('\n      ');
+  const remove = SHAPE_KINDS.map((kind) => `DELETE FROM ${shapeTable(kind)} WHERE id = old.id;`).join('\n      ');
+  return `${tables}
+    CREATE TRIGGER jobs_shape_insert AFTER INSERT ON jobs BEGIN
+      ${put}
+    END;
+    CREATE TRIGGER jobs_shape_update AFTER UPDATE OF d, mean_diameter, free_length, active_coils, rate, kind, material, material_family ON jobs BEGIN
+      ${remove}
+      ${put}
+    END;
+    CREATE TRIGGER jobs_shape_delete AFTER DELETE ON jobs BEGIN
+      ${remove}
+    END;`;
+}
 
 /**
  * A job list that stays instant at a million jobs, and a shape index partitioned by kind:
@@ -34,9 +59,9 @@ const SHAPE_ROW = `${KIND_CODE}, ${KIND_CODE}, new.d, new.d, new.mean_diameter,
  * - one index per sort under each filter the list offers, each ending in a unique key for keyset paging;
  * - job_counts holds how many jobs there are per status, kind and material (kept by triggers), so the
  *   list's total is a sum over a few hundred rows, not a count over every job;
- * - job_shape gains the kind as its first dimension, so a box query reads one kind's jobs only. SQLite's
- *   R*Tree takes at most five dimensions: the rate leaves the tree and is scored from its stored value
- *   (it follows from d, D and the coils within a material's modulus).
+ * - job_shape is split into one R*Tree per kind, so a search for a rare kind reads only that kind's jobs.
+ *   (A kind dimension inside one tree was tried: SQLite's R*Tree takes five dimensions at most, so the rate
+ *   had to leave the box, and searches for the common kind became several times slower.)
  */
 export function updateToVersion0009(db: Database.Database): void {
   db.exec(`
@@ -77,30 +102,10 @@ export function updateToVersion0009(db: Database.Database): void {
         ON CONFLICT (status, kind, material) DO UPDATE SET n = n + 1;
     END;
 
-    CREATE TABLE spring_kind_codes (kind TEXT PRIMARY KEY, code INTEGER NOT NULL UNIQUE) STRICT;
-    INSERT INTO spring_kind_codes VALUES ${KIND_CODES.map(([kind, code]) => `('${kind}', ${code})`).join(', ')};
-
     DROP TRIGGER jobs_shape_insert;
     DROP TRIGGER jobs_shape_update;
     DROP TRIGGER jobs_shape_delete;
     DROP TABLE job_shape;
-    CREATE VIRTUAL TABLE job_shape USING rtree(
-      id, kind_min, kind_max, d_min, d_max, dm_min, dm_max, l0_min, l0_max, na_min, na_max,
-      +kind TEXT, +material TEXT, +family TEXT, +d REAL, +dm REAL, +l0 REAL, +na REAL, +rate REAL
-    );
-    CREATE TRIGGER jobs_shape_insert AFTER INSERT ON jobs BEGIN
-      INSERT INTO job_shape VALUES (new.id, ${SHAPE_ROW});
-    END;
-    CREATE TRIGGER jobs_shape_update AFTER UPDATE OF d, mean_diameter, free_length, active_coils, rate, kind, material, material_family ON jobs BEGIN
-      DELETE FROM job_shape WHERE id = old.id;
-      INSERT INTO job_shape VALUES (new.id, ${SHAPE_ROW});
-    END;
-    CREATE TRIGGER jobs_shape_delete AFTER DELETE ON jobs BEGIN
-      DELETE FROM job_shape WHERE id = old.id;
-    END;
-    INSERT INTO job_shape SELECT j.id, coalesce(k.code, 0), coalesce(k.code, 0), j.d, j.d, j.mean_diameter, j.mean_diameter, j.free_length,
-      j.free_length, j.active_coils, j.active_coils, j.kind, j.material, j.material_family, j.d, j.mean_diameter,
-      j.free_length, j.active_coils, j.rate
-      FROM jobs j LEFT JOIN spring_kind_codes k ON k.kind = j.kind;
+    ${shapeTables()}
   `);
 }

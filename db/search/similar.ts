@@ -7,48 +7,43 @@ import type { JobRow } from '../jobs/rows';
 import { JOB_FROM, SUMMARY_COLUMNS, toSummary } from '../jobs/rows';
 import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
+import type { Spec } from '../../core/spec';
 import type { ShapePoint } from './similarity';
 import { WEIGHTS, describeDifferences, distance } from './similarity';
 
 interface Candidate extends ShapePoint {
   id: number;
-  kind: string;
 }
 
-const SHAPE_COLUMNS = `id, kind, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
+const SHAPE_COLUMNS = `id, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
   family AS materialFamily`;
 
-/** R*Tree coordinate names and the spec dimension each one holds; the rate is scored from its stored value. */
+/** Each kind's own R*Tree (migration 0009): a search reads only the jobs of the kind asked about. */
+const SHAPE_TABLES: Record<Spec['kind'], string> = {
+  compression: 'job_shape_compression', extension: 'job_shape_extension', torsion: 'job_shape_torsion',
+};
+
+/** R*Tree coordinate names and the spec dimension each one holds. */
 const BOX_DIMENSIONS = [
-  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'],
+  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'], ['rate', 'rate'],
 ] as const;
 
 /**
- * The geometric part of the distance, computed by SQLite on the R*Tree's coordinates and the stored rate,
- * so that only jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative
- * error below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
+ * The geometric part of the distance, computed by SQLite on the R*Tree's own coordinates so that only
+ * jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative error
+ * below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
  */
-const GEOMETRY_SQL = [
-  ...BOX_DIMENSIONS.map(([c, key]) => `${WEIGHTS[key]} * abs(ln(${c}_min / ?))`),
-  `${WEIGHTS.rate} * abs(ln(rate / ?))`,
-].join(' + ');
+const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c, key]) => `${WEIGHTS[key]} * abs(ln(${c}_min / ?))`).join(' + ');
 const GEOMETRY_MARGIN = 1e-5;
 
-/**
- * Jobs of the asked kind inside the box around the asked spring (one range per coordinate) whose geometry
- * is near enough. The kind is the tree's first dimension, so a rare kind reads only its own jobs.
- */
-export const BOX_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape
-  WHERE kind_min <= ? AND kind_max >= ?
-    AND ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
+/** Jobs inside the box around the asked spring (one range per coordinate) whose geometry is near enough. */
+export const boxSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}
+  WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
     AND ${GEOMETRY_SQL} <= ?`;
 
-const ALL_OF_KIND_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind_min <= ? AND kind_max >= ? AND kind = ?`;
+/** Every job of the kind, read from its shape table: the full scan, and the baseline the search is measured against. */
+export const scanSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}`;
 
-/** Every job of the kind, read straight through the shape table's stored values: the bench's full-scan baseline. */
-export const SCAN_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind = ?`;
-
-const KIND_CODE_SQL = 'SELECT code FROM spring_kind_codes WHERE kind = ?';
 const KIND_COUNT_SQL = 'SELECT coalesce(sum(n), 0) AS n FROM job_counts WHERE kind = ?';
 
 /** Past this radius the box holds nearly every job of the kind; reading them all is simpler. */
@@ -73,15 +68,20 @@ export function startRadius(limit: number, jobsOfKind: number): number {
  * A job at distance ≤ r has, in each dimension, w·|ln(p/a)| ≤ r, so p lies within a·e^(±r/w): the box.
  * Inside it, SQLite drops jobs whose geometric distance alone is already over r.
  */
-function boxParams(a: JobShape, code: number, radius: number): unknown[] {
-  const params: unknown[] = [code, code];
+function boxParams(a: JobShape, radius: number): unknown[] {
+  const params: unknown[] = [];
   for (const [, key] of BOX_DIMENSIONS) {
     const spread = Math.exp(radius / WEIGHTS[key]);
     params.push(a[key] * spread, a[key] / spread);
   }
   for (const [, key] of BOX_DIMENSIONS) params.push(a[key]);
-  params.push(a.rate, radius + GEOMETRY_MARGIN);
+  params.push(radius + GEOMETRY_MARGIN);
   return params;
+}
+
+/** The kind's shape table, or null for a kind the store does not index (no job of it can exist). */
+function kindOf(asked: JobShape): Spec['kind'] | null {
+  return Object.hasOwn(SHAPE_TABLES, asked.kind) ? asked.kind as Spec['kind'] : null;
 }
 
 type Scored = { id: number; distance: number };
@@ -89,7 +89,7 @@ type Scored = { id: number; distance: number };
 function topScored(asked: JobShape, candidates: Candidate[], limit: number, exclude?: number): Scored[] {
   const scored: Scored[] = [];
   for (const c of candidates) {
-    if (c.id !== exclude && c.kind === asked.kind) scored.push({ id: c.id, distance: distance(asked, c) });
+    if (c.id !== exclude) scored.push({ id: c.id, distance: distance(asked, c) });
   }
   scored.sort((x, y) => x.distance - y.distance || x.id - y.id);
   return scored.slice(0, limit);
@@ -102,17 +102,18 @@ function topScored(asked: JobShape, candidates: Candidate[], limit: number, excl
  * that radius finds every job at least as near, so the loop always ends with the exact answer.
  */
 export function nearestJobs(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
-  const code = (store.sql(KIND_CODE_SQL).get(asked.kind) as { code: number } | undefined)?.code ?? 0;
-  const jobsOfKind = (store.sql(KIND_COUNT_SQL).get(asked.kind) as { n: number }).n;
+  const kind = kindOf(asked);
+  if (kind === null) return [];
+  const jobsOfKind = (store.sql(KIND_COUNT_SQL).get(kind) as { n: number }).n;
   let radius = startRadius(limit, jobsOfKind);
   while (radius <= MAX_RADIUS) {
-    const top = topScored(asked, store.sql(BOX_SQL).all(...boxParams(asked, code, radius)) as Candidate[], limit, exclude);
+    const top = topScored(asked, store.sql(boxSql(kind)).all(...boxParams(asked, radius)) as Candidate[], limit, exclude);
     const kth = top.length === limit ? top[limit - 1]!.distance : Infinity;
     if (kth <= radius) return top;
     const within = top.filter((s) => s.distance <= radius).length;
     radius = Math.min(kth, radius * widening(within, limit));
   }
-  return topScored(asked, store.sql(ALL_OF_KIND_SQL).all(code, code, asked.kind) as Candidate[], limit, exclude);
+  return topScored(asked, store.sql(scanSql(kind)).all() as Candidate[], limit, exclude);
 }
 
 /**
@@ -127,7 +128,8 @@ function widening(within: number, limit: number): number {
 
 /** The same ranking by scoring every job of the kind: the baseline the pre-filter is measured against. */
 export function nearestJobsByScan(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
-  return topScored(asked, store.sql(SCAN_SQL).all(asked.kind) as Candidate[], limit, exclude);
+  const kind = kindOf(asked);
+  return kind === null ? [] : topScored(asked, store.sql(scanSql(kind)).all() as Candidate[], limit, exclude);
 }
 
 function hits(store: Store, asked: JobShape, scored: Scored[]): SimilarJob[] {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createJob, listJobs, setJobStatus } from '../../../db';
 import { countJobsSql, listJobsSql } from '../../../db/search/list';
-import { BOX_SQL } from '../../../db/search/similar';
+import { boxSql } from '../../../db/search/similar';
 import { FIND_SQL, NEWEST_BOUND_SQL } from '../../../db/search/text';
 import { listJobsSchema } from '../../../core/api/store';
 import type { Store } from '../../../db';
@@ -143,9 +143,9 @@ describe('query plans', () => {
 
   it('pre-filters similar jobs through the R*Tree alone', () => {
     const store = seeded();
-    const detail = plan(store, BOX_SQL, [1, 1, 3, 1, 20, 10, 60, 30, 12, 4, 2, 18, 50, 8, 3.5, 1]);
-    // One constraint on each of the ten box edges (kind, d, D, L0, coils: columns 0–9), and no read of the jobs table.
-    expect(detail).toMatch(/^SCAN job_shape VIRTUAL TABLE INDEX 2:([A-E]\d){10}$/);
+    const detail = plan(store, boxSql('compression'), [3, 1, 20, 10, 60, 30, 12, 4, 9, 2, 2, 18, 50, 8, 3.5, 1]);
+    // One constraint on each of the ten box edges (d, D, L0, coils, rate: columns 0–9), and no read of the jobs table.
+    expect(detail).toMatch(/^SCAN job_shape_compression VIRTUAL TABLE INDEX 2:([A-E]\d){10}$/);
     expect(detail.match(/\d(?=[A-E]|$)/g)!.sort()).toEqual(['0', '1', '2', '3', '4', '5', '6', '7', '8', '9']);
   });
 

@@ -9,7 +9,7 @@ const JOB = `INSERT INTO jobs (id, number, customer_id, status, spec, revision, 
   VALUES (?, ?, ?, ?, '{}', 1, 'x', 'x', ?, 'm', 'f', 'metric', 2, 18, 50, 8, 3)`;
 
 describe('migration 0009 (list and shape indexes)', () => {
-  it('fills the customer key, the counts and the kind-partitioned shape for jobs written before it, then keeps them in step', () => {
+  it('fills the customer key, the counts and each kind\'s shape index for jobs written before it, then keeps them in step', () => {
     const db = new Database(join(tempDir(), 'm9.db'));
     migrate(db, 3);
     db.exec("INSERT INTO customers (id, name, name_key, created_at, updated_at) VALUES (1, 'Quarry Gates', 'quarry gates', 'x', 'x')");
@@ -20,8 +20,9 @@ describe('migration 0009 (list and shape indexes)', () => {
     expect(keys()).toEqual([{ id: 1, customer_key: 'quarry gates' }, { id: 2, customer_key: '' }]);
     const counts = () => db.prepare('SELECT status, kind, n FROM job_counts WHERE n > 0 ORDER BY status, kind').all();
     expect(counts()).toEqual([{ status: 'draft', kind: 'compression', n: 1 }, { status: 'draft', kind: 'torsion', n: 1 }]);
-    const shape = () => db.prepare('SELECT id, kind_min, kind FROM job_shape ORDER BY id').all();
-    expect(shape()).toEqual([{ id: 1, kind_min: 1, kind: 'compression' }, { id: 2, kind_min: 3, kind: 'torsion' }]);
+    const shape = () => ['compression', 'extension', 'torsion'].map((kind) =>
+      (db.prepare(`SELECT id FROM job_shape_${kind} ORDER BY id`).all() as { id: number }[]).map((r) => r.id));
+    expect(shape()).toEqual([[1], [], [2]]);
 
     db.prepare(JOB).run(3, 'J-3', 1, 'quoted', 'extension');
     db.exec("UPDATE jobs SET status = 'quoted' WHERE id = 1");
@@ -30,7 +31,9 @@ describe('migration 0009 (list and shape indexes)', () => {
     db.exec('DELETE FROM jobs WHERE id = 3');
     expect(keys()).toEqual([{ id: 1, customer_key: 'ridge gates' }, { id: 2, customer_key: 'ridge gates' }]);
     expect(counts()).toEqual([{ status: 'draft', kind: 'torsion', n: 1 }, { status: 'quoted', kind: 'compression', n: 1 }]);
-    expect(shape()).toEqual([{ id: 1, kind_min: 1, kind: 'compression' }, { id: 2, kind_min: 3, kind: 'torsion' }]);
+    expect(shape()).toEqual([[1], [], [2]]);
+    db.exec("UPDATE jobs SET kind = 'extension' WHERE id = 1");
+    expect(shape()).toEqual([[], [1], [2]]);
     db.close();
   });
 });
