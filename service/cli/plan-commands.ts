@@ -54,8 +54,9 @@ export const sheetCommand: Command = {
   usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
   async run(args, out) {
     const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
-    const plan = planManufacture(spec, settingsFor(args, false), orderQuantity(args, fromFile, spec));
-    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec) }));
+    const settings = settingsFor(args, false);
+    const plan = planManufacture(spec, settings, orderQuantity(args, fromFile, spec));
+    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec, settings.defaults.setRemovalMethod) }));
   },
 };
 
