@@ -7,7 +7,7 @@ export type UnitSystem = 'metric' | 'inch';
 export type Quantity =
   | 'length' | 'force' | 'stress' | 'rate' | 'torque' | 'torqueRatePerTurn' | 'torqueRatePerDegree'
   | 'mass' | 'density' | 'temperature' | 'frequency' | 'angle' | 'count' | 'ratio' | 'percent'
-  | 'energy' | 'time' | 'lengthLong' | 'massBulk';
+  | 'energy' | 'time' | 'lengthLong' | 'massBulk' | 'minutes' | 'days' | 'money' | 'ordinal' | 'figure';
 
 // Exact definitions: 1 in = 25.4 mm; 1 lbf = 4.4482216152605 N; 1 lb = 0.45359237 kg (NIST SP 811, Appendix B).
 export const MM_PER_IN = 25.4;
@@ -38,6 +38,14 @@ const metric: Record<Quantity, UnitDef> = {
   percent: { factor: 1, symbol: '%' },
   energy: { factor: 1, symbol: 'N·mm' },
   time: { factor: 1, symbol: 's' },
+  minutes: { factor: 1, symbol: 'min' },
+  days: { factor: 1, symbol: 'd' },
+  // Money is in the shop's currency, named beside it; a unit system does not change it.
+  money: { factor: 1, symbol: '' },
+  /** A number that names rather than measures: a grade, a sequence number, a format version. */
+  ordinal: { factor: 1, symbol: '' },
+  /** A figure's natural size in drawing units; only its aspect ratio is used. */
+  figure: { factor: 1, symbol: '' },
 };
 
 const inch: Record<Quantity, UnitDef> = {
