@@ -1,7 +1,7 @@
 /**
  * What one kind of spring brings to every step, as one entry of the kind registry (./registry.ts). The
  * design type stays inside the entry: each kind's file checks that its design feeds its own analysis,
- * review, routing and inspection; the registry hands out only spec and report types.
+ * review, routing and inspection; the registry shows only what every design has, the coil body.
  */
 import type { z } from 'zod';
 import type { Field } from '../documents/types';
@@ -12,6 +12,7 @@ import type { Operation } from '../process/types';
 import type { FieldError, Finding } from '../result';
 import type { Settings } from '../settings/schema';
 import type { Spec, SpringKind } from '../spec';
+import type { CoilBody } from '../springs/coil-body';
 import type { CompressionReport } from '../springs/compression/report';
 import type { ExtensionReport } from '../springs/extension/report';
 import type { TorsionReport } from '../springs/torsion/report';
@@ -22,8 +23,8 @@ export type SpringReport = CompressionReport | ExtensionReport | TorsionReport;
 export type SpecOf<K extends SpringKind> = Extract<Spec, { kind: K }>;
 export type ReportOf<K extends SpringKind> = Extract<SpringReport, { kind: K }>;
 
-/** Methods (not arrow properties) on purpose: the registry holds each kind's design type as `unknown`. */
-export interface KindParts<S, X, R> {
+/** Methods (not arrow properties) on purpose: the registry holds each kind's design as its coil body. */
+export interface KindParts<S, X extends CoilBody, R> {
   schema: z.ZodType<S>;
   /** The checks the schema cannot express; each error names its field. */
   specErrors(spec: S): FieldError[];
@@ -59,7 +60,7 @@ export interface KindParts<S, X, R> {
 }
 
 /** One kind's entry; its design type is the kind's own business. */
-export type KindEntry<K extends SpringKind> = KindParts<SpecOf<K>, unknown, ReportOf<K>>;
+export type KindEntry<K extends SpringKind> = KindParts<SpecOf<K>, CoilBody, ReportOf<K>>;
 
 /** Builds one kind's entry, checking that its design, analysis and plan steps agree on their types. */
-export const kindEntry = <S, X, R>(parts: KindParts<S, X, R>): KindParts<S, X, R> => parts;
+export const kindEntry = <S, X extends CoilBody, R>(parts: KindParts<S, X, R>): KindParts<S, X, R> => parts;

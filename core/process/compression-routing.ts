@@ -1,5 +1,6 @@
 import type { CompressionDesign } from '../springs/compression/design';
 import type { CompressionReport } from '../springs/compression/report';
+import { coiledFreeLength } from '../springs/compression/coiled';
 import { endForms } from '../springs/compression/ends';
 import type { Settings } from '../settings/schema';
 import type { Operation } from './types';
@@ -8,7 +9,7 @@ import type { Draft, RoutingChoices } from './operations';
 import { finishOperations, inspect, machineOperation, pack, peen, sequenced, stressRelieve } from './operations';
 
 function coil(settings: Settings, x: CompressionDesign, r: CompressionReport, c: RoutingChoices): Draft {
-  const coiledLength = r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength;
+  const coiledLength = coiledFreeLength(r);
   const op = machineOperation(settings, x, 'coil', 'Coil and cut off', [
     { label: 'Outside diameter', value: r.outerDiameter, quantity: 'length' },
     { label: 'Wire diameter', value: x.d, quantity: 'length' },
@@ -30,7 +31,7 @@ function coil(settings: Settings, x: CompressionDesign, r: CompressionReport, c:
 
 function grind(settings: Settings, x: CompressionDesign, r: CompressionReport): Draft {
   return machineOperation(settings, x, 'grind', 'Grind ends', [
-    { label: 'Free length after grinding', value: r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength, quantity: 'length' },
+    { label: 'Free length after grinding', value: coiledFreeLength(r), quantity: 'length' },
     { label: 'End tip thickness (about d/4)', value: x.d / 4, quantity: 'length' },
     { label: 'Entry gap over exit, from (¼ d)', value: x.d / 4, quantity: 'length' },
     { label: 'Entry gap over exit, to (½ d)', value: x.d / 2, quantity: 'length' },

@@ -5,24 +5,10 @@ import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import type { ToleranceGrade } from '../tolerances';
 import type { CoilBody } from '../springs/coil-body';
-import { compressionDesign } from '../springs/compression/design';
-import { analyseCompression } from '../springs/compression/analyse';
-import { extensionDesign } from '../springs/extension/design';
-import { analyseExtension } from '../springs/extension/analyse';
-import { torsionDesign } from '../springs/torsion/design';
-import { analyseTorsion } from '../springs/torsion/analyse';
-import { reviewCompression } from '../review/compression';
-import { reviewExtension } from '../review/extension';
-import { reviewTorsion } from '../review/torsion';
+import { kindEntryOf } from '../kinds/registry';
 import { checkBakeSpecification } from '../finishing/bake';
 import { findGrade } from '../materials';
-import { compressionRouting } from './compression-routing';
-import { extensionRouting } from './extension-routing';
-import { torsionRouting } from './torsion-routing';
 import type { RoutingChoices } from './operations';
-import { compressionInspection } from './compression-inspection';
-import { extensionInspection } from './extension-inspection';
-import { torsionInspection } from './torsion-inspection';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
 import type { LotWire, Operation, OperationSetting } from './types';
@@ -88,36 +74,16 @@ const unknownGrade = (spec: Spec): never => {
 };
 
 function plannerFor(spec: Spec, settings: Settings): KindPlanner {
-  switch (spec.kind) {
-    case 'compression': {
-      const x = compressionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseCompression(x);
-      const coiled = r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength;
-      return {
-        body: x, findings: reviewCompression(x, r), coiledFreeLength: coiled, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => compressionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => compressionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-    case 'extension': {
-      const x = extensionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseExtension(x);
-      return {
-        body: x, findings: reviewExtension(x, r), coiledFreeLength: r.freeLength, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => extensionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => extensionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-    case 'torsion': {
-      const x = torsionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseTorsion(x);
-      return {
-        body: x, findings: reviewTorsion(x, r), coiledFreeLength: null, freeLength: null, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => torsionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => torsionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-  }
+  const kind = kindEntryOf(spec.kind);
+  const x = kind.design(spec) ?? unknownGrade(spec);
+  const r = kind.analyse(x);
+  const lengths = kind.freeLengths(r);
+  return {
+    body: x, findings: kind.review(x, r), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
+    wireLength: r.wireLength, mass: r.mass,
+    route: (c) => kind.routing(settings, x, r, c),
+    inspect: (lot, aql, grade, f) => kind.inspection(x, r, lot, aql, grade, f),
+  };
 }
 
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
