@@ -3,6 +3,7 @@ import type { Spec } from '../spec';
 import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
 import type { Operation } from '../process/types';
+import { effectiveFinish } from '../finishing/effective';
 import type { CostEstimate, CostLine, PriceBreak } from './types';
 
 /** Quantity breaks when the spec names none (common practice for a first quote). */
@@ -72,7 +73,7 @@ function operationLines(plan: ManufacturingPlan, settings: Settings, missing: Mi
 }
 
 function outsideLines(plan: ManufacturingPlan, settings: Settings, spec: Spec): CostLine[] {
-  const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
+  const { finish } = effectiveFinish(spec, settings.finishes);
   if (!finish) return [];
   const kg = (plan.orderQuantity * plan.massPerPiece);
   const byKg = finish.pricePerKg !== undefined ? kg * finish.pricePerKg : 0;

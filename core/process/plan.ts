@@ -7,6 +7,7 @@ import type { ToleranceGrade } from '../tolerances';
 import type { CoilBody } from '../springs/coil-body';
 import { kindEntryOf } from '../kinds/registry';
 import { checkBakeSpecification } from '../finishing/bake';
+import { effectiveFinish } from '../finishing/effective';
 import { findGrade } from '../materials';
 import type { RoutingChoices } from './operations';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
@@ -41,13 +42,11 @@ function wireDiameterTolerance(gradeId: string): string {
 }
 
 function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number, tensileStrength: number): RoutingChoices {
-  const finishId = spec.finish ?? 'none';
-  const finish = finishId === 'none' ? null : settings.finishes.find((f) => f.id === finishId) ?? null;
-  if (finishId !== 'none' && !finish) {
+  const { id: finishId, finish, bakeSpecification: bake } = effectiveFinish(spec, settings.finishes);
+  if (finishId !== null && !finish) {
     findings.push({ code: 'unknown-finish', severity: 'error', path: 'finish',
       message: `finish "${finishId}" is not in the shop's finishes`, fix: 'choose one from Settings → Finishes, or "none"' });
   }
-  const bake = spec.bakeSpecification ?? finish?.bakeSpecification ?? null;
   if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength));
   const peened = spec.duty.type === 'cyclic' && spec.duty.peened;
   return {
