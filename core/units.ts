@@ -78,6 +78,13 @@ export function fromInternal(value: number, quantity: Quantity, units: UnitSyste
   return value / def.factor - (def.offset ?? 0);
 }
 
+/** True when a value of this quantity reads the same in every unit system (counts, angles, percent). */
+export function sameInBothSystems(quantity: Quantity): boolean {
+  const a = metric[quantity];
+  const b = inch[quantity];
+  return a.factor === b.factor && (a.offset ?? 0) === (b.offset ?? 0) && a.symbol === b.symbol;
+}
+
 export function unitSymbol(quantity: Quantity, units: UnitSystem): string {
   return systems[units][quantity].symbol;
 }
@@ -100,4 +107,14 @@ export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, 
     return out;
   };
   return walk(value, map) as T;
+}
+
+/** The quantity a map declares at a dotted path ("materialOverrides.density"; list items share their map). */
+export function quantityAt(map: QuantityMap, path: string): Quantity | undefined {
+  let at: Quantity | QuantityMap | undefined = map;
+  for (const key of path.split('.')) {
+    if (at === undefined || typeof at === 'string') return undefined;
+    at = at[key];
+  }
+  return typeof at === 'string' ? at : undefined;
 }
