@@ -1,6 +1,6 @@
 import type { Finding } from '../result';
 import type { UnitSystem } from '../units';
-import type { MaterialOverrides, WireProperties } from '../materials/types';
+import type { WireProperties } from '../materials/types';
 import { wireProperties } from '../materials';
 
 /**
