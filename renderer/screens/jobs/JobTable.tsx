@@ -1,6 +1,8 @@
 import type { JobSummary } from '../../../core/api';
 import { formatQuantity } from '../../../core/format';
-import { kindLabels, statusLabels } from '../../model/labels';
+import { statusLabels } from '../../model/labels';
+import { kindLabel } from '../../../core/vocabulary';
+import { kindEntryOf } from '../../../core/kinds/registry';
 
 export type SortKey = 'number' | 'updated' | 'customer';
 export interface Sort {
@@ -61,8 +63,8 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
       <tbody>
         {jobs.map((j) => {
           const u = j.shape.units;
-          // A torsion spring is compared on its body length and its rate per degree (see db/jobs/shape).
-          const torsion = j.shape.kind === 'torsion';
+          // Each kind is compared on its own length and rate (core/kinds: torsion on body length and rate per degree).
+          const compared = kindEntryOf(j.shape.kind).shape;
           return (
             <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={selected.has(j.id) ? 'is-selected' : undefined}>
               <td className="check">
@@ -72,11 +74,11 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
-              <td>{kindLabels[j.shape.kind] ?? j.shape.kind}<br /><span className="muted">{j.shape.material}</span></td>
+              <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span></td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
-              <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{torsion ? <><br /><span className="muted">body</span></> : null}</td>
-              <td className="num">{formatQuantity(j.shape.rate, torsion ? 'torqueRatePerDegree' : 'rate', u)}</td>
+              <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
+              <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
               <td className="nowrap">{day(j.updatedAt)}</td>
               <td><button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button></td>
             </tr>

@@ -2,7 +2,8 @@ import { unitSymbol } from '../../../../core/units';
 import { numberText } from '../../../model/numbers';
 import type { JobEditor } from '../../../hooks/useJobEditor';
 import { timelineOf } from '../../../model/timeline';
-import { kindLabels, statusLabels } from '../../../model/labels';
+import { statusLabels } from '../../../model/labels';
+import { kindLabel } from '../../../../core/vocabulary';
 
 /** Every saved revision, newest first; any of them can come back (as a new revision: nothing is overwritten). */
 export function HistoryPane({ editor }: { editor: JobEditor }) {
@@ -31,7 +32,7 @@ export function HistoryPane({ editor }: { editor: JobEditor }) {
                 <td className="num">{r.revision}</td>
                 <td className="nowrap">{r.savedAt.slice(0, 16).replace('T', ' ')}</td>
                 <td>{r.reason}{r.revision === current && !isHead ? ' (the state now)' : ''}</td>
-                <td className="nowrap">{kindLabels[s.kind] ?? s.kind}: d {d}, {which} {numberText(coil)} {mm}, {s.material}</td>
+                <td className="nowrap">{kindLabel(s.kind)}: d {d}, {which} {numberText(coil)} {mm}, {s.material}</td>
                 <td>{statusLabels[r.fields.status]}</td>
                 <td>
                   {isHead ? <span className="muted">current</span> : (
