@@ -5,6 +5,7 @@ import type { ManufacturingPlan } from '../process/plan';
 import type { Operation } from '../process/types';
 import { effectiveFinish } from '../finishing/effective';
 import type { CostEstimate, CostLine, PriceBreak } from './types';
+import { formatQuantity } from '../format';
 
 /** Quantity breaks when the spec names none (common practice for a first quote). */
 export const DEFAULT_QUANTITIES = [100, 1000, 5000];
@@ -29,7 +30,7 @@ function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Miss
   const kg = plan.lotWire.kg;
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
-      message: `no price for ${plan.material.grade} at ${plan.material.wireDiameter.toFixed(2)} mm: material is not costed` });
+      message: `no price for ${plan.material.grade} at ${formatQuantity(plan.material.wireDiameter, 'length', plan.units)}: material is not costed` });
     return { item: `Wire: ${plan.material.name}`, basis: `${kg.toFixed(2)} kg, no price on file`, amount: 0, group: 'material' };
   }
   return {

@@ -1,6 +1,6 @@
 import type { Finding } from '../result';
-import type { QuantityMap, UnitSystem } from '../units';
-import { convertFields, fromInternal } from '../units';
+import type { QuantityMap } from '../units';
+import { convertFields, OWN } from '../units';
 import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import type { ToleranceGrade } from '../tolerances';
@@ -10,9 +10,9 @@ import { checkBakeSpecification } from '../finishing/bake';
 import { effectiveFinish } from '../finishing/effective';
 import { findGrade } from '../materials';
 import type { RoutingChoices } from './operations';
-import type { Characteristic, InspectionPlan } from './inspection-plan';
+import type { InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
-import type { LotWire, Operation, OperationSetting } from './types';
+import type { LotWire, Operation } from './types';
 
 /** How the shop makes one order of a spring. Internal units; `planInSpecUnits` converts out. */
 export interface ManufacturingPlan {
@@ -107,28 +107,30 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
   };
 }
 
-/** Unit map for converting a plan to the spec's units (operation settings carry their own quantity). */
-const planQuantities: QuantityMap = {
-  material: { wireDiameter: 'length', tensileStrength: 'stress' },
-  coiledFreeLength: 'length', freeLength: 'length', wireLengthPerPiece: 'length', massPerPiece: 'mass', massPer1000: 'massBulk',
+/** What each number of an operation measures; a setting names its own quantity. */
+export const operationQuantities: QuantityMap = {
+  sequence: 'ordinal', setupMinutes: 'minutes', piecesPerHour: 'perHour',
+  batch: { capacityPieces: 'count', cycleMinutes: 'minutes', batches: 'count' },
+  scrapFraction: 'ratio', settings: { value: OWN },
 };
 
-const convertSetting = (s: OperationSetting, units: UnitSystem): OperationSetting =>
-  s.quantity && typeof s.value === 'number' ? { ...s, value: fromInternal(s.value, s.quantity, units) } : s;
+/** What each number of an inspection plan measures; a characteristic names its own quantity. */
+export const inspectionQuantities: QuantityMap = {
+  lotSize: 'count', aql: 'percent', sampleSize: 'count', accept: 'count', reject: 'count',
+  characteristics: { atLength: 'length', nominal: OWN, lower: OWN, upper: OWN },
+};
 
-const convertCharacteristic = (c: Characteristic, units: UnitSystem): Characteristic => {
-  const out = (v: number | null) => (v === null ? null : fromInternal(v, c.quantity, units));
-  const atLength = c.atLength === null ? null : fromInternal(c.atLength, 'length', units);
-  return { ...c, nominal: fromInternal(c.nominal, c.quantity, units), lower: out(c.lower), upper: out(c.upper), atLength };
+/** What each number of a plan measures; `planInSpecUnits` converts with it. The lot's wire stays in m and kg. */
+export const planQuantities: QuantityMap = {
+  orderQuantity: 'count', toleranceGrade: 'ordinal',
+  material: { wireDiameter: 'length', tensileStrength: 'stress' },
+  coiledFreeLength: 'length', freeLength: 'length', wireLengthPerPiece: 'length', massPerPiece: 'mass', massPer1000: 'massBulk',
+  lotWire: { startQuantity: 'count', metres: 'stockLength', kg: 'stockMass' },
+  operations: operationQuantities,
+  inspection: inspectionQuantities,
 };
 
 /** The plan in the spec's unit system; the lot's wire stays in metres and kg, as wire is bought. */
 export function planInSpecUnits(plan: ManufacturingPlan): ManufacturingPlan {
-  const u = plan.units;
-  const base = convertFields(plan, planQuantities, u, 'out');
-  return {
-    ...base,
-    operations: plan.operations.map((op) => ({ ...op, settings: op.settings.map((s) => convertSetting(s, u)) })),
-    inspection: { ...plan.inspection, characteristics: plan.inspection.characteristics.map((c) => convertCharacteristic(c, u)) },
-  };
+  return convertFields(plan, planQuantities, plan.units, 'out');
 }

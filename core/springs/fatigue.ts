@@ -74,4 +74,5 @@ export function fatigueCheck(stressA: number, stressB: number, tensileStrength: 
 export const fatigueQuantities: QuantityMap = {
   stressMin: 'stress', stressMax: 'stress', stressAlternating: 'stress', stressMean: 'stress',
   stressRange: 'stress', ultimateShear: 'stress', enduranceAlternating: 'stress', enduranceMean: 'stress',
+  goodmanSafetyFactor: 'ratio', gerberSafetyFactor: 'ratio',
 };

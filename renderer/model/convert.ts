@@ -1,5 +1,5 @@
 import type { Quantity, QuantityMap, UnitSystem } from '../../core/units';
-import { fromInternal, sameInBothSystems, toInternal } from '../../core/units';
+import { fromInternal, OWN, sameInBothSystems, toInternal } from '../../core/units';
 import { numberText, parseNumber } from './numbers';
 
 /** Converts the text of one field between unit systems; text that is not a number is kept as typed. */
@@ -17,8 +17,9 @@ export function convertText(text: string, quantity: Quantity, from: UnitSystem, 
  */
 export function convertTexts<T>(draft: T, map: QuantityMap, from: UnitSystem, to: UnitSystem): T {
   if (from === to) return draft;
-  const walk = (v: unknown, m: Quantity | QuantityMap): unknown => {
+  const walk = (v: unknown, m: Quantity | typeof OWN | QuantityMap): unknown => {
     if (Array.isArray(v)) return v.map((item) => walk(item, m));
+    if (m === OWN) return v;
     if (typeof m === 'string') return typeof v === 'string' && !sameInBothSystems(m) ? convertText(v, m, from, to) : v;
     if (v === null || typeof v !== 'object') return v;
     const out: Record<string, unknown> = {};

@@ -67,17 +67,19 @@ export interface CompressionReport extends CoilReport {
 
 export const compressionReportQuantities: QuantityMap = {
   ...coilReportQuantities,
-  freeLength: 'length',
+  freeLength: 'length', activeCoils: 'count', totalCoils: 'count',
+  stressCorrectionFactor: 'ratio', wahlFactor: 'ratio', slendernessLimit: 'ratio', slenderness: 'ratio',
+  naturalFrequency: 'frequency',
   pitch: 'length', rate: 'rate', solidLength: 'length', solidForce: 'force', storedEnergyAtSolid: 'energy',
   shearModulus: 'stress', density: 'density',
   stressAtSolid: 'stress', stressAtSolidUncorrected: 'stress', allowableStress: 'stress',
   allowableStressSetRemoved: 'stress',
   loads: {
     length: 'length', deflection: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress',
-    specifiedForce: 'force',
+    specifiedForce: 'force', tolerancePercent: 'percent',
   },
   minimumWorkingLength: 'length', coilGapSum: 'length', bucklingDeflection: 'length',
   outerDiameterAtSolid: 'length',
-  setRemoval: { coiledFreeLength: 'length', expectedSet: 'length' },
+  setRemoval: { coiledFreeLength: 'length', expectedSet: 'length', ratio: 'ratio', setFraction: 'ratio' },
   fatigue: fatigueQuantities,
 };
