@@ -20,7 +20,8 @@ export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema, e
 export type Spec = z.infer<typeof specSchema>;
 export type SpecInput = z.input<typeof specSchema>;
 export type SpringKind = Spec['kind'];
-export const springKinds: readonly SpringKind[] = ['compression', 'extension', 'torsion'];
+/** Every kind, in the schema's order (the order select lists show them in). */
+export const springKinds: readonly SpringKind[] = specSchema.options.map((o) => o.shape.kind.value);
 
 /** Schema errors with the spec's own wording for a wrong kind. */
 function schemaErrors(error: z.ZodError): FieldError[] {
