@@ -112,7 +112,27 @@ function declared(m: Quantity | typeof OWN, parent: Record<string, unknown>): Qu
   return isQuantity(parent.quantity) ? parent.quantity : undefined;
 }
 
+/** Whether every quantity a map names reads the same in internal units (then converting is a no-op). */
+function identityIn(map: QuantityMap, units: UnitSystem): boolean {
+  return Object.values(map).every((m) => (typeof m === 'string'
+    ? m === OWN ? false : systems[units][m].factor === 1 && (systems[units][m].offset ?? 0) === 0
+    : identityIn(m, units)));
+}
+
+const identityMaps: Record<UnitSystem, WeakMap<QuantityMap, boolean>> = { metric: new WeakMap(), inch: new WeakMap() };
+
+/** Cached per map: specs convert on every analysis, and a metric spec's map is all identities. */
+function isIdentity(map: QuantityMap, units: UnitSystem): boolean {
+  let known = identityMaps[units].get(map);
+  if (known === undefined) {
+    known = identityIn(map, units);
+    identityMaps[units].set(map, known);
+  }
+  return known;
+}
+
 export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: 'in' | 'out'): T {
+  if (isIdentity(map, units)) return value;
   const convert = direction === 'in' ? toInternal : fromInternal;
   const walk = (v: unknown, m: Quantity | typeof OWN | QuantityMap, parent: Record<string, unknown>): unknown => {
     if (v === null || v === undefined) return v;
@@ -123,10 +143,11 @@ export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, 
     }
     if (typeof v !== 'object') return v;
     const object = v as Record<string, unknown>;
-    const out: Record<string, unknown> = {};
-    for (const [key, inner] of Object.entries(object)) {
-      const sub = m[key];
-      out[key] = sub === undefined ? inner : walk(inner, sub, object);
+    // A copy keeps the object's shape; only the fields the map declares are replaced.
+    const out: Record<string, unknown> = { ...object };
+    for (const key in m) {
+      const inner = object[key];
+      if (inner !== undefined) out[key] = walk(inner, m[key]!, object);
     }
     return out;
   };
