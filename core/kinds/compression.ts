@@ -8,7 +8,6 @@ import { reviewCompression } from '../review/compression';
 import { compressionSpecQuantities, compressionSpecSchema } from '../spec/compression';
 import { compressionSpecErrors } from '../spec/compression-rules';
 import { analyseCompression } from '../springs/compression/analyse';
-import { coiledFreeLength } from '../springs/compression/coiled';
 import { compressionDesign } from '../springs/compression/design';
 import { compressionReportQuantities } from '../springs/compression/report';
 import { kindEntry } from './types';
@@ -19,12 +18,12 @@ export const compressionKind = kindEntry({
   specErrors: compressionSpecErrors,
   specQuantities: compressionSpecQuantities,
   design: compressionDesign,
-  analyse: analyseCompression,
+  analyse: (x, settings) => analyseCompression(x, settings?.defaults.setRemovalMethod),
   review: reviewCompression,
   reportQuantities: compressionReportQuantities,
   routing: compressionRouting,
   inspection: compressionInspection,
-  freeLengths: (r) => ({ coiled: coiledFreeLength(r), finished: r.freeLength }),
+  freeLengths: (r) => ({ coiled: r.coiler.freeLength, finished: r.freeLength }),
   drawing: compressionDrawing,
   diagram: loadDeflectionDiagram,
   drawingOptions: (spec) => ({

@@ -32,7 +32,8 @@ export interface KindParts<S, X extends CoilBody, R> {
   specQuantities: QuantityMap;
   /** The spec in internal units with its wire resolved; undefined only for an unknown grade. */
   design(spec: S): X | undefined;
-  analyse(design: X): R;
+  /** The shop's settings choose between methods where the kind has a choice (compression: set removal). */
+  analyse(design: X, settings?: Settings): R;
   review(design: X, report: R): Finding[];
   /** What each number of the report measures; reports convert out to the job's units with it. */
   reportQuantities: QuantityMap;

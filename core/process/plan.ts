@@ -75,7 +75,7 @@ const unknownGrade = (spec: Spec): never => {
 function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   const kind = kindEntryOf(spec.kind);
   const x = kind.design(spec) ?? unknownGrade(spec);
-  const r = kind.analyse(x);
+  const r = kind.analyse(x, settings);
   const lengths = kind.freeLengths(r);
   return {
     body: x, findings: kind.review(x, r), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,

@@ -6,6 +6,7 @@ import { quantityAt } from '../../core/units';
 import { compact, convertTexts, RawBuilder } from './convert';
 import type { KindDraftModel, KindDrafts } from './kind-drafts';
 import { emptyKindDrafts, kindDraftModels } from './kind-drafts';
+import { SPEC_VERSION } from '../../core/spec/versions';
 import { numberText, parseList } from './numbers';
 import type { KindRaw } from './rows';
 
@@ -148,7 +149,7 @@ export function draftToRaw(d: SpecDraft): DraftRaw {
   const b = new RawBuilder();
   const kind = kindRaw(d, b);
   const raw = compact({
-    version: 1, kind: d.kind, units: d.units, material: d.material === '' ? undefined : d.material,
+    version: SPEC_VERSION, kind: d.kind, units: d.units, material: d.material === '' ? undefined : d.material,
     wireDiameter: b.required('wireDiameter', d.wireDiameter, 'a wire diameter'),
     [d.diameterGiven]: b.required(d.diameterGiven, d.diameter, 'a coil diameter'),
     ...kind.raw,

@@ -18,6 +18,8 @@ export interface CompressionDesign extends CoilBody {
     | { type: 'static' }
     | { type: 'cyclic'; between: [number, number]; cycles: number; peened: boolean; frequency?: number };
   freeParameters: FreeParameter[];
+  /** EN 15800 tolerance grade the drawing names, if any. */
+  toleranceGrade: 1 | 2 | 3 | undefined;
 }
 
 function loadsOf(spec: CompressionSpec): CompressionDesign['loads'] {
@@ -44,5 +46,6 @@ export function compressionDesign(given: CompressionSpec): CompressionDesign | u
     coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active',
     ends: spec.ends, L0: spec.freeLength, loads: loadsOf(spec),
     seating: spec.seating, duty: spec.duty, freeParameters: spec.freeParameters,
+    toleranceGrade: spec.toleranceGrade,
   };
 }

@@ -38,6 +38,10 @@ function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sor
 
 const day = (iso: string) => iso.slice(0, 10);
 
+/** A job whose stored spec no longer reads still lists, marked, with why beside its spring. */
+const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
+  [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
+
 export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
@@ -66,7 +70,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           // Each kind is compared on its own length and rate (core/kinds: torsion on body length and rate per degree).
           const compared = kindEntryOf(j.shape.kind).shape;
           return (
-            <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={selected.has(j.id) ? 'is-selected' : undefined}>
+            <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={rowClass(j, selected.has(j.id))}>
               <td className="check">
                 <input type="checkbox" aria-label={`Select job ${j.number}`} checked={selected.has(j.id)} onChange={(e) => onSelect(j.id, e.target.checked)} />
               </td>
@@ -74,7 +78,8 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
-              <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span></td>
+              <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span>
+                {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>

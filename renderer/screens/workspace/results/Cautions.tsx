@@ -3,17 +3,18 @@ import type { Spec } from '../../../../core/spec';
 import { Caution, FatigueCaution, HydrogenCaution, NearSolidCaution, StoredEnergyCaution } from '../../../components/Caution';
 import { useShopData } from '../../../hooks/shop-data';
 import { effectiveFinish } from '../../../../core/finishing/effective';
-import { allowableBand } from '../../../../core/review/limits';
+import { reviewLimits } from '../../../../core/review/limits';
 
 /** The cautions this spring calls for; stored energy always. `r` in internal units. */
 export function SpringCautions({ r, spec }: { r: SpringReport; spec: Spec }) {
   const { settings } = useShopData();
   const { finish, bakeSpecification } = effectiveFinish(spec, settings?.finishes ?? []);
-  const nearSolid = r.kind === 'compression' && allowableBand(r.stressAtSolid, r.allowableStress) !== 'ok';
+  // The set-removal verdict's own ratio: the governing method's stress at solid over its limit without set removal.
+  const solid = r.kind === 'compression' ? r.setRemoval.ratio : 0;
   return (
     <div className="cautions">
       <StoredEnergyCaution />
-      {r.kind === 'compression' && nearSolid ? <NearSolidCaution percent={(r.stressAtSolid / r.allowableStress) * 100} setRemoval={r.setRemoval.required} /> : null}
+      {r.kind === 'compression' && solid >= reviewLimits.nearAllowableRatio ? <NearSolidCaution percent={solid * 100} setRemoval={r.setRemoval.required} /> : null}
       {spec.kind === 'extension' && !spec.mechanicalStop ? (
         <Caution title="No mechanical stop">
           Without a stop an extension spring can be pulled past its safe length, take a set or let go of its hook. Ask for a

@@ -13,11 +13,11 @@ export function compressionFigures(r: CompressionReport): Readout[] {
     { name: 'Spring index', symbol: s.springIndex, value: significant(r.springIndex) },
     { name: 'Active / total coils', symbol: `${s.activeCoils} / ${s.totalCoils}`, value: `${significant(r.activeCoils)} / ${significant(r.totalCoils)}` },
     { name: 'Outside / inside diameter', symbol: `${s.outerDiameter} / ${s.innerDiameter}`, value: `${q(r.outerDiameter, 'length', u)} / ${q(r.innerDiameter, 'length', u)}` },
-    { name: 'Solid length', symbol: s.solidLength, value: q(r.solidLength, 'length', u) },
+    { name: 'Solid length / maximum', symbol: `${s.solidLength} / Lc,max`, value: `${q(r.solidLength, 'length', u)} / ${q(r.solidLengthMaximum, 'length', u)}` },
     { name: 'Force at solid', symbol: s.solidForce, value: q(r.solidForce, 'force', u) },
     { name: 'Minimum working length', symbol: s.minimumWorkingLength, value: q(r.minimumWorkingLength, 'length', u) },
     { name: 'Pitch', symbol: s.pitch, value: q(r.pitch, 'length', u) },
-    { name: 'Coil to (set removal)', symbol: `${s.freeLength} coiled`, value: !set.required ? 'not needed' : set.coiledFreeLength === null ? 'by trials' : q(set.coiledFreeLength, 'length', u) },
+    { name: 'Coil to (set removal)', symbol: `${s.freeLength} coiled`, value: !set.required ? 'not needed' : set.coiledFreeLength === null ? 'no length within limits' : `${q(set.coiledFreeLength, 'length', u)} (${set.governing === 'handbook' ? 'handbook' : 'EN 13906-1'} governs)` },
     { name: 'Buckling', symbol: s.bucklingDeflection, value: r.bucklingDeflection === null ? 'stable' : `at ${q(r.freeLength - r.bucklingDeflection, 'length', u)}` },
     { name: 'Natural frequency', symbol: s.naturalFrequency, value: q(r.naturalFrequency, 'frequency', u) },
     { name: 'Wire length / mass', symbol: 'l / m', value: `${q(r.wireLength, 'length', u)} / ${q(r.mass, 'mass', u)}` },
@@ -27,13 +27,19 @@ export function compressionFigures(r: CompressionReport): Readout[] {
 }
 
 export function compressionBars(r: CompressionReport): StressBar[] {
-  const set = r.setRemoval.required;
-  const basis = set ? 'uncorrected, against the allowable after set removal' : 'corrected, against the allowable';
-  const working = set ? r.allowableStressSetRemoved : r.allowableStress;
-  const bars: StressBar[] = r.loads.map((l, i) => ({ label: `τ at ${s.length(i + 1)}`, value: set ? l.stressUncorrected : l.stress, allowable: working, basis }));
-  bars.push({ label: 'τ at solid', value: r.stressAtSolid, allowable: r.allowableStress, basis: 'corrected, against the allowable before set removal' });
-  if (set) bars.push({ label: 'τ at solid, set removed', value: r.stressAtSolidUncorrected, allowable: r.allowableStressSetRemoved, basis: 'uncorrected, against the allowable after set removal' });
-  if (r.fatigue) bars.push({ label: 'τ max in cycle', value: r.fatigue.stressMax, allowable: working, basis: 'corrected, against the static allowable' });
+  const set = r.setRemoval;
+  const toSolid = r.freeLength - r.solidLength;
+  const working = set.required ? set.allowableAfter : set.allowableBefore;
+  const name = (m: 'handbook' | 'en13906') => (m === 'handbook' ? 'handbook, Ks stress' : 'EN 13906-1, uncorrected stress');
+  const basis = `${name(set.governing)}, against the allowable ${set.required ? 'after' : 'before'} set removal`;
+  const bars: StressBar[] = r.loads.map((l, i) => ({
+    label: `τ at ${s.length(i + 1)}`, value: toSolid > 0 ? (l.deflection / toSolid) * set.stressAtSolid : 0, allowable: working, basis,
+  }));
+  for (const v of [set.methods.handbook, set.methods.en13906]) {
+    bars.push({ label: `τ at solid (${name(v.method)})`, value: v.stressAtSolid, allowable: v.required ? v.allowableAfter : v.allowableBefore,
+      basis: `${v.required ? 'after' : 'before'} set removal${v.method === set.governing ? ', governs' : ''}` });
+  }
+  if (r.fatigue) bars.push({ label: 'τ max in cycle', value: r.fatigue.stressMax, allowable: r.allowableStress, basis: 'corrected, against the static allowable' });
   return bars;
 }
 
