@@ -19,7 +19,7 @@ export const limitLabels = {
   'initial-tension': 'initial tension (the customer\'s window and the preferred window for the index)',
   'hook-stress': 'stress in the loops',
   arbor: 'arbor clearance (at least 10 % of the loaded inside diameter)',
-  'set-removal': 'set removal within the trade\'s rules (set at least 10 % of the deflection to solid, stress ratio at most 1.3)',
+  'set-removal': 'set removal within the trade\'s rules (set at least the free-length tolerance, stress ratio at most 1.3, coiled length within the coiler\'s and the set model\'s bounds)',
   fatigue: 'fatigue safety factor (Goodman, infinite life)',
   review: 'the maker\'s review',
   'grade-duty': 'grade fit for cyclic duty',
