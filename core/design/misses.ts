@@ -21,6 +21,7 @@ export const limitLabels = {
   arbor: 'arbor clearance (at least 10 % of the loaded inside diameter)',
   'set-removal': 'set removal within the trade\'s rules (set at least the free-length tolerance, stress ratio at most 1.3, coiled length within the coiler\'s and the set model\'s bounds)',
   fatigue: 'fatigue safety factor (Goodman, infinite life)',
+  'fatigue-life': 'stress at the end of the stroke against the finite-life limit for the duty\'s cycles',
   review: 'the maker\'s review',
   'grade-duty': 'grade fit for cyclic duty',
   'grade-temperature': 'grade service temperature',

@@ -96,7 +96,10 @@ function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProper
     const k = bergstraesser(c);
     const life = finiteLife('compression', req.duty.cycles, p.peened, wire.tensileStrength);
     const f = fatigueCheck(k * perForce * rate * (p.L0 - a), k * perForce * rate * (p.L0 - b), wire.tensileStrength, p.peened, life);
-    if (f.verdict !== 'pass') push(out, underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
+    if (f.verdict === 'pass') return set.required;
+    // Under the endurance cycles the verdict is the finite-life limit's, else Goodman's.
+    push(out, life ? overMax('fatigue-life', 'duty', 'stress', f.stressMax, life.limit)
+      : underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
   }
   return set.required;
 }
