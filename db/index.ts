@@ -23,3 +23,5 @@ export { backupStore, restoreStore, verifyBackup } from './backup';
 export { createDemoShop } from './demo';
 export { recordFirstOff, listFirstOff } from './first-off/records';
 export { setCalibration } from './first-off/calibration';
+export { adoptDesign, jobRequirement } from './jobs/requirements';
+export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';

@@ -69,6 +69,8 @@ export interface JobPage {
   total: number;
   limit: number;
   offset: number;
+  /** Pass as `after` for the page that follows; null on the last page. */
+  next: string | null;
 }
 
 /** The fields of a job as one revision saved them. */

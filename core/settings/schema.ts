@@ -112,6 +112,12 @@ export const costingSchema = z.object({
   minimumOrderValue: money.default(150),
 }).strict();
 
+/** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
+export const designStepsSchema = z.object({
+  coilStep: z.number().finite().min(0.05).max(1).default(0.25),
+  diameterStep: z.number().finite().min(0.01).max(5).default(0.1),
+}).strict();
+
 function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): void {
   const seen = new Set<string>();
   items.forEach((item, i) => {
@@ -135,6 +141,7 @@ export const settingsSchemas = {
     inspectionMinutesPerPiece: 0.5, packagingPerPiece: 0.01,
     minimumOrderValue: 150,
   }),
+  design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();

@@ -5,6 +5,8 @@ import { updateToVersion0002 } from './0002-search';
 import { updateToVersion0003 } from './0003-quotes';
 import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
+import { updateToVersion0008 } from './0008-job-requirements';
+import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 
 export interface Migration {
   version: number;
@@ -19,6 +21,8 @@ export const migrations: readonly Migration[] = [
   { version: 3, name: 'quotes', update: updateToVersion0003 },
   { version: 4, name: 'first-off records', update: updateToVersion0004 },
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
+  { version: 8, name: 'job requirements', update: updateToVersion0008 },
+  { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */
