@@ -1,4 +1,4 @@
-import type { Spec } from '../spec';
+import type { Spec, SpringKind } from '../spec';
 import type { Settings } from '../settings/schema';
 import type { JobStatus } from './store-schemas';
 
@@ -11,7 +11,7 @@ export interface Customer {
 }
 
 export interface JobShape {
-  kind: string;
+  kind: SpringKind;
   material: string;
   materialFamily: string;
   units: 'metric' | 'inch';

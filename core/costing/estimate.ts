@@ -3,7 +3,9 @@ import type { Spec } from '../spec';
 import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
 import type { Operation } from '../process/types';
+import { effectiveFinish } from '../finishing/effective';
 import type { CostEstimate, CostLine, PriceBreak } from './types';
+import { formatQuantity } from '../format';
 
 /** Quantity breaks when the spec names none (common practice for a first quote). */
 export const DEFAULT_QUANTITIES = [100, 1000, 5000];
@@ -28,7 +30,7 @@ function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Miss
   const kg = plan.lotWire.kg;
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
-      message: `no price for ${plan.material.grade} at ${plan.material.wireDiameter.toFixed(2)} mm: material is not costed` });
+      message: `no price for ${plan.material.grade} at ${formatQuantity(plan.material.wireDiameter, 'length', plan.units)}: material is not costed` });
     return { item: `Wire: ${plan.material.name}`, basis: `${kg.toFixed(2)} kg, no price on file`, amount: 0, group: 'material' };
   }
   return {
@@ -72,7 +74,7 @@ function operationLines(plan: ManufacturingPlan, settings: Settings, missing: Mi
 }
 
 function outsideLines(plan: ManufacturingPlan, settings: Settings, spec: Spec): CostLine[] {
-  const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
+  const { finish } = effectiveFinish(spec, settings.finishes);
   if (!finish) return [];
   const kg = (plan.orderQuantity * plan.massPerPiece);
   const byKg = finish.pricePerKg !== undefined ? kg * finish.pricePerKg : 0;

@@ -1,3 +1,5 @@
+import type { QuantityMap } from '../units';
+
 /** One line of a cost breakdown: what it is, how it was worked out (traceable to a setting), and the amount. */
 export interface CostLine {
   item: string;
@@ -22,3 +24,9 @@ export interface CostEstimate {
   /** Prices or machines the estimate had to do without; each names the setting to fill in. */
   missing: { code: string; message: string; path: string }[];
 }
+
+/** What each number of a cost estimate measures; money is in the estimate's currency in every unit system. */
+export const costQuantities: QuantityMap = {
+  minimumOrderValue: 'money',
+  breaks: { quantity: 'count', startQuantity: 'count', unitPrice: 'money', total: 'money', lines: { amount: 'money' } },
+};

@@ -3,6 +3,7 @@ import type { Finish, Settings } from '../settings/schema';
 import type { Operation, OperationSetting } from './types';
 import { chooseMachine, machinePiecesPerHour } from './work-centre';
 import { bakeGuidance } from '../finishing/bake';
+import { formatQuantity } from '../format';
 
 /** Operations every kind of spring shares: stress relief, peening, finishing and bake, inspection, packing. */
 /** Job-level choices the routing depends on (from the spec's order fields). */
@@ -24,7 +25,7 @@ export function machineOperation(
 ): Draft {
   const machine = kind === 'finish' || kind === 'bake' || kind === 'inspect' ? null : chooseMachine(settings.machines, kind, x.d);
   const manual = kind === 'pack' || kind === 'load-test' || kind === 'finish' || kind === 'bake' || kind === 'inspect';
-  const notes = machine || manual ? [] : [`no ${kind} machine in the shop's list takes ${x.d.toFixed(2)} mm wire`];
+  const notes = machine || manual ? [] : [`no ${kind} machine in the shop's list takes ${formatQuantity(x.d, 'length', x.units)} wire`];
   return {
     kind, title, workCentre: machine && { id: machine.id, name: machine.name }, outside: false, settings: opSettings,
     setupMinutes: machine?.setupMinutes ?? 0, piecesPerHour: machine ? piecesPerHour(machine) : null,
@@ -35,7 +36,7 @@ export function machineOperation(
 export function stressRelieve(settings: Settings, x: CoilBody, c: RoutingChoices): Draft {
   const op = machineOperation(settings, x, 'stress-relieve', 'Stress relieve', [
     { label: 'Temperature', value: x.wire.stressRelief.temperature, quantity: 'temperature' },
-    { label: 'Time at temperature (min)', value: x.wire.stressRelief.minutes },
+    { label: 'Time at temperature', value: x.wire.stressRelief.minutes, quantity: 'minutes' },
     { label: 'Coil diameter in the oven', value: x.wire.stressRelief.diameterChange },
   ], () => null);
   const oven = chooseMachine(settings.machines, 'stress-relieve', x.d);
