@@ -43,12 +43,12 @@ export const documentHeadSchema = z.object({
  * ignored on import, where the spec column is the source.
  */
 export const CSV_COLUMNS = [
-  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
   'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units', 'd_mm', 'D_mm',
   'OD_mm', 'length_mm (L0; torsion: body)', 'activeCoils', 'rate (N/mm; torsion: N·mm/°)', 'spec',
 ] as const;
 
 export const CSV_IMPORTED = new Set<string>([
-  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
   'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec',
 ]);

@@ -44,7 +44,7 @@ export function jobsDocument(store: Store, status?: JobStatus | JobStatus[]): Jo
 
 function csvRow(row: ExportRow): unknown[] {
   return [
-    row.number, row.customer_name ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
+    row.number, row.customer_name ?? '', row.customer_email ?? '', row.customer_phone ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
     row.notes, row.due_date, row.order_quantity, row.lead_time_days, row.created_at, row.updated_at, row.kind,
     row.material, row.units, row.d, row.mean_diameter, row.mean_diameter + row.d, row.free_length,
     row.active_coils, row.rate, row.spec,

@@ -80,6 +80,17 @@ function csvValue(column: string, text: string, at: PropertyKey[]): Result<unkno
   return ok(text);
 }
 
+/** The e-mail and phone columns belong to the customer object; without a customer they say nothing. */
+function withCustomerContact(raw: Record<string, unknown>): Record<string, unknown> {
+  const { customerEmail, customerPhone, ...rest } = raw;
+  if (rest.customer === null || rest.customer === undefined) return rest;
+  const contact = {
+    ...(customerEmail !== undefined && customerEmail !== '' ? { email: customerEmail } : {}),
+    ...(customerPhone !== undefined && customerPhone !== '' ? { phone: customerPhone } : {}),
+  };
+  return { ...rest, customer: { ...(rest.customer as object), ...contact } };
+}
+
 function csvItems(text: string): Result<ImportItem[]> {
   let records;
   try {
@@ -101,7 +112,7 @@ function csvItems(text: string): Result<ImportItem[]> {
       if (value.ok) raw[column] = value.value;
       else errors.push(...value.errors);
     });
-    return { at, raw };
+    return { at, raw: withCustomerContact(raw) };
   });
   return errors.length > 0 ? fail(errors) : ok(items);
 }
