@@ -54,12 +54,20 @@ function foreignOrigin(req: IncomingMessage, port: number): boolean {
   return origin !== undefined && origin !== `http://${WEB_HOST}:${port}` && origin !== `http://localhost:${port}`;
 }
 
+/** Answers 413 and closes the connection once the answer is out: the rest of the body is never read. */
+function refuseBody(req: IncomingMessage, res: ServerResponse, error: ApiError): void {
+  res.setHeader('connection', 'close');
+  res.once('finish', () => req.socket.destroy());
+  sendJson(res, 413, { ok: false, error });
+}
+
 async function callApi(ctx: Context, req: IncomingMessage, res: ServerResponse, method: string): Promise<void> {
   if (!(req.headers['content-type'] ?? '').toLowerCase().startsWith('application/json')) {
     return sendJson(res, 415, valueError('unsupported-media-type', 'send the input as application/json'));
   }
   if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
   const body = await readJsonBody(req, ctx.maxBodyBytes);
+  if (!body.ok && body.status === 413) return refuseBody(req, res, body.error);
   if (!body.ok) return sendJson(res, body.status, { ok: false, error: body.error });
   const result = await dispatch(ctx.service.handlers, method, body.value, { onUnexpected: (m, e) => ctx.onUnexpected(`api:${m}`, e) });
   const status = !result.ok && result.error.code === 'unknown-method' ? 404 : 200;

@@ -1,6 +1,6 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { request } from 'node:http';
-import type { AddressInfo } from 'node:net';
+import type { AddressInfo, Socket } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -192,6 +192,34 @@ describe('the loopback web transport', () => {
     const fine = await raw(small, { path: '/api/listGrades', method: 'POST', body: '{}',
       headers: { 'content-type': 'application/json', 'x-coilwright-token': small.token } });
     expect(fine.status).toBe(200);
+  });
+
+  it('stops reading a body as soon as it answers 413, closing the connection', async () => {
+    let serverSide: Socket | undefined;
+    small.server.once('connection', (socket: Socket) => { serverSide = socket; });
+    const status = await new Promise<number>((resolve) => {
+      let answered = 0;
+      const chunk = Buffer.alloc(16 * 1024, 0x20);
+      const req = request({ host: '127.0.0.1', port: small.port, path: '/api/calculate', method: 'POST', agent: false,
+        headers: { 'content-type': 'application/json', 'x-coilwright-token': small.token, 'transfer-encoding': 'chunked' } }, (res) => {
+        answered = res.statusCode ?? 0;
+        res.resume();
+      });
+      req.on('error', () => undefined);
+      const pump = (): void => {
+        if (req.destroyed) return;
+        if (req.write(chunk)) setImmediate(pump);
+        else req.once('drain', pump);
+      };
+      req.on('socket', (socket) => {
+        socket.on('close', () => resolve(answered));
+        pump();
+      });
+    });
+    expect(status).toBe(413);
+    // The limit is 2000 bytes; a server that drains the rest of an endless body reads megabytes before it
+    // gives up. One socket buffer past the limit is all a server that stops at once can have taken in.
+    expect(serverSide!.bytesRead).toBeLessThan(512 * 1024);
   });
 
   it('answers an unknown method with 404 and dispatch’s value', async () => {
