@@ -1,5 +1,5 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { request } from 'node:http';
+import { Agent, request } from 'node:http';
 import type { AddressInfo, Socket } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -200,7 +200,7 @@ describe('the loopback web transport', () => {
     const status = await new Promise<number>((resolve) => {
       let answered = 0;
       const chunk = Buffer.alloc(16 * 1024, 0x20);
-      const req = request({ host: '127.0.0.1', port: small.port, path: '/api/calculate', method: 'POST', agent: false,
+      const req = request({ host: '127.0.0.1', port: small.port, path: '/api/calculate', method: 'POST', agent: new Agent({ keepAlive: true }),
         headers: { 'content-type': 'application/json', 'x-coilwright-token': small.token, 'transfer-encoding': 'chunked' } }, (res) => {
         answered = res.statusCode ?? 0;
         res.resume();
