@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { checkBounds, kindBounds } from './bounds';
 import { coilBodyShape, cyclicDutySchema, toleranceShape, orderFieldsShape, positive, staticDutySchema } from './common';
 
 export const compressionEndsSchema = z.enum(['closed-ground', 'closed', 'open-ground', 'open']);
@@ -38,7 +39,8 @@ export const compressionSpecSchema = z
     freeParameters: z.array(freeParameterSchema).max(4).default([]),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.compression));
 
 export type CompressionSpec = z.infer<typeof compressionSpecSchema>;
 export type CompressionSpecInput = z.input<typeof compressionSpecSchema>;

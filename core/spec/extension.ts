@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { checkBounds, kindBounds } from './bounds';
 import { coilBodyShape, cyclicDutySchema, nonNegative, orderFieldsShape, positive, staticDutySchema, toleranceShape } from './common';
 
 /** End forms of extension springs (EN 13906-2 Annex A names the same families). */
@@ -44,7 +45,8 @@ export const extensionSpecSchema = z
     duty: z.discriminatedUnion('type', [staticDutySchema, cyclicDutySchema]).default({ type: 'static' }),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.extension));
 
 export type ExtensionSpec = z.infer<typeof extensionSpecSchema>;
 export type ExtensionSpecInput = z.input<typeof extensionSpecSchema>;

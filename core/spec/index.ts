@@ -41,3 +41,4 @@ export function parseSpec(raw: unknown): Result<Spec> {
     : spec.kind === 'extension' ? extensionSpecErrors(spec) : torsionSpecErrors(spec);
   return errors.length > 0 ? fail(errors) : ok(spec);
 }
+export * from './bounds';

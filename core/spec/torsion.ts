@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { checkBounds, kindBounds } from './bounds';
 import { coilBodyShape, nonNegative, orderFieldsShape, positive, staticDutySchema, toleranceShape } from './common';
 
 export const legFormSchema = z.enum(['tangent', 'radial', 'hooked']);
@@ -44,7 +45,8 @@ export const torsionSpecSchema = z
     duty: z.discriminatedUnion('type', [staticDutySchema, torsionCyclicDutySchema]).default({ type: 'static' }),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.torsion));
 
 export type TorsionSpec = z.infer<typeof torsionSpecSchema>;
 export type TorsionSpecInput = z.input<typeof torsionSpecSchema>;
