@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { specBounds } from '../spec/bounds';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
 export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
@@ -23,7 +24,7 @@ const fields = {
   status: jobStatusSchema,
   notes: z.string().max(4000),
   dueDate: isoDateSchema.nullable(),
-  orderQuantity: z.number().int().positive().nullable(),
+  orderQuantity: z.number().int().positive().max(specBounds.orderQuantity.max, `at most ${specBounds.orderQuantity.max}: ${specBounds.orderQuantity.reason}`).nullable(),
   leadTimeDays: z.number().int().min(0).max(3650).nullable(),
 };
 
