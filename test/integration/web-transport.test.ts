@@ -222,6 +222,14 @@ describe('the loopback web transport', () => {
     expect(serverSide!.bytesRead).toBeLessThan(512 * 1024);
   });
 
+  it('answers 3 KB of deep nesting with a field error, not HTTP 500', async () => {
+    const body = `{"jobId":1,"quantityBreaks":[],"document":{},"prices":${'['.repeat(1400)}1${']'.repeat(1400)}}`;
+    expect(body.length).toBeLessThan(3100);
+    const res = await fetch(`http://127.0.0.1:${web.port}/api/issueQuote`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body });
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({ ok: false, error: { code: 'input-too-deep', path: 'prices' } });
+  });
+
   it('answers an unknown method with 404 and dispatch’s value', async () => {
     for (const name of ['launchRocket', '__proto__', 'constructor', 'toString']) {
       const res = await api(name, {});
