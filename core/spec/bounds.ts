@@ -178,3 +178,10 @@ export function boundsIssues(spec: { units: UnitSystem }, map: BoundsMap): Issue
 export const checkBounds = (map: BoundsMap) => (spec: { units: UnitSystem }, ctx: z.RefinementCtx): void => {
   for (const issue of boundsIssues(spec, map)) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message, params: { code: 'out-of-range' } });
 };
+
+/**
+ * Poisson's ratio ν = E/(2G) − 1 the shear and elastic moduli imply. Spring metals lie between about 0.26
+ * and 0.36 (EN 13906-1 Table 3 pairs G and E so); outside the wide range below, one of the two moduli is
+ * wrong (often a certificate value in the wrong unit), and the buckling and rate checks lose meaning.
+ */
+export const POISSON_RATIO = { min: 0.1, max: 0.49, reason: 'ν = E/(2G) − 1 of spring metals lies near 0.3 (EN 13906-1 Table 3)' } as const;

@@ -36,6 +36,13 @@ describe('every number of a spec has a plausible range', () => {
     expect(paths).toEqual(expect.arrayContaining(['materialOverrides.shearModulus', 'materialOverrides.tensileStrength']));
   });
 
+  // Poisson's ratio ν = E/(2G) − 1 (any strength-of-materials text); EN 13906-1 Table 3 pairs G and E near ν = 0.3.
+  it('refuses a shear modulus that cannot pair with the grade\'s elastic modulus', () => {
+    const bronze = { ...valveSpringMetric, material: 'astm-b159', materialOverrides: { shearModulus: 103400 } };
+    expect(errorsOf(bronze).find((e) => e.path === 'materialOverrides.shearModulus')?.code).toBe('moduli-do-not-pair');
+    expect(errorsOf({ ...valveSpringMetric, materialOverrides: { shearModulus: 79300, elasticModulus: 206000 } })).toEqual([]);
+  });
+
   it('states the range in the spec\'s own units', () => {
     const inch = errorsOf({ ...valveSpringMetric, units: 'inch', wireDiameter: 5, outerDiameter: 40, freeLength: 100, loads: [] });
     expect(inch.find((e) => e.path === 'wireDiameter')!.message).toMatch(/at most 3\.94 in/);
