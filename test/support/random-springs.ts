@@ -48,7 +48,7 @@ const body = fc.record({
   }), { nil: undefined }),
 }).filter((b) => b.d * (b.index + 1) <= 3000);
 
-function bodyFields(b: { units: UnitSystem; material: string; d: number; index: number; given: string; overrides?: { shearModulus: number; tensileStrength: number; density: number } | undefined }): Raw {
+function bodyFields(b: { units: UnitSystem; material: string; d: number; index: number; given: string; overrides?: { tensileStrength: number; density: number } | undefined }): Raw {
   const o = out(b.units);
   const D = b.d * b.index;
   const diameter = b.given === 'outerDiameter' ? D + b.d : b.given === 'innerDiameter' ? D - b.d : D;

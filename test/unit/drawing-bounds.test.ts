@@ -3,6 +3,8 @@ import { analyseSpec } from '../../core/calculate';
 import { springDrawing, specDrawingOptions } from '../../core/drawing';
 import { MAX_DRAWN_TURNS, TURNS_DRAWN_EACH_END, omittedTurns } from '../../core/drawing/coils';
 import { parseSpec } from '../../core/spec';
+import { cellPadding, fitText } from '../../core/drawing/table';
+import { textWidth } from '../../core/drawing/svg';
 import type { Spec } from '../../core/spec';
 import { drawbarExtension, lidTorsion } from '../fixtures/specs';
 
@@ -38,6 +40,17 @@ describe('drawing cost is bounded whatever the coil count', () => {
     expect(long).toContain('data-part="omitted-turns"');
     expect(polygons(long)).toBeLessThanOrEqual(polygons(short));
     expect(long.length).toBeLessThan(short.length * 1.5);
+  });
+
+  it('cuts a long title in the data block with an ellipsis to its cell', () => {
+    const s = compression(10);
+    const title = 'KP-2210-LONG-PART-NUMBER-AS-SOME-CUSTOMERS-WRITE-THEM-0123456789AB';
+    const svg = springDrawing(analyseSpec(s), { ...specDrawingOptions(s), title });
+    expect(svg).not.toContain(title);
+    expect(svg).toMatch(/>KP-2210-[A-Z0-9-]*\.\.\.</);
+    expect(fitText('x'.repeat(4000), 100, 7)).toMatch(/^x+\.\.\.$/);
+    expect(textWidth(fitText('W'.repeat(4000), 100, 7), 7)).toBeLessThanOrEqual(100 - 2 * cellPadding);
+    expect(fitText('Material', 100, 7)).toBe('Material');
   });
 
   it('keeps the same number of turns at each end', () => {
