@@ -1,8 +1,8 @@
-import { writeFileSync } from 'node:fs';
+import { existsSync, writeFileSync } from 'node:fs';
 import type { ExportResult, JobStatus } from '../../core/api/store';
-import { exportJobsSchema } from '../../core/api/store';
+import { exportFileSchema } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
-import { invalid, success } from '../errors';
+import { failure, invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
 import { SUMMARY_COLUMNS } from '../jobs/rows';
@@ -59,9 +59,12 @@ export function jobsCsv(store: Store, status?: JobStatus | JobStatus[]): { text:
 }
 
 export function exportJobs(store: Store, raw: unknown): StoreResult<ExportResult> {
-  const parsed = parseWith(exportJobsSchema, raw ?? {});
+  const parsed = parseWith(exportFileSchema, raw ?? {});
   if (!parsed.ok) return invalid(parsed.errors);
-  const { format, file, status } = parsed.value;
+  const { format, file, status, force } = parsed.value;
+  if (file !== undefined && !force && existsSync(file)) {
+    return failure('file-exists', `${file} already exists: choose a new name, or replace it on purpose (--force)`, 'file');
+  }
   let text: string;
   let count: number;
   if (format === 'csv') ({ text, count } = jobsCsv(store, status));

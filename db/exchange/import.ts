@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import type { ImportResult } from '../../core/api/store';
-import { importJobsSchema } from '../../core/api/store';
+import { importFileSchema } from '../../core/api/store';
 import type { FieldError, Result } from '../../core/result';
 import { fail, fieldError, formatPath, ok } from '../../core/result';
 import { failure, invalid, success } from '../errors';
@@ -134,7 +134,7 @@ function detectFormat(text: string, file: string | undefined, given: 'json' | 'c
 
 /** Checks every record (schema, parseSpec, numbers), then writes all of them in one transaction, or none. */
 export function importJobs(store: Store, input: unknown): StoreResult<ImportResult> {
-  const parsed = parseWith(importJobsSchema, input);
+  const parsed = parseWith(importFileSchema, input);
   if (!parsed.ok) return invalid(parsed.errors);
   const text = importText(parsed.value);
   if (!text.ok) return invalid(text.errors);

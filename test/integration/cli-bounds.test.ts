@@ -69,3 +69,18 @@ describe('job files: an unknown field is an error everywhere', () => {
     expect(JSON.parse(run.out).orderQuantity).toBe(500);
   });
 });
+
+describe('the command line keeps its explicit paths', () => {
+  it('exports to a new file, refuses to replace one without --force, and imports, backs up and restores by path', async () => {
+    const out = join(dir, 'export.json');
+    expect((await cli(['db', 'export', '--db', db, '--out', out])).code).toBe(0);
+    const again = await cli(['db', 'export', '--db', db, '--out', out]);
+    expect(again.code).toBe(2);
+    expect(again.errors[0]).toMatchObject({ code: 'file-exists', path: 'file' });
+    expect((await cli(['db', 'export', '--db', db, '--out', out, '--force'])).code).toBe(0);
+    expect((await cli(['db', 'import', out, '--db', db, '--renumber'])).code).toBe(0);
+    const backup = join(dir, 'shop-backup.db');
+    expect((await cli(['db', 'backup', '--db', db, '--out', backup])).code).toBe(0);
+    expect((await cli(['db', 'restore', '--db', db, '--from', backup])).code).toBe(0);
+  });
+});

@@ -230,6 +230,32 @@ describe('the loopback web transport', () => {
     expect(await res.json()).toMatchObject({ ok: false, error: { code: 'input-too-deep', path: 'prices' } });
   });
 
+  it('downloads a backup and restores an uploaded one; no request names a path', async () => {
+    const created = await (await api('createJob', { partNumber: 'BACKED-UP', spec: valveSpringMetric })).json();
+    expect(created.ok).toBe(true);
+    const download = await fetch(`http://127.0.0.1:${web.port}/files/backup`, { headers: { cookie } });
+    expect(download.status).toBe(200);
+    expect(download.headers.get('content-disposition')).toMatch(/^attachment; filename="coilwright-backup-\d{4}-\d{2}-\d{2}\.db"$/);
+    const bytes = Buffer.from(await download.arrayBuffer());
+    expect(bytes.subarray(0, 15).toString()).toBe('SQLite format 3');
+    await api('createJob', { partNumber: 'AFTER-BACKUP', spec: valveSpringMetric });
+    const restored = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, 'content-type': 'application/octet-stream', 'x-file-name': 'shop%20backup.db' }, body: bytes,
+    });
+    expect(await restored.json()).toMatchObject({ ok: true, value: { restoredFrom: 'shop backup.db' } });
+    const list = await (await api('findJobs', { text: 'AFTER-BACKUP' })).json();
+    expect(list).toEqual({ ok: true, value: [] });
+    const notStore = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, 'content-type': 'application/octet-stream' }, body: '/etc/passwd',
+    });
+    expect((await notStore.json()).ok).toBe(false);
+    const foreign = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, origin: 'https://evil.example', 'content-type': 'application/octet-stream' }, body: bytes,
+    });
+    expect(foreign.status).toBe(403);
+    expect((await fetch(`http://127.0.0.1:${web.port}/files/backup`)).status).toBe(401);
+  });
+
   it('answers an unknown method with 404 and dispatch’s value', async () => {
     for (const name of ['launchRocket', '__proto__', 'constructor', 'toString']) {
       const res = await api(name, {});
