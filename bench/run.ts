@@ -5,9 +5,11 @@ import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { cliSuite } from './suites/cli';
+import { designSuite } from './suites/design';
 import { fuzzSuite } from './suites/fuzz';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, fuzzSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -10,8 +10,10 @@ export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs',
   'manufacturingPlan', 'costEstimate', 'printTraveller', 'printQuote', 'reprintQuote',
+  'recordFirstOff', 'listFirstOff', 'setCalibration',
+  'designSprings', 'adoptDesign', 'jobRequirement',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

@@ -34,4 +34,5 @@ export const storeMethods = {
   getAttachment: method<typeof s.jobIdSchema, t.AttachmentData>(s.jobIdSchema),
   exportJobs: method<typeof s.exportJobsSchema, t.ExportResult>(s.exportJobsSchema),
   importJobs: method<typeof s.importJobsSchema, t.ImportResult>(s.importJobsSchema),
+  reindexJobs: method<typeof s.reindexJobsSchema, t.ReindexResult>(s.reindexJobsSchema),
 };

@@ -81,7 +81,8 @@ export function createDataActions(deps: DataActionDeps) {
       if (file === null) return;
       // The system's save dialog has asked before replacing a file, so the export may replace it.
       await run<ExportResult>(deps, 'exportJobs', { format: formatOf(file), file, force: true },
-        (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`, file]);
+        (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`,
+          [file, ...(v.problems ?? []).map((p) => `Exported as stored, to be put right: ${p.message}`)].join('\n')]);
     },
   };
 }

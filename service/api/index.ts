@@ -7,6 +7,8 @@ import { shopHandlers } from './shop';
 import { documentHandlers } from './documents';
 import { fileActions } from './files';
 import type { FileActions } from './files';
+import { firstOffHandlers } from './first-off';
+import { designHandlers } from './design';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
@@ -23,7 +25,8 @@ export interface Service {
 
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
-  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx) };
+  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
+    ...firstOffHandlers(ctx), ...designHandlers(ctx) };
   return {
     handlers,
     files: fileActions(ctx),

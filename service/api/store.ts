@@ -4,7 +4,7 @@ import type { storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
-  importJobs, issueQuote, jobRevisions, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
+  importJobs, issueQuote, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
@@ -43,5 +43,6 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     getAttachment: (input) => getAttachment(ctx.store, input.id),
     exportJobs: (input) => exportJobs(ctx.store, input),
     importJobs: (input) => importJobs(ctx.store, input),
+    reindexJobs: (input) => reindexJobs(ctx.store, input),
   };
 }

@@ -3,10 +3,11 @@ import type { ParsedArgs } from './io';
 import { InputError, requireOption, toJson } from './io';
 import type { ApiResult } from '../../core/api';
 import type { FileActions } from '../api';
+import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
 import { createDemoShop } from '../../db';
 
-type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void) => Promise<void>;
+type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller) => Promise<void>;
 
 /** The command line names its files itself: it reaches the host's file actions, which the window cannot. */
 async function must<T>(result: Promise<ApiResult<T>>): Promise<T> {
@@ -30,6 +31,7 @@ const subcommands: Record<string, Sub> = {
   import: async (args, files, out) => out(toJson(await must(files.run('importJobs', {
     file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
   })))),
+  reindex: async (args, _files, out, call) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };
 
 export const dbCommand: Command = {
@@ -40,12 +42,13 @@ export const dbCommand: Command = {
     '  db export --db DB [--out FILE [--force]] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV;',
     '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
+    '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];
     const sub = name === undefined ? undefined : subcommands[name];
     if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    await withStore(args, (_call, service) => sub(args, service.files, out));
+    await withStore(args, (call, service) => sub(args, service.files, out, call));
   },
 };
 

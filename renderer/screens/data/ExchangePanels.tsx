@@ -9,6 +9,13 @@ import { statusLabels } from '../../model/labels';
 import { CallOutcome } from './BackupPanels';
 import { useLongCall } from './useLongCall';
 
+/** What an export did; jobs whose stored spec no longer reads went out as stored, and are named. */
+function exportedText(v: ExportResult): string {
+  const done = `${v.count} job${v.count === 1 ? '' : 's'} exported${v.file ? ` to ${v.file}` : ''}.`;
+  const problems = v.problems ?? [];
+  return problems.length === 0 ? done : `${done} Exported as stored, to be put right: ${problems.map((p) => p.message).join('; ')}.`;
+}
+
 export function ExportPanel() {
   const api = useApi();
   const platform = usePlatform();
@@ -31,7 +38,7 @@ export function ExportPanel() {
           choices={[{ value: '', label: 'every job' }, ...jobStatuses.map((s) => ({ value: s, label: `${statusLabels[s]} only` }))]} />
       </div>
       <button type="button" className="button button--primary" disabled={running} onClick={() => void go()}>Export</button>
-      <CallOutcome call={call} done={(v) => `${v.count} job${v.count === 1 ? '' : 's'} exported.`} />
+      <CallOutcome call={call} done={exportedText} />
     </section>
   );
 }
