@@ -7,8 +7,9 @@ import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { cliSuite } from './suites/cli';
 import { designSuite } from './suites/design';
+import { fuzzSuite } from './suites/fuzz';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

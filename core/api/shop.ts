@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { method } from './contract';
+import { specBounds } from '../spec/bounds';
 import type { ManufacturingPlan } from '../process/plan';
 import type { CostEstimate } from '../costing/types';
 
-const quantity = z.number().int().min(1).max(10_000_000);
+const quantity = z.number().int().min(1).max(specBounds.orderQuantity.max, `at most ${specBounds.orderQuantity.max}: ${specBounds.orderQuantity.reason}`);
 
 /** Methods that combine a spec with the shop's settings from the store: the plan and the price. */
 export const shopMethods = {
