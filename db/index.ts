@@ -4,6 +4,7 @@ export type { OpenOptions } from './open';
 export type { Store } from './store';
 export { inTransaction } from './store';
 export { StoreError } from './errors';
+export { writeFileReplacing } from './files';
 export type { StoreResult } from './errors';
 export { inspectStoreFile } from './inspect';
 export { migrate, migrations, LATEST_VERSION, APPLICATION_ID, schemaVersion } from './migrations';

@@ -1,8 +1,8 @@
-import { writeFileSync } from 'node:fs';
 import type { ExportResult, JobStatus } from '../../core/api/store';
 import { exportJobsSchema } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
-import { invalid, success } from '../errors';
+import { StoreError, invalid, success } from '../errors';
+import { writeFileReplacing } from '../files';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
 import { SUMMARY_COLUMNS } from '../jobs/rows';
@@ -71,6 +71,11 @@ export function exportJobs(store: Store, raw: unknown): StoreResult<ExportResult
     count = doc.jobs.length;
   }
   if (file === undefined) return success({ format, count, text });
-  writeFileSync(file, text);
+  try {
+    writeFileReplacing(file, text);
+  } catch (e) {
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
+    throw e;
+  }
   return success({ format, count, file });
 }

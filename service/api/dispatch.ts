@@ -1,6 +1,7 @@
 import { contract, inputError } from '../../core/api';
 import type { ApiResult, MethodName } from '../../core/api';
 import { zodErrors } from '../../core/validation';
+import { StoreError } from '../../db';
 
 /** A method implementation receives parsed input and returns a result value (never throws for bad input). */
 export type Handler = (input: never) => Promise<ApiResult<unknown>> | ApiResult<unknown>;
@@ -29,6 +30,8 @@ export async function dispatch(
   try {
     return await handlers[method](parsed.data as never);
   } catch (e) {
+    // A store fault the user can act on (full disk, read-only store) is an answer, not a failure.
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
     options.onUnexpected?.(method, e);
     return { ok: false, error: { code: 'unexpected', message: `${method} failed: ${(e as Error).message}`, path: '' } };
   }
