@@ -20,4 +20,6 @@ export { addAttachment, listAttachments, getAttachment } from './attachments';
 export { exportJobs, jobsDocument, jobsCsv } from './exchange/export';
 export { importJobs } from './exchange/import';
 export { backupStore, restoreStore, verifyBackup } from './backup';
+export type { RestoreOptions, RestoreStage } from './backup';
+export { restoreDamagedStore } from './recover';
 export { createDemoShop } from './demo';

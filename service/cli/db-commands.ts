@@ -3,7 +3,7 @@ import type { ParsedArgs } from './io';
 import { InputError, requireOption, toJson } from './io';
 import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
-import { createDemoShop } from '../../db';
+import { createDemoShop, restoreDamagedStore } from '../../db';
 
 type Sub = (args: ParsedArgs, call: Caller, out: (text: string) => void) => Promise<void>;
 
@@ -36,9 +36,21 @@ export const dbCommand: Command = {
     const name = args.positional[0];
     const sub = name === undefined ? undefined : subcommands[name];
     if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    await withStore(args, (call) => sub(args, call, out));
+    try {
+      await withStore(args, (call) => sub(args, call, out));
+    } catch (e) {
+      if (name !== 'restore' || !(e instanceof InputError) || e.errors[0]?.code !== 'store-corrupt') throw e;
+      await restoreOverDamaged(args, out);
+    }
   },
 };
+
+/** A damaged store cannot be opened, so its restore puts the backup in its place and keeps it beside. */
+async function restoreOverDamaged(args: ParsedArgs, out: (text: string) => void): Promise<void> {
+  const result = await restoreDamagedStore(requireOption(args, 'db'), requireOption(args, 'from'));
+  if (!result.ok) raise(result.error);
+  out(toJson(result.value));
+}
 
 export const demoCommand: Command = {
   name: 'demo',

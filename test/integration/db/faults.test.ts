@@ -79,12 +79,15 @@ describe('a full disk', () => {
 function diskFillsAfterFirstWrite(): () => void {
   const real = fs.writeSync.bind(fs) as (fd: number, data: Buffer, offset: number, length: number) => number;
   let calls = 0;
-  const spy = vi.spyOn(fs, 'writeSync').mockImplementation(((fd: number, data: Buffer, offset = 0, length?: number) => {
-    if (fd <= 2 || !Buffer.isBuffer(data)) return real(fd, data, offset, length ?? data.length - offset);
+  const fake = (fd: number, data: Buffer, offset?: number, length?: number): number => {
+    const at = offset ?? 0;
+    const rest = length ?? data.length - at;
+    if (fd <= 2 || !Buffer.isBuffer(data)) return real(fd, data, at, rest);
     calls += 1;
     if (calls > 1) throw Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC' });
-    return real(fd, data, offset, Math.min(1000, length ?? data.length - offset));
-  }) as typeof fs.writeSync);
+    return real(fd, data, at, Math.min(1000, rest));
+  };
+  const spy = vi.spyOn(fs, 'writeSync').mockImplementation(fake as unknown as typeof fs.writeSync);
   return () => spy.mockRestore();
 }
 
