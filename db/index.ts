@@ -22,4 +22,5 @@ export { importJobs } from './exchange/import';
 export { backupStore, restoreStore, verifyBackup } from './backup';
 export type { RestoreOptions, RestoreStage } from './backup';
 export { restoreDamagedStore } from './recover';
+export { readOnlyNotice } from './messages';
 export { createDemoShop } from './demo';

@@ -3,6 +3,7 @@ import { closeSync, existsSync, openSync, readSync, statSync } from 'node:fs';
 import { StoreError } from './errors';
 import { APPLICATION_ID, LATEST_VERSION } from './migrations';
 import { damagedMessage } from './messages';
+import { openForReading } from './read-only';
 
 const SQLITE_HEADER = 'SQLite format 3\u0000';
 
@@ -31,7 +32,7 @@ const CHECK_PRAGMA = { quick: 'quick_check', full: 'integrity_check' } as const;
 function readPragmas(file: string, check: StoreCheck): { applicationId: number; version: number; integrity: string } {
   let db: Database.Database | undefined;
   try {
-    db = new Database(file, { readonly: true, fileMustExist: true });
+    db = openForReading(file);
     const applicationId = db.pragma('application_id', { simple: true }) as number;
     const version = db.pragma('user_version', { simple: true }) as number;
     db.prepare('SELECT count(*) FROM sqlite_schema').get();
@@ -39,7 +40,9 @@ function readPragmas(file: string, check: StoreCheck): { applicationId: number; 
       : (db.pragma(CHECK_PRAGMA[check]) as Record<string, string>[]).map((r) => Object.values(r)[0]).slice(0, 3).join('; ');
     return { applicationId, version, integrity };
   } catch (e) {
-    throw new StoreError('store-corrupt', damagedMessage(file, (e as Error).message));
+    const code = e instanceof Database.SqliteError ? e.code : '';
+    if (code.startsWith('SQLITE_CORRUPT') || code === 'SQLITE_NOTADB') throw new StoreError('store-corrupt', damagedMessage(file, (e as Error).message));
+    throw new StoreError('store-unopenable', `${file} cannot be read (${(e as Error).message})`);
   } finally {
     db?.close();
   }

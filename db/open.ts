@@ -4,6 +4,7 @@ import { dirname, resolve } from 'node:path';
 import { StoreError } from './errors';
 import { inspectStoreFile } from './inspect';
 import { LATEST_VERSION, migrate, schemaVersion } from './migrations';
+import { openForReading } from './read-only';
 import { finishInterruptedRestore } from './recover';
 import type { Store } from './store';
 import { makeStore } from './store';
@@ -46,7 +47,7 @@ function readOnlyReason(file: string): string | undefined {
 
 function connect(file: string, readOnly: boolean, options: OpenOptions): Database.Database {
   try {
-    return new Database(file, { timeout: options.busyTimeout ?? 5000, readonly: readOnly, fileMustExist: readOnly });
+    return readOnly ? openForReading(file, options.busyTimeout) : new Database(file, { timeout: options.busyTimeout ?? 5000 });
   } catch (e) {
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
