@@ -5,8 +5,9 @@ import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { crashSuite } from './suites/crash';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, crashSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

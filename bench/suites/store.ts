@@ -1,3 +1,4 @@
+import Database from 'better-sqlite3';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -53,6 +54,22 @@ function searchRows(store: Store): BenchRow[] {
   ];
 }
 
+/** The damage check every open runs (PRAGMA quick_check), alone, on the generated store. */
+function checkRows(file: string): BenchRow[] {
+  const db = new Database(file, { readonly: true, fileMustExist: true });
+  try {
+    const times = latencies(() => {
+      if (db.pragma('quick_check', { simple: true }) !== 'ok') throw new Error('the generated store fails quick_check');
+    }, 5);
+    const pages = db.pragma('page_count', { simple: true }) as number;
+    const size = (pages * (db.pragma('page_size', { simple: true }) as number)) / 1e6;
+    return [row(`PRAGMA quick_check on open, ${JOBS} jobs (${size.toFixed(0)} MB), p50 of 5`, times.p50, 'ms'),
+      row('PRAGMA quick_check, max of 5', times.max, 'ms')];
+  } finally {
+    db.close();
+  }
+}
+
 function openRows(file: string): BenchRow[] {
   const times = latencies(() => {
     const store = openStore(file);
@@ -60,7 +77,7 @@ function openRows(file: string): BenchRow[] {
     if (!page.ok || page.value.jobs.length !== 50) throw new Error('first page did not load');
     store.db.close();
   }, 15);
-  return [row('open store + first page of 50 (max of 15)', times.max, 'ms', '< 50 ms', times.max < 50)];
+  return [row('open store (quick_check included) + first page of 50 (max of 15)', times.max, 'ms', '< 50 ms', times.max < 50)];
 }
 
 export const storeSuite: BenchSuite = {
@@ -76,7 +93,7 @@ export const storeSuite: BenchSuite = {
       const store = openStore(file);
       const rows = [row(`generate ${JOBS} jobs (one transaction)`, generation / 1000, 's'), ...searchRows(store)];
       store.close();
-      return [...rows, ...openRows(file)];
+      return [...rows, ...checkRows(file), ...openRows(file)];
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

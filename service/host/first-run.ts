@@ -39,7 +39,8 @@ export function openShopStore(file: string, options: OpenOptions = {}):
   const opened = openQuietly(file, options);
   if (!opened.ok) return opened;
   const store = opened.value;
-  if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
+  // A read-only store is shown as it is: the demo shop cannot be written into it.
+  if (store.readOnly || !isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
   const demo = createDemoShop(store);
   if (!demo.ok) {
     store.close();
