@@ -56,6 +56,8 @@ function openService(log: Log): Service | string {
   const opened = openShopStore(userFile('coilwright.db'));
   if (!opened.ok) return opened.error.message;
   if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
+  const { notice } = opened.value;
+  if (notice) void dialog.showMessageBox({ type: 'info', title: 'Coilwright', message: 'The job store is open read-only', detail: notice });
   return createService(opened.value.store);
 }
 

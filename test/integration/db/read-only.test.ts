@@ -48,7 +48,11 @@ describe('a store on a read-only file or folder', () => {
       expect(attempt.stderr).toMatch(/"code": "store-read-only"/);
       expect(attempt.stderr).toMatch(/is read-only \(.*\): nothing was saved\. Lists, searches and prints still work/);
     }
+    // The app and the web transport: the same store, no demo shop written into it, and the notice to show.
+    const shop = spawnSync(process.execPath, ['--import', 'tsx', 'test/integration/db/fixtures/open-shop.ts', file],
+      { cwd: root, encoding: 'utf8', ...asUser, env: { ...process.env, HOME: '/tmp' } });
+    expect(JSON.parse(shop.stdout)).toEqual({ demoJobs: 0, notice: expect.stringMatching(/is open read-only .*saves are refused/) });
     chmodSync(shelf, 0o755);
     expect(sha256(file)).toBe(before);
-  }, 60_000);
+  }, 180_000);
 });
