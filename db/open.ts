@@ -14,6 +14,11 @@ export interface OpenOptions {
   busyTimeout?: number;
   /** The clock writes are stamped with (tests pin it). */
   clock?: () => Date;
+  /**
+   * The damage check before opening: PRAGMA quick_check (the default; it reads every page, about 1-3 s
+   * at 100 000 jobs, see `npm run bench -- store`), or none (the bench's baseline only).
+   */
+  check?: 'quick' | 'none';
 }
 
 /** Connection settings that do not persist in the file, so they are set on every open. */
@@ -62,7 +67,7 @@ function connect(file: string, readOnly: boolean, options: OpenOptions): Databas
  */
 export function openStore(file: string, options: OpenOptions = {}): Store {
   finishInterruptedRestore(file);
-  const info = inspectStoreFile(file, { check: 'quick' });
+  const info = inspectStoreFile(file, { check: options.check ?? 'quick' });
   const readOnly = readOnlyReason(file);
   if (readOnly && info.state === 'new') throw new StoreError('store-unopenable', `${file} cannot be created: ${readOnly}`);
   const db = connect(file, readOnly !== undefined, options);
