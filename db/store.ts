@@ -61,6 +61,9 @@ export function writeFailure(store: Store, e: unknown): unknown {
     return new StoreError('disk-full', `the disk is full: nothing was saved. Free some space on the disk that holds ${store.file}, then save again`);
   }
   if (e.code.startsWith('SQLITE_READONLY')) return readOnlyError(store, e.message);
+  if (e.code.startsWith('SQLITE_BUSY')) {
+    return new StoreError('store-busy', `another program kept ${store.file} locked for writing too long: nothing was saved, try again`);
+  }
   if (e.code.startsWith('SQLITE_IOERR')) {
     return new StoreError('store-write-failed', `${store.file} could not be written (${e.code}): nothing was saved`);
   }
