@@ -26,7 +26,8 @@ function alive(pid: number): boolean {
 function beside(file: string, infix: string): string[] {
   const dir = dirname(resolve(file));
   const prefix = `${basename(file)}${infix}`;
-  return readdirSync(dir).filter((n) => n.startsWith(prefix) && !/-(wal|shm|journal)$/.test(n))
+  // Companion files and unfinished copies (.partial) are never candidates.
+  return readdirSync(dir).filter((n) => n.startsWith(prefix) && !/(-wal|-shm|-journal|\.partial)$/.test(n))
     .map((n) => join(dir, n)).sort((a, b) => statSync(b).mtimeMs - statSync(a).mtimeMs);
 }
 

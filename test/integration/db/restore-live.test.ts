@@ -1,5 +1,5 @@
 import { spawn } from 'node:child_process';
-import { existsSync, renameSync } from 'node:fs';
+import { existsSync, renameSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { backupStore, createJob, getSettings, issueQuote, listJobs, openStore, restoreStore } from '../../../db';
@@ -89,6 +89,8 @@ describe('a store whose restore stopped between moving the old store aside and p
     value(createJob(store, job({ partNumber: 'SHOP-OWN-JOB' })));
     store.close();
     renameSync(file, `${file}.before-restore-2026-03-02T08-00-00-000Z`);
+    // A newer copy that was never finished is not a candidate.
+    writeFileSync(`${file}.before-restore-2026-03-03T08-00-00-000Z.partial`, 'SQLite format 3\u0000 half a copy');
     const opened = openShopStore(file);
     if (!opened.ok) throw new Error(opened.error.message);
     track(opened.value.store);
