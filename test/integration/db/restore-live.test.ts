@@ -2,7 +2,7 @@ import { spawn } from 'node:child_process';
 import { existsSync, renameSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { backupStore, createJob, getSettings, issueQuote, listJobs, openStore, restoreStore } from '../../../db';
+import { backupStore, createJob, findJobs, getSettings, issueQuote, listJobs, openStore, restoreStore, similarJobs } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { startWebServer } from '../../../service/web/server';
 import { job, tempDir, track, value } from './helpers';
@@ -73,6 +73,10 @@ describe('a restore while another program has the store open', () => {
     expect(outcome.result.ok).toBe(true);
     const now = track(outcome.store);
     expect(value(listJobs(now, {})).jobs.map((j) => j.partNumber)).toEqual(['FIRST']);
+    // The search indexes came with the rows: the restored job is found, the undone one is not.
+    expect(value(findJobs(now, { text: 'FIRST' })).map((h) => h.job.partNumber)).toEqual(['FIRST']);
+    expect(value(findJobs(now, { text: 'SECOND' }))).toEqual([]);
+    expect(value(similarJobs(now, { spec: job().spec })).map((s) => s.job.partNumber)).toEqual(['FIRST']);
     const next = value(createJob(now, job({ partNumber: 'THIRD' }))).number;
     const nextQuote = value(issueQuote(now, { jobId: first.id, prices: {}, quantityBreaks: [], document: {} })).number;
     expect(given).not.toContain(next);
