@@ -28,7 +28,8 @@ export const dbCommand: Command = {
   name: 'db',
   usage: [
     'db backup --db DB --out FILE     online backup of the store to a new file, verified',
-    '  db restore --db DB --from FILE  replace the store with a verified backup (the old one is kept beside it)',
+    '  db restore --db DB --from FILE  replace the store\'s contents with a verified backup, also while other programs',
+    '                                  have it open; the old store (or a damaged one) is kept beside it',
     '  db export --db DB [--out FILE] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
   ].join('\n'),
