@@ -28,31 +28,40 @@ describe('a store on a read-only file or folder', () => {
     chmodSync(out, 0o777);
     chmodSync(file, 0o444);
     chmodSync(shelf, 0o555);
-    const before = sha256(file);
-
-    const listed = cli('jobs', 'list', '--db', file);
-    expect(listed.status, listed.stderr).toBe(0);
-    expect(JSON.parse(listed.stdout).jobs.map((j: { partNumber: string }) => j.partNumber).sort()).toEqual(['RO-1', 'RO-2', 'RO-3']);
-    expect(listed.stderr).toMatch(/is open read-only \((the file|its folder .*) is read-only\): lists, searches and prints work; saves are refused/);
-    expect(JSON.parse(cli('jobs', 'find', 'RO-2', '--db', file).stdout).map((h: { job: { partNumber: string } }) => h.job.partNumber)).toContain('RO-2');
-    const printed = cli('print', 'traveller', '--job', '1', '--db', file, '--out', join(out, 'traveller.pdf'));
-    expect(printed.status, printed.stderr).toBe(0);
-    expect(existsSync(join(out, 'traveller.pdf'))).toBe(true);
-
-    for (const attempt of [
-      cli('jobs', 'add', join(out, 'job.json'), '--db', file),
-      cli('jobs', 'status', '1', 'ordered', '--db', file),
-      cli('db', 'restore', '--db', file, '--from', join(dir, 'backup.db')),
-    ]) {
-      expect(attempt.status).toBe(2);
-      expect(attempt.stderr).toMatch(/"code": "store-read-only"/);
-      expect(attempt.stderr).toMatch(/is read-only \(.*\): nothing was saved\. Lists, searches and prints still work/);
+    try {
+      await checkReadOnly(dir, file);
+    } finally {
+      chmodSync(shelf, 0o755);
     }
-    // The app and the web transport: the same store, no demo shop written into it, and the notice to show.
-    const shop = spawnSync(process.execPath, ['--import', 'tsx', 'test/integration/db/fixtures/open-shop.ts', file],
-      { cwd: root, encoding: 'utf8', ...asUser, env: { ...process.env, HOME: '/tmp' } });
-    expect(JSON.parse(shop.stdout)).toEqual({ demoJobs: 0, notice: expect.stringMatching(/is open read-only .*saves are refused/) });
-    chmodSync(shelf, 0o755);
-    expect(sha256(file)).toBe(before);
   }, 180_000);
 });
+
+/** What a user of the read-only store can and cannot do, through the command line and the app's opening. */
+async function checkReadOnly(dir: string, file: string): Promise<void> {
+  const out = join(dir, 'out');
+  const before = sha256(file);
+
+  const listed = cli('jobs', 'list', '--db', file);
+  expect(listed.status, listed.stderr).toBe(0);
+  expect(JSON.parse(listed.stdout).jobs.map((j: { partNumber: string }) => j.partNumber).sort()).toEqual(['RO-1', 'RO-2', 'RO-3']);
+  expect(listed.stderr).toMatch(/is open read-only \((the file|its folder .*) is read-only\): lists, searches and prints work; saves are refused/);
+  expect(JSON.parse(cli('jobs', 'find', 'RO-2', '--db', file).stdout).map((h: { job: { partNumber: string } }) => h.job.partNumber)).toContain('RO-2');
+  const printed = cli('print', 'traveller', '--job', '1', '--db', file, '--out', join(out, 'traveller.pdf'));
+  expect(printed.status, printed.stderr).toBe(0);
+  expect(existsSync(join(out, 'traveller.pdf'))).toBe(true);
+
+  for (const attempt of [
+    cli('jobs', 'add', join(out, 'job.json'), '--db', file),
+    cli('jobs', 'status', '1', 'ordered', '--db', file),
+    cli('db', 'restore', '--db', file, '--from', join(dir, 'backup.db')),
+  ]) {
+    expect(attempt.status).toBe(2);
+    expect(attempt.stderr).toMatch(/"code": "store-read-only"/);
+    expect(attempt.stderr).toMatch(/is read-only \(.*\): nothing was saved\. Lists, searches and prints still work/);
+  }
+  // The app and the web transport: the same store, no demo shop written into it, and the notice to show.
+  const shop = spawnSync(process.execPath, ['--import', 'tsx', 'test/integration/db/fixtures/open-shop.ts', file],
+    { cwd: root, encoding: 'utf8', ...asUser, env: { ...process.env, HOME: '/tmp' } });
+  expect(JSON.parse(shop.stdout)).toEqual({ demoJobs: 0, notice: expect.stringMatching(/is open read-only .*saves are refused/) });
+  expect(sha256(file)).toBe(before);
+}
