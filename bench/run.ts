@@ -5,9 +5,10 @@ import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { cliSuite } from './suites/cli';
 import { crashSuite } from './suites/crash';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, crashSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, crashSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

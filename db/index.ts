@@ -14,6 +14,7 @@ export { listCustomers } from './jobs/customers';
 export { listJobs } from './search/list';
 export { findJobs } from './search/text';
 export { similarJobs } from './search/similar';
+export { reindexJobs, staleJobCount } from './search/reindex';
 export { getSettings, saveSettings } from './settings';
 export { issueQuote, getQuote, listQuotes } from './quotes';
 export { addAttachment, listAttachments, getAttachment } from './attachments';

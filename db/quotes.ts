@@ -1,11 +1,12 @@
 import type { IssueQuoteInput, Quote, QuoteSummary, RevisionFields } from '../core/api/store';
 import { issueQuoteSchema, listQuotesSchema } from '../core/api/store';
 import type { Settings } from '../core/settings/schema';
-import type { Spec } from '../core/spec';
-import { failure, invalid, success } from './errors';
+import { StoreError, failure, invalid, success } from './errors';
 import type { StoreResult } from './errors';
 import { takeNumber } from './jobs/numbering';
 import { jobRow } from './jobs/read';
+import { storedSpecOf } from './jobs/rows';
+import { readStoredSpec } from './jobs/stored-spec';
 import { revisionFields, stateOfRow } from './jobs/state';
 import { attempt } from './jobs/write';
 import { readSettings } from './settings';
@@ -28,16 +29,19 @@ function toSummary(row: QuoteRow): QuoteSummary {
   };
 }
 
-function toQuote(row: QuoteRow): Quote {
-  return {
+/** The issued quote as it was; a spec that no longer reads is this quote's problem, named with its field. */
+function toQuote(row: QuoteRow): StoreResult<Quote> {
+  const stored = readStoredSpec(row.spec, `quote ${row.number}`);
+  if (!stored.ok) return failure(stored.problem.code, stored.problem.message, stored.problem.path);
+  return success({
     ...toSummary(row),
     job: JSON.parse(row.job!) as RevisionFields & { number: string },
-    spec: JSON.parse(row.spec!) as Spec,
+    spec: stored.spec,
     settings: JSON.parse(row.settings!) as Settings,
     prices: JSON.parse(row.prices!),
     quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
     document: JSON.parse(row.document!),
-  };
+  });
 }
 
 /**
@@ -52,13 +56,15 @@ export function issueQuote(store: Store, raw: IssueQuoteInput): StoreResult<Quot
     const id = inTransaction(store, () => {
       const row = jobRow(store, input.jobId);
       if (!row) return undefined;
+      const stored = storedSpecOf(row);
+      if (!stored.ok) throw new StoreError(stored.problem.code, stored.problem.message, stored.problem.path);
       const settings = readSettings(store);
       const number = takeNumber(store, 'quotes');
       const job = { number: row.number, ...revisionFields(store, stateOfRow(row)) };
       const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
                                   settings, prices, quantity_breaks, document) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
         .run(number, row.id, row.revision, store.now().toISOString(), input.validityDays ?? settings.defaults.quoteValidityDays,
-          settings.defaults.currency, JSON.stringify(job), row.spec, JSON.stringify(settings), JSON.stringify(input.prices),
+          settings.defaults.currency, JSON.stringify(job), JSON.stringify(stored.spec), JSON.stringify(settings), JSON.stringify(input.prices),
           JSON.stringify(input.quantityBreaks), JSON.stringify(input.document));
       return Number(result.lastInsertRowid);
     });
@@ -71,7 +77,7 @@ export function getQuote(store: Store, key: { id: number } | { number: string })
     ? store.sql('SELECT * FROM quotes WHERE id = ?').get(key.id)
     : store.sql('SELECT * FROM quotes WHERE number = ?').get(key.number);
   if (!row) return failure('not-found', `no quote ${'id' in key ? `with id ${key.id}` : key.number}`, 'id' in key ? 'id' : 'number');
-  return success(toQuote(row as QuoteRow));
+  return toQuote(row as QuoteRow);
 }
 
 const SUMMARY = 'id, number, job_id, job_revision, issued_at, validity_days, currency';

@@ -10,7 +10,7 @@ export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'backup', 'restore',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'backup', 'restore',
   'manufacturingPlan', 'costEstimate', 'printTraveller', 'printQuote', 'reprintQuote',
 ] as const;
 

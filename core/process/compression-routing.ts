@@ -37,7 +37,7 @@ function grind(settings: Settings, x: CompressionDesign, r: CompressionReport): 
   ], machinePiecesPerHour);
 }
 
-/** Presses to solid at set removal; some makers press several times (common practice, shop-practice notes §3.4). */
+/** Presses to solid at set removal; some makers press several times (common trade practice). */
 export const SET_STROKES = 3;
 
 function presetToSolid(settings: Settings, x: CompressionDesign, r: CompressionReport): Draft {

@@ -4,7 +4,7 @@ export const reviewLimits = {
   preferredIndex: { min: 4, max: 12 },
   /** Beyond these a spring is not practically coiled (common trade practice). */
   makeableIndex: { min: 2, max: 25 },
-  /** Wire under 0.5 mm is normally left unground (common trade practice; shop-practice notes §3.3). */
+  /** Wire under 0.5 mm is normally left unground (common trade practice, as spring makers' end-type guides state it). */
   minimumGroundWire: 0.5,
   /** Trade rules for set removal (SMI, reprinted by spring makers): set ≥ 10 % of the deflection to solid; ratio ≤ 1.3. */
   minimumSetFraction: 0.1,

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { customerRefSchema, jobInputSchema } from '../../core/api/store';
 import type { JobDetails } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
 export const EXCHANGE_VERSION = 1;
@@ -12,7 +11,8 @@ export interface JobRecord extends JobDetails {
   customer: { name: string; email: string; phone: string } | null;
   createdAt: string;
   updatedAt: string;
-  spec: Spec;
+  /** The checked spec; as stored when it no longer reads, so an export never drops a job (the export names it). */
+  spec: unknown;
 }
 
 export interface JobsDocument {

@@ -17,7 +17,7 @@ const spec = (input: CompressionSpecInput): CompressionSpec => {
 describe('compression analysis of the reference spring (d 2, D 20, n 8)', () => {
   const r = analyseSpec(spec(referenceSpring));
 
-  it('rate, surge frequency and minimum gaps match the engineering notes §8 rows 19 and 21 (derived)', () => {
+  it('rate, surge frequency and minimum gaps match Shigley 9e Eqs. 10-9, 10-25 and FEBROTEC\'s Sa rule (derived)', () => {
     expect(r.rate).toBeCloseTo(2.547, 3);
     expect(r.naturalFrequency / 226.6).toBeCloseTo(1, 2);
     expect(r.coilGapSum).toBeCloseTo(4.0, 10);
@@ -55,7 +55,11 @@ describe('compression report in the spec\'s units', () => {
     expect(r.tensileStrengthBasis).toBe('override');
     expect(r.loads).toHaveLength(2);
     expect(r.loads[1]!.force).toBeCloseTo(r.rate * 25, 9);
-    for (const f of r.findings) expect(f.path).toBeTypeOf('string');
+    // R = G·d⁴/(8·D³·n) (Shigley 9e Eq. 10-9) = 81 500·16/(8·8000·8) = 2.547 N/mm, so F at 35 mm is
+    // 63.7 N, inside 70 N ± 10 %: the only finding is that a drawing fixing geometry and a force is over-determined.
+    expect(r.rate).toBeCloseTo(2.547, 3);
+    expect(Math.abs(r.loads[1]!.force - 70) / 70).toBeLessThan(0.1);
+    expect(r.findings.map((f) => [f.code, f.severity, f.path])).toEqual([['over-determined', 'warning', 'loads[1].force']]);
   });
 
   it('a drawing fixing geometry and a force is over-determined until the EN 15800 free parameters are released', () => {
