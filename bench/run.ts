@@ -7,8 +7,9 @@ import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { cliSuite } from './suites/cli';
 import { crashSuite } from './suites/crash';
+import { designSuite } from './suites/design';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, crashSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, designSuite, crashSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

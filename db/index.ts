@@ -25,3 +25,7 @@ export type { RestoreOptions, RestoreStage } from './backup';
 export { restoreDamagedStore } from './recover';
 export { readOnlyNotice } from './messages';
 export { createDemoShop } from './demo';
+export { recordFirstOff, listFirstOff } from './first-off/records';
+export { setCalibration } from './first-off/calibration';
+export { adoptDesign, jobRequirement } from './jobs/requirements';
+export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';

@@ -2,11 +2,14 @@ import { engineMethods } from './engine';
 import { storeMethods } from './store';
 import { shopMethods } from './shop';
 import { documentMethods } from './documents';
+import { firstOffMethods } from './first-off';
+import { designMethods } from './design';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
 export * from './store';
 export type { PrintedPdf } from './documents';
+export * from './first-off';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
 export const contract = {
@@ -14,6 +17,8 @@ export const contract = {
   ...storeMethods,
   ...shopMethods,
   ...documentMethods,
+  ...firstOffMethods,
+  ...designMethods,
 };
 
 export type Contract = typeof contract;

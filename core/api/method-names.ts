@@ -12,6 +12,8 @@ export const apiMethodNames = [
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
   'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'backup', 'restore',
   'manufacturingPlan', 'costEstimate', 'printTraveller', 'printQuote', 'reprintQuote',
+  'recordFirstOff', 'listFirstOff', 'setCalibration',
+  'designSprings', 'adoptDesign', 'jobRequirement',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

@@ -27,6 +27,8 @@ export const defaultsSchema = z.object({
   units: z.enum(['metric', 'inch']).default('metric'),
   toleranceGrade: z.union([z.literal(1), z.literal(2), z.literal(3)]).default(2),
   quoteValidityDays: z.number().int().min(1).max(365).default(30),
+  /** Which set-removal verdict routes a compression spring: the handbook's, EN 13906-1's, or the stricter. */
+  setRemovalMethod: z.enum(['stricter', 'handbook', 'en13906']).default('stricter'),
 }).strict();
 
 const sequence = {
@@ -110,6 +112,12 @@ export const costingSchema = z.object({
   minimumOrderValue: money.default(150),
 }).strict();
 
+/** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
+export const designStepsSchema = z.object({
+  coilStep: z.number().finite().min(0.05).max(1).default(0.25),
+  diameterStep: z.number().finite().min(0.01).max(5).default(0.1),
+}).strict();
+
 function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): void {
   const seen = new Set<string>();
   items.forEach((item, i) => {
@@ -121,7 +129,7 @@ function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): 
 /** The schema of each settings key; the store keeps one row per key. */
 export const settingsSchemas = {
   shopProfile: shopProfileSchema.default({ name: '', addressLines: [], phone: '', email: '' }),
-  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30 }),
+  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30, setRemovalMethod: 'stricter' }),
   numbering: numberingSchema.default({ prefix: 'J-{yy}-', width: 4, next: 1, quotes: { prefix: 'Q-{yy}-', width: 4, next: 1 } }),
   machines: z.array(machineSchema).max(200).superRefine(uniqueIds).default([]),
   materialPrices: z.array(materialPriceSchema).max(2000).default([]),
@@ -133,6 +141,7 @@ export const settingsSchemas = {
     inspectionMinutesPerPiece: 0.5, packagingPerPiece: 0.01,
     minimumOrderValue: 150,
   }),
+  design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();

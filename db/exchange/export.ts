@@ -13,6 +13,8 @@ import { parseWith } from '../../core/validation';
 import { csvLine } from './csv';
 import type { JobRecord, JobsDocument } from './document';
 import { CSV_COLUMNS, EXCHANGE_FORMAT, EXCHANGE_VERSION } from './document';
+import type { FirstOffExport } from './first-off';
+import { firstOffByJob } from './first-off';
 
 type ExportRow = JobRow & { customer_email: string | null; customer_phone: string | null };
 
@@ -34,7 +36,7 @@ function readRows(store: Store, status: JobStatus | JobStatus[] | undefined): Re
   return exportRows(store, status).map((row) => ({ row, stored: storedSpecOf(row) }));
 }
 
-function toRecord({ row, stored }: ReadRow): JobRecord {
+function toRecord({ row, stored }: ReadRow, firstOff: FirstOffExport[] | undefined): JobRecord {
   return {
     number: row.number,
     customer: row.customer_name === null ? null
@@ -43,17 +45,22 @@ function toRecord({ row, stored }: ReadRow): JobRecord {
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
     leadTimeDays: row.lead_time_days, createdAt: row.created_at, updatedAt: row.updated_at,
     spec: carriedSpec(stored),
+    ...(firstOff ? { firstOff } : {}),
   };
 }
 
 const problemsOf = (rows: ReadRow[]): StoredProblem[] => rows.flatMap(({ stored }) => (stored.ok ? [] : [stored.problem]));
 
-function documentOf(store: Store, rows: ReadRow[]): JobsDocument {
-  return { format: EXCHANGE_FORMAT, version: EXCHANGE_VERSION, exportedAt: store.now().toISOString(), jobs: rows.map(toRecord) };
+function documentOf(store: Store, rows: ReadRow[], firstOff: Map<number, FirstOffExport[]>): JobsDocument {
+  return {
+    format: EXCHANGE_FORMAT, version: EXCHANGE_VERSION, exportedAt: store.now().toISOString(),
+    jobs: rows.map((r) => toRecord(r, firstOff.get(r.row.id))),
+  };
 }
 
 export function jobsDocument(store: Store, status?: JobStatus | JobStatus[]): JobsDocument {
-  return documentOf(store, readRows(store, status));
+  const firstOff = firstOffByJob(store);
+  return documentOf(store, readRows(store, status), firstOff);
 }
 
 function csvRow(row: ExportRow): unknown[] {
@@ -80,7 +87,7 @@ export function exportJobs(store: Store, raw: unknown): StoreResult<ExportResult
   if (!parsed.ok) return invalid(parsed.errors);
   const { format, file, status } = parsed.value;
   const rows = readRows(store, status);
-  const text = format === 'csv' ? csvOf(rows.map((r) => r.row)) : `${JSON.stringify(documentOf(store, rows), null, 2)}\n`;
+  const text = format === 'csv' ? csvOf(rows.map((r) => r.row)) : `${JSON.stringify(documentOf(store, rows, firstOffByJob(store)), null, 2)}\n`;
   const problems = problemsOf(rows);
   const named = problems.length > 0 ? { problems } : {};
   if (file === undefined) return success({ format, count: rows.length, text, ...named });

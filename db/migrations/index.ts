@@ -3,8 +3,10 @@ import { StoreError } from '../errors';
 import { updateToVersion0001 } from './0001-jobs';
 import { updateToVersion0002 } from './0002-search';
 import { updateToVersion0003 } from './0003-quotes';
+import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
 import { updateToVersion0006 } from './0006-keep-issued-rows';
+import { updateToVersion0008 } from './0008-job-requirements';
 
 export interface Migration {
   version: number;
@@ -17,8 +19,10 @@ export const migrations: readonly Migration[] = [
   { version: 1, name: 'jobs', update: updateToVersion0001 },
   { version: 2, name: 'search', update: updateToVersion0002 },
   { version: 3, name: 'quotes', update: updateToVersion0003 },
+  { version: 4, name: 'first-off records', update: updateToVersion0004 },
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
   { version: 6, name: 'keep issued rows', update: updateToVersion0006 },
+  { version: 8, name: 'job requirements', update: updateToVersion0008 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */
