@@ -6,10 +6,11 @@ import { storeMillionSuite, storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { cliSuite } from './suites/cli';
+import { crashSuite } from './suites/crash';
 import { designSuite } from './suites/design';
 import { fuzzSuite } from './suites/fuzz';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

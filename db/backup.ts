@@ -6,8 +6,11 @@ import { StoreError, failure, success } from './errors';
 import type { StoreResult } from './errors';
 import { inspectStoreFile } from './inspect';
 import type { OpenOptions } from './open';
-import { openStore } from './open';
+import { INCOMING } from './recover';
+import { prepareIncoming, removeStoreFiles } from './restore-copy';
+import { replaceRows } from './restore-into';
 import type { Store } from './store';
+import { readOnlyError, writeFailure } from './store';
 
 function asFailure(e: unknown): { ok: false; error: { code: string; message: string; path: string } } {
   if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
@@ -43,7 +46,7 @@ export async function backupStore(store: Store, file: string): Promise<StoreResu
   try {
     await store.db.backup(partial);
     makeStandalone(partial);
-    const info = inspectStoreFile(partial, { deep: true });
+    const info = inspectStoreFile(partial, { check: 'full' });
     renameSync(partial, file);
     return success({ file, bytes: statSync(file).size, version: info.version });
   } catch (e) {
@@ -56,7 +59,7 @@ export async function backupStore(store: Store, file: string): Promise<StoreResu
 export function verifyBackup(file: string): StoreResult<{ version: number }> {
   if (!existsSync(file)) return failure('not-found', `${file} does not exist`, 'file');
   try {
-    const info = inspectStoreFile(file, { deep: true });
+    const info = inspectStoreFile(file, { check: 'full' });
     if (info.state === 'new') return failure('not-a-store', `${file} is empty`, 'file');
     return success({ version: info.version });
   } catch (e) {
@@ -64,58 +67,78 @@ export function verifyBackup(file: string): StoreResult<{ version: number }> {
   }
 }
 
-function moveStoreAside(file: string, stamp: string): string | null {
-  if (!existsSync(file)) return null;
-  const kept = `${file}.before-restore-${stamp}`;
-  renameSync(file, kept);
-  for (const suffix of ['-wal', '-shm']) rmSync(`${file}${suffix}`, { force: true });
-  return kept;
+/** Where a restore can be paused (tests stop the process there to prove a crash loses nothing). */
+export type RestoreStage = 'copied' | 'kept' | 'replaced' | 'ready' | 'moved';
+
+export interface RestoreOptions extends OpenOptions {
+  pause?: (stage: RestoreStage) => Promise<void>;
 }
 
-/** What a restore gives back: the outcome, and the store now open (the restored one, or the old one on failure). */
+/** What a restore gives back: the outcome, and the store open now (the same connection, restored or not). */
 export interface RestoreOutcome {
   result: StoreResult<RestoreResult>;
   store: Store;
 }
 
-async function copyIn(from: string, incoming: string): Promise<void> {
-  rmSync(incoming, { force: true });
-  const source = new Database(from, { readonly: true, fileMustExist: true });
-  try {
-    await source.backup(incoming);
-  } finally {
-    source.close();
+const stampNow = () => new Date().toISOString().replace(/[:.]/g, '-');
+
+/**
+ * Keeps the store as it is now beside it, then copies the incoming rows over the live store in one
+ * write transaction. A write by another connection between the two would be in neither, so the write
+ * lock is taken, and when the store changed since the copy was kept, the copy is taken again.
+ */
+async function keepAndReplace(store: Store, options: RestoreOptions): Promise<string> {
+  for (let round = 0; round < 3; round++) {
+    const kept = await backupStore(store, `${store.file}.before-restore-${stampNow()}`);
+    if (!kept.ok) throw new StoreError(kept.error.code, `the store could not be kept before the restore: ${kept.error.message}`, 'file');
+    const seen = store.db.pragma('data_version', { simple: true });
+    await options.pause?.('kept');
+    store.db.exec('BEGIN IMMEDIATE');
+    try {
+      if (store.db.pragma('data_version', { simple: true }) !== seen) {
+        store.db.exec('ROLLBACK');
+        removeStoreFiles(kept.value.file);
+        continue;
+      }
+      replaceRows(store);
+      await options.pause?.('replaced');
+      store.db.exec('COMMIT');
+      return kept.value.file;
+    } catch (e) {
+      if (store.db.inTransaction) store.db.exec('ROLLBACK');
+      removeStoreFiles(kept.value.file);
+      throw writeFailure(store, e);
+    }
   }
-  makeStandalone(incoming);
-  inspectStoreFile(incoming, { deep: true });
+  throw new StoreError('store-busy', `${store.file} is being written by another program all the time: try the restore again`, 'file');
 }
 
 /**
- * Replaces the store at `store.file` with a verified backup. The backup is verified, copied beside the
- * store and verified again before the store is closed; the old store is kept as FILE.before-restore-*.
- * The restored store is reopened (and migrated, when the backup is from an older version).
+ * Restores a verified backup into the live store, while other programs (a second window, the web
+ * transport, the command line) may have it open: the backup is copied beside the store and brought to
+ * this version's schema, the store as it was is kept as FILE.before-restore-*, and the rows are replaced
+ * in one transaction, so every connection sees the restored store at its next read and goes on writing
+ * into the same file. Job and quote sequences keep the higher of the two values: no number is reused.
  */
-export async function restoreStore(store: Store, from: string, options: OpenOptions = {}): Promise<RestoreOutcome> {
+export async function restoreStore(store: Store, from: string, options: RestoreOptions = {}): Promise<RestoreOutcome> {
   if (sameFile(from, store.file)) return { result: failure('same-file', 'restore from a backup, not from the store itself', 'file'), store };
+  if (store.readOnly) return { result: { ok: false, error: readOnlyError(store, store.readOnly).toApiError() }, store };
   const verified = verifyBackup(from);
   if (!verified.ok) return { result: verified, store };
-  const file = store.file;
-  const incoming = `${file}.restoring`;
+  const incoming = `${store.file}${INCOMING}${process.pid}`;
   try {
-    await copyIn(from, incoming);
+    await prepareIncoming(from, incoming);
+    await options.pause?.('copied');
+    store.db.prepare('ATTACH DATABASE ? AS incoming').run(incoming);
+    try {
+      const kept = await keepAndReplace(store, options);
+      return { result: success({ restoredFrom: from, previousKeptAs: kept, version: verified.value.version }), store };
+    } finally {
+      store.db.exec('DETACH DATABASE incoming');
+    }
   } catch (e) {
-    for (const suffix of ['', '-wal', '-shm']) rmSync(`${incoming}${suffix}`, { force: true });
     return { result: asFailure(e), store };
-  }
-  store.db.pragma('wal_checkpoint(TRUNCATE)');
-  store.close();
-  const kept = moveStoreAside(file, new Date().toISOString().replace(/[:.]/g, '-'));
-  renameSync(incoming, file);
-  try {
-    const reopened = openStore(file, options);
-    return { result: success({ restoredFrom: from, previousKeptAs: kept, version: verified.value.version }), store: reopened };
-  } catch (e) {
-    if (kept) renameSync(kept, file);
-    return { result: asFailure(e), store: openStore(file, options) };
+  } finally {
+    removeStoreFiles(incoming);
   }
 }

@@ -2,6 +2,8 @@ import Database from 'better-sqlite3';
 import { closeSync, existsSync, openSync, readSync, statSync } from 'node:fs';
 import { StoreError } from './errors';
 import { APPLICATION_ID, LATEST_VERSION } from './migrations';
+import { damagedMessage } from './messages';
+import { openForReading } from './read-only';
 
 const SQLITE_HEADER = 'SQLite format 3\u0000';
 
@@ -22,17 +24,25 @@ function readHeader(file: string): string {
   }
 }
 
-function readPragmas(file: string, deep: boolean): { applicationId: number; version: number; integrity: string } {
+/** How far a file is checked: none (header and schema only), quick (PRAGMA quick_check), full (integrity_check). */
+export type StoreCheck = 'none' | 'quick' | 'full';
+
+const CHECK_PRAGMA = { quick: 'quick_check', full: 'integrity_check' } as const;
+
+function readPragmas(file: string, check: StoreCheck): { applicationId: number; version: number; integrity: string } {
   let db: Database.Database | undefined;
   try {
-    db = new Database(file, { readonly: true, fileMustExist: true });
+    db = openForReading(file);
     const applicationId = db.pragma('application_id', { simple: true }) as number;
     const version = db.pragma('user_version', { simple: true }) as number;
     db.prepare('SELECT count(*) FROM sqlite_schema').get();
-    const integrity = deep ? String(db.pragma('integrity_check', { simple: true })) : 'ok';
+    const integrity = check === 'none' ? 'ok'
+      : (db.pragma(CHECK_PRAGMA[check]) as Record<string, string>[]).map((r) => Object.values(r)[0]).slice(0, 3).join('; ');
     return { applicationId, version, integrity };
   } catch (e) {
-    throw new StoreError('store-corrupt', `${file} is damaged and cannot be read (${(e as Error).message})`);
+    const code = e instanceof Database.SqliteError ? e.code : '';
+    if (code.startsWith('SQLITE_CORRUPT') || code === 'SQLITE_NOTADB') throw new StoreError('store-corrupt', damagedMessage(file, (e as Error).message));
+    throw new StoreError('store-unopenable', `${file} cannot be read (${(e as Error).message})`);
   } finally {
     db?.close();
   }
@@ -40,10 +50,10 @@ function readPragmas(file: string, deep: boolean): { applicationId: number; vers
 
 /**
  * Looks at a file without writing to it: the SQLite header, then (read-only) the application id and
- * schema version, and with `deep` a full integrity check. Throws StoreError for anything that is not a
+ * schema version, and the check asked for (quick_check on every open, integrity_check for backups). Throws StoreError for anything that is not a
  * Coilwright store this version can open.
  */
-export function inspectStoreFile(file: string, { deep = false } = {}): StoreFileInfo {
+export function inspectStoreFile(file: string, { check = 'none' as StoreCheck } = {}): StoreFileInfo {
   if (!existsSync(file)) return { state: 'new', version: 0 };
   const stat = statSync(file);
   if (!stat.isFile()) throw new StoreError('not-a-store', `${file} is not a file`);
@@ -51,7 +61,7 @@ export function inspectStoreFile(file: string, { deep = false } = {}): StoreFile
   if (readHeader(file) !== SQLITE_HEADER) {
     throw new StoreError('not-a-store', `${file} is not a Coilwright store (not a SQLite database)`);
   }
-  const { applicationId, version, integrity } = readPragmas(file, deep);
+  const { applicationId, version, integrity } = readPragmas(file, check);
   if (applicationId !== APPLICATION_ID) {
     throw new StoreError('not-a-store', `${file} is a SQLite database but not a Coilwright store`);
   }
@@ -59,6 +69,6 @@ export function inspectStoreFile(file: string, { deep = false } = {}): StoreFile
     throw new StoreError('store-too-new',
       `${file} has schema version ${version}; this version of Coilwright knows up to ${LATEST_VERSION}: update Coilwright to open it`);
   }
-  if (integrity !== 'ok') throw new StoreError('store-corrupt', `${file} failed its integrity check: ${integrity}`);
+  if (integrity !== 'ok') throw new StoreError('store-corrupt', damagedMessage(file, `${CHECK_PRAGMA[check as 'quick']}: ${integrity}`));
   return { state: 'store', version };
 }

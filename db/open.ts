@@ -1,7 +1,11 @@
 import Database from 'better-sqlite3';
+import { accessSync, constants, existsSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { StoreError } from './errors';
 import { inspectStoreFile } from './inspect';
-import { migrate } from './migrations';
+import { LATEST_VERSION, migrate, schemaVersion } from './migrations';
+import { openForReading } from './read-only';
+import { finishInterruptedRestore } from './recover';
 import type { Store } from './store';
 import { makeStore } from './store';
 
@@ -10,40 +14,76 @@ export interface OpenOptions {
   busyTimeout?: number;
   /** The clock writes are stamped with (tests pin it). */
   clock?: () => Date;
+  /**
+   * The damage check before opening: PRAGMA quick_check (the default; it reads every page, about 1-3 s
+   * at 100 000 jobs, see `npm run bench -- store`), or none (the bench's baseline only).
+   */
+  check?: 'quick' | 'none';
 }
 
 /** Connection settings that do not persist in the file, so they are set on every open. */
-function configure(db: Database.Database): void {
-  db.pragma('journal_mode = WAL');
-  // Right after a switch to WAL the connection reports FULL; NORMAL is safe in WAL and much faster.
-  db.pragma('synchronous = NORMAL');
+function configure(db: Database.Database, readOnly: boolean): void {
+  if (!readOnly) {
+    db.pragma('journal_mode = WAL');
+    // Right after a switch to WAL the connection reports FULL; NORMAL is safe in WAL and much faster.
+    db.pragma('synchronous = NORMAL');
+  }
   db.pragma('foreign_keys = ON');
   // 32 MB of page cache (the default is 2 MB) keeps the search indexes of a large shop in memory.
   db.pragma('cache_size = -32768');
 }
 
-/**
- * Opens (or creates) a job store. The file is inspected read-only first: anything that is not a
- * Coilwright store, is damaged, or comes from a newer version is refused with a StoreError and left
- * exactly as it was. Pending migrations then apply in one transaction.
- */
-export function openStore(file: string, options: OpenOptions = {}): Store {
-  inspectStoreFile(file);
-  let db: Database.Database;
+const writable = (path: string) => {
   try {
-    db = new Database(file, { timeout: options.busyTimeout ?? 5000 });
+    accessSync(path, constants.W_OK);
+    return true;
+  } catch {
+    return false;
+  }
+};
+
+/** Why the store cannot be written (SQLite also writes its -wal and -shm files in the folder), or undefined. */
+function readOnlyReason(file: string): string | undefined {
+  const folder = dirname(resolve(file));
+  if (existsSync(file) && !writable(file)) return 'the file is read-only';
+  if (!writable(folder)) return `its folder ${folder} is read-only`;
+  return undefined;
+}
+
+function connect(file: string, readOnly: boolean, options: OpenOptions): Database.Database {
+  try {
+    return readOnly ? openForReading(file, options.busyTimeout) : new Database(file, { timeout: options.busyTimeout ?? 5000 });
   } catch (e) {
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
+}
+
+/**
+ * Opens (or creates) a job store. A restore interrupted half way is finished or rolled back first. The
+ * file is then inspected read-only: anything that is not a Coilwright store, fails PRAGMA quick_check, or
+ * comes from a newer version is refused with a StoreError and left exactly as it was. A store that cannot
+ * be written (read-only file or folder) opens read-only: reads work, saves say why they cannot. Pending
+ * migrations apply in one transaction.
+ */
+export function openStore(file: string, options: OpenOptions = {}): Store {
+  finishInterruptedRestore(file);
+  const info = inspectStoreFile(file, { check: options.check ?? 'quick' });
+  const readOnly = readOnlyReason(file);
+  if (readOnly && info.state === 'new') throw new StoreError('store-unopenable', `${file} cannot be created: ${readOnly}`);
+  const db = connect(file, readOnly !== undefined, options);
   try {
-    configure(db);
-    migrate(db);
+    configure(db, readOnly !== undefined);
+    if (readOnly && schemaVersion(db) < LATEST_VERSION) {
+      throw new StoreError('store-read-only', `${file} was made by an earlier version of Coilwright and needs updating, but ${readOnly}: `
+        + 'make it writable once so it can be updated, or open a copy of it');
+    }
+    if (!readOnly) migrate(db);
   } catch (e) {
     db.close();
     if (e instanceof StoreError) throw e;
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
-  return makeStore(db, file, options.clock ?? (() => new Date()));
+  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly);
 }
 
 /** openStore as a value: `{ ok: false, error }` instead of an exception. */

@@ -12,6 +12,7 @@ import { createService } from '../service/api';
 import type { Service } from '../service/api';
 import { createDataActions } from './shell/data-actions';
 import { registerDataActionIpc } from './shell/data-ipc';
+import { offerRestoreOfDamagedStore } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
@@ -49,14 +50,16 @@ function stop(log: Log, title: string, message: string): void {
 }
 
 /** The store, or the reason there is none; the Electron build of better-sqlite3 is checked first. */
-function openService(log: Log): Service | string {
+function openService(log: Log): Service | { code: string; message: string } {
   const binding = chooseSqliteBinding({
     electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
   });
-  if (!binding.ok) return binding.error.message;
+  if (!binding.ok) return binding.error;
   const opened = openShopStore(userFile('coilwright.db'));
-  if (!opened.ok) return opened.error.message;
+  if (!opened.ok) return opened.error;
   if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
+  const { notice } = opened.value;
+  if (notice) void dialog.showMessageBox({ type: 'info', title: 'Coilwright', message: 'The job store is open read-only', detail: notice });
   return createService(opened.value.store);
 }
 
@@ -104,15 +107,22 @@ function locateFonts(): void {
     : path.join(app.getAppPath(), 'assets', 'fonts');
 }
 
-function start(log: Log, faults: FaultReporter): void {
+/** Opens the store; a damaged one may be replaced by a backup the user chooses, then opened again. */
+async function openOrRestore(log: Log): Promise<Service | { code: string; message: string }> {
+  const service = openService(log);
+  if ('handlers' in service || service.code !== 'store-corrupt') return service;
+  return (await offerRestoreOfDamagedStore(userFile('coilwright.db'), service.message)) ? openService(log) : service;
+}
+
+async function start(log: Log, faults: FaultReporter): Promise<void> {
   locateFonts();
   if (!existsSync(path.join(rendererDir(), 'index.html'))) {
     stop(log, 'Coilwright is not built', `No user interface in ${rendererDir()}. Run "npm run build" first.`);
     return;
   }
-  const service = openService(log);
-  if (typeof service === 'string') {
-    stop(log, 'The job store cannot be opened', service);
+  const service = await openOrRestore(log);
+  if (!('handlers' in service)) {
+    stop(log, 'The job store cannot be opened', service.message);
     return;
   }
   app.on('will-quit', () => service.close());

@@ -1,7 +1,8 @@
-import { existsSync, writeFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import type { ExportResult, JobStatus, StoredProblem } from '../../core/api/store';
 import { exportFileSchema } from '../../core/api/store';
-import { failure, invalid, success } from '../errors';
+import { StoreError, failure, invalid, success } from '../errors';
+import { writeFileReplacing } from '../files';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
 import { SUMMARY_COLUMNS, storedSpecOf } from '../jobs/rows';
@@ -94,6 +95,11 @@ export function exportJobs(store: Store, raw: unknown): StoreResult<ExportResult
   const problems = problemsOf(rows);
   const named = problems.length > 0 ? { problems } : {};
   if (file === undefined) return success({ format, count: rows.length, text, ...named });
-  writeFileSync(file, text);
+  try {
+    writeFileReplacing(file, text);
+  } catch (e) {
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
+    throw e;
+  }
   return success({ format, count: rows.length, file, ...named });
 }

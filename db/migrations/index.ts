@@ -5,6 +5,7 @@ import { updateToVersion0002 } from './0002-search';
 import { updateToVersion0003 } from './0003-quotes';
 import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
+import { updateToVersion0006 } from './0006-keep-issued-rows';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 
@@ -21,6 +22,7 @@ export const migrations: readonly Migration[] = [
   { version: 3, name: 'quotes', update: updateToVersion0003 },
   { version: 4, name: 'first-off records', update: updateToVersion0004 },
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
+  { version: 6, name: 'keep issued rows', update: updateToVersion0006 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
 ];

@@ -9,6 +9,7 @@ import type { PdfBytes } from './pdf-file';
 import type { PdfShelf } from './pdf-shelf';
 import { pdfUrl } from './pdf-shelf';
 import { secureWindowOptions } from './security';
+import { StoreError, writeFileReplacing } from '../../db';
 
 export interface PdfPreviews {
   /** Opens the PDF in its own window, served from app://coilwright/pdf/… out of memory. */
@@ -27,8 +28,10 @@ async function saveWithDialog(pdf: PdfBytes, parent?: BrowserWindow): Promise<Ap
   const choice = parent ? await dialog.showSaveDialog(parent, options) : await dialog.showSaveDialog(options);
   if (choice.canceled || !choice.filePath) return { ok: true, value: { saved: null } };
   try {
-    await writeFile(choice.filePath, pdf.bytes);
+    // Written beside and renamed over: a full disk leaves no 0-byte PDF and an older file untouched.
+    writeFileReplacing(choice.filePath, Buffer.from(pdf.bytes));
   } catch (e) {
+    if (e instanceof StoreError && e.code === 'disk-full') return failure('disk-full', e.message);
     return failure('write-failed', `could not write ${choice.filePath}: ${(e as Error).message}`);
   }
   return { ok: true, value: { saved: choice.filePath } };

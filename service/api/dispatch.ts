@@ -3,6 +3,7 @@ import type { ApiResult, MethodName } from '../../core/api';
 import { zodErrors } from '../../core/validation';
 import { depthError } from '../../core/api/input-depth';
 import type { FieldError } from '../../core/result';
+import { StoreError } from '../../db';
 
 /** A method implementation receives parsed input and returns a result value (never throws for bad input). */
 export type Handler = (input: never) => Promise<ApiResult<unknown>> | ApiResult<unknown>;
@@ -32,6 +33,8 @@ export async function dispatch(
     if (!parsed.success) return { ok: false, error: inputError(namingInput(method, zodErrors(parsed.error))) };
     return await handlers[method](parsed.data as never);
   } catch (e) {
+    // A store fault the user can act on (full disk, read-only store) is an answer, not a failure.
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
     options.onUnexpected?.(method, e);
     return { ok: false, error: { code: 'unexpected', message: `${method} failed: ${(e as Error).message}`, path: '' } };
   }

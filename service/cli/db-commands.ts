@@ -5,7 +5,7 @@ import type { ApiResult } from '../../core/api';
 import type { FileActions } from '../api';
 import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
-import { createDemoShop } from '../../db';
+import { createDemoShop, restoreDamagedStore } from '../../db';
 
 type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller) => Promise<void>;
 
@@ -38,7 +38,8 @@ export const dbCommand: Command = {
   name: 'db',
   usage: [
     'db backup --db DB --out FILE     online backup of the store to a new file, verified',
-    '  db restore --db DB --from FILE  replace the store with a verified backup (the old one is kept beside it)',
+    '  db restore --db DB --from FILE  replace the store\'s contents with a verified backup, also while other programs',
+    '                                  have it open; the old store (or a damaged one) is kept beside it',
     '  db export --db DB [--out FILE [--force]] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV;',
     '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
@@ -48,9 +49,21 @@ export const dbCommand: Command = {
     const name = args.positional[0];
     const sub = name === undefined ? undefined : subcommands[name];
     if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    await withStore(args, (call, service) => sub(args, service.files, out, call));
+    try {
+      await withStore(args, (call, service) => sub(args, service.files, out, call));
+    } catch (e) {
+      if (name !== 'restore' || !(e instanceof InputError) || e.errors[0]?.code !== 'store-corrupt') throw e;
+      await restoreOverDamaged(args, out);
+    }
   },
 };
+
+/** A damaged store cannot be opened, so its restore puts the backup in its place and keeps it beside. */
+async function restoreOverDamaged(args: ParsedArgs, out: (text: string) => void): Promise<void> {
+  const result = await restoreDamagedStore(requireOption(args, 'db'), requireOption(args, 'from'));
+  if (!result.ok) raise(result.error);
+  out(toJson(result.value));
+}
 
 export const demoCommand: Command = {
   name: 'demo',

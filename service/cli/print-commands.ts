@@ -1,6 +1,6 @@
-import { writeFileSync } from 'node:fs';
 import { parsePrintFile } from '../../core/documents';
 import type { Result } from '../../core/result';
+import { StoreError, writeFileReplacing } from '../../db';
 import { renderQuote, renderTraveller } from '../pdf';
 import { draftQuote, travellerFor } from '../pdf/printing';
 import type { Command } from './commands';
@@ -14,11 +14,13 @@ function must<T>(result: Result<T>): T {
   return result.value;
 }
 
+/** Complete or not at all: a full disk leaves no 0-byte or half PDF behind. */
 function write(file: string, pdf: Buffer): void {
   try {
-    writeFileSync(file, pdf);
+    writeFileReplacing(file, pdf, '--out');
   } catch (e) {
-    throw new InputError([{ code: 'unwritable-file', path: '--out', message: `${file}: cannot be written (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})` }]);
+    if (e instanceof StoreError) throw new InputError([e.toApiError()]);
+    throw e;
   }
 }
 

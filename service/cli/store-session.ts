@@ -1,5 +1,5 @@
 import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '../../core/api';
-import { StoreError, openStore } from '../../db';
+import { StoreError, openStore, readOnlyNotice } from '../../db';
 import { createService, dispatch } from '../api';
 import type { Service } from '../api';
 import type { ParsedArgs } from './io';
@@ -14,7 +14,9 @@ export function raise(error: ApiError): never {
 export function openService(args: ParsedArgs): Service {
   const file = requireOption(args, 'db');
   try {
-    return createService(openStore(file));
+    const store = openStore(file);
+    if (store.readOnly) process.stderr.write(`${readOnlyNotice(store.file, store.readOnly)}\n`);
+    return createService(store);
   } catch (e) {
     if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: '--db' }]);
     throw e;

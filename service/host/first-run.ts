@@ -1,13 +1,15 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { ApiError } from '../../core/api';
-import { createDemoShop, tryOpenStore } from '../../db';
+import { createDemoShop, readOnlyNotice, tryOpenStore } from '../../db';
 import type { OpenOptions, Store } from '../../db';
 
 export interface ShopStore {
   store: Store;
   /** Jobs put in by the demo shop on this open; 0 when the store already had a life of its own. */
   demoJobs: number;
+  /** Something the user should read on start (the store is open read-only), or undefined. */
+  notice?: string;
 }
 
 /** Nothing has been done in it yet: no job and no saved setting (so the demo cannot overwrite a shop's settings). */
@@ -39,6 +41,8 @@ export function openShopStore(file: string, options: OpenOptions = {}):
   const opened = openQuietly(file, options);
   if (!opened.ok) return opened;
   const store = opened.value;
+  // A read-only store is shown as it is: the demo shop cannot be written into it.
+  if (store.readOnly) return { ok: true, value: { store, demoJobs: 0, notice: readOnlyNotice(store.file, store.readOnly) } };
   if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
   const demo = createDemoShop(store);
   if (!demo.ok) {

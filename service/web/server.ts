@@ -22,6 +22,8 @@ export interface WebServerOptions {
   maxBodyBytes?: number;
   /** Largest backup a restore may upload (2 GiB unless given). */
   maxUploadBytes?: number;
+  /** Where a notice about the store goes (it opened read-only); stderr by default. */
+  onNotice?: (text: string) => void;
   /** Where unexpected failures go; stderr by default. */
   onUnexpected?: (context: string, error: unknown) => void;
 }
@@ -129,9 +131,10 @@ function listen(server: Server, port: number): Promise<number> {
   });
 }
 
-function openService(dbFile: string): Service {
+function openService(dbFile: string, onNotice: (text: string) => void): Service {
   const opened = openShopStore(dbFile);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
+  if (opened.value.notice) onNotice(opened.value.notice);
   return createService(opened.value.store);
 }
 
@@ -140,7 +143,7 @@ function openService(dbFile: string): Service {
  * per-run token. Every API outcome is an ApiResult value, as over IPC.
  */
 export async function startWebServer(options: WebServerOptions): Promise<WebServer> {
-  const service = openService(options.dbFile);
+  const service = openService(options.dbFile, options.onNotice ?? ((text) => console.warn(text)));
   let port = 0;
   const ctx: Context = {
     service,

@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import fs, { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -65,6 +65,30 @@ describe('PDF preview windows', () => {
     const { previews } = setup();
     electron.dialog.showSaveDialog.mockResolvedValueOnce({ canceled: false, filePath: path.join(dir, 'missing', 'dir', 'x.pdf') });
     expect(await previews.save(pdf)).toMatchObject({ ok: false, error: { code: 'write-failed' } });
+  });
+
+  it('says the disk is full and leaves no 0-byte PDF when the disk fills up part way', async () => {
+    const { previews } = setup();
+    const target = path.join(dir, 'Q-26-0001.pdf');
+    electron.dialog.showSaveDialog.mockResolvedValueOnce({ canceled: false, filePath: target });
+    const big = { ...pdf, bytes: Buffer.alloc(50_000, 0x25) };
+    const real = fs.writeSync.bind(fs) as (fd: number, data: Buffer, offset: number, length: number) => number;
+    let calls = 0;
+    // The first write lands 1 000 bytes, the next fails as a full disk does (files only, not the test's output).
+    const spy = vi.spyOn(fs, 'writeSync').mockImplementation(((fd: number, data: Buffer, offset = 0, length = data.length - offset) => {
+      if (fd <= 2) return real(fd, data, offset, length);
+      if ((calls += 1) > 1) throw Object.assign(new Error('ENOSPC: no space left on device'), { code: 'ENOSPC' });
+      return real(fd, data, offset, Math.min(1000, length));
+    }) as unknown as typeof fs.writeSync);
+    let result;
+    try {
+      result = await previews.save(big);
+    } finally {
+      spy.mockRestore();
+    }
+    expect(result).toMatchObject({ ok: false, error: { code: 'disk-full', message: expect.stringMatching(/^the disk is full/) } });
+    expect(existsSync(target)).toBe(false);
+    expect(readdirSync(dir).filter((n) => n.endsWith('.partial'))).toEqual([]);
   });
 
   it('tells the user when a save from the menu fails', async () => {

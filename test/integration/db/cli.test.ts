@@ -6,6 +6,8 @@ import { demoJobs } from '../../../db/demo/jobs';
 import { job, spec, tempDir } from './helpers';
 
 const root = resolve(__dirname, '../../..');
+/** A test that starts a dozen command-line processes: each takes seconds on a busy machine. */
+const SEVERAL_PROCESSES = 180_000;
 
 function cli(...args: string[]): { code: number; out: string; err: string; json: () => unknown; errors: () => { code: string; path: string; message: string }[] } {
   const r = spawnSync(process.execPath, ['scripts/cli.mjs', ...args], { cwd: root, encoding: 'utf8' });
@@ -49,7 +51,7 @@ describe('command line: jobs', () => {
     expect(similar[0]!.distance).toBeLessThan(similar[1]!.distance);
     const revisions = cli('jobs', 'revisions', '1', '--db', db).json() as { revision: number }[];
     expect(revisions.map((r) => r.revision)).toEqual([1]);
-  });
+  }, SEVERAL_PROCESSES);
 
   it('exits 2 with the field of bad input on stderr', () => {
     const dir = tempDir();
@@ -105,5 +107,5 @@ describe('command line: db and demo', () => {
     expect(refused.code).toBe(2);
     expect(refused.errors()[0]).toMatchObject({ code: 'not-a-store' });
     expect(readFileSync(join(dir, 'junk.db'), 'utf8')).toBe('junk');
-  });
+  }, SEVERAL_PROCESSES);
 });

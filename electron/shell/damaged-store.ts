@@ -1,0 +1,32 @@
+import { dialog } from 'electron';
+import { restoreDamagedStore } from '../../db';
+
+/**
+ * At start, a store that fails its damage check cannot be opened, so File > Restore is out of reach:
+ * offer to put a backup in its place (the damaged file is kept beside it). True when a backup was
+ * restored and the store can be opened again.
+ */
+export async function offerRestoreOfDamagedStore(file: string, problem: string): Promise<boolean> {
+  const asked = await dialog.showMessageBox({
+    type: 'error', title: 'Coilwright', message: 'The job store is damaged',
+    detail: `${problem}\n\nChoose your latest backup to put in its place; the damaged file is kept beside it.`,
+    buttons: ['Restore a backup…', 'Quit'], defaultId: 0, cancelId: 1,
+  });
+  if (asked.response !== 0) return false;
+  const choice = await dialog.showOpenDialog({
+    title: 'Choose a backup of the job store', properties: ['openFile'],
+    filters: [{ name: 'Coilwright backup', extensions: ['db', 'sqlite', 'bak'] }, { name: 'All files', extensions: ['*'] }],
+  });
+  const from = choice.canceled ? undefined : choice.filePaths[0];
+  if (!from) return false;
+  const restored = await restoreDamagedStore(file, from);
+  if (!restored.ok) {
+    await dialog.showMessageBox({ type: 'error', title: 'Coilwright', message: 'The backup was not restored', detail: restored.error.message, buttons: ['OK'] });
+    return false;
+  }
+  await dialog.showMessageBox({
+    type: 'info', title: 'Coilwright', message: 'Backup restored',
+    detail: `Restored from ${from}. The damaged store was kept as ${restored.value.damagedKeptAs}.`, buttons: ['OK'],
+  });
+  return true;
+}
