@@ -17,7 +17,7 @@ const call = (s: Service, method: string, input: unknown) => dispatch(s.handlers
 /** What a save could change: every row count and the numbering sequence. */
 function footprint(s: Service): unknown {
   const db = s.store().db;
-  const tables = ['jobs', 'job_revisions', 'customers', 'settings', 'attachments', 'quotes', 'job_text', 'job_shape'];
+  const tables = ['jobs', 'job_revisions', 'customers', 'settings', 'attachments', 'quotes', 'job_text', 'job_shape_compression', 'job_shape_extension', 'job_shape_torsion'];
   return Object.fromEntries(tables.map((t) => [t, (db.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]));
 }
 
@@ -102,7 +102,7 @@ describe('files written on a full disk', () => {
     const restore = diskFillsAfterFirstWrite();
     let results;
     try {
-      results = [await call(s, 'exportJobs', { file: fresh }), await call(s, 'exportJobs', { file: kept, format: 'csv' })];
+      results = [await s.files.run('exportJobs', { file: fresh }), await s.files.run('exportJobs', { file: kept, format: 'csv', force: true })];
     } finally {
       restore();
     }
@@ -110,7 +110,7 @@ describe('files written on a full disk', () => {
     expect(existsSync(fresh)).toBe(false);
     expect(readFileSync(kept, 'utf8')).toBe('an earlier export\n');
     expect(readdirSync(dir).filter((f) => f.includes('partial'))).toEqual([]);
-    const written = await call(s, 'exportJobs', { file: fresh });
+    const written = await s.files.run('exportJobs', { file: fresh });
     expect(written.ok && JSON.parse(readFileSync(fresh, 'utf8')).jobs).toHaveLength(5);
   });
 
