@@ -20,3 +20,5 @@ export { exportJobs, jobsDocument, jobsCsv } from './exchange/export';
 export { importJobs } from './exchange/import';
 export { backupStore, restoreStore, verifyBackup } from './backup';
 export { createDemoShop } from './demo';
+export { acceptJobCost, acceptedSettings } from './settings-versions';
+export type { AcceptedSettings } from './settings-versions';

@@ -1,72 +1,72 @@
-import type { Settings, MaterialPrice } from '../settings/schema';
+import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
 import type { Operation } from '../process/types';
-import type { CostEstimate, CostLine, PriceBreak } from './types';
+import type { CostEstimate, CostLine, MissingCost, PriceBreak, RoutedOperation } from './types';
+import { cents, figure, moneyText, rateText, rounded } from './figures';
+import { wirePrice } from './wire-price';
+
+export { wirePrice } from './wire-price';
 
 /** Quantity breaks when the spec names none (common practice for a first quote). */
 export const DEFAULT_QUANTITIES = [100, 1000, 5000];
 
-type Missing = CostEstimate['missing'];
-
-const money = (v: number) => v.toFixed(2);
-const qty = (v: number) => (Number.isInteger(v) ? String(v) : v.toFixed(2));
-
-/** The newest price for the grade whose diameter band takes the wire. */
-export function wirePrice(prices: readonly MaterialPrice[], grade: string, d: number): MaterialPrice | null {
-  let best: MaterialPrice | null = null;
-  for (const p of prices) {
-    if (p.grade !== grade || d < p.dMin || d > p.dMax) continue;
-    if (best === null || p.date > best.date) best = p;
-  }
-  return best;
-}
+type Missing = MissingCost[];
 
 function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Missing): CostLine {
   const price = wirePrice(settings.materialPrices, plan.material.grade, plan.material.wireDiameter);
-  const kg = plan.lotWire.kg;
+  const kg = rounded(plan.lotWire.kg, 3);
+  const item = `Wire: ${plan.material.name}`;
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
       message: `no price for ${plan.material.grade} at ${plan.material.wireDiameter.toFixed(2)} mm: material is not costed` });
-    return { item: `Wire: ${plan.material.name}`, basis: `${kg.toFixed(2)} kg, no price on file`, amount: 0, group: 'material' };
+    return { key: 'material', item, basis: `${figure(kg, 3)} kg, no price on file`, amount: 0, group: 'material' };
   }
   return {
-    item: `Wire: ${plan.material.name}`,
-    basis: `${kg.toFixed(2)} kg (${plan.lotWire.startQuantity} pcs started incl. scrap + setup wire) × ${money(price.pricePerKg)}/kg, ` +
+    key: 'material', item, group: 'material', amount: cents(kg * price.pricePerKg),
+    basis: `${figure(kg, 3)} kg (${plan.lotWire.startQuantity} pcs started incl. scrap + setup wire) × ${rateText(price.pricePerKg)}/kg, ` +
       `${price.supplier || 'supplier not named'} ${price.date}`,
-    amount: kg * price.pricePerKg, group: 'material',
   };
 }
 
-function machineRate(settings: Settings, op: Operation): number | null {
-  const m = op.workCentre && settings.machines.find((x) => x.id === op.workCentre!.id);
-  return m ? m.hourlyRate : null;
+const MANUAL_WITHOUT_MACHINE = new Set(['pack', 'load-test']);
+
+function runLine(op: Operation, start: number, rate: number, centre: string, missing: Missing): CostLine | null {
+  if (op.batch) {
+    const b = op.batch;
+    return { key: `${op.key}:batches`, item: `${op.title}: batches`, group: 'batch',
+      basis: `${b.batches} × ${figure(b.cycleMinutes, 2)} min × ${rateText(rate)}/h (${centre}, up to ${b.capacityPieces} pcs per batch)`,
+      amount: cents(((b.batches * b.cycleMinutes) / 60) * rate) };
+  }
+  if (op.piecesPerHour) {
+    return { key: `${op.key}:run`, item: `${op.title}: run`, group: 'run',
+      basis: `${start} pcs ÷ ${figure(op.piecesPerHour, 2)} pcs/h × ${rateText(rate)}/h (${centre})`,
+      amount: cents((start / op.piecesPerHour) * rate) };
+  }
+  missing.push({ code: 'no-run-model', path: 'machines',
+    message: `${op.title}: ${centre} has no run rate (pieces per hour or batch load): run time not costed` });
+  return null;
 }
 
-function operationLines(plan: ManufacturingPlan, settings: Settings, missing: Missing): CostLine[] {
+function operationLines(plan: ManufacturingPlan, missing: Missing): CostLine[] {
   const lines: CostLine[] = [];
   const start = plan.lotWire.startQuantity;
   for (const op of plan.operations) {
-    if (op.outside) continue;
-    const rate = machineRate(settings, op);
-    if (rate === null) {
-      if (op.kind !== 'pack' && op.kind !== 'load-test') {
-        missing.push({ code: 'no-machine', path: 'machines', message: `${op.title}: no machine in the shop's list, not costed` });
+    if (op.outside || op.kind === 'finish' || op.kind === 'bake' || op.kind === 'inspect') continue;
+    if (!op.workCentre) {
+      if (!MANUAL_WITHOUT_MACHINE.has(op.kind)) {
+        missing.push({ code: 'no-machine', path: 'machines', message: `${op.title}: no machine in the shop's list takes the wire, not costed` });
       }
       continue;
     }
-    const centre = op.workCentre!.name;
+    const { hourlyRate: rate, name: centre } = op.workCentre;
     if (op.setupMinutes > 0) {
-      lines.push({ item: `${op.title}: setup`, basis: `${qty(op.setupMinutes)} min × ${money(rate)}/h (${centre})`, amount: (op.setupMinutes / 60) * rate, group: 'setup' });
+      lines.push({ key: `${op.key}:setup`, item: `${op.title}: setup`, group: 'setup',
+        basis: `${figure(op.setupMinutes, 2)} min × ${rateText(rate)}/h (${centre})`, amount: cents((op.setupMinutes / 60) * rate) });
     }
-    if (op.batch) {
-      const hours = (op.batch.batches * op.batch.cycleMinutes) / 60;
-      lines.push({ item: `${op.title}: batches`, basis: `${op.batch.batches} × ${qty(op.batch.cycleMinutes)} min × ${money(rate)}/h (${centre}, ${op.batch.capacityPieces} pcs per batch)`, amount: hours * rate, group: 'batch' });
-    } else if (op.piecesPerHour) {
-      const hours = start / op.piecesPerHour;
-      lines.push({ item: `${op.title}: run`, basis: `${start} pcs ÷ ${Math.round(op.piecesPerHour)} pcs/h × ${money(rate)}/h (${centre})`, amount: hours * rate, group: 'run' });
-    }
+    const run = runLine(op, start, rate, centre, missing);
+    if (run) lines.push(run);
   }
   return lines;
 }
@@ -74,19 +74,18 @@ function operationLines(plan: ManufacturingPlan, settings: Settings, missing: Mi
 function outsideLines(plan: ManufacturingPlan, settings: Settings, spec: Spec): CostLine[] {
   const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
   if (!finish) return [];
-  const kg = (plan.orderQuantity * plan.massPerPiece);
+  const kg = rounded(plan.orderQuantity * plan.massPerPiece, 3);
   const byKg = finish.pricePerKg !== undefined ? kg * finish.pricePerKg : 0;
   const byPiece = finish.pricePerPiece !== undefined ? plan.orderQuantity * finish.pricePerPiece : 0;
-  const priced = byKg + byPiece;
+  const priced = cents(byKg + byPiece);
   const amount = Math.max(priced, finish.lotMinimum);
   const basis = [
-    finish.pricePerKg !== undefined ? `${kg.toFixed(2)} kg × ${money(finish.pricePerKg)}/kg` : '',
-    finish.pricePerPiece !== undefined ? `${plan.orderQuantity} pcs × ${money(finish.pricePerPiece)}` : '',
+    finish.pricePerKg !== undefined ? `${figure(kg, 3)} kg × ${rateText(finish.pricePerKg)}/kg` : '',
+    finish.pricePerPiece !== undefined ? `${plan.orderQuantity} pcs × ${rateText(finish.pricePerPiece)}` : '',
   ].filter(Boolean).join(' + ');
   return [{
-    item: `${finish.name} (${finish.vendor || 'vendor'})`,
-    basis: `${basis || 'no vendor price'}${amount > priced ? `; vendor lot minimum ${money(finish.lotMinimum)}` : ''}`,
-    amount, group: 'outside',
+    key: `outside:${finish.id}`, item: `${finish.name} (${finish.vendor || 'vendor'})`, group: 'outside', amount,
+    basis: `${basis || 'no vendor price'}${amount > priced ? `; vendor lot minimum ${rateText(finish.lotMinimum)}` : ''}`,
   }];
 }
 
@@ -95,35 +94,57 @@ function inspectionLine(plan: ManufacturingPlan, settings: Settings): CostLine {
   const pieces = plan.inspection.characteristics.some((x) => x.everyPiece) ? plan.orderQuantity : plan.inspection.sampleSize;
   const minutes = c.firstArticleMinutes + pieces * c.inspectionMinutesPerPiece;
   return {
-    item: 'Inspection', basis: `first article ${qty(c.firstArticleMinutes)} min + ${pieces} pcs × ${qty(c.inspectionMinutesPerPiece)} min, at ${money(c.inspectionHourlyRate)}/h`,
-    amount: (minutes / 60) * c.inspectionHourlyRate, group: 'inspection',
+    key: 'inspection', item: 'Inspection', group: 'inspection', amount: cents((minutes / 60) * c.inspectionHourlyRate),
+    basis: `first article ${figure(c.firstArticleMinutes, 2)} min + ${pieces} pcs × ${figure(c.inspectionMinutesPerPiece, 3)} min, at ${rateText(c.inspectionHourlyRate)}/h`,
   };
 }
 
-const sum = (lines: readonly CostLine[]) => lines.reduce((a, l) => a + l.amount, 0);
+const sum = (lines: readonly CostLine[]) => cents(lines.reduce((a, l) => a + l.amount, 0));
+const INTERNAL = new Set(['setup', 'run', 'batch', 'inspection']);
+
+function routingOf(plan: ManufacturingPlan): RoutedOperation[] {
+  return plan.operations.filter((op) => op.choice !== null).map((op) => ({
+    key: op.key, title: op.title, workCentre: op.workCentre && { id: op.workCentre.id, name: op.workCentre.name }, ...op.choice!,
+  }));
+}
 
 /** Cost and price of one quantity break, line by line. */
 export function priceBreak(spec: Spec, settings: Settings, quantity: number, missing: Missing): PriceBreak {
   const plan = planManufacture(spec, settings, quantity);
   const c = settings.costing;
-  const lines: CostLine[] = [materialLine(plan, settings, missing), ...operationLines(plan, settings, missing), ...outsideLines(plan, settings, spec), inspectionLine(plan, settings)];
-  lines.push({ item: 'Packaging', basis: `${quantity} pcs × ${money(c.packagingPerPiece)}`, amount: quantity * c.packagingPerPiece, group: 'packaging' });
-  const internal = sum(lines.filter((l) => l.group === 'setup' || l.group === 'run' || l.group === 'batch' || l.group === 'inspection'));
-  lines.push({ item: 'Overhead', basis: `${qty(c.overheadPercent)} % of internal operations ${money(internal)}`, amount: (internal * c.overheadPercent) / 100, group: 'overhead' });
+  const lines: CostLine[] = [materialLine(plan, settings, missing), ...operationLines(plan, missing), ...outsideLines(plan, settings, spec), inspectionLine(plan, settings)];
+  lines.push({ key: 'packaging', item: 'Packaging', group: 'packaging',
+    basis: `${quantity} pcs × ${rateText(c.packagingPerPiece)}`, amount: cents(quantity * c.packagingPerPiece) });
+  const internal = sum(lines.filter((l) => INTERNAL.has(l.group)));
+  lines.push({ key: 'overhead', item: 'Overhead', group: 'overhead',
+    basis: `${figure(c.overheadPercent, 3)} % of internal operations ${moneyText(internal)}`, amount: cents((internal * c.overheadPercent) / 100) });
   const cost = sum(lines);
-  lines.push({ item: 'Margin', basis: `${qty(c.marginPercent)} % of cost ${money(cost)}`, amount: (cost * c.marginPercent) / 100, group: 'margin' });
+  lines.push({ key: 'margin', item: 'Margin', group: 'margin',
+    basis: `${figure(c.marginPercent, 3)} % of cost ${moneyText(cost)}`, amount: cents((cost * c.marginPercent) / 100) });
   let total = sum(lines);
   if (total < c.minimumOrderValue) {
-    lines.push({ item: 'Minimum order value', basis: `order total raised to ${money(c.minimumOrderValue)}`, amount: c.minimumOrderValue - total, group: 'minimum' });
+    lines.push({ key: 'minimum', item: 'Minimum order value', group: 'minimum',
+      basis: `order total ${moneyText(total)} raised to ${rateText(c.minimumOrderValue)}`, amount: cents(c.minimumOrderValue - total) });
     total = c.minimumOrderValue;
   }
-  return { quantity, startQuantity: plan.lotWire.startQuantity, unitPrice: total / quantity, total, lines };
+  return { quantity, startQuantity: plan.lotWire.startQuantity, unitPrice: total / quantity, total, lines, routing: routingOf(plan) };
+}
+
+/** Each missing item once, whichever breaks it was found at. */
+function distinct(missing: Missing): Missing {
+  const seen = new Set<string>();
+  return missing.filter((m) => {
+    const id = `${m.code}|${m.message}`;
+    if (seen.has(id)) return false;
+    seen.add(id);
+    return true;
+  });
 }
 
 /** Unit price and total at each quantity break, with the breakdown behind each. */
 export function estimateCost(spec: Spec, settings: Settings, quantities?: readonly number[]): CostEstimate {
   const missing: Missing = [];
   const list = [...(quantities ?? spec.quantities ?? DEFAULT_QUANTITIES)].sort((a, b) => a - b);
-  const breaks = list.map((q) => priceBreak(spec, settings, q, q === list[0] ? missing : []));
-  return { currency: settings.defaults.currency, minimumOrderValue: settings.costing.minimumOrderValue, breaks, missing };
+  const breaks = list.map((q) => priceBreak(spec, settings, q, missing));
+  return { currency: settings.defaults.currency, minimumOrderValue: settings.costing.minimumOrderValue, breaks, missing: distinct(missing) };
 }

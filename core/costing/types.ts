@@ -1,10 +1,24 @@
+import type { WorkCentreChoice } from '../process/work-centre';
+
+export type CostGroup = 'material' | 'setup' | 'run' | 'batch' | 'outside' | 'inspection' | 'packaging' | 'overhead' | 'margin' | 'charge' | 'minimum';
+
 /** One line of a cost breakdown: what it is, how it was worked out (traceable to a setting), and the amount. */
 export interface CostLine {
+  /** Stable identity ("material", "grind:run", "overhead"): tests, overrides and change reports use it, never the text. */
+  key: string;
   item: string;
   basis: string;
+  /** To the cent, from the figures the basis prints. */
   amount: number;
   /** Which group it sums into (material, internal operations, outside processing, …). */
-  group: 'material' | 'setup' | 'run' | 'batch' | 'outside' | 'inspection' | 'packaging' | 'overhead' | 'margin' | 'minimum';
+  group: CostGroup;
+}
+
+/** The machine each operation runs on at this quantity, and the next-best one. */
+export interface RoutedOperation extends WorkCentreChoice {
+  key: string;
+  title: string;
+  workCentre: { id: string; name: string } | null;
 }
 
 export interface PriceBreak {
@@ -13,6 +27,13 @@ export interface PriceBreak {
   unitPrice: number;
   total: number;
   lines: CostLine[];
+  routing: RoutedOperation[];
+}
+
+export interface MissingCost {
+  code: string;
+  message: string;
+  path: string;
 }
 
 export interface CostEstimate {
@@ -20,5 +41,5 @@ export interface CostEstimate {
   minimumOrderValue: number;
   breaks: PriceBreak[];
   /** Prices or machines the estimate had to do without; each names the setting to fill in. */
-  missing: { code: string; message: string; path: string }[];
+  missing: MissingCost[];
 }

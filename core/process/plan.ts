@@ -25,6 +25,8 @@ import { extensionInspection } from './extension-inspection';
 import { torsionInspection } from './torsion-inspection';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
+import { assignWorkCentres } from './assign';
+import { wirePrice } from '../costing/wire-price';
 import type { LotWire, Operation, OperationSetting } from './types';
 
 /** How the shop makes one order of a spring. Internal units; `planInSpecUnits` converts out. */
@@ -54,7 +56,7 @@ function wireDiameterTolerance(gradeId: string): string {
   return standard.startsWith('EN 10270') ? `EN 10218-2 tolerance class (${standard})` : `${standard} diameter tolerance`;
 }
 
-function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number, tensileStrength: number): RoutingChoices {
+function routingChoices(spec: Spec, settings: Settings, findings: Finding[], tensileStrength: number): RoutingChoices {
   const finishId = spec.finish ?? 'none';
   const finish = finishId === 'none' ? null : settings.finishes.find((f) => f.id === finishId) ?? null;
   if (finishId !== 'none' && !finish) {
@@ -67,7 +69,7 @@ function routingChoices(spec: Spec, settings: Settings, findings: Finding[], sta
   return {
     directionOfWind: spec.kind === 'torsion' ? spec.windDirection : spec.directionOfWind ?? 'either',
     shotPeen: spec.kind === 'compression' && (spec.shotPeen ?? peened),
-    finish, bakeSpecification: bake, startQuantity: start,
+    finish, bakeSpecification: bake,
   };
 }
 
@@ -120,15 +122,36 @@ function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   }
 }
 
+/** The wire in one piece at the newest price on file (0 when none): what a scrapped piece throws away. */
+function pieceWireValue(settings: Settings, body: CoilBody, massPerPiece: number): number {
+  const price = wirePrice(settings.materialPrices, body.wire.gradeId, body.d);
+  return price ? massPerPiece * price.pricePerKg : 0;
+}
+
+/**
+ * Work centres for the lot. The start quantity depends on the chosen machines' scrap and the choice on the
+ * quantity, so the two are settled together (a few passes at most: scrap rates are small).
+ */
+function settleRouting(operations: Operation[], orderQuantity: number, pieceValue: number, pins: Readonly<Record<string, string>>) {
+  let start = orderQuantity;
+  let routed = assignWorkCentres(operations, start, pieceValue, pins);
+  for (let pass = 0; pass < 4; pass++) {
+    const next = startQuantity(orderQuantity, routed);
+    if (next === start) break;
+    start = next;
+    routed = assignWorkCentres(operations, start, pieceValue, pins);
+  }
+  return { start, routed };
+}
+
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
 export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number): ManufacturingPlan {
   const k = plannerFor(spec, settings);
   const { wire, d } = k.body;
   const findings = k.findings;
   const grade = (spec.toleranceGrade ?? settings.defaults.toleranceGrade) as ToleranceGrade;
-  // The routing's scrap rates set the start quantity, which in turn sets oven batches: route twice.
-  const first = k.route(routingChoices(spec, settings, [], orderQuantity, wire.tensileStrength));
-  const start = startQuantity(orderQuantity, first);
+  const operations = k.route(routingChoices(spec, settings, findings, wire.tensileStrength));
+  const { start, routed } = settleRouting(operations, orderQuantity, pieceWireValue(settings, k.body, k.mass), {});
   return {
     kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
     material: { grade: wire.gradeId, name: wire.gradeName, wireDiameter: d, tensileStrength: wire.tensileStrength,
@@ -136,7 +159,7 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
     coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
     wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
     lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),
-    operations: k.route(routingChoices(spec, settings, findings, start, wire.tensileStrength)),
+    operations: routed,
     inspection: k.inspect(orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
     findings,
   };

@@ -1,5 +1,6 @@
 import type { Quantity } from '../units';
 import type { MachineOperation } from '../settings/schema';
+import type { WorkCentreChoice, WorkCentreOffer } from './work-centre';
 
 /** Operations a spring passes through; machine operations plus outside and manual ones. */
 export type OperationKind = MachineOperation | 'finish' | 'bake' | 'inspect';
@@ -14,14 +15,21 @@ export interface OperationSetting {
 export interface WorkCentre {
   id: string;
   name: string;
+  hourlyRate: number;
 }
 
 export interface Operation {
   sequence: number;
+  /** Stable within the routing (the kind, with "#2" for a second of a kind): cost lines and overrides refer to it. */
+  key: string;
   kind: OperationKind;
   title: string;
-  /** The shop's machine chosen for this operation (by operation and wire range); null when none fits. */
+  /** The shop's machine chosen for this operation (lowest lot cost among those that take the wire); null when none fits. */
   workCentre: WorkCentre | null;
+  /** Why that machine, the runner-up and what choosing it saves; null for manual and outside work. */
+  choice: WorkCentreChoice | null;
+  /** Every machine that can take the work, with its run model and lot cost. */
+  offers: WorkCentreOffer[];
   /** Done by a vendor (plating, passivation, coating). */
   outside: boolean;
   settings: OperationSetting[];

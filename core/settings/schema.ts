@@ -57,7 +57,12 @@ export const machineSchema = z.object({
   operation: z.enum(machineOperations),
   wireRange: range,
   hourlyRate: money,
+  /** Minutes to set the machine up for one lot, whatever its size. */
   setupMinutes: z.number().finite().min(0),
+  /** Run rate of a piece-paced machine other than a coiler (grinder, press, tester, packing bench). */
+  piecesPerHour: z.number().finite().positive().max(1_000_000).optional(),
+  /** This machine's own scrap, when it differs from the operation's in Costing. */
+  scrapPercent: z.number().finite().min(0).max(50).optional(),
   speedModel: z.object({
     feedMetresPerMinute: z.number().finite().positive(),
     maxPiecesPerMinute: z.number().finite().positive(),

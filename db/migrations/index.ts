@@ -3,6 +3,7 @@ import { StoreError } from '../errors';
 import { updateToVersion0001 } from './0001-jobs';
 import { updateToVersion0002 } from './0002-search';
 import { updateToVersion0003 } from './0003-quotes';
+import { updateToVersion0007 } from './0007-estimating';
 
 export interface Migration {
   version: number;
@@ -15,6 +16,7 @@ export const migrations: readonly Migration[] = [
   { version: 1, name: 'jobs', update: updateToVersion0001 },
   { version: 2, name: 'search', update: updateToVersion0002 },
   { version: 3, name: 'quotes', update: updateToVersion0003 },
+  { version: 7, name: 'estimating', update: updateToVersion0007 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -7,6 +7,7 @@ import { useNavigation } from '../../../hooks/navigation';
 import type { JobEditor } from '../../../hooks/useJobEditor';
 import { useQuery } from '../../../hooks/useQuery';
 import { money } from '../../../model/shown';
+import { SettingsMoved } from './SettingsMoved';
 
 /** The price of the spring being edited at each break, line by line, from the shop's rates and prices. */
 export function CostPane({ editor }: { editor: JobEditor }) {
@@ -24,6 +25,7 @@ export function CostPane({ editor }: { editor: JobEditor }) {
       </div>
       {!spec ? <p className="notice">Complete the spec first: pricing needs a valid spring.</p> : null}
       {cost.error ? <p className="error-text" role="alert">{cost.error.message}</p> : null}
+      {editor.job && !editor.dirty && cost.value ? <SettingsMoved jobId={editor.job.id} revision={editor.job.revision} currency={cost.value.currency} /> : null}
       {spec && cost.value ? <CostBody estimate={cost.value} /> : null}
     </div>
   );
@@ -77,8 +79,8 @@ function CostLines({ pb, currency }: { pb: PriceBreak; currency: string }) {
       <table className="table">
         <thead><tr><th scope="col">Group</th><th scope="col">Item</th><th scope="col">Basis</th><th scope="col" className="num">Amount</th></tr></thead>
         <tbody>
-          {pb.lines.map((l, i) => (
-            <tr key={i}><td><span className={`tag tag--${l.group}`}>{l.group}</span></td><td>{l.item}</td><td className="muted">{l.basis}</td><td className="num">{money(l.amount, currency)}</td></tr>
+          {pb.lines.map((l) => (
+            <tr key={l.key} data-line={l.key}><td><span className={`tag tag--${l.group}`}>{l.group}</span></td><td>{l.item}</td><td className="muted">{l.basis}</td><td className="num">{money(l.amount, currency)}</td></tr>
           ))}
         </tbody>
         <tfoot><tr><th scope="row" colSpan={3}>Total</th><td className="num">{money(pb.total, currency)}</td></tr></tfoot>
