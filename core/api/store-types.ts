@@ -1,6 +1,7 @@
 import type { Spec } from '../spec';
 import type { Settings } from '../settings/schema';
 import type { JobStatus } from './store-schemas';
+import type { IssueDecision } from '../quoting/problems';
 
 /** What the store returns. Shape numbers are internal units: mm and N/mm. */
 export interface Customer {
@@ -115,6 +116,8 @@ export interface Quote extends QuoteSummary {
   prices: unknown;
   quantityBreaks: unknown[];
   document: unknown;
+  /** The estimator's decision on open problems at issue (reason and each problem); null when there were none. */
+  decision: IssueDecision | null;
 }
 
 export interface Attachment {

@@ -32,6 +32,8 @@ export interface QuoteInput {
   /** The quote number; "DRAFT" until the store issues one (see `withQuoteIssue`). */
   number?: string;
   validityDays?: number;
+  /** Engineering exceptions accepted at issue, already in the customer's words. */
+  exceptions?: string[];
 }
 
 export const OVER_UNDER_PERCENT = 10;
@@ -93,6 +95,7 @@ export function quoteDocument(input: QuoteInput): QuoteDocument {
     specification: { heading: spring.heading, fields: spring.fields },
     drawing: spring.drawing,
     prices: { currency: estimate.currency, table: priceTable(estimate), notes: priceNotes(estimate) },
+    exceptions: [...(input.exceptions ?? [])],
     leadTime: leadTimeText(job.leadTimeDays),
     terms: terms(estimate.currency, validityDays),
   };

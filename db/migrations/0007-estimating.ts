@@ -4,7 +4,8 @@ import type Database from 'better-sqlite3';
  * What an estimate rests on. `settings_versions` keeps every saved state of the shop settings (history: never
  * changed or deleted), so a saved job's price can be worked again with the settings it was last accepted
  * under and compared with today's. `job_cost_acceptance` records the version an estimator accepted for a job;
- * without a row, the version in force when the job was last saved is the one accepted.
+ * without a row, the version in force when the job was last saved is the one accepted. An issued quote keeps
+ * the estimator's decision on open problems (the reason and each problem accepted) in `decision`.
  */
 export function updateToVersion0007(db: Database.Database): void {
   db.exec(`
@@ -27,5 +28,7 @@ export function updateToVersion0007(db: Database.Database): void {
       settings_version INTEGER NOT NULL REFERENCES settings_versions(id),
       accepted_at TEXT NOT NULL
     ) STRICT;
+
+    ALTER TABLE quotes ADD COLUMN decision TEXT CHECK (decision IS NULL OR json_valid(decision));
   `);
 }

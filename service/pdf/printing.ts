@@ -20,20 +20,20 @@ export function storedPrintJob(job: Job, customers: readonly Customer[]): PrintJ
   };
 }
 
-export function draftQuote(print: PrintJob, settings: Settings, now: Date): { model: QuoteDocument; estimate: CostEstimate } {
-  const estimate = estimateCost(print.spec, settings);
-  const model = quoteDocument({
-    spec: print.spec, settings, estimate, issuedAt: now.toISOString(), validityDays: settings.defaults.quoteValidityDays, job: print,
-  });
-  return { model, estimate };
+export interface DraftOptions {
+  /** An estimate already worked (the issue prints exactly the figures it checked). */
+  estimate?: CostEstimate;
+  exceptions?: string[];
+  validityDays?: number;
 }
 
-/** What the store keeps when a quote is issued: the estimate and the document model, as plain JSON. */
-export function quoteSnapshot(jobId: number, draft: QuoteDocument, estimate: CostEstimate) {
-  return {
-    jobId, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
-    quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)),
-  };
+export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
+  const estimate = options.estimate ?? estimateCost(print.spec, settings);
+  const model = quoteDocument({
+    spec: print.spec, settings, estimate, issuedAt: now.toISOString(),
+    validityDays: options.validityDays ?? settings.defaults.quoteValidityDays, job: print, exceptions: options.exceptions ?? [],
+  });
+  return { model, estimate };
 }
 
 /** An issued quote prints from its snapshot alone, whatever the prices are today. */

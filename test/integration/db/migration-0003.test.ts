@@ -1,7 +1,7 @@
 import Database from 'better-sqlite3';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { LATEST_VERSION, migrate, schemaVersion } from '../../../db';
+import { migrate, schemaVersion } from '../../../db';
 import { tempDir } from './helpers';
 
 describe('migration 0003 (quotes)', () => {
