@@ -71,6 +71,22 @@ describe('printed documents', { timeout: PDF_TEST_TIMEOUT }, () => {
     expect((await pdfOf(await reprintDownload)).text).toContain(quoteNumber);
   });
 
+  it('asks whether an edit of the quoted job is a new drawing revision or a correction', async () => {
+    await page.getByRole('tab', { name: 'Spec & results' }).click();
+    const coils = page.getByRole('textbox', { name: 'Total coils Nt', exact: true });
+    const before = await coils.inputValue();
+    await coils.fill(String(Number(before) + 0.5));
+    const ask = page.locator('.change-kind');
+    await ask.waitFor();
+    await expect(ask.textContent()).resolves.toMatch(/new drawing revision, or a correction/);
+    await screenshot(page, 'workspace-change-kind');
+    await ask.getByRole('button', { name: 'Correction' }).click();
+    await ask.waitFor({ state: 'detached' });
+    await page.locator('[data-save="ok"]').waitFor();
+    await page.getByRole('tab', { name: 'History' }).click();
+    await page.getByText('correction', { exact: true }).first().waitFor();
+  });
+
   it('prints travellers for the selected jobs with progress, and stops when cancelled', async () => {
     await page.keyboard.press('Alt+1');
     await page.locator('table.jobs tbody tr').first().waitFor();
