@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { jobJudgementSchema, noJudgement } from '../quoting/judgement';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
 export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
@@ -25,6 +26,7 @@ const fields = {
   dueDate: isoDateSchema.nullable(),
   orderQuantity: z.number().int().positive().nullable(),
   leadTimeDays: z.number().int().min(0).max(3650).nullable(),
+  judgement: jobJudgementSchema,
 };
 
 /** A new job. Give the customer by name (found or added) or by id, or leave it out. */
@@ -39,6 +41,7 @@ export const jobInputSchema = z.object({
   dueDate: fields.dueDate.default(null),
   orderQuantity: fields.orderQuantity.default(null),
   leadTimeDays: fields.leadTimeDays.default(null),
+  judgement: fields.judgement.default(noJudgement()),
   spec: z.unknown(),
 }).strict();
 export type JobInput = z.input<typeof jobInputSchema>;
@@ -61,6 +64,7 @@ export const jobPatchSchema = z.object({
   dueDate: fields.dueDate.optional(),
   orderQuantity: fields.orderQuantity.optional(),
   leadTimeDays: fields.leadTimeDays.optional(),
+  judgement: fields.judgement.optional(),
   spec: z.unknown().optional(),
   /** Needed to edit a quoted, ordered or in-production job: a new drawing revision (give it) or a correction. */
   change: jobChangeSchema.optional(),

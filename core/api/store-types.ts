@@ -2,6 +2,7 @@ import type { Spec } from '../spec';
 import type { Settings } from '../settings/schema';
 import type { JobStatus } from './store-schemas';
 import type { IssueDecision } from '../quoting/problems';
+import type { JobJudgement } from '../quoting/judgement';
 
 /** What the store returns. Shape numbers are internal units: mm and N/mm. */
 export interface Customer {
@@ -36,6 +37,8 @@ export interface JobDetails {
   dueDate: string | null;
   orderQuantity: number | null;
   leadTimeDays: number | null;
+  /** The estimator's routing and price overrides, each with its reason. */
+  judgement: JobJudgement;
 }
 
 export interface JobSummary extends JobDetails {

@@ -6,6 +6,9 @@ import type { Operation } from '../process/types';
 import type { CostEstimate, CostLine, MissingCost, PriceBreak, RoutedOperation } from './types';
 import { cents, figure, moneyText, rateText, rounded } from './figures';
 import { wirePrice } from './wire-price';
+import { breaksAround, roundingText, roundUnitPrice } from './rounding';
+import { noJudgement } from '../quoting/judgement';
+import type { JobJudgement } from '../quoting/judgement';
 
 export { wirePrice } from './wire-price';
 
@@ -108,9 +111,34 @@ function routingOf(plan: ManufacturingPlan): RoutedOperation[] {
   }));
 }
 
+function marginLine(cost: number, settings: Settings, judgement: JobJudgement): CostLine {
+  const shop = settings.costing.marginPercent;
+  const set = judgement.price.marginPercent;
+  const percent = set?.value ?? shop;
+  const note = set ? ` (shop ${figure(shop, 3)} %: ${set.reason})` : '';
+  return { key: 'margin', item: 'Margin', group: 'margin',
+    basis: `${figure(percent, 3)} % of cost ${moneyText(cost)}${note}`, amount: cents((cost * percent) / 100) };
+}
+
+/** The unit price as quoted: the estimator's own for this break, else the computed one by the shop's rounding rule. */
+function quotedUnitPrice(total: number, quantity: number, settings: Settings, judgement: JobJudgement): { unit: number; line: CostLine | null } {
+  const computed = total / quantity;
+  const set = judgement.price.unitPrices.find((p) => p.quantity === quantity);
+  const rule = settings.costing.unitPriceRounding;
+  const unit = set ? set.unitPrice : roundUnitPrice(computed, rule);
+  const difference = cents(unit * quantity - total);
+  if (set) {
+    return { unit, line: { key: 'unit-price', item: 'Unit price set by the estimator', group: 'adjustment', amount: difference,
+      basis: `${quantity} pcs × ${rateText(unit)} (computed ${rateText(Number(computed.toPrecision(6)))}): ${set.reason}` } };
+  }
+  if (difference === 0) return { unit, line: null };
+  return { unit, line: { key: 'rounding', item: 'Unit price rounding', group: 'adjustment', amount: difference,
+    basis: `${quantity} pcs × ${rateText(unit)} (${roundingText(rule)}) less ${moneyText(total)}` } };
+}
+
 /** Cost and price of one quantity break, line by line. */
-export function priceBreak(spec: Spec, settings: Settings, quantity: number, missing: Missing): PriceBreak {
-  const plan = planManufacture(spec, settings, quantity);
+export function priceBreak(spec: Spec, settings: Settings, quantity: number, missing: Missing, judgement: JobJudgement = noJudgement()): PriceBreak {
+  const plan = planManufacture(spec, settings, quantity, judgement);
   const c = settings.costing;
   const lines: CostLine[] = [materialLine(plan, settings, missing), ...operationLines(plan, missing), ...outsideLines(plan, settings, spec), inspectionLine(plan, settings)];
   lines.push({ key: 'packaging', item: 'Packaging', group: 'packaging',
@@ -118,16 +146,16 @@ export function priceBreak(spec: Spec, settings: Settings, quantity: number, mis
   const internal = sum(lines.filter((l) => INTERNAL.has(l.group)));
   lines.push({ key: 'overhead', item: 'Overhead', group: 'overhead',
     basis: `${figure(c.overheadPercent, 3)} % of internal operations ${moneyText(internal)}`, amount: cents((internal * c.overheadPercent) / 100) });
-  const cost = sum(lines);
-  lines.push({ key: 'margin', item: 'Margin', group: 'margin',
-    basis: `${figure(c.marginPercent, 3)} % of cost ${moneyText(cost)}`, amount: cents((cost * c.marginPercent) / 100) });
+  lines.push(marginLine(sum(lines), settings, judgement));
   let total = sum(lines);
   if (total < c.minimumOrderValue) {
     lines.push({ key: 'minimum', item: 'Minimum order value', group: 'minimum',
       basis: `order total ${moneyText(total)} raised to ${rateText(c.minimumOrderValue)}`, amount: cents(c.minimumOrderValue - total) });
     total = c.minimumOrderValue;
   }
-  return { quantity, startQuantity: plan.lotWire.startQuantity, unitPrice: total / quantity, total, lines, routing: routingOf(plan) };
+  const quoted = quotedUnitPrice(total, quantity, settings, judgement);
+  if (quoted.line) lines.push(quoted.line);
+  return { quantity, startQuantity: plan.lotWire.startQuantity, unitPrice: quoted.unit, total: sum(lines), lines, routing: routingOf(plan) };
 }
 
 /** Each missing item once, whichever breaks it was found at. */
@@ -141,10 +169,27 @@ function distinct(missing: Missing): Missing {
   });
 }
 
-/** Unit price and total at each quantity break, with the breakdown behind each. */
-export function estimateCost(spec: Spec, settings: Settings, quantities?: readonly number[]): CostEstimate {
+export interface EstimateOptions {
+  /** The job's order quantity: always priced; with no breaks given, the shop's breaks are chosen around it. */
+  orderQuantity?: number | null;
+  judgement?: JobJudgement;
+}
+
+/** The breaks priced: those given (or the spec's), else around the order quantity, else the defaults; the order quantity always. */
+export function pricedQuantities(spec: Spec, settings: Settings, quantities?: readonly number[], orderQuantity?: number | null): number[] {
+  const given = quantities ?? spec.quantities;
+  const base = given ?? (orderQuantity ? breaksAround(orderQuantity, settings.costing.breakFactors) : DEFAULT_QUANTITIES);
+  return [...new Set([...base, ...(orderQuantity ? [orderQuantity] : [])])].sort((a, b) => a - b);
+}
+
+/** Unit price and total at each quantity break, with the breakdown behind each, and the job's one-off charges. */
+export function estimateCost(spec: Spec, settings: Settings, quantities?: readonly number[], options: EstimateOptions = {}): CostEstimate {
   const missing: Missing = [];
-  const list = [...(quantities ?? spec.quantities ?? DEFAULT_QUANTITIES)].sort((a, b) => a - b);
-  const breaks = list.map((q) => priceBreak(spec, settings, q, missing));
-  return { currency: settings.defaults.currency, minimumOrderValue: settings.costing.minimumOrderValue, breaks, missing: distinct(missing) };
+  const judgement = options.judgement ?? noJudgement();
+  const list = pricedQuantities(spec, settings, quantities, options.orderQuantity);
+  const breaks = list.map((q) => priceBreak(spec, settings, q, missing, judgement));
+  const charges: CostLine[] = judgement.price.charges.map((ch, i) => ({
+    key: `charge:${i + 1}`, item: ch.label, basis: 'one-off charge, once per order', amount: cents(ch.amount), group: 'charge',
+  }));
+  return { currency: settings.defaults.currency, minimumOrderValue: settings.costing.minimumOrderValue, breaks, charges, missing: distinct(missing) };
 }

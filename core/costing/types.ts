@@ -1,6 +1,6 @@
 import type { WorkCentreChoice } from '../process/work-centre';
 
-export type CostGroup = 'material' | 'setup' | 'run' | 'batch' | 'outside' | 'inspection' | 'packaging' | 'overhead' | 'margin' | 'charge' | 'minimum';
+export type CostGroup = 'material' | 'setup' | 'run' | 'batch' | 'outside' | 'inspection' | 'packaging' | 'overhead' | 'margin' | 'minimum' | 'adjustment' | 'charge';
 
 /** One line of a cost breakdown: what it is, how it was worked out (traceable to a setting), and the amount. */
 export interface CostLine {
@@ -40,6 +40,8 @@ export interface CostEstimate {
   currency: string;
   minimumOrderValue: number;
   breaks: PriceBreak[];
+  /** One-off charges (tooling, first article, certificates), each its own line, charged once whatever the quantity. */
+  charges: CostLine[];
   /** Prices or machines the estimate had to do without; each names the setting to fill in. */
   missing: MissingCost[];
 }

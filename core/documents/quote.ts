@@ -46,7 +46,10 @@ function priceTable(estimate: CostEstimate): TableModel {
       { header: `Unit price (${c})`, weight: 1, align: 'right' },
       { header: `Total (${c})`, weight: 1, align: 'right' },
     ],
-    rows: estimate.breaks.map((b) => [piecesText(b.quantity), unitPriceText(b.unitPrice), moneyText(b.total)]),
+    rows: [
+      ...estimate.breaks.map((b) => [piecesText(b.quantity), unitPriceText(b.unitPrice), moneyText(b.total)]),
+      ...(estimate.charges ?? []).map((ch) => [`${ch.item}, once per order`, '', moneyText(ch.amount)]),
+    ],
   };
 }
 

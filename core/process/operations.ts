@@ -14,7 +14,7 @@ export interface RoutingChoices {
   bakeSpecification: string | null;
 }
 
-export type Draft = Omit<Operation, 'sequence' | 'key'>;
+export type Draft = Omit<Operation, 'sequence' | 'key' | 'overrides'>;
 
 const scrapOf = (settings: Settings, key: string): number => (settings.costing.scrapPercentByOperation[key] ?? 0) / 100;
 
@@ -34,7 +34,7 @@ export function machineOperation(
   settings: Settings, x: CoilBody, kind: Operation['kind'] & string, title: string,
   opSettings: OperationSetting[], piecesPerHour: (m: Machine) => number | null,
 ): Draft {
-  const machineKind = kind === 'finish' || kind === 'bake' || kind === 'inspect' ? null : kind;
+  const machineKind = kind === 'finish' || kind === 'bake' || kind === 'inspect' || kind === 'extra' ? null : kind;
   const offers = machineKind ? offersFor(settings, machineKind, x.d, piecesPerHour) : [];
   const notes = offers.length > 0 || MANUAL.has(kind) ? [] : [`no ${kind} machine in the shop's list takes ${x.d.toFixed(2)} mm wire`];
   return {
@@ -101,6 +101,6 @@ export function sequenced(drafts: Draft[]): Operation[] {
   return drafts.map((d, i) => {
     const n = (seen.get(d.kind) ?? 0) + 1;
     seen.set(d.kind, n);
-    return { ...d, sequence: (i + 1) * 10, key: n === 1 ? d.kind : `${d.kind}#${n}` };
+    return { ...d, sequence: (i + 1) * 10, key: n === 1 ? d.kind : `${d.kind}#${n}`, overrides: [] };
   });
 }

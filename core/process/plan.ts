@@ -26,6 +26,10 @@ import { torsionInspection } from './torsion-inspection';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
 import { assignWorkCentres } from './assign';
+import { judgedOperations, pinsOf, withRunOverrides } from './judged-routing';
+import type { RemovedOperation } from './judged-routing';
+import { noJudgement } from '../quoting/judgement';
+import type { JobJudgement } from '../quoting/judgement';
 import { wirePrice } from '../costing/wire-price';
 import type { LotWire, Operation, OperationSetting } from './types';
 
@@ -44,6 +48,8 @@ export interface ManufacturingPlan {
   massPer1000: number;
   lotWire: LotWire;
   operations: Operation[];
+  /** Operations the estimator took out of this job's routing, with the reason. */
+  removed: RemovedOperation[];
   inspection: InspectionPlan;
   findings: Finding[];
 }
@@ -132,26 +138,28 @@ function pieceWireValue(settings: Settings, body: CoilBody, massPerPiece: number
  * Work centres for the lot. The start quantity depends on the chosen machines' scrap and the choice on the
  * quantity, so the two are settled together (a few passes at most: scrap rates are small).
  */
-function settleRouting(operations: Operation[], orderQuantity: number, pieceValue: number, pins: Readonly<Record<string, string>>) {
+function settleRouting(operations: Operation[], orderQuantity: number, pieceValue: number, judgement: JobJudgement) {
+  const pins = pinsOf(judgement);
+  const route = (pieces: number) => withRunOverrides(assignWorkCentres(operations, pieces, pieceValue, pins), judgement);
   let start = orderQuantity;
-  let routed = assignWorkCentres(operations, start, pieceValue, pins);
+  let routed = route(start);
   for (let pass = 0; pass < 4; pass++) {
     const next = startQuantity(orderQuantity, routed);
     if (next === start) break;
     start = next;
-    routed = assignWorkCentres(operations, start, pieceValue, pins);
+    routed = route(start);
   }
   return { start, routed };
 }
 
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
-export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number): ManufacturingPlan {
+export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number, judgement: JobJudgement = noJudgement()): ManufacturingPlan {
   const k = plannerFor(spec, settings);
   const { wire, d } = k.body;
   const findings = k.findings;
   const grade = (spec.toleranceGrade ?? settings.defaults.toleranceGrade) as ToleranceGrade;
-  const operations = k.route(routingChoices(spec, settings, findings, wire.tensileStrength));
-  const { start, routed } = settleRouting(operations, orderQuantity, pieceWireValue(settings, k.body, k.mass), {});
+  const judged = judgedOperations(k.route(routingChoices(spec, settings, findings, wire.tensileStrength)), judgement, settings, findings);
+  const { start, routed } = settleRouting(judged.operations, orderQuantity, pieceWireValue(settings, k.body, k.mass), judgement);
   return {
     kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
     material: { grade: wire.gradeId, name: wire.gradeName, wireDiameter: d, tensileStrength: wire.tensileStrength,
@@ -159,7 +167,7 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
     coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
     wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
     lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),
-    operations: routed,
+    operations: routed, removed: judged.removed,
     inspection: k.inspect(orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
     findings,
   };

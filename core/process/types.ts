@@ -3,7 +3,16 @@ import type { MachineOperation } from '../settings/schema';
 import type { WorkCentreChoice, WorkCentreOffer } from './work-centre';
 
 /** Operations a spring passes through; machine operations plus outside and manual ones. */
-export type OperationKind = MachineOperation | 'finish' | 'bake' | 'inspect';
+export type OperationKind = MachineOperation | 'finish' | 'bake' | 'inspect' | 'extra';
+
+/** One of the estimator's overrides on an operation, with the shop's default beside it. */
+export interface OperationOverride {
+  field: 'machine' | 'setupMinutes' | 'piecesPerHour' | 'scrapPercent';
+  value: number | string;
+  /** What the shop's settings and the lot-cost rule would have used; null when there was nothing to use. */
+  shopDefault: number | string | null;
+  reason: string;
+}
 
 /** One setting the coiler setter or operator reads, with its quantity so it converts to the job's units. */
 export interface OperationSetting {
@@ -41,6 +50,10 @@ export interface Operation {
   /** Fraction of pieces lost at this operation. */
   scrapFraction: number;
   notes: string[];
+  /** The estimator's overrides on this job, each with the shop default and the reason. */
+  overrides: OperationOverride[];
+  /** Added by the estimator from the shop's extra operations: why. */
+  addedBecause?: string;
 }
 
 export interface LotWire {

@@ -66,8 +66,13 @@ export const demoSettings: SettingsInput = {
   costing: {
     scrapPercentByOperation: { coil: 3, grind: 1.5, 'stress-relieve': 0.5, 'shot-peen': 0.5 },
     setupScrapMetres: 6, overheadPercent: 28, marginPercent: 22, inspectionHourlyRate: 48,
-    packagingPerPiece: 0.015, minimumOrderValue: 175,
+    packagingPerPiece: 0.015, minimumOrderValue: 175, unitPriceRounding: { rule: 'significant', digits: 4 },
   },
+  extraOperations: [
+    { id: 'tumble', name: 'Demo tumble deburr', hourlyRate: 32, setupMinutes: 10, piecesPerHour: 4000 },
+    { id: 'inspect-100', name: 'Demo extra inspection, every piece', hourlyRate: 48, setupMinutes: 5, piecesPerHour: 500 },
+    { id: 'customer-test', name: 'Demo customer\'s special test', hourlyRate: 55, setupMinutes: 30, piecesPerHour: 250 },
+  ],
 };
 
 /** DEMO customers: invented names, marked so nobody mistakes them for real ones. */

@@ -45,10 +45,10 @@ export const documentHeadSchema = z.object({
 export const CSV_COLUMNS = [
   'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
   'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units', 'd_mm', 'D_mm',
-  'OD_mm', 'length_mm (L0; torsion: body)', 'activeCoils', 'rate (N/mm; torsion: N·mm/°)', 'spec',
+  'OD_mm', 'length_mm (L0; torsion: body)', 'activeCoils', 'rate (N/mm; torsion: N·mm/°)', 'spec', 'judgement',
 ] as const;
 
 export const CSV_IMPORTED = new Set<string>([
   'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec', 'judgement',
 ]);

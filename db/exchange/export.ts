@@ -5,7 +5,7 @@ import type { Spec } from '../../core/spec';
 import { invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
-import { SUMMARY_COLUMNS } from '../jobs/rows';
+import { SUMMARY_COLUMNS, judgementOf } from '../jobs/rows';
 import { jobFilter } from '../search/list';
 import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
@@ -31,7 +31,7 @@ function toRecord(row: ExportRow): JobRecord {
     partNumber: row.part_number, drawingNumber: row.drawing_number, drawingRevision: row.drawing_revision,
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
     leadTimeDays: row.lead_time_days, createdAt: row.created_at, updatedAt: row.updated_at,
-    spec: JSON.parse(row.spec!) as Spec,
+    judgement: judgementOf(row.judgement), spec: JSON.parse(row.spec!) as Spec,
   };
 }
 
@@ -47,7 +47,7 @@ function csvRow(row: ExportRow): unknown[] {
     row.number, row.customer_name ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
     row.notes, row.due_date, row.order_quantity, row.lead_time_days, row.created_at, row.updated_at, row.kind,
     row.material, row.units, row.d, row.mean_diameter, row.mean_diameter + row.d, row.free_length,
-    row.active_coils, row.rate, row.spec,
+    row.active_coils, row.rate, row.spec, row.judgement,
   ];
 }
 

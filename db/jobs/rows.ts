@@ -1,5 +1,7 @@
 import type { Job, JobDetails, JobShape, JobStatus, JobSummary } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
+import { jobJudgementSchema, noJudgement } from '../../core/quoting/judgement';
+import type { JobJudgement } from '../../core/quoting/judgement';
 
 /** A jobs row joined with its customer's name, as the SELECTs below read it. */
 export interface JobRow {
@@ -15,6 +17,7 @@ export interface JobRow {
   due_date: string | null;
   order_quantity: number | null;
   lead_time_days: number | null;
+  judgement: string;
   revision: number;
   created_at: string;
   updated_at: string;
@@ -31,7 +34,7 @@ export interface JobRow {
 }
 
 export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
-  j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.revision, j.created_at,
+  j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.judgement, j.revision, j.created_at,
   j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate`;
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
@@ -41,8 +44,14 @@ export function jobDetailsOfRow(row: JobRow): JobDetails {
   return {
     partNumber: row.part_number, drawingNumber: row.drawing_number, drawingRevision: row.drawing_revision,
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
-    leadTimeDays: row.lead_time_days,
+    leadTimeDays: row.lead_time_days, judgement: judgementOf(row.judgement),
   };
+}
+
+/** The stored judgement; one saved before overrides existed (or unreadable) reads as none. */
+export function judgementOf(raw: unknown): JobJudgement {
+  const parsed = jobJudgementSchema.safeParse(typeof raw === 'string' ? JSON.parse(raw) : raw ?? {});
+  return parsed.success ? parsed.data : noJudgement();
 }
 
 export function shapeOf(row: JobRow): JobShape {

@@ -13,6 +13,7 @@ import { takeNumber } from './numbering';
 import { getJob, jobRow, revisionRow } from './read';
 import type { JobState } from './state';
 import { ROW_COLUMNS, revisionFields, rowValues, stateOfRow } from './state';
+import { judgementOf } from './rows';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
   store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
@@ -40,7 +41,7 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   const now = store.now().toISOString();
   const created = options.createdAt ?? now;
   const result = store.sql(`INSERT INTO jobs (number, ${ROW_COLUMNS}, revision, created_at, updated_at)
-                            VALUES (?, ${'?, '.repeat(19)}1, ?, ?)`)
+                            VALUES (?, ${'?, '.repeat(20)}1, ?, ?)`)
     .run(number, ...rowValues(state), created, options.updatedAt ?? created);
   const id = Number(result.lastInsertRowid);
   addRevision(store, id, 1, options.reason ?? 'created', state, now);
@@ -85,9 +86,9 @@ function loadForSave(store: Store, id: number, expectedRevision: number | undefi
 /** States in which the job has gone to the customer or the floor: an edit says what kind it is. */
 const COMMITTED: ReadonlySet<JobStatus> = new Set(['quoted', 'ordered', 'in-production']);
 
-/** Whether a save changes what the job is (anything but its status and notes). */
+/** Whether a save changes what the part is (anything but its status, notes and the estimator's pricing judgement). */
 const editsContent = (patch: Record<string, unknown>): boolean =>
-  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'change'].includes(k));
+  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change'].includes(k));
 
 /**
  * A done job is never edited in place; a quoted, ordered or in-production one only as a new drawing revision
@@ -160,7 +161,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
       }
       const { customerName: _name, ...fields } = old.fields;
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
-      const next: JobState = { ...fields, customerId: exists ? fields.customerId : null, ...checked.value };
+      const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
     });
     return getJob(store, input.id);

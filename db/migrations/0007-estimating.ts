@@ -5,7 +5,8 @@ import type Database from 'better-sqlite3';
  * changed or deleted), so a saved job's price can be worked again with the settings it was last accepted
  * under and compared with today's. `job_cost_acceptance` records the version an estimator accepted for a job;
  * without a row, the version in force when the job was last saved is the one accepted. An issued quote keeps
- * the estimator's decision on open problems (the reason and each problem accepted) in `decision`.
+ * the estimator's decision on open problems (the reason and each problem accepted) in `decision`. A job keeps
+ * the estimator's routing and price overrides in `judgement` (revisions keep it in their fields).
  */
 export function updateToVersion0007(db: Database.Database): void {
   db.exec(`
@@ -30,5 +31,7 @@ export function updateToVersion0007(db: Database.Database): void {
     ) STRICT;
 
     ALTER TABLE quotes ADD COLUMN decision TEXT CHECK (decision IS NULL OR json_valid(decision));
+
+    ALTER TABLE jobs ADD COLUMN judgement TEXT NOT NULL DEFAULT '{}' CHECK (json_valid(judgement));
   `);
 }

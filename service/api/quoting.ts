@@ -7,7 +7,7 @@ import type { IssueDecision, IssueProblem } from '../../core/quoting/problems';
 import { issueProblems, problemSummary } from '../../core/quoting/problems';
 import { getJob, getSettings, listCustomers, recordQuote } from '../../db';
 import type { Store } from '../../db';
-import { draftQuote, issuedQuoteDocument, storedPrintJob } from '../pdf/printing';
+import { draftQuote, issuedQuoteDocument, jobPricing, storedPrintJob } from '../pdf/printing';
 
 export interface IssueRequest {
   jobId: number;
@@ -36,8 +36,8 @@ export function issueJobQuote(store: Store, request: IssueRequest, now: Date): A
   const settings = getSettings(store);
   if (!settings.ok) return settings;
   const print = storedPrintJob(job.value, listCustomers(store));
-  const estimate = estimateCost(print.spec, settings.value);
-  const findings = planManufacture(print.spec, settings.value, estimate.breaks[0]!.quantity).findings;
+  const estimate = estimateCost(print.spec, settings.value, undefined, jobPricing(print));
+  const findings = planManufacture(print.spec, settings.value, estimate.breaks[0]!.quantity, print.judgement).findings;
   const problems = issueProblems(print.spec, findings, estimate);
   if (problems.length > 0 && request.accept === undefined) return needsDecision(problems);
   const decision: IssueDecision | null = problems.length > 0 ? { reason: request.accept!, problems } : null;

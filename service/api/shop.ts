@@ -24,22 +24,23 @@ export function shopHandlers(ctx: StoreContext): TypedHandlers<keyof typeof shop
     const settings = getSettings(ctx.store);
     if (!settings.ok) return settings;
     const accepted = acceptedSettings(ctx.store, jobId);
-    const now = estimateCost(job.value.spec, settings.value);
-    const then = accepted ? estimateCost(job.value.spec, accepted.settings) : now;
+    const pricing = { orderQuantity: job.value.orderQuantity, judgement: job.value.judgement };
+    const now = estimateCost(job.value.spec, settings.value, undefined, pricing);
+    const then = accepted ? estimateCost(job.value.spec, accepted.settings, undefined, pricing) : now;
     return { ok: true, value: {
       jobId, acceptedAt: accepted?.acceptedAt ?? null, settingsSavedAt: accepted?.savedAt ?? null, changes: costChanges(then, now),
     } };
   };
   return {
-    manufacturingPlan: ({ spec, orderQuantity }) => {
+    manufacturingPlan: ({ spec, orderQuantity, judgement }) => {
       const p = prepare(spec);
       if (!p.ok) return p;
-      return { ok: true, value: planInSpecUnits(planManufacture(p.spec, p.settings, orderQuantity)) };
+      return { ok: true, value: planInSpecUnits(planManufacture(p.spec, p.settings, orderQuantity, judgement)) };
     },
-    costEstimate: ({ spec, quantities }) => {
+    costEstimate: ({ spec, quantities, orderQuantity, judgement }) => {
       const p = prepare(spec);
       if (!p.ok) return p;
-      return { ok: true, value: estimateCost(p.spec, p.settings, quantities) };
+      return { ok: true, value: estimateCost(p.spec, p.settings, quantities, { orderQuantity: orderQuantity ?? null, ...(judgement ? { judgement } : {}) }) };
     },
     jobCostChanges: ({ jobId }) => review(jobId),
     acceptJobCost: ({ jobId }) => {

@@ -32,7 +32,7 @@ describe('accepted exceptions in the customer\'s words', () => {
   it('open errors and price gaps are the problems; warnings and notes are not', () => {
     const warn: Finding = { ...finding('index-outside-preferred'), severity: 'warning' };
     const problems = issueProblems(metric, [warn, finding('fatigue-fail')], {
-      currency: 'USD', minimumOrderValue: 0, breaks: [], missing: [{ code: 'no-wire-price', message: 'no price', path: 'materialPrices' }],
+      currency: 'USD', minimumOrderValue: 0, breaks: [], charges: [], missing: [{ code: 'no-wire-price', message: 'no price', path: 'materialPrices' }],
     });
     expect(problems.map((p) => [p.kind, p.code, p.path])).toEqual([['finding', 'fatigue-fail', 'spec.freeLength'], ['price', 'no-wire-price', 'settings.materialPrices']]);
   });
