@@ -2,7 +2,7 @@ import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
-import type { Operation } from '../process/types';
+import type { Operation, OperationOverride } from '../process/types';
 import type { CostEstimate, CostLine, MissingCost, PriceBreak, RoutedOperation } from './types';
 import { cents, figure, moneyText, rateText, rounded } from './figures';
 import { wirePrice } from './wire-price';
@@ -52,6 +52,14 @@ function runLine(op: Operation, start: number, rate: number, centre: string, mis
   return null;
 }
 
+/** "; set for this job: shop 30 min" — the estimator's override on the figures of a line, with the shop's beside it. */
+function judgedNote(op: Operation, fields: readonly OperationOverride['field'][]): string {
+  const shown = op.overrides.filter((o) => fields.includes(o.field));
+  if (shown.length === 0) return '';
+  const unit: Record<OperationOverride['field'], string> = { machine: '', setupMinutes: ' min', piecesPerHour: ' pcs/h', scrapPercent: ' %' };
+  return `; set for this job (shop ${shown.map((o) => `${o.shopDefault ?? 'none'}${o.shopDefault === null ? '' : unit[o.field]}`).join(', ')}): ${shown[0]!.reason}`;
+}
+
 function operationLines(plan: ManufacturingPlan, missing: Missing): CostLine[] {
   const lines: CostLine[] = [];
   const start = plan.lotWire.startQuantity;
@@ -66,10 +74,11 @@ function operationLines(plan: ManufacturingPlan, missing: Missing): CostLine[] {
     const { hourlyRate: rate, name: centre } = op.workCentre;
     if (op.setupMinutes > 0) {
       lines.push({ key: `${op.key}:setup`, item: `${op.title}: setup`, group: 'setup',
-        basis: `${figure(op.setupMinutes, 2)} min × ${rateText(rate)}/h (${centre})`, amount: cents((op.setupMinutes / 60) * rate) });
+        basis: `${figure(op.setupMinutes, 2)} min × ${rateText(rate)}/h (${centre})${judgedNote(op, ['setupMinutes', 'machine'])}`,
+        amount: cents((op.setupMinutes / 60) * rate) });
     }
     const run = runLine(op, start, rate, centre, missing);
-    if (run) lines.push(run);
+    if (run) lines.push({ ...run, basis: `${run.basis}${judgedNote(op, ['piecesPerHour', 'machine'])}` });
   }
   return lines;
 }

@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ApiError, Job, JobRevision } from '../../core/api';
 import type { JobChange } from '../../core/api/store';
+import type { JobJudgementInput } from '../../core/quoting/judgement';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
 import type { FormError } from '../model/errors';
@@ -143,6 +144,18 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     return save();
   }, [save]);
 
+  /** Saves the estimator's routing and price overrides of the saved job; the error, or null when saved. */
+  const saveJudgement = useCallback(async (judgement: JobJudgementInput): Promise<ApiError | null> => {
+    while (inFlight.current) await inFlight.current;
+    const j = live.current.job;
+    if (!j) return null;
+    const r = await api.updateJob({ id: j.id, expectedRevision: j.revision, judgement });
+    if (!r.ok) return r.error;
+    adopt(r.value, false);
+    await loadRevisions(j.id);
+    return null;
+  }, [api, adopt, loadRevisions]);
+
   const dirty = version !== savedVersion;
   useEffect(() => {
     if (!dirty || !valid) return;
@@ -190,7 +203,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
 
   return {
     job, drafts, edit, version, evaluation, jobCheck, valid, dirty, saving, saveError, serverErrors, loading, loadError,
-    revisions, save, revert, restore, setChange,
+    revisions, save, revert, restore, setChange, saveJudgement,
     undo: () => step(undoTarget), redo: () => step(redoTarget),
     canUndo: job !== null && (dirty || undoTarget(timeline) !== null),
     canRedo: job !== null && !dirty && redoTarget(timeline) !== null,

@@ -135,3 +135,11 @@ describe('breaks', () => {
     expect(breaksAround(333, [0.5, 1, 3])).toEqual([170, 333, 1000]);
   });
 });
+
+describe('overrides on the cost lines', () => {
+  it('a set-up override says so in the line\'s basis, with the shop figure and the reason', () => {
+    const j = judged({ routing: [{ operation: 'coil', setupMinutes: 50, reason: 'new tooling, first run' }] });
+    const setup = estimateCost(spec, settingsOf(shop), [1000], { judgement: j }).breaks[0]!.lines.find((l) => l.key === 'coil:setup')!;
+    expect(setup.basis).toBe('50 min × 60.00/h (Coiler 1); set for this job (shop 30 min): new tooling, first run');
+  });
+});

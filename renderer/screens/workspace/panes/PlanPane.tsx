@@ -24,8 +24,9 @@ export function PlanPane({ editor, onGo }: { editor: JobEditor; onGo(path: strin
   const parsed = parseNumber(quantityText);
   const quantity = parsed.ok && parsed.value !== undefined && Number.isInteger(parsed.value) && parsed.value >= 1 ? parsed.value : null;
   const spec = editor.evaluation.spec;
-  const key = spec && quantity ? JSON.stringify([spec, quantity]) : null;
-  const plan = useQuery(key, () => api.manufacturingPlan({ spec, orderQuantity: quantity ?? 1 }), 200);
+  const judgement = editor.job?.judgement;
+  const key = spec && quantity ? JSON.stringify([spec, quantity, judgement]) : null;
+  const plan = useQuery(key, () => api.manufacturingPlan({ spec, orderQuantity: quantity ?? 1, ...(judgement ? { judgement } : {}) }), 200);
   return (
     <div className="pane">
       <div className="pane__controls">

@@ -1,6 +1,7 @@
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Operation } from '../../../../core/process/types';
 import { shown } from '../../../model/shown';
+import { OVERRIDE_LABELS, overrideText } from '../../../../core/documents/traveller-sections';
 
 /** Where the operation runs and why: the chosen machine's lot cost, the runner-up and what choosing it saves. */
 function WorkCentreCell({ op }: { op: Operation }) {
@@ -39,6 +40,12 @@ export function Operations({ plan }: { plan: ManufacturingPlan }) {
               <td>
                 <strong>{op.title}</strong><br />
                 <WorkCentreCell op={op} />
+                {op.overrides.map((o) => (
+                  <p key={o.field} className="op-override" data-override={`${op.key}:${o.field}`}>
+                    <span className="tag">set for this job</span> {OVERRIDE_LABELS[o.field]}: {overrideText(o)}
+                  </p>
+                ))}
+                {op.addedBecause ? <p className="op-override"><span className="tag">added</span> {op.addedBecause}</p> : null}
                 {op.notes.map((n) => <p key={n} className="op-note">{n}</p>)}
               </td>
               <td>
@@ -53,6 +60,11 @@ export function Operations({ plan }: { plan: ManufacturingPlan }) {
           ))}
         </tbody>
       </table>
+      {plan.removed.length > 0 ? (
+        <ul className="removed-ops">
+          {plan.removed.map((r) => <li key={r.key}><span className="tag">removed for this job</span> {r.title}: {r.reason}</li>)}
+        </ul>
+      ) : null}
     </section>
   );
 }
