@@ -5,8 +5,9 @@ import { engineSuite } from './suites/engine';
 import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { quotingSuite } from './suites/quoting';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];
