@@ -41,7 +41,13 @@ export function judgedOperations(operations: readonly Operation[], judgement: Jo
   const at = packAt < 0 ? kept.length : packAt;
   const all = [...kept.slice(0, at), ...added, ...kept.slice(at)].map((op, i) => ({ ...op, sequence: (i + 1) * 10 }));
   judgement.routing.forEach((o, i) => {
-    if (!operations.some((op) => op.key === o.operation)) {
+    const op = operations.find((x) => x.key === o.operation);
+    if (op && o.machine && !op.offers.some((m) => m.id === o.machine)) {
+      findings.push({ code: 'pinned-machine-cannot-run', severity: 'warning', path: `judgement.routing[${i}].machine`,
+        message: `${op.title}: the pinned machine "${o.machine}" is not set up for it or does not take the wire; the cheapest machine that can is planned`,
+        fix: 'pin a machine that takes the wire, or remove the pin' });
+    }
+    if (!op) {
       findings.push({ code: 'override-unknown-operation', severity: 'warning', path: `judgement.routing[${i}].operation`,
         message: `the routing has no operation "${o.operation}": its override does nothing`, fix: 'remove the override or name an operation of this routing' });
     }

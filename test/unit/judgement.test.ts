@@ -143,3 +143,12 @@ describe('overrides on the cost lines', () => {
     expect(setup.basis).toBe('50 min × 60.00/h (Coiler 1); set for this job (shop 30 min): new tooling, first run');
   });
 });
+
+describe('a pin the machine cannot honour', () => {
+  it('is a warning naming the pin, and the cheapest capable machine is planned', () => {
+    const s = settingsOf({ ...shop, machines: shop.machines!.map((m) => (m.id === 'g-fast' ? { ...m, wireRange: { min: 3, max: 8 } } : m)) });
+    const plan = planManufacture(spec, s, 100, judged({ routing: [{ operation: 'grind', machine: 'g-fast', reason: 'preferred grinder' }] }));
+    expect(plan.operations.find((o) => o.key === 'grind')!.workCentre?.id).toBe('g-slow');
+    expect(plan.findings.find((f) => f.code === 'pinned-machine-cannot-run')).toMatchObject({ severity: 'warning', path: 'judgement.routing[0].machine' });
+  });
+});
