@@ -35,6 +35,17 @@ describe('quoting a job: machine choice, a price override, an accepted exception
     // does: either way the other is named as runner-up with the difference.
     await expect(grind.textContent()).resolves.toMatch(/runner-up Demo (single-wheel|double-disc) end grinder at [\d.]+ \([\d.]+ dearer\)/);
     await screenshot(page, 'workspace-plan-work-centres');
+    // Pin the runner-up grinder with a reason: the plan keeps it, the shop's pick beside it.
+    const routing = page.locator('.routing-judgement');
+    await routing.getByLabel('Reason', { exact: true }).fill('other grinder booked this week');
+    await routing.getByLabel('Operation', { exact: true }).selectOption('grind');
+    const runnerUp = /runner-up (Demo [a-z- ]+ end grinder)/.exec((await grind.textContent())!)![1]!;
+    await routing.getByLabel('Machine', { exact: true }).selectOption({ label: runnerUp });
+    await routing.getByRole('button', { name: 'Set for this job' }).click();
+    await page.locator('[data-override="grind:machine"]').waitFor();
+    await expect(page.locator('[data-override="grind:machine"]').textContent()).resolves.toContain(`${runnerUp} (shop `);
+    await expect(grind.textContent()).resolves.toContain('pinned');
+    await screenshot(page, 'workspace-plan-pinned');
   });
 
   it('sets a unit price at a break with a reason; the cost shows it', async () => {

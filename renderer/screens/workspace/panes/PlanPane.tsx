@@ -11,6 +11,7 @@ import { useQuery } from '../../../hooks/useQuery';
 import { parseNumber } from '../../../model/numbers';
 import { Findings } from '../results/Findings';
 import { Inspection, Operations } from './PlanTables';
+import { RoutingJudgement } from './RoutingJudgement';
 
 function initialQuantity(editor: JobEditor): string {
   const q = editor.drafts.job.orderQuantity || editor.evaluation.spec?.quantities?.[0]?.toString();
@@ -37,6 +38,7 @@ export function PlanPane({ editor, onGo }: { editor: JobEditor; onGo(path: strin
       {!spec ? <p className="notice">Complete the spec first: the plan needs a valid spring.</p> : null}
       {plan.error ? <p className="error-text" role="alert">{plan.error.message}</p> : null}
       {spec && plan.value ? <PlanBody plan={plan.value} spec={spec} onGo={onGo} /> : null}
+      {spec && plan.value && editor.job && !editor.dirty ? <RoutingJudgement editor={editor} plan={plan.value} /> : null}
     </div>
   );
 }
