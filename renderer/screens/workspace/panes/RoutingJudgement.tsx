@@ -52,11 +52,11 @@ export function RoutingJudgement({ editor, plan }: { editor: JobEditor; plan: Ma
   };
   return (
     <section className="panel routing-judgement" aria-labelledby="routing-judgement-title">
-      <h3 id="routing-judgement-title" className="panel__title">Your routing for this job</h3>
+      <h3 id="routing-judgement-title" className="panel__title">Machines and operations for this job</h3>
       <ul className="judgement-list">
         {j.routing.map((o) => (
           <li key={o.operation} data-routing-override={o.operation}>{describe(o)}{' '}
-            <button type="button" className="button button--small" onClick={() => void save({ ...j, routing: j.routing.filter((x) => x !== o) })}>Back to the shop’s routing</button></li>
+            <button type="button" className="button button--small" onClick={() => void save({ ...j, routing: j.routing.filter((x) => x !== o) })}>Back to the shop’s plan</button></li>
         ))}
         {j.added.map((a, i) => (
           <li key={`${a.operation}-${i}`}>added {a.operation} ({a.reason}){' '}
