@@ -6,8 +6,9 @@ import { storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { quotingSuite } from './suites/quoting';
+import { cliSuite } from './suites/cli';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -2,11 +2,12 @@ import type { Quote, QuoteSummary, RevisionFields } from '../core/api/store';
 import { listQuotesSchema } from '../core/api/store';
 import type { IssueDecision } from '../core/quoting/problems';
 import type { Settings } from '../core/settings/schema';
-import type { Spec } from '../core/spec';
 import { StoreError, failure, invalid, success } from './errors';
 import type { StoreResult } from './errors';
 import { takeNumber } from './jobs/numbering';
 import { jobRow } from './jobs/read';
+import { storedSpecOf } from './jobs/rows';
+import { readStoredSpec } from './jobs/stored-spec';
 import { revisionFields, stateOfRow } from './jobs/state';
 import { attempt, updateJob } from './jobs/write';
 import { readSettings } from './settings';
@@ -30,17 +31,20 @@ function toSummary(row: QuoteRow): QuoteSummary {
   };
 }
 
-function toQuote(row: QuoteRow): Quote {
-  return {
+/** The issued quote as it was; a spec that no longer reads is this quote's problem, named with its field. */
+function toQuote(row: QuoteRow): StoreResult<Quote> {
+  const stored = readStoredSpec(row.spec, `quote ${row.number}`);
+  if (!stored.ok) return failure(stored.problem.code, stored.problem.message, stored.problem.path);
+  return success({
     ...toSummary(row),
     job: JSON.parse(row.job!) as RevisionFields & { number: string },
-    spec: JSON.parse(row.spec!) as Spec,
+    spec: stored.spec,
     settings: JSON.parse(row.settings!) as Settings,
     prices: JSON.parse(row.prices!),
     quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
     document: JSON.parse(row.document!),
     decision: row.decision ? JSON.parse(row.decision) as IssueDecision : null,
-  };
+  });
 }
 
 /** What the service worked out for a quote: the estimate, the breaks, the document model and any decision. */
@@ -70,13 +74,15 @@ export function recordQuote(store: Store, snapshot: QuoteSnapshot): StoreResult<
       if (row.revision !== snapshot.jobRevision) {
         throw new StoreError('stale-revision', `job ${row.number} was saved while the quote was being priced: issue it again`, 'jobId');
       }
+      const stored = storedSpecOf(row);
+      if (!stored.ok) throw new StoreError(stored.problem.code, stored.problem.message, stored.problem.path);
       const settings = readSettings(store);
       const number = takeNumber(store, 'quotes');
       const job = { number: row.number, ...revisionFields(store, stateOfRow(row)) };
       const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
                                   settings, prices, quantity_breaks, document, decision) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
         .run(number, row.id, row.revision, store.now().toISOString(), snapshot.validityDays, settings.defaults.currency,
-          JSON.stringify(job), row.spec, JSON.stringify(settings), JSON.stringify(snapshot.prices),
+          JSON.stringify(job), JSON.stringify(stored.spec), JSON.stringify(settings), JSON.stringify(snapshot.prices),
           JSON.stringify(snapshot.quantityBreaks), JSON.stringify(snapshot.document),
           snapshot.decision === null ? null : JSON.stringify(snapshot.decision));
       if (MOVES_TO_QUOTED.has(row.status) && row.status !== 'quoted') {
@@ -94,7 +100,7 @@ export function getQuote(store: Store, key: { id: number } | { number: string })
     ? store.sql('SELECT * FROM quotes WHERE id = ?').get(key.id)
     : store.sql('SELECT * FROM quotes WHERE number = ?').get(key.number);
   if (!row) return failure('not-found', `no quote ${'id' in key ? `with id ${key.id}` : key.number}`, 'id' in key ? 'id' : 'number');
-  return success(toQuote(row as QuoteRow));
+  return toQuote(row as QuoteRow);
 }
 
 const SUMMARY = 'id, number, job_id, job_revision, issued_at, validity_days, currency';

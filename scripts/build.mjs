@@ -1,10 +1,10 @@
 // Builds the desktop app into dist/: main and preload with esbuild, the renderer with vite.
 //   node scripts/build.mjs            all three
-//   node scripts/build.mjs main preload   only those
+//   node scripts/build.mjs main preload   only those (also: web, cli)
 // The preload runs sandboxed and may require nothing but 'electron', so the build fails if any npm
 // package ends up in it.
 import { build } from 'esbuild';
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -69,8 +69,27 @@ export async function buildWebServer() {
   });
 }
 
+/** The command line as one bundle: `npm run cli` runs it (scripts/cli.mjs rebuilds it when a source is newer). */
+export const cliOptions = {
+  ...common,
+  entryPoints: [at('service', 'cli', 'main.ts')],
+  outfile: at('dist', 'cli', 'cli.cjs'),
+  platform: 'node',
+  target: 'node20',
+  external: mainExternals.filter((name) => name !== 'electron'),
+};
+
+/** Written beside and renamed into place, so a command starting meanwhile never reads half a bundle. */
+export async function buildCli() {
+  const [output] = (await build({ ...cliOptions, write: false })).outputFiles;
+  const partial = `${cliOptions.outfile}.${process.pid}.tmp`;
+  mkdirSync(path.dirname(cliOptions.outfile), { recursive: true });
+  writeFileSync(partial, output.contents);
+  renameSync(partial, cliOptions.outfile);
+}
+
 /** The renderer engineer's renderer/vite.config.mts decides the output (dist/renderer by default). */
-export async function buildRenderer() {
+export async function buildRenderer({ quiet = false } = {}) {
   const config = at('renderer', 'vite.config.mts');
   if (!existsSync(at('renderer', 'index.html'))) {
     console.warn('renderer: skipped (renderer/index.html does not exist yet)');
@@ -78,7 +97,7 @@ export async function buildRenderer() {
   }
   const { build: viteBuild } = await import('vite');
   if (existsSync(config)) {
-    await viteBuild({ configFile: config });
+    await viteBuild({ configFile: config, ...(quiet ? { logLevel: 'warn' } : {}) });
   } else {
     const { default: react } = await import('@vitejs/plugin-react');
     await viteBuild({ configFile: false, root: at('renderer'), base: './', plugins: [react()],
@@ -87,7 +106,7 @@ export async function buildRenderer() {
   return true;
 }
 
-const steps = { main: buildMain, preload: buildPreload, renderer: buildRenderer, web: buildWebServer };
+const steps = { main: buildMain, preload: buildPreload, renderer: buildRenderer, web: buildWebServer, cli: buildCli };
 
 async function run(names) {
   for (const name of names) {

@@ -2,12 +2,14 @@ import { engineMethods } from './engine';
 import { storeMethods } from './store';
 import { shopMethods } from './shop';
 import { documentMethods } from './documents';
+import { firstOffMethods } from './first-off';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
 export * from './store';
 export type { PrintedPdf } from './documents';
 export type { JobCostReview } from './shop';
+export * from './first-off';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
 export const contract = {
@@ -15,6 +17,7 @@ export const contract = {
   ...storeMethods,
   ...shopMethods,
   ...documentMethods,
+  ...firstOffMethods,
 };
 
 export type Contract = typeof contract;

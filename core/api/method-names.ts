@@ -10,8 +10,9 @@ export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'backup', 'restore',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'backup', 'restore',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
+  'recordFirstOff', 'listFirstOff', 'setCalibration',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

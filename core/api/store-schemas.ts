@@ -162,3 +162,6 @@ export const importJobsSchema = z.object({
 export const backupSchema = z.object({ file: z.string().min(1) }).strict();
 export const restoreSchema = z.object({ file: z.string().min(1) }).strict();
 export const saveSettingsSchema = z.object({ settings: z.record(z.string(), z.unknown()) }).strict();
+
+/** Re-index the search numbers of jobs computed by another engine version; `all` recomputes every job. */
+export const reindexJobsSchema = z.object({ all: z.boolean().default(false) }).strict();

@@ -41,6 +41,16 @@ export interface JobDetails {
   judgement: JobJudgement;
 }
 
+/**
+ * Why a stored record no longer reads with this version of the program (a grade since withdrawn, a spec
+ * written by a newer version, a damaged row). The record stays in the store as it was; `path` names the field.
+ */
+export interface StoredProblem {
+  code: string;
+  message: string;
+  path: string;
+}
+
 export interface JobSummary extends JobDetails {
   id: number;
   number: string;
@@ -50,6 +60,8 @@ export interface JobSummary extends JobDetails {
   createdAt: string;
   updatedAt: string;
   shape: JobShape;
+  /** Present when the stored spec no longer reads: the job still lists, and opening it reports this. */
+  problem?: StoredProblem;
 }
 
 export interface Job extends JobSummary {
@@ -76,7 +88,9 @@ export interface JobRevision {
   /** "created", "saved", "status", "restored revision 3", "imported". */
   reason: string;
   fields: RevisionFields;
-  spec: Spec;
+  /** Null when this revision's stored spec no longer reads; `problem` then says why. */
+  spec: Spec | null;
+  problem?: StoredProblem;
 }
 
 export interface TextHit {
@@ -142,10 +156,24 @@ export interface ExportResult {
   count: number;
   file?: string;
   text?: string;
+  /** Jobs whose stored spec no longer reads: exported as stored, and named here so they can be put right. */
+  problems?: StoredProblem[];
 }
 
 export interface ImportResult {
   imported: { id: number; number: string }[];
+}
+
+/** A re-index of the search numbers: how many jobs were looked at, recomputed, moved, and which could not be. */
+export interface ReindexResult {
+  /** The engine version the recomputed numbers now carry. */
+  engineVersion: number;
+  checked: number;
+  reindexed: number;
+  /** Jobs whose numbers came out different from what the index held. */
+  changed: number;
+  /** Jobs left as they were because their stored spec no longer reads. */
+  problems: StoredProblem[];
 }
 
 export interface BackupResult {

@@ -31,6 +31,7 @@ export const storeMethods = {
   getAttachment: method<typeof s.jobIdSchema, t.AttachmentData>(s.jobIdSchema),
   exportJobs: method<typeof s.exportJobsSchema, t.ExportResult>(s.exportJobsSchema),
   importJobs: method<typeof s.importJobsSchema, t.ImportResult>(s.importJobsSchema),
+  reindexJobs: method<typeof s.reindexJobsSchema, t.ReindexResult>(s.reindexJobsSchema),
   backup: method<typeof s.backupSchema, t.BackupResult>(s.backupSchema),
   restore: method<typeof s.restoreSchema, t.RestoreResult>(s.restoreSchema),
 };

@@ -1,4 +1,4 @@
-/** The cautions every printed document carries (shop-practice notes §7, in the project's own words). */
+/** The cautions every printed document carries (common trade practice, in the project's own words; see docs/sources.md). */
 import type { NoticeModel } from './types';
 
 export const STORED_ENERGY_CAUTION =

@@ -29,7 +29,7 @@ export const sampleSizes: Readonly<Record<CodeLetter, number>> = {
 export const aqls = [0.065, 0.10, 0.15, 0.25, 0.40, 0.65, 1.0, 1.5, 2.5, 4.0, 6.5, 10] as const;
 
 const NIBS = 'ISO 2859-1 Table 2-A = ANSI/ASQ Z1.4 Table II-A, normal single sampling, as reprinted at nibs.org ' +
-  '(AC-TABLE.ASC, general level II; it prints Re, Ac = Re − 1) and in shop-practice notes §3.8';
+  '(AC-TABLE.ASC, general level II; it prints Re, Ac = Re − 1)';
 const LOW_AQL = 'ISO 2859-1 Table 2-A, AQL 0.065–0.40, from memory: the same diagonal of plans as the ' +
   'nibs.org columns, shifted one code letter per column; not read in any reprint';
 

@@ -63,7 +63,22 @@ export const torsionAllowables: Readonly<Record<GradeFamily, Readonly<{ bending:
   'non-ferrous': Object.freeze({ bending: 0.61, source: 'Shigley 9e Eq. 10-57, nonferrous, from memory' }),
 });
 
+/**
+ * Torsion springs loaded to unwind the body: the coiling residual stresses work against the load, so the
+ * bending allowable is taken at 0.8 of the usual (the ratio of the "stress relieved" to the "favourable residual
+ * stress" columns of the Associated Spring static table for torsion springs, 80 % / 100 %; from memory).
+ */
+export const TORSION_UNWIND_FACTOR = 0.8;
+export const TORSION_UNWIND_SOURCE = 'loaded to unwind: 0.8 × (Associated Spring static torsion table, stress relieved ÷ favourable residual stress, from memory)';
+
 /** EN 13906-2: permissible static torsional stress of extension springs ≈ 0.45·Rm (aabag.de; EN from memory). */
 export const EN_EXTENSION_STATIC_FRACTION = 0.45;
 /** EN 13906-3: permissible static bending stress of cold-coiled torsion springs ≈ 0.7·Rm (from memory). */
 export const EN_TORSION_STATIC_FRACTION = 0.7;
+
+/**
+ * EN 13906-1: permissible uncorrected torsional stress at solid length of cold-coiled compression springs,
+ * τc,zul ≈ 0.56·Rm (from memory; the standard reads it off material figures).
+ */
+export const EN_COMPRESSION_SOLID_FRACTION = 0.56;
+export const EN_COMPRESSION_SOLID_SOURCE = 'EN 13906-1, permissible stress at solid τc,zul ≈ 0.56·Rm on the uncorrected stress, from memory';

@@ -1,6 +1,6 @@
 /** EN 10270-1 patented cold-drawn unalloyed spring steel wire: grades SL, SM, SH (static) and DM, DH (dynamic). */
 import { fahrenheitToC, fromMemory, metricRows, read, unverified } from './data-helpers';
-import type { Sourced, StrengthFit, StrengthRow, WireGrade } from './types';
+import type { Sourced, StrengthRow, WireGrade } from './types';
 
 const STANDARD = 'EN 10270-1';
 const ANALOGY = 'analogy (grade equivalents on hengmingsteelwire.com and vinco.es)';
@@ -16,22 +16,30 @@ const smDmRows = metricRows([
 ]);
 
 const shDhMemory = fromMemory(`${STANDARD} grades SH/DH`);
-// 0.30–0.45 mm as reprinted by durofer.ch and hengmingsteelwire.com; 1–5 mm not read.
+// 0.30–0.45 mm as reprinted by durofer.ch and hengmingsteelwire.com; the rows from 0.50 to 20 mm were not read
+// and are entered from memory of the standard's SH/DH column (each carries its origin).
+const shDhMemoryRows: [number, number, number][] = [
+  [0.5, 2480, 2740], [0.6, 2410, 2670], [0.7, 2360, 2610], [0.8, 2310, 2560], [0.9, 2270, 2510], [1.0, 2230, 2470],
+  [1.2, 2170, 2400], [1.4, 2110, 2340], [1.6, 2060, 2290], [1.8, 2020, 2240], [2.0, 1970, 2200], [2.5, 1900, 2110],
+  [3.0, 1840, 2040], [3.5, 1790, 1980], [4.0, 1740, 1930], [4.5, 1700, 1890], [5.0, 1660, 1850], [5.5, 1620, 1800],
+  [6.0, 1590, 1770], [6.5, 1570, 1750], [7.0, 1540, 1720], [7.5, 1510, 1690], [8.0, 1490, 1670], [8.5, 1470, 1650],
+  [9.0, 1450, 1630], [9.5, 1430, 1610], [10.0, 1410, 1590], [11.0, 1380, 1550], [12.0, 1350, 1530], [13.0, 1330, 1500],
+  [14.0, 1300, 1460], [15.0, 1280, 1440], [16.0, 1260, 1420], [17.0, 1240, 1390], [18.0, 1220, 1370], [19.0, 1190, 1340],
+  [20.0, 1180, 1320],
+];
 const shDhRows: StrengthRow[] = [
   { d: 0.3, min: 2660, max: 2940 }, { d: 0.35, min: 2600, max: 2880 },
   { d: 0.4, min: 2560, max: 2830 }, { d: 0.45, min: 2510, max: 2780 },
-  { d: 1.0, min: 2230, max: 2470, origin: shDhMemory }, { d: 2.0, min: 1970, max: 2200, origin: shDhMemory },
-  { d: 3.0, min: 1840, max: 2040, origin: shDhMemory }, { d: 5.0, min: 1660, max: 1850, origin: shDhMemory },
+  ...shDhMemoryRows.map(([d, min, max]) => ({ d, min, max, origin: shDhMemory })),
 ];
 const shDhSource = `${STANDARD} grades SH/DH, via durofer.ch and hengmingsteelwire.com`;
 
-// Above 5 mm no SH/DH row is known. SH/DH lie above SM/DM at every size read, so a power law through the
-// SM/DM rows at 5 mm (1460) and 20 mm (1020) is a lower bound; it stays below every SM/DM row between.
-const shDhLargeM = Math.log(1460 / 1020) / Math.log(20 / 5);
-const shDhLargeFit: StrengthFit = {
-  A: 1460 * 5 ** shDhLargeM, m: shDhLargeM, dMin: 5, dMax: 20,
-  ...unverified(`${STANDARD} SM/DM rows at 5 and 20 mm, as a lower bound for SH/DH (derived; SH/DH rows above 5 mm not read)`),
-};
+// SL: no rows read; the standard's SL column (1–10 mm) from memory.
+const slRows = metricRows([
+  [1.0, 1720, 1970], [1.5, 1620, 1860], [2.0, 1520, 1750], [2.5, 1460, 1680], [3.0, 1410, 1620], [3.5, 1360, 1570],
+  [4.0, 1320, 1520], [4.5, 1290, 1490], [5.0, 1260, 1450], [5.5, 1230, 1420], [6.0, 1210, 1390], [7.0, 1160, 1340],
+  [8.0, 1120, 1300], [9.0, 1090, 1260], [10.0, 1060, 1230],
+]);
 
 const common = {
   standard: STANDARD,
@@ -62,11 +70,8 @@ const sl: WireGrade = {
   ...common, ...likeA227,
   id: 'en10270-1-sl', name: 'Spring steel wire SL (EN 10270-1)', dynamicGrade: false,
   diameterRange: range(1, 10, scopeFromMemory),
-  // No SL rows read: Norton's hard-drawn (A227) fit stands in, SL being sold as the A227 equivalent.
-  strengthFits: [{
-    A: 1753.3, m: 0.1822, dMin: 0.5, dMax: 16,
-    ...unverified(`Norton, Machine Design, Table 13-4 A227 fit (SI row via issuhub.com), by ${ANALOGY}; no SL rows read`),
-  }],
+  strengthTable: { form: 'points', rows: slRows, ...fromMemory(`${STANDARD} grade SL`) },
+  strengthFits: [],
 };
 
 const sm: WireGrade = {
@@ -86,7 +91,7 @@ const sh: WireGrade = {
   id: 'en10270-1-sh', name: 'Spring steel wire SH (EN 10270-1)', dynamicGrade: false,
   diameterRange: range(0.3, 20, scopeFromMemory),
   strengthTable: { form: 'points', rows: shDhRows, ...read(shDhSource) },
-  strengthFits: [shDhLargeFit],
+  strengthFits: [],
 };
 
 const dh: WireGrade = {
@@ -97,7 +102,6 @@ const dh: WireGrade = {
   strengthFits: [
     // Below the 0.20 mm row its value is held: strength rises as d falls, so this errs low.
     { A: 2800, m: 0, dMin: 0.05, dMax: 0.2, ...unverified(`${STANDARD} DH 0.20 mm row held constant below 0.20 mm (derived)`) },
-    shDhLargeFit,
   ],
 };
 

@@ -60,7 +60,8 @@ export interface WireGrade {
   serviceTemperature: { min: number; max: number } & Sourced;
   /**
    * Stress-relief temperature and time at temperature; `diameterChange` is which way the coil diameter
-   * moves in the oven, a coiler set-up allowance (shop-practice notes §3.2 tables).
+   * moves in the oven, a coiler set-up allowance (spring makers' published stress-relief tables, e.g.
+   * apexspring.com "Stress relief vs heat treat"; common trade practice; see docs/sources.md).
    */
   stressRelief: { temperature: number; minutes: number; diameterChange: DiameterChange } & Sourced;
   /** Cost per kg relative to hard-drawn carbon steel (= 1.0). */

@@ -3,6 +3,7 @@ import { endSquarenessTolerance, freeLengthTolerance, loadTolerance } from '../t
 import type { CompressionDesign } from '../springs/compression/design';
 import type { CompressionReport } from '../springs/compression/report';
 import { endForms } from '../springs/compression/ends';
+import { wireDiameterToleranceSource } from '../materials/diameter-tolerance';
 import type { Finding } from '../result';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { diameterCharacteristic, HUNDRED_PERCENT_LOAD_TOLERANCE, LOAD_GAUGE, limited, reference, sampledInspection } from './inspection-plan';
@@ -31,8 +32,9 @@ function lengthCharacteristics(x: CompressionDesign, r: CompressionReport, grade
   const out: Characteristic[] = [];
   if (fl.ok && !fl.value.reference) out.push(limited('Free length', 'length', r.freeLength, fl.value.plusMinus, 'height gauge', fl.source));
   else out.push(reference('Free length (reference)', 'length', r.freeLength, 'height gauge', fl.ok ? fl.source : fl.message));
-  out.push({ ...reference('Solid length (maximum)', 'length', r.solidLength, 'load tester to solid', 'calculated, d × coils per end type'),
-    upper: r.solidLength, reference: false });
+  out.push({ ...reference('Solid length (maximum)', 'length', r.solidLength, 'load tester to solid',
+    `${r.solidLengthMaximumSource}, d_max = d + wire tolerance (${wireDiameterToleranceSource.source})`),
+  upper: r.solidLengthMaximum, reference: false });
   if (endForms[x.ends].ground) {
     const sq = endSquarenessTolerance({ L0: r.freeLength, D: r.meanDiameter, d: x.d, grade, groundEnds: true });
     if (sq.ok) out.push({ ...limited('Squareness e1 (max)', 'length', 0, sq.value.perpendicularity, 'square on surface plate', sq.source), lower: null });

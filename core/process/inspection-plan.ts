@@ -33,7 +33,7 @@ export interface InspectionPlan {
   characteristics: Characteristic[];
 }
 
-/** Load tolerances tighter than this call for testing every piece (shop-practice notes §6.2, common practice). */
+/** Load tolerances tighter than this call for testing every piece (common trade practice). */
 export const HUNDRED_PERCENT_LOAD_TOLERANCE = 5;
 export const LOAD_GAUGE = 'load tester (compress once to solid first)';
 

@@ -3,7 +3,7 @@ import { wireMass } from '../springs/helix';
 
 /**
  * Pieces to start so the order survives every operation's scrap: ordered ÷ ∏(1 − scrap_i), rounded up
- * (shop-practice notes §4.3, common practice).
+ * (common trade practice; the scrap rates themselves are shop settings).
  */
 export function startQuantity(ordered: number, operations: readonly Operation[]): number {
   let yieldFraction = 1;

@@ -99,10 +99,9 @@ function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   switch (spec.kind) {
     case 'compression': {
       const x = compressionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseCompression(x);
-      const coiled = r.setRemoval.required && r.setRemoval.coiledFreeLength !== null ? r.setRemoval.coiledFreeLength : r.freeLength;
+      const r = analyseCompression(x, settings.defaults.setRemovalMethod);
       return {
-        body: x, findings: reviewCompression(x, r), coiledFreeLength: coiled, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
+        body: x, findings: reviewCompression(x, r), coiledFreeLength: r.coiler.freeLength, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
         route: (c) => compressionRouting(settings, x, r, c),
         inspect: (lot, aql, grade, f) => compressionInspection(x, r, lot, aql, grade, f),
       };

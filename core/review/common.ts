@@ -2,6 +2,8 @@ import type { Finding, Severity } from '../result';
 import { formatQuantity, significant } from '../format';
 import type { CoilBody } from '../springs/coil-body';
 import { reviewLimits as lim } from './limits';
+import type { FatigueResult } from '../springs/fatigue';
+import type { UnitSystem } from '../units';
 
 /** Review rules every kind shares: index, service temperature, and the finding builder. */
 export type Sink = Finding[];
@@ -51,4 +53,19 @@ export function reviewScope13906(x: CoilBody, w: number, n: number, standard: st
   if (w < s.w.min || w > s.w.max) outside.push('spring index');
   if (outside.length === 0) return;
   add(out, 'note', 'outside-en13906-scope', '', `outside the scope of ${standard} (${outside.join(', ')}): its methods are used by extension`);
+}
+
+export const noFatigueData = (gradeName: string): string =>
+  `no fatigue data for ${gradeName}: the endurance data and cyclic tables used here are for spring steels, so cyclic duty is not checked`;
+export const NO_FATIGUE_DATA_FIX = 'get the wire maker\'s fatigue data or life-test the springs, or choose a steel grade';
+
+/** The fatigue verdict in words: the finite-life check when the duty's cycles are below the endurance data. */
+export function fatigueWords(f: FatigueResult, u: UnitSystem): string {
+  if (f.finiteLife) {
+    return `finite-life check ${f.verdict} at ${significant(f.finiteLife.cycles)} cycles: maximum stress ` +
+      `${formatQuantity(f.stressMax, 'stress', u)} against ${formatQuantity(f.finiteLife.limit, 'stress', u)} ` +
+      `(${significant(100 * f.finiteLife.fraction)} % of tensile strength, ${f.finiteLife.source})`;
+  }
+  return `infinite-life check ${f.verdict}: Goodman safety factor ${significant(f.goodmanSafetyFactor)}, ` +
+    `Gerber ${significant(f.gerberSafetyFactor)} (Zimmerli data, ${f.peened ? 'peened' : 'not peened'})`;
 }

@@ -6,40 +6,87 @@ import type { FreeParameter } from '../spec/compression';
 import { endForms } from '../springs/compression/ends';
 import { SURGE_MARGIN } from '../springs/compression/surge';
 import { reviewLimits as lim } from './limits';
-import { add, reviewIndex, reviewServiceTemperature } from './common';
+import { freeLengthTolerance } from '../tolerances';
+import type { UnitSystem } from '../units';
+import type { SetRemovalResult, SetRemovalVerdict } from '../springs/compression/report';
+import { coiledLimits } from '../springs/compression/set-removal';
+import type { CoiledBound, SetRemovalMethod } from '../springs/compression/set-removal';
+import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
+import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
+
+const methodNames: Record<SetRemovalMethod, string> = { handbook: 'handbook method', en13906: 'EN 13906-1 static method' };
+
+function methodLine(v: SetRemovalVerdict, u: UnitSystem): string {
+  const state = !v.achievable ? 'over the limit after set removal' : v.required ? 'set removal required' : 'no set removal needed';
+  return `${methodNames[v.method]}: ${formatQuantity(v.stressAtSolid, 'stress', u)} at solid against ` +
+    `${formatQuantity(v.allowableBefore, 'stress', u)} before / ${formatQuantity(v.allowableAfter, 'stress', u)} after set removal, ${state}`;
+}
+
+function governingWords(s: SetRemovalResult): string {
+  return s.governedBy === 'stricter' ? `the stricter, ${methodNames[s.governing]}, governs` : `the shop's setting: ${methodNames[s.governing]} governs`;
+}
+
+const boundWords: Record<CoiledBound, { message: string; fix: string }> = {
+  'beyond-fully-plastic': {
+    message: 'no coiled length reaches the free length: the stress at solid is beyond what a fully plastic wire carries',
+    fix: 'shorten the free length, add coils, use heavier wire or a stronger grade, or add a stop before solid',
+  },
+  'set-over-deflection': {
+    message: `the set needed is more than the spring's own deflection to solid (limit: set ≤ ${coiledLimits.maximumSetPerFinishedDeflection} × deflection to solid)`,
+    fix: 'reduce the stress at solid: a shorter free length, more coils or heavier wire',
+  },
+  'pitch-over-coiler': {
+    message: `the coiled pitch would be over ${coiledLimits.maximumPitchPerMeanDiameter} × the mean diameter, more than a coiler's pitch tool makes`,
+    fix: 'reduce the stress at solid (more coils, heavier wire), or establish the coiled length by trials on a coiler that can make the pitch',
+  },
+};
+
+/** The set the first-off can tell from the coiling scatter: at least the free-length tolerance (common trade practice). */
+function setControlTolerance(x: CompressionDesign, r: CompressionReport): { plusMinus: number; source: string } | null {
+  const t = freeLengthTolerance({
+    L0: r.freeLength, grade: x.toleranceGrade ?? 2, index: r.springIndex, activeCoils: r.activeCoils, loadSpecified: false,
+  });
+  return t.ok && !t.value.reference ? { plusMinus: t.value.plusMinus, source: t.source } : null;
+}
+
+function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): void {
+  const s = r.setRemoval;
+  const u = x.units;
+  const tolerance = setControlTolerance(x, r);
+  if (tolerance && (s.expectedSet ?? 0) < tolerance.plusMinus) {
+    add(out, 'warning', 'set-below-length-tolerance', 'freeLength',
+      `the expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)} is under the free-length tolerance ` +
+      `±${formatQuantity(tolerance.plusMinus, 'length', u)} (${tolerance.source}): the first pieces cannot show whether the ` +
+      'set was taken, so the free length is not controlled by the press (common trade practice)',
+      'lower the stress at solid so no set removal is needed, or raise it for a set the first-off can measure');
+  }
+}
 
 function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const s = r.setRemoval;
   const u = x.units;
   if (!s.achievable) {
     add(out, 'error', 'solid-stress-over-set-removed-allowable', 'freeLength',
-      `uncorrected stress at solid ${formatQuantity(r.stressAtSolidUncorrected, 'stress', u)} exceeds the allowable ` +
-      `after set removal ${formatQuantity(r.allowableStressSetRemoved, 'stress', u)}: the spring would take a set in use`,
+      `stress at solid ${formatQuantity(s.stressAtSolid, 'stress', u)} is over the allowable after set removal ` +
+      `${formatQuantity(s.allowableAfter, 'stress', u)} (${methodNames[s.governing]}; ${governingWords(s)}): the spring would take a set in use`,
       'shorten the free length, add coils, use heavier wire or a stronger grade, or add a stop before solid');
     return;
   }
   if (!s.required) return;
-  if (s.coiledFreeLength === null) {
-    add(out, 'warning', 'set-beyond-model', 'freeLength',
-      'the set needed is beyond what the set-removal model can predict; establish the coiled free length by trials',
-      'coil trial pieces long and press them to solid');
-    return;
-  }
-  add(out, 'note', 'set-removal-required', 'freeLength',
-    `corrected stress at solid ${formatQuantity(r.stressAtSolid, 'stress', u)} is over the allowable ` +
-    `${formatQuantity(r.allowableStress, 'stress', u)}: coil to ${formatQuantity(s.coiledFreeLength, 'length', u)} ` +
-    `and press to solid (expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)})`);
-  if ((s.setFraction ?? 0) < lim.minimumSetFraction) {
-    add(out, 'warning', 'set-too-small', 'freeLength',
-      `the expected set is ${significant(100 * (s.setFraction ?? 0), 2)} % of the deflection to solid, under ` +
-      `${100 * lim.minimumSetFraction} %: the free length will be hard to hold`,
-      'accept the stress without set removal, or design for a larger set');
+  const both = `${methodLine(s.methods.handbook, u)}; ${methodLine(s.methods.en13906, u)}; ${governingWords(s)}`;
+  if (s.bound !== null) {
+    add(out, 'error', 'coiled-length-out-of-bounds', 'freeLength', `${boundWords[s.bound].message} (${both})`, boundWords[s.bound].fix);
+  } else {
+    add(out, 'note', 'set-removal-required', 'freeLength',
+      `coil to ${formatQuantity(s.coiledFreeLength ?? r.freeLength, 'length', u)} and press to solid ` +
+      `(expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)}): ${both}`);
+    reviewSetSize(x, r, out);
   }
   if (s.ratio > lim.maximumSetRatio) {
     add(out, 'warning', 'set-ratio-high', 'freeLength',
-      `stress ratio at solid ${significant(s.ratio)} is over ${lim.maximumSetRatio}: set removal distorts the spring and adds little`,
-      'reduce the stress at solid');
+      `stress ratio at solid ${significant(s.ratio)} is over ${lim.maximumSetRatio}: set removal distorts the spring and adds little (SMI, reprinted by spring makers)`,
+      'reduce the stress at solid: a shorter free length, more coils or heavier wire');
   }
 }
 
@@ -64,7 +111,7 @@ function reviewWorkingLengths(x: CompressionDesign, r: CompressionReport, out: S
   } else if (deepest.length < r.minimumWorkingLength) {
     add(out, 'warning', 'coil-clearance', deepest.path,
       `working length ${formatQuantity(deepest.length, 'length', u)} is below the minimum ${formatQuantity(r.minimumWorkingLength, 'length', u)} ` +
-      '(solid length plus the EN 13906-1 minimum coil gaps): coils may touch in service',
+      `(largest solid length ${formatQuantity(r.solidLengthMaximum, 'length', u)} with the wire at its upper tolerance, plus the EN 13906-1 minimum coil gaps): coils may touch in service`,
       'lengthen the working length or reduce the solid length');
   }
   const deflection = r.freeLength - deepest.length;
@@ -74,12 +121,11 @@ function reviewWorkingLengths(x: CompressionDesign, r: CompressionReport, out: S
       `(L0/D ${significant(r.slenderness)} over the limit ${significant(r.slendernessLimit)}), before the working length`,
       'guide the spring on a rod or in a bore, seat both ends on parallel plates, or raise the coil diameter');
   }
-  const stressed = (deflection / (r.freeLength - r.solidLength)) * (r.setRemoval.required ? r.stressAtSolidUncorrected : r.stressAtSolid);
-  const allowable = r.setRemoval.required ? r.allowableStressSetRemoved : r.allowableStress;
-  if (stressed > allowable && r.setRemoval.achievable) {
-    add(out, 'error', 'working-stress-over-allowable', deepest.path,
-      `stress at the working length ${formatQuantity(stressed, 'stress', u)} is over the allowable ${formatQuantity(allowable, 'stress', u)}`,
-      'use heavier wire, more coils or a stronger grade');
+  if (r.bucklingDeflection !== null && deflection < r.bucklingDeflection && deflection >= (1 - lim.bucklingMargin) * r.bucklingDeflection) {
+    add(out, 'note', 'near-buckling', 'seating',
+      `the working deflection ${formatQuantity(deflection, 'length', u)} is within ${100 * lim.bucklingMargin} % of the buckling ` +
+      `deflection ${formatQuantity(r.bucklingDeflection, 'length', u)} (common trade practice margin)`,
+      'guide the spring on a rod or in a bore, or raise the coil diameter');
   }
 }
 
@@ -149,11 +195,13 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
       `natural frequency ${significant(r.naturalFrequency)} Hz is under ${SURGE_MARGIN}× the operating ${significant(x.duty.frequency)} Hz: surge raises stresses`,
       'raise the natural frequency: heavier wire, smaller coil diameter, fewer coils');
   }
+  if (!hasSteelFatigueData(x.wire.family)) {
+    add(out, 'warning', 'no-fatigue-data', 'duty', noFatigueData(x.wire.gradeName), NO_FATIGUE_DATA_FIX);
+    return;
+  }
   const f = r.fatigue;
   if (f && f.verdict !== 'pass') {
-    add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty',
-      `infinite-life check ${f.verdict}: Goodman safety factor ${significant(f.goodmanSafetyFactor)}, ` +
-      `Gerber ${significant(f.gerberSafetyFactor)} (Zimmerli data, ${f.peened ? 'peened' : 'not peened'})`,
+    add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', fatigueWords(f, x.units),
       f.peened ? 'reduce the stroke stress: more coils or a larger coil diameter' : 'shot peen, or reduce the stroke stress');
   }
 }

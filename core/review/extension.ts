@@ -3,7 +3,8 @@ import { formatQuantity, significant } from '../format';
 import type { ExtensionDesign } from '../springs/extension/design';
 import type { ExtensionReport } from '../springs/extension/report';
 import { loopPositionTolerance } from '../tolerances';
-import { add, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
+import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
+import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
 import { reviewLimits as lim } from './limits';
 
@@ -16,9 +17,9 @@ function reviewInitialTension(x: ExtensionDesign, r: ExtensionReport, out: Sink)
     add(out, 'note', 'initial-tension-proposed', 'initialTension',
       `initial tension not given: ${formatQuantity(r.initialTension, 'force', u)} proposed (stress ${shown}, the centre of the preferred ${window} for index ${significant(r.springIndex)})`);
   } else if (r.initialTensionStress > max) {
-    add(out, 'error', 'initial-tension-too-high', 'initialTension',
-      `initial-tension stress ${shown} is above the preferred ${window} for index ${significant(r.springIndex)}: it cannot be coiled in`,
-      'lower the initial tension, or raise the index');
+    add(out, 'warning', 'initial-tension-too-high', 'initialTension',
+      `initial-tension stress ${shown} is above the preferred ${window} for index ${significant(r.springIndex)}: hard to coil in and to hold (the window is a preferred range, not a limit)`,
+      'lower the initial tension, or raise the index; otherwise confirm on first pieces');
   } else if (r.initialTensionStress < min) {
     add(out, 'warning', 'initial-tension-too-low', 'initialTension',
       `initial-tension stress ${shown} is below the preferred ${window}: the coils will not hold together reliably, and stress relief lowers it further`,
@@ -103,10 +104,13 @@ function reviewUse(x: ExtensionDesign, r: ExtensionReport, out: Sink): void {
     add(out, 'warning', 'cyclic-extension', 'duty',
       'extension springs in cyclic duty fail at the hooks, which cannot be shot peened: EN 13906-2 advises against it where avoidable',
       'prefer a compression spring in a drawbar, or derate the hook stresses');
+    if (!hasSteelFatigueData(x.wire.family)) {
+      add(out, 'warning', 'no-fatigue-data', 'duty', noFatigueData(x.wire.gradeName), NO_FATIGUE_DATA_FIX);
+      return;
+    }
     const f = r.fatigue;
     if (f && f.verdict !== 'pass') {
-      add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty',
-        `body infinite-life check ${f.verdict}: Goodman ${significant(f.goodmanSafetyFactor)}, Gerber ${significant(f.gerberSafetyFactor)} (Zimmerli data, not peened)`);
+      add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', `body ${fatigueWords(f, x.units)}`);
     }
   }
 }

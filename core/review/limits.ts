@@ -4,11 +4,16 @@ export const reviewLimits = {
   preferredIndex: { min: 4, max: 12 },
   /** Beyond these a spring is not practically coiled (common trade practice). */
   makeableIndex: { min: 2, max: 25 },
-  /** Wire under 0.5 mm is normally left unground (common trade practice; shop-practice notes §3.3). */
+  /** Wire under 0.5 mm is normally left unground (common trade practice, as spring makers' end-type guides state it). */
   minimumGroundWire: 0.5,
-  /** Trade rules for set removal (SMI, reprinted by spring makers): set ≥ 10 % of the deflection to solid; ratio ≤ 1.3. */
-  minimumSetFraction: 0.1,
+  /**
+   * Set removal: stress ratio at solid ≤ 1.3 (SMI rule reprinted by spring makers, newcombspring.com). The
+   * reprint's other rule, "set at least 10 %", is kept in what it is for: the set must be large enough for the
+   * first-off to control against the free-length tolerance (set ≥ the ± tolerance; common trade practice).
+   */
   maximumSetRatio: 1.3,
+  /** A working deflection within 20 % of the buckling deflection gets a note (common trade practice). */
+  bucklingMargin: 0.2,
   /** Shigley 9e: 3 ≤ Na (from memory). */
   minimumActiveCoils: 3,
   /** EN 15800 Table 1 scope of the tolerance standard (CEN/TC listing). */

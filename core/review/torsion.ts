@@ -2,7 +2,9 @@ import type { Finding } from '../result';
 import { formatQuantity, significant } from '../format';
 import type { TorsionDesign } from '../springs/torsion/design';
 import type { TorsionReport } from '../springs/torsion/report';
-import { add, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
+import { add, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
+import { hasSteelFatigueData } from '../springs/fatigue';
+import { TORSION_UNWIND_FACTOR } from '../materials/allowables';
 import type { Sink } from './common';
 import { reviewLimits as lim } from './limits';
 
@@ -12,10 +14,11 @@ import { reviewLimits as lim } from './limits';
  */
 export const realisticFreeAngleTolerance = (bodyCoils: number): number => 2 + 1.5 * bodyCoils;
 
-function reviewDirection(x: TorsionDesign, out: Sink): void {
+function reviewDirection(x: TorsionDesign, r: TorsionReport, out: Sink): void {
   if (x.loadDirection === 'opening') {
     add(out, 'warning', 'loaded-against-wind', 'loadDirection',
-      'loaded to unwind the body: the residual stresses from coiling work against it and the allowable is lower',
+      'loaded to unwind the body: the residual stresses from coiling work against it, so the allowable is lowered to ' +
+      `${formatQuantity(r.allowableStress, 'stress', x.units)} (${TORSION_UNWIND_FACTOR} × the usual)`,
       'wind the spring the other hand so the load closes it');
   }
 }
@@ -53,6 +56,9 @@ function reviewStress(x: TorsionDesign, r: TorsionReport, out: Sink): void {
         'adjust the body coils or the leg lengths');
     }
   });
+  if (x.duty.type === 'cyclic' && !hasSteelFatigueData(x.wire.family)) {
+    add(out, 'warning', 'no-fatigue-data', 'duty', noFatigueData(x.wire.gradeName), NO_FATIGUE_DATA_FIX);
+  }
   if (r.fatigue && r.fatigue.verdict === 'fail') {
     add(out, 'error', 'fatigue-fail', 'duty',
       `cyclic bending stress ${formatQuantity(r.fatigue.stressMax, 'stress', u)} is over ${Math.round(100 * r.fatigue.fractionOfTensile)} % of tensile strength recommended for ${significant(r.fatigue.cycles)} cycles`,
@@ -80,7 +86,7 @@ function reviewLegs(x: TorsionDesign, r: TorsionReport, out: Sink): void {
 export function reviewTorsion(x: TorsionDesign, r: TorsionReport): Finding[] {
   const out: Finding[] = [...x.wireFindings];
   reviewIndex(x, r.springIndex, out);
-  reviewDirection(x, out);
+  reviewDirection(x, r, out);
   reviewArbor(x, r, out);
   reviewStress(x, r, out);
   reviewLegs(x, r, out);

@@ -1,9 +1,9 @@
 import { z } from 'zod';
+import { SPEC_VERSION } from './versions';
 
 /** Schema pieces shared by every spring kind. Values are in the spec's own unit system. */
 export const positive = z.number().finite().positive();
 export const nonNegative = z.number().finite().nonnegative();
-
 
 export const unitSystemSchema = z.enum(['metric', 'inch']);
 
@@ -35,7 +35,8 @@ export const orderFieldsShape = {
   serviceTemperature: serviceTemperatureSchema.optional(),
 };
 
-export const specVersionSchema = z.literal(1).optional();
+/** Checked after the upgrade steps have run, so only the current version reaches the schema. */
+export const specVersionSchema = z.literal(SPEC_VERSION).optional();
 
 /** Wire, one coil diameter and mill-certificate overrides: the same fields for every kind. */
 export const coilBodyShape = {

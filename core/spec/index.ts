@@ -8,10 +8,13 @@ import { extensionSpecSchema } from './extension';
 import { extensionSpecErrors } from './extension-rules';
 import { torsionSpecSchema } from './torsion';
 import { torsionSpecErrors } from './torsion-rules';
+import { upgradeSpec } from './versions';
 
 export * from './compression';
 export * from './extension';
 export * from './torsion';
+export { SPEC_VERSION, specUpgrades, upgradeSpec } from './versions';
+export type { RawSpec, SpecUpgrade } from './versions';
 
 /** The one input shape of a spring, for every kind; the same in the UI, the store, the CLI and import files. */
 export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema, extensionSpecSchema, torsionSpecSchema]);
@@ -29,12 +32,17 @@ function schemaErrors(error: z.ZodError): FieldError[] {
       : e);
 }
 
-/** Validates raw input as a spec. Never throws: every problem comes back with the field it concerns. */
+/**
+ * Validates raw input as a spec, after bringing an older version up by the declared steps. Never throws:
+ * every problem comes back with the field it concerns.
+ */
 export function parseSpec(raw: unknown): Result<Spec> {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
     return fail([fieldError('not-an-object', '', 'a spec must be a JSON object')]);
   }
-  const parsed = specSchema.safeParse(raw);
+  const upgraded = upgradeSpec(raw as Record<string, unknown>);
+  if (!upgraded.ok) return upgraded;
+  const parsed = specSchema.safeParse(upgraded.value);
   if (!parsed.success) return fail(schemaErrors(parsed.error));
   const spec = parsed.data;
   const errors = spec.kind === 'compression' ? compressionSpecErrors(spec)

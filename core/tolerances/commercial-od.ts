@@ -12,7 +12,7 @@ export const commercialOdTable = {
   source: 'trade OD-tolerance table as reprinted by katyspring.com (extension-spring blog); ' +
     'the d = 0.035 in, index 10 cell also quoted by jobshop.com; common trade practice (SMI-style)',
   verified: false,
-  /** Interpolation between rows and columns is customary (shop-practice notes §2.3). */
+  /** Interpolation between rows and columns is customary (common trade practice). */
   defaultInterpolation: 'linear' as Interpolation,
   wireInches: [0.015, 0.023, 0.035, 0.051, 0.076, 0.114, 0.171, 0.250, 0.375, 0.500],
   indexes: [4, 6, 8, 10, 12, 14, 16],

@@ -13,7 +13,7 @@ export interface EndSquarenessRow {
 }
 
 export const endSquarenessTable = {
-  source: 'EN 15800 / DIN 2095 e1 and e2 by grade, from memory (shop-practice notes §2.1)',
+  source: 'EN 15800 / DIN 2095 e1 and e2 by grade, from memory',
   verified: false,
   grades: {
     1: { e1Factor: 0.026, e1Degrees: 1.5, e2Factor: 0.015, e2Degrees: 0.9 },

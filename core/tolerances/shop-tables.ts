@@ -31,7 +31,7 @@ const DEMO = 'demo defaults, shop to set';
 const rowsFor = (grade: ToleranceGrade, bands: readonly (readonly [number, number, number, number])[]): ShopToleranceRow[] =>
   bands.map(([over, upTo, percent, minimum]) => ({ grade, over, upTo, percent, minimum }));
 
-/** Shaped like the Chinese grade table (±5/10/15 % for 3–10 coils, ±4/8/12 % above; notes §2.2). */
+/** Shaped like the Chinese grade table (±5/10/15 % for 3–10 coils, ±4/8/12 % above; chinacustomspring.com reprint). */
 export const demoLoadTolerances: ShopToleranceTable = {
   quantity: 'load',
   bandedBy: 'activeCoils',
@@ -44,7 +44,7 @@ export const demoLoadTolerances: ShopToleranceTable = {
   ],
 };
 
-/** Grade 2 starts from ±2 % (min 0.5 mm) at w 4–8 (notes §2.2); grades 1 and 3 scaled by 0.63 and 1.6. */
+/** Grade 2 starts from ±2 % (min 0.5 mm) at w 4–8 (the same chinacustomspring.com reprint); grades 1 and 3 scaled by 0.63 and 1.6. */
 export const demoFreeLengthTolerances: ShopToleranceTable = {
   quantity: 'freeLength',
   bandedBy: 'index',
@@ -103,7 +103,7 @@ export function loadTolerance(
 export type FreeLengthTolerance = { reference: true } | ({ reference: false } & PlusMinus);
 
 const REFERENCE_RULE = 'EN 15800 / DIN 2095: where a force is specified, L0 is a reference dimension ' +
-  'and only the force is checked (from memory, shop-practice notes §2.1)';
+  'and only the force is checked (from memory)';
 
 /** ± mm on L0, or `{ reference: true }` when a load is specified (the maker then adjusts L0 to hit it). */
 export function freeLengthTolerance(

@@ -5,6 +5,8 @@ import { saveSettings } from '../settings';
 import type { Store } from '../store';
 import { inTransaction } from '../store';
 import { demoJobs } from './jobs';
+import { demoFirstOff } from './first-off';
+import { recordFirstOff } from '../first-off/records';
 import { demoCustomers, demoSettings } from './shop';
 
 const DAY_MS = 86_400_000;
@@ -42,6 +44,10 @@ export function createDemoShop(store: Store): ApiResult<{ jobs: number; customer
           spec: job.spec,
         }, { createdAt: stamp }));
         if (job.status !== 'draft') must(updateJob(store, { id: created.id, status: job.status }, 'status'));
+      }
+      for (const f of demoFirstOff) {
+        const id = (store.sql('SELECT id FROM jobs WHERE part_number = ?').get(f.partNumber) as { id: number }).id;
+        must(recordFirstOff(store, { ...f.record, jobId: id, measuredOn: isoDay(now - f.daysAgo * DAY_MS) }));
       }
     });
   } catch (e) {

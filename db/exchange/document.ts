@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { customerRefSchema, jobInputSchema } from '../../core/api/store';
 import type { JobDetails } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
+import type { FirstOffExport } from './first-off';
+import { importedFirstOffSchema } from './first-off';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
 export const EXCHANGE_VERSION = 1;
@@ -12,7 +13,10 @@ export interface JobRecord extends JobDetails {
   customer: { name: string; email: string; phone: string } | null;
   createdAt: string;
   updatedAt: string;
-  spec: Spec;
+  /** The checked spec; as stored when it no longer reads, so an export never drops a job (the export names it). */
+  spec: unknown;
+  /** The job's first-off records, when it has any. */
+  firstOff?: FirstOffExport[];
 }
 
 export interface JobsDocument {
@@ -28,6 +32,7 @@ export const importRecordSchema = jobInputSchema.omit({ customerId: true }).exte
   number: z.string().trim().min(1).max(40).optional(),
   createdAt: z.iso.datetime().optional(),
   updatedAt: z.iso.datetime().optional(),
+  firstOff: importedFirstOffSchema,
 }).strict();
 
 export const documentHeadSchema = z.object({

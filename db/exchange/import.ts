@@ -13,6 +13,8 @@ import { inTransaction } from '../store';
 import { parseWith, zodErrors } from '../../core/validation';
 import { CsvSyntaxError, parseCsv, unguarded } from './csv';
 import { CSV_IMPORTED, documentHeadSchema, importRecordSchema } from './document';
+import type { CheckedFirstOff } from './first-off';
+import { checkImportedFirstOff, writeImportedFirstOff } from './first-off';
 
 interface ImportItem {
   /** "jobs[3]" for JSON, "lines[7]" (line 7 of the file) for CSV. */
@@ -25,6 +27,7 @@ interface CheckedItem extends CheckedJob {
   number?: string | undefined;
   createdAt?: string | undefined;
   updatedAt?: string | undefined;
+  firstOff: CheckedFirstOff[];
 }
 
 function checkItem(item: ImportItem): Result<CheckedItem> {
@@ -34,8 +37,10 @@ function checkItem(item: ImportItem): Result<CheckedItem> {
   if (!parsed.success || !specCheck.ok) {
     return fail([...(parsed.success ? [] : zodErrors(parsed.error, item.at)), ...(specCheck.ok ? [] : specCheck.errors)]);
   }
-  const { number, createdAt, updatedAt, ...fields } = parsed.data;
-  return ok({ at: formatPath(item.at), fields, ...specCheck.value, number, createdAt, updatedAt });
+  const { number, createdAt, updatedAt, firstOff: rawFirstOff, ...fields } = parsed.data;
+  const firstOff = checkImportedFirstOff(rawFirstOff, specCheck.value.spec, item.at);
+  if (!firstOff.ok) return firstOff;
+  return ok({ at: formatPath(item.at), fields, ...specCheck.value, number, createdAt, updatedAt, firstOff: firstOff.value });
 }
 
 function numberErrors(store: Store, items: CheckedItem[]): FieldError[] {
@@ -144,6 +149,7 @@ export function importJobs(store: Store, input: unknown): StoreResult<ImportResu
       number: parsed.value.renumber ? undefined : item.number, reason: 'imported',
       createdAt: item.createdAt, updatedAt: item.updatedAt,
     }, item.at);
+    writeImportedFirstOff(store, id, item.firstOff);
     return { id, number: (store.sql('SELECT number FROM jobs WHERE id = ?').get(id) as { number: string }).number };
   })) }));
 }

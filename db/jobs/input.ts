@@ -5,11 +5,14 @@ import { jobInputSchema } from '../../core/api/store';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 import { zodErrors } from '../../core/validation';
+import { ENGINE_VERSION } from '../../core/engine-version';
 import { jobShape } from './shape';
 
 export interface CheckedSpec {
   spec: Spec;
   shape: JobShape;
+  /** The engine version that computed `shape`: this program's. */
+  shapeEngine: number;
 }
 
 /** parseSpec, then the analysis the indexed columns come from; errors carry paths under `prefix`. */
@@ -19,7 +22,7 @@ export function checkSpec(raw: unknown, prefix: readonly PropertyKey[]): Result<
     return fail(parsed.errors.map((e) => ({ ...e, path: joinPath(prefix, e.path) })));
   }
   try {
-    return ok({ spec: parsed.value, shape: jobShape(parsed.value) });
+    return ok({ spec: parsed.value, shape: jobShape(parsed.value), shapeEngine: ENGINE_VERSION });
   } catch (e) {
     return fail([fieldError('analysis-failed', formatPath(prefix), `the spec cannot be analysed: ${(e as Error).message}`)]);
   }

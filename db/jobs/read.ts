@@ -1,13 +1,13 @@
 import type { Job, JobRevision, RevisionFields } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
 import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { Store } from '../store';
 import type { JobRow } from './rows';
 import { JOB_FROM, SUMMARY_COLUMNS, toJob } from './rows';
+import { readStoredSpec } from './stored-spec';
 
 export function jobRow(store: Store, id: number): JobRow | undefined {
-  return store.sql(`SELECT ${SUMMARY_COLUMNS}, j.spec FROM ${JOB_FROM} WHERE j.id = ?`).get(id) as JobRow | undefined;
+  return store.sql(`SELECT ${SUMMARY_COLUMNS} FROM ${JOB_FROM} WHERE j.id = ?`).get(id) as JobRow | undefined;
 }
 
 export function getJob(store: Store, ref: number | { id: number } | { number: string }): StoreResult<Job> {
@@ -18,26 +18,30 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
   }
   const id = typeof ref === 'number' ? ref : ref.id;
   const row = jobRow(store, id);
-  return row ? success(toJob(row)) : failure('not-found', `no job with id ${id}`, 'id');
+  return row ? toJob(row) : failure('not-found', `no job with id ${id}`, 'id');
 }
 
-interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string }
+interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string }
 
 function toRevision(row: RevisionRow): JobRevision {
+  const stored = readStoredSpec(row.spec, `revision ${row.revision} of job ${row.number}`);
   return {
     jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason,
-    fields: JSON.parse(row.fields) as RevisionFields, spec: JSON.parse(row.spec) as Spec,
+    fields: JSON.parse(row.fields) as RevisionFields,
+    ...(stored.ok ? { spec: stored.spec } : { spec: null, problem: stored.problem }),
   };
 }
 
+const REVISION_SQL = 'SELECT r.*, j.number FROM job_revisions r JOIN jobs j ON j.id = r.job_id';
+
 export function revisionRow(store: Store, jobId: number, revision: number): JobRevision | undefined {
-  const row = store.sql('SELECT * FROM job_revisions WHERE job_id = ? AND revision = ?').get(jobId, revision) as RevisionRow | undefined;
+  const row = store.sql(`${REVISION_SQL} WHERE r.job_id = ? AND r.revision = ?`).get(jobId, revision) as RevisionRow | undefined;
   return row && toRevision(row);
 }
 
 /** Every saved revision of a job, newest first. */
 export function jobRevisions(store: Store, id: number): StoreResult<JobRevision[]> {
   if (!jobRow(store, id)) return failure('not-found', `no job with id ${id}`, 'id');
-  const rows = store.sql('SELECT * FROM job_revisions WHERE job_id = ? ORDER BY revision DESC').all(id) as RevisionRow[];
+  const rows = store.sql(`${REVISION_SQL} WHERE r.job_id = ? ORDER BY r.revision DESC`).all(id) as RevisionRow[];
   return success(rows.map(toRevision));
 }

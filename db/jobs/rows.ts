@@ -1,5 +1,8 @@
-import type { Job, JobDetails, JobShape, JobStatus, JobSummary } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
+import type { Job, JobDetails, JobShape, JobStatus, JobSummary, StoredProblem } from '../../core/api/store';
+import { failure, success } from '../errors';
+import type { StoreResult } from '../errors';
+import type { StoredSpec } from './stored-spec';
+import { readStoredSpec } from './stored-spec';
 import { jobJudgementSchema, noJudgement } from '../../core/quoting/judgement';
 import type { JobJudgement } from '../../core/quoting/judgement';
 
@@ -30,12 +33,13 @@ export interface JobRow {
   free_length: number;
   active_coils: number;
   rate: number;
-  spec?: string;
+  shape_engine: number | null;
+  spec: string;
 }
 
 export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
   j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.judgement, j.revision, j.created_at,
-  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate`;
+  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.shape_engine, j.spec`;
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
 
@@ -50,6 +54,7 @@ export function jobDetailsOfRow(row: JobRow): JobDetails {
 
 /** The stored judgement; one saved before overrides existed (or unreadable) reads as none. */
 export function judgementOf(raw: unknown): JobJudgement {
+  if (raw === '{}' || raw === undefined || raw === null) return noJudgement();
   const parsed = jobJudgementSchema.safeParse(typeof raw === 'string' ? JSON.parse(raw) : raw ?? {});
   return parsed.success ? parsed.data : noJudgement();
 }
@@ -62,7 +67,32 @@ export function shapeOf(row: JobRow): JobShape {
   };
 }
 
-export function toSummary(row: JobRow): JobSummary {
+/** The job's stored spec, read and checked as any input is. */
+export function storedSpecOf(row: JobRow): StoredSpec {
+  return readStoredSpec(row.spec, `job ${row.number}`);
+}
+
+/**
+ * Whether a listed job's spec reads, remembered by its text: a list or search page re-reads the same specs
+ * often, and the answer cannot change while this program runs (its grades and spec version are fixed).
+ */
+const listedProblems = new Map<string, StoredProblem | null>();
+const LISTED_LIMIT = 10_000;
+
+function listedProblem(row: JobRow): StoredProblem | null {
+  const key = `${row.number}\n${row.spec}`;
+  let problem = listedProblems.get(key);
+  if (problem === undefined) {
+    const stored = storedSpecOf(row);
+    problem = stored.ok ? null : stored.problem;
+    if (listedProblems.size >= LISTED_LIMIT) listedProblems.clear();
+    listedProblems.set(key, problem);
+  }
+  return problem;
+}
+
+export function toSummary(row: JobRow, stored?: StoredSpec): JobSummary {
+  const problem = stored ? (stored.ok ? null : stored.problem) : listedProblem(row);
   return {
     id: row.id,
     number: row.number,
@@ -72,9 +102,13 @@ export function toSummary(row: JobRow): JobSummary {
     createdAt: row.created_at,
     updatedAt: row.updated_at,
     shape: shapeOf(row),
+    ...(problem ? { problem } : {}),
   };
 }
 
-export function toJob(row: JobRow): Job {
-  return { ...toSummary(row), spec: JSON.parse(row.spec ?? 'null') as Spec };
+/** The whole job; a spec that no longer reads is this job's problem, with the field it concerns. */
+export function toJob(row: JobRow): StoreResult<Job> {
+  const stored = storedSpecOf(row);
+  if (!stored.ok) return failure(stored.problem.code, stored.problem.message, stored.problem.path);
+  return success({ ...toSummary(row, stored), spec: stored.spec });
 }

@@ -1,22 +1,26 @@
 import type { JobDetails, JobShape, RevisionFields } from '../../core/api/store';
-import type { Spec } from '../../core/spec';
 import type { Store } from '../store';
 import type { JobRow } from './rows';
-import { jobDetailsOfRow, shapeOf } from './rows';
+import { jobDetailsOfRow, shapeOf, storedSpecOf } from './rows';
+import { carriedSpec } from './stored-spec';
 
 /** Everything one save of a job holds: what a revision keeps and what the jobs row shows. */
 export interface JobState extends JobDetails {
   customerId: number | null;
-  spec: Spec;
+  /** A checked spec whenever it is new; carried over as stored when a save leaves it alone and it no longer reads. */
+  spec: unknown;
   shape: JobShape;
+  /** The engine version that computed the shape columns; null for rows indexed before it was recorded. */
+  shapeEngine: number | null;
 }
 
 export function stateOfRow(row: JobRow): JobState {
   return {
     customerId: row.customer_id,
     ...jobDetailsOfRow(row),
-    spec: JSON.parse(row.spec ?? 'null') as Spec,
+    spec: carriedSpec(storedSpecOf(row)),
     shape: shapeOf(row),
+    shapeEngine: row.shape_engine,
   };
 }
 
@@ -46,8 +50,12 @@ export function rowValues(state: JobState): unknown[] {
     state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
     JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays, JSON.stringify(state.judgement),
     s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
+    state.shapeEngine,
   ];
 }
 
 export const ROW_COLUMNS = `customer_id, part_number, drawing_number, drawing_revision, status, spec, notes, due_date,
-  order_quantity, lead_time_days, judgement, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate`;
+  order_quantity, lead_time_days, judgement, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate,
+  shape_engine`;
+
+export const ROW_PLACEHOLDERS = ROW_COLUMNS.split(',').map(() => '?').join(', ');

@@ -11,8 +11,10 @@ import type { CheckedJob } from './input';
 import { checkNewJob, checkSpec } from './input';
 import { takeNumber } from './numbering';
 import { getJob, jobRow, revisionRow } from './read';
+import type { JobRow } from './rows';
+import { storedSpecOf } from './rows';
 import type { JobState } from './state';
-import { ROW_COLUMNS, revisionFields, rowValues, stateOfRow } from './state';
+import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
 import { judgementOf } from './rows';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
@@ -33,7 +35,7 @@ export interface NewJobOptions {
 export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOptions = {}, path = ''): number {
   const { fields } = checked;
   const customerId = resolveCustomer(store, fields, path === '' ? 'customerId' : `${path}.customerId`) ?? null;
-  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape };
+  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape, shapeEngine: checked.shapeEngine };
   const number = options.number ?? takeNumber(store, 'jobs');
   if (options.number !== undefined && store.sql('SELECT 1 FROM jobs WHERE number = ?').get(number) !== undefined) {
     throw new StoreError('duplicate-number', `job number ${number} is already in this store`, path === '' ? 'number' : `${path}.number`);
@@ -41,7 +43,7 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   const now = store.now().toISOString();
   const created = options.createdAt ?? now;
   const result = store.sql(`INSERT INTO jobs (number, ${ROW_COLUMNS}, revision, created_at, updated_at)
-                            VALUES (?, ${'?, '.repeat(20)}1, ?, ?)`)
+                            VALUES (?, ${ROW_PLACEHOLDERS}, 1, ?, ?)`)
     .run(number, ...rowValues(state), created, options.updatedAt ?? created);
   const id = Number(result.lastInsertRowid);
   addRevision(store, id, 1, options.reason ?? 'created', state, now);
@@ -115,6 +117,14 @@ function changeReason(row: { number: string; status: JobStatus; drawing_revision
 
 type JobPatchValue = z.output<typeof jobPatchSchema>;
 
+/** A save that keeps the spec needs it to read; one that brings a new spec is how such a job is put right. */
+function refuseUnreadable(row: JobRow): void {
+  const stored = storedSpecOf(row);
+  if (!stored.ok) {
+    throw new StoreError(stored.problem.code, `${stored.problem.message}; save the job with a corrected spec`, stored.problem.path);
+  }
+}
+
 /** A save: the fields given replace the current ones; a new revision records the result. */
 export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreResult<Job> {
   const patch = parseWith(jobPatchSchema, raw);
@@ -130,6 +140,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       const row = loadForSave(store, id, expectedRevision);
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
+      if (checked === undefined) refuseUnreadable(row);
       const defined = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
       const next: JobState = { ...current, ...defined, ...(checked?.ok ? checked.value : {}) };
       if (change === 'drawing-revision' && row.status === 'quoted' && fields.status === undefined) next.status = 'draft';
@@ -151,6 +162,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   if (!old) {
     return failure('not-found', `job ${input.id} has no revision ${input.revision}`, jobRow(store, input.id) ? 'revision' : 'id');
   }
+  if (old.problem) return failure(old.problem.code, old.problem.message, old.problem.path);
   const checked = checkSpec(old.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   return attempt(() => {

@@ -3,6 +3,8 @@ import { StoreError } from '../errors';
 import { updateToVersion0001 } from './0001-jobs';
 import { updateToVersion0002 } from './0002-search';
 import { updateToVersion0003 } from './0003-quotes';
+import { updateToVersion0004 } from './0004-first-off-records';
+import { updateToVersion0005 } from './0005-shape-engine';
 import { updateToVersion0007 } from './0007-estimating';
 
 export interface Migration {
@@ -16,6 +18,8 @@ export const migrations: readonly Migration[] = [
   { version: 1, name: 'jobs', update: updateToVersion0001 },
   { version: 2, name: 'search', update: updateToVersion0002 },
   { version: 3, name: 'quotes', update: updateToVersion0003 },
+  { version: 4, name: 'first-off records', update: updateToVersion0004 },
+  { version: 5, name: 'shape-engine', update: updateToVersion0005 },
   { version: 7, name: 'estimating', update: updateToVersion0007 },
 ];
 

@@ -76,5 +76,5 @@ export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
   const { sql, count, params } = listJobsSql(q);
   const rows = store.sql(sql).all(...params, q.limit, q.offset) as JobRow[];
   const total = (store.sql(count).get(...params) as { n: number }).n;
-  return success({ jobs: rows.map(toSummary), total, limit: q.limit, offset: q.offset });
+  return success({ jobs: rows.map((r) => toSummary(r)), total, limit: q.limit, offset: q.offset });
 }

@@ -75,7 +75,8 @@ export function createDataActions(deps: DataActionDeps) {
       const file = await dialogs.saveFile({ title: 'Export jobs', defaultPath, filters: jobFilters });
       if (file === null) return;
       await run<ExportResult>(deps, 'exportJobs', { format: formatOf(file), file },
-        (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`, file]);
+        (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`,
+          [file, ...(v.problems ?? []).map((p) => `Exported as stored, to be put right: ${p.message}`)].join('\n')]);
     },
   };
 }

@@ -34,7 +34,7 @@ export function HydrogenCaution({ finish, bake }: { finish: string; bake: string
 export function NearSolidCaution({ percent, setRemoval }: { percent: number; setRemoval: boolean }) {
   return (
     <Caution title="Stress near solid">
-      At solid the corrected stress is {Math.round(percent)} % of the allowable. Solid length is only approximate and
+      At solid the stress is {Math.round(percent)} % of the allowable without set removal. Solid length is only approximate and
       coils that close up take a set; keep the working length clear of solid{setRemoval
         ? ', and press every piece to solid (set removal) in a guarded fixture' : ''}.
     </Caution>

@@ -1,4 +1,5 @@
 import type { Spec, SpringKind } from '../../core/spec';
+import { SPEC_VERSION } from '../../core/spec/versions';
 import type { UnitSystem } from '../../core/units';
 import type { CompressionDraft } from './compression-draft';
 import { compressionFromSpec, compressionPaths, compressionRaw, convertCompression, emptyCompression } from './compression-draft';
@@ -149,7 +150,7 @@ export function draftToRaw(d: SpecDraft): DraftRaw {
   const b = new RawBuilder();
   const kind = kindRaw(d, b);
   const raw = compact({
-    version: 1, kind: d.kind, units: d.units, material: d.material === '' ? undefined : d.material,
+    version: SPEC_VERSION, kind: d.kind, units: d.units, material: d.material === '' ? undefined : d.material,
     wireDiameter: b.required('wireDiameter', d.wireDiameter, 'a wire diameter'),
     [d.diameterGiven]: b.required(d.diameterGiven, d.diameter, 'a coil diameter'),
     ...kind.raw,

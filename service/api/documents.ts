@@ -3,12 +3,14 @@ import type { ApiResult } from '../../core/api';
 import type { documentMethods, PrintedPdf } from '../../core/api/documents';
 import type { Result } from '../../core/result';
 import { getJob, getQuote, getSettings, listCustomers } from '../../db';
-import { renderQuote, renderTraveller } from '../pdf';
 import { issuedQuoteDocument, storedPrintJob, travellerFor } from '../pdf/printing';
 import { issueJobQuote } from './quoting';
 import type { StoreContext, TypedHandlers } from './store';
 
 const asApi = <T>(r: Result<T>): ApiResult<T> => (r.ok ? r : { ok: false, error: inputError(r.errors) });
+
+/** The PDF writers (pdfkit, fontkit, qrcode) load on the first print, not with the API. */
+const writers = () => import('../pdf');
 
 const pdf = (buffer: Buffer, fileName: string, reference: string, findings: PrintedPdf['findings'] = []): ApiResult<PrintedPdf> =>
   ({ ok: true, value: { base64: buffer.toString('base64'), fileName, reference, findings } });
@@ -33,20 +35,20 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
       if (!j.ok) return j;
       const model = asApi(travellerFor(j.print, j.settings, quantity, now()));
       if (!model.ok) return model;
-      return pdf(await renderTraveller(model.value), `traveller-${j.job.number}.pdf`, j.job.number, model.value.findings);
+      return pdf(await (await writers()).renderTraveller(model.value), `traveller-${j.job.number}.pdf`, j.job.number, model.value.findings);
     },
     printQuote: async (input) => {
       const issued = issueJobQuote(ctx.store, input, now());
       if (!issued.ok) return issued;
       const number = issued.value.quote.number;
-      return pdf(await renderQuote(issued.value.model), `quote-${number}.pdf`, number);
+      return pdf(await (await writers()).renderQuote(issued.value.model), `quote-${number}.pdf`, number);
     },
     reprintQuote: async ({ number }) => {
       const quote = getQuote(ctx.store, { number });
       if (!quote.ok) return quote;
       const issued = asApi(issuedQuoteDocument(quote.value));
       if (!issued.ok) return issued;
-      return pdf(await renderQuote(issued.value), `quote-${number}.pdf`, number);
+      return pdf(await (await writers()).renderQuote(issued.value), `quote-${number}.pdf`, number);
     },
   };
 }

@@ -5,6 +5,7 @@ import type { StoreContext, TypedHandlers } from './store';
 import { storeHandlers } from './store';
 import { shopHandlers } from './shop';
 import { documentHandlers } from './documents';
+import { firstOffHandlers } from './first-off';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
@@ -18,7 +19,8 @@ export interface Service {
 
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
-  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx) };
+  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
+    ...firstOffHandlers(ctx) };
   return {
     handlers,
     store: () => ctx.store,

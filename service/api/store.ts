@@ -4,7 +4,7 @@ import type { storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, backupStore, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
-  importJobs, jobRevisions, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
+  importJobs, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   restoreStore, saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
@@ -43,6 +43,7 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     getAttachment: (input) => getAttachment(ctx.store, input.id),
     exportJobs: (input) => exportJobs(ctx.store, input),
     importJobs: (input) => importJobs(ctx.store, input),
+    reindexJobs: (input) => reindexJobs(ctx.store, input),
     backup: (input) => backupStore(ctx.store, input.file),
     restore: async (input) => {
       const outcome = await restoreStore(ctx.store, input.file, ctx.openOptions);

@@ -22,6 +22,7 @@ const subcommands: Record<string, Sub> = {
   import: async (args, call, out) => out(toJson(await call('importJobs', {
     file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
   }))),
+  reindex: async (args, call, out) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };
 
 export const dbCommand: Command = {
@@ -31,6 +32,7 @@ export const dbCommand: Command = {
     '  db restore --db DB --from FILE  replace the store with a verified backup (the old one is kept beside it)',
     '  db export --db DB [--out FILE] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
+    '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];

@@ -1,15 +1,25 @@
 import type { Command } from './commands';
-import { calcCommand, materialsCommand } from './engine-commands';
-import { jobsCommand } from './job-commands';
-import { dbCommand, demoCommand } from './db-commands';
-import { priceCommand, sheetCommand } from './plan-commands';
-import { printCommand } from './print-commands';
 import { EXIT, InputError, parseArgs, toJson } from './io';
 
-const commands: Command[] = [calcCommand, materialsCommand, sheetCommand, priceCommand, jobsCommand, dbCommand, demoCommand, printCommand];
+/**
+ * Each command's module loads when that command runs, so `calc` never loads the store, and only
+ * `print` (and the store's print methods) load the PDF writers.
+ */
+const commands: Record<string, () => Promise<Command>> = {
+  calc: async () => (await import('./engine-commands')).calcCommand,
+  materials: async () => (await import('./engine-commands')).materialsCommand,
+  sheet: async () => (await import('./plan-commands')).sheetCommand,
+  price: async () => (await import('./plan-commands')).priceCommand,
+  jobs: async () => (await import('./job-commands')).jobsCommand,
+  db: async () => (await import('./db-commands')).dbCommand,
+  demo: async () => (await import('./db-commands')).demoCommand,
+  print: async () => (await import('./print-commands')).printCommand,
+  'first-off': async () => (await import('./first-off-commands')).firstOffCommand,
+};
 
-function usage(): string {
-  return ['usage: npm run -s cli -- <command> …', ...commands.map((c) => `  ${c.usage}`)].join('\n');
+async function usage(): Promise<string> {
+  const all = await Promise.all(Object.values(commands).map((load) => load()));
+  return ['usage: npm run -s cli -- <command> …', ...all.map((c) => `  ${c.usage}`)].join('\n');
 }
 
 /** Runs one command line; returns the exit code. Output and errors go through the given writers. */
@@ -19,13 +29,13 @@ export async function runCli(
   err: (text: string) => void = (t) => process.stderr.write(`${t}\n`),
 ): Promise<number> {
   const [name, ...rest] = argv;
-  const command = commands.find((c) => c.name === name);
-  if (!command) {
-    err(usage());
+  const load = name === undefined || !Object.hasOwn(commands, name) ? undefined : commands[name];
+  if (!load) {
+    err(await usage());
     return name === undefined || name === 'help' || name === '--help' ? EXIT.ok : EXIT.badInput;
   }
   try {
-    await command.run(parseArgs(rest), out);
+    await (await load()).run(parseArgs(rest), out);
     return EXIT.ok;
   } catch (e) {
     if (e instanceof InputError) {
@@ -37,7 +47,7 @@ export async function runCli(
   }
 }
 
-const invokedDirectly = process.argv[1] !== undefined && /cli[\\/]main\.[cm]?[jt]s$/.test(process.argv[1]);
+const invokedDirectly = process.argv[1] !== undefined && /cli[\\/](main\.[cm]?[jt]s|cli\.cjs)$/.test(process.argv[1]);
 if (invokedDirectly) {
   runCli(process.argv.slice(2)).then((code) => { process.exitCode = code; });
 }

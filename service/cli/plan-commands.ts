@@ -9,6 +9,7 @@ import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
 import { intOption, positional } from './store-session';
+import { sheetCalibration } from './first-off-commands';
 
 /** A spec file, or a job file whose `spec` (and `orderQuantity`) are used. */
 export function specAndQuantity(raw: unknown): { spec: Spec; orderQuantity?: number } {
@@ -50,11 +51,11 @@ function orderQuantity(args: ParsedArgs, fromFile: number | undefined, spec: Spe
 
 export const sheetCommand: Command = {
   name: 'sheet',
-  usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection (JSON)',
-  run(args, out) {
+  usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
+  async run(args, out) {
     const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
     const plan = planManufacture(spec, settingsFor(args, false), orderQuantity(args, fromFile, spec));
-    out(toJson(planInSpecUnits(plan)));
+    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec) }));
   },
 };
 

@@ -3,8 +3,8 @@
  * PDF fonts lack in part. Each font is parsed once per process and handed to every document as the parsed
  * fontkit font, which pdfkit 0.20 accepts; every document still embeds its own subset.
  */
-import { readFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { existsSync, readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
 import { create } from 'fontkit';
 import type { Font } from 'fontkit';
 
@@ -20,11 +20,23 @@ export function useFontDirectory(dir: string): void {
 }
 
 /**
- * Where the fonts are: the folder given to `useFontDirectory`, else COILWRIGHT_FONTS, else assets/fonts
- * under the working directory. Not __dirname: bundles move the code away from the assets.
+ * assets/fonts of the program's own tree, found by going up from this code wherever it runs: the sources
+ * (service/pdf) or a bundle (dist/cli, dist/web, dist/electron). Never the working directory, so the
+ * command line prints from any folder.
  */
+function programFonts(): string {
+  let dir = __dirname;
+  for (let up = 0; up < 4; up++) {
+    const candidate = join(dir, 'assets', 'fonts');
+    if (existsSync(candidate)) return candidate;
+    dir = dirname(dir);
+  }
+  return join(__dirname, 'assets', 'fonts');
+}
+
+/** Where the fonts are: the folder given to `useFontDirectory`, else COILWRIGHT_FONTS, else the program's assets/fonts. */
 export function fontDirectory(): string {
-  return chosen ?? process.env.COILWRIGHT_FONTS ?? join(process.cwd(), 'assets', 'fonts');
+  return chosen ?? process.env.COILWRIGHT_FONTS ?? programFonts();
 }
 
 // Parsing a TrueType font costs tens of milliseconds (tables, glyph cache): far more than a page.

@@ -11,7 +11,7 @@ const G = 81_500;
 const E = 206_000;
 
 describe('buckling (EN 13906-1, from memory; Shigley 9e Eq. 10-10)', () => {
-  it('sK = 11.87 mm for L0 = 100, D = 20, ν = 1 with EN moduli (engineering notes §8 row 18, derived)', () => {
+  it('sK = 11.87 mm for L0 = 100, D = 20, ν = 1 with EN moduli (derived from Shigley 9e Eq. 10-10)', () => {
     expect(bucklingDeflection(100, 20, 1, G, E)).toBeCloseTo(11.87, 2);
   });
 
@@ -66,7 +66,8 @@ describe('uncorrected stress (Machinery\'s Handbook 31e Table 4, 8PD/(πd³))', 
 });
 
 describe('permanent set, elastic–perfectly-plastic bar in torsion', () => {
-  // Engineering notes §6.2 table, derived from the elastic–plastic bar formulas T = (4/3)·TY·(1 − r³/4) and the
+  // Derived from the elastic–perfectly-plastic round bar in torsion (Kukta & Kirane, "Torsion – plastic behaviour",
+  // lecture notes, 2018; see docs/sources.md): T = (4/3)·TY·(1 − r³/4) and the
   // elastic spring-back T/(GJ).
   it.each([[1.1, 0.016], [1.2, 0.05], [1.3, 0.091], [1.5, 0.177], [2.0, 0.354]])(
     'τe/τY = %f leaves %f of the imposed deflection as set', (ratio, fraction) => {
@@ -84,7 +85,7 @@ describe('permanent set, elastic–perfectly-plastic bar in torsion', () => {
 });
 
 describe('fatigue lines with Zimmerli data (Shigley 9e §10-9)', () => {
-  // Engineering notes §5.1: Sut = 1800 MPa → Ssu = 1206 MPa; Gerber Sse 267.4, Goodman Sse 351.4 (derived).
+  // Shigley 9e §10-9, Ssu = 0.67·Sut: Sut = 1800 MPa → Ssu = 1206 MPa; Gerber Sse 267.4, Goodman Sse 351.4 (derived).
   // With zero mean stress the safety factor per unit alternating stress equals the endurance intercept.
   it('endurance intercepts for Sut = 1800 MPa, unpeened', () => {
     const ssu = 0.67 * 1800;

@@ -3,7 +3,7 @@ import { bendingInner, bendingOuter, bergstraesser, directShear, enBending, wahl
 
 describe('stress correction factors at C = w = 8', () => {
   // Formulas: Shigley 9e Eqs. (10-2), (10-5), (10-6) and §10-12; EN 13906-1 k, EN 13906-3 q (from memory).
-  // Values: engineering notes §8 row 20 (derived from the published formulas).
+  // Values derived from those formulas at C = 8.
   it.each([
     ['Wahl KW', wahl, 1.184],
     ['Bergsträsser KB = EN k', bergstraesser, 1.1724],
@@ -19,7 +19,7 @@ describe('stress correction factors at C = w = 8', () => {
     for (let c = 2.5; c < 30; c += 0.37) expect(bergstraesser(c)).toBeCloseTo((4 * c + 2) / (4 * c - 3), 12);
   });
 
-  // Shigley 9e §10-2 notes KB and KW differ by under 1 % (values at C = 4…12 in the engineering notes §1.1).
+  // Shigley 9e §10-2 notes KB and KW differ by under 1 % (values at C = 4…12 derived from Eqs. 10-5 and 10-6).
   it.each([[4, 1.404, 1.385], [6, 1.253, 1.238], [10, 1.145, 1.135], [12, 1.119, 1.111]])(
     'C = %d: KW %f, KB %f', (c, kw, kb) => {
       // The notes print three decimals: agree to half a unit in the last place.

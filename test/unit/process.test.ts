@@ -76,7 +76,7 @@ describe('routing', () => {
   });
 });
 
-describe('wire and quantities (shop-practice notes §4, §8)', () => {
+describe('wire and quantities (developed length and mass: common trade practice, derived)', () => {
   it('start quantity is ordered ÷ ∏(1 − scrap), rounded up (§4.3, common practice)', () => {
     const ops = [{ scrapFraction: 0.03 }, { scrapFraction: 0.01 }] as never[];
     expect(startQuantity(1000, ops)).toBe(Math.ceil(1000 / (0.97 * 0.99)));

@@ -15,7 +15,7 @@ const acRe = (p: SamplingPlan): string => `${p.sampleSize} ${p.accept}/${p.rejec
 
 describe('sample-size code letters, general level II', () => {
   // ISO 2859-1 / ANSI/ASQ Z1.4 Table I as reprinted in the pdfcoffee.com AQL chart and at nibs.org
-  // (AC-TABLE.ASC); shop-practice notes §3.8.
+  // (AC-TABLE.ASC).
   it('lot 5 → A, n = 2 (§8 row 19)', () => {
     const r = sampleSizeCode(5);
     expect(r.ok && r.value).toEqual({ code: 'A', sampleSize: 2 });
@@ -45,7 +45,7 @@ describe('sample-size code letters, general level II', () => {
 
 describe('normal single sampling, level II', () => {
   // Sampling checks below: ISO 2859-1 Table 2-A = ANSI/ASQ Z1.4 Table II-A, as reprinted at nibs.org
-  // (AC-TABLE.ASC, Re printed, Ac = Re − 1) and the pdfcoffee.com chart; shop-practice notes §3.8.
+  // (AC-TABLE.ASC, Re printed, Ac = Re − 1) and the pdfcoffee.com chart.
   it('lot 1000, AQL 1.0 → J, n = 80, Ac 2 / Re 3 (§8 row 16)', () => {
     const p = plan(1000, 1.0);
     expect(p.code).toBe('J');
@@ -64,7 +64,7 @@ describe('normal single sampling, level II', () => {
     expect(acRe(p)).toBe('200 5/6');
   });
 
-  it('reproduces the Ac/Re table of notes §3.8 for n = 50, 80, 125, 200 and AQL 1.0–6.5 (nibs.org)', () => {
+  it('reproduces the nibs.org Ac/Re table (ISO 2859-1 Table 2-A) for n = 50, 80, 125, 200 and AQL 1.0–6.5 (nibs.org)', () => {
     const rows: [number, string[]][] = [
       [500, ['50 1/2', '50 2/3', '50 3/4', '50 5/6', '50 7/8']],
       [1000, ['80 2/3', '80 3/4', '80 5/6', '80 7/8', '80 10/11']],
@@ -75,7 +75,7 @@ describe('normal single sampling, level II', () => {
     expect([1000, 2000, 5000].map((lot) => acRe(plan(lot, 0.65)))).toEqual(['80 1/2', '125 2/3', '200 3/4']);
   });
 
-  it('down arrow: lot 500 at AQL 0.65 uses the plan of J, n = 80, Ac 1 / Re 2 (notes §3.8: "use 80")', () => {
+  it('down arrow: lot 500 at AQL 0.65 uses the plan of J, n = 80, Ac 1 / Re 2 (ISO 2859-1 Table 2-A arrow: "use 80")', () => {
     const p = plan(500, 0.65);
     expect(`${p.code}→${p.planCode}`).toBe('H→J');
     expect(acRe(p)).toBe('80 1/2');

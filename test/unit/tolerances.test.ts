@@ -19,7 +19,7 @@ const inch = (x: number): number => x * MM_PER_IN;
 
 describe('EN 15800 coil-diameter deviation A_D', () => {
   // All values: DIN 2095 table as reprinted by industrial-springs.com; same rows in the DIN 2097 table at
-  // blog.federnshop.com (shop-practice notes §2.1 and §8 rows 1–4).
+  // blog.federnshop.com.
   it('D = 8 mm, w = 6.4: ±0.15 / ±0.25 / ±0.50 for grades 1 / 2 / 3 (§8 row 1)', () => {
     expect(value(coilDiameterTolerance({ D: 8, index: 6.4, grade: 1 }))).toBe(0.15);
     expect(value(coilDiameterTolerance({ D: 8, index: 6.4, grade: 2 }))).toBe(0.25);
@@ -42,7 +42,7 @@ describe('EN 15800 coil-diameter deviation A_D', () => {
     expect(value(coilDiameterTolerance({ D: 10, index: 8, grade: 2 }))).toBe(0.25);
   });
 
-  it('no grade stated means grade 2 (beck-federn.de glossary, notes §2.1)', () => {
+  it('no grade stated means grade 2 (beck-federn.de glossary)', () => {
     expect(value(coilDiameterTolerance({ D: 8, index: 6.4 }))).toBe(0.25);
   });
 
@@ -98,7 +98,7 @@ describe('EN 15800 coil-diameter deviation A_D', () => {
   });
 });
 
-describe('EN 15800 perpendicularity e1 and parallelism e2 (from memory, notes §2.1)', () => {
+describe('EN 15800 perpendicularity e1 and parallelism e2 (from memory)', () => {
   it('grade 2: e1 = 0.052·L0, e2 = 0.030·De (from memory) for L0 = 50, D = 10, d = 1', () => {
     const e = value(endSquarenessTolerance({ L0: 50, D: 10, d: 1, grade: 2, groundEnds: true }));
     expect(e.perpendicularity).toBeCloseTo(2.6, 10);

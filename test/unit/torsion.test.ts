@@ -15,14 +15,15 @@ const spec = (input: TorsionSpecInput): TorsionSpec => {
 };
 
 describe('torsion rate: EN 13906-3 theoretical form against the handbook 10.8 form', () => {
-  // E = 206 000 N/mm², d = 2, D = 20 mm, n = 5 (engineering notes §8 row 22, derived from the published formulas).
+  // E = 206 000 N/mm², d = 2, D = 20 mm, n = 5: derived from EN 13906-3 RM = E·d⁴/(3667·D·n) (from memory) and
+  // the handbook form k' = E·d⁴/(10.8·D·n) per turn (Shigley 9e §10-12, from memory).
   it('EN: 8.988 N·mm/°; 10.8 form: 3 052 N·mm/turn = 8.478 N·mm/° (±0.1 %)', () => {
     expect(torqueRatePerDegreeEn(206000, 2, 20, 5) / 8.988).toBeCloseTo(1, 3);
     expect(torqueRatePerTurn(206000, 2, 20, 5) / 3052).toBeCloseTo(1, 3);
     expect(torqueRatePerTurn(206000, 2, 20, 5) / 360 / 8.478).toBeCloseTo(1, 3);
   });
 
-  it('3667 = 64·180/π, and 10.8 × 360 = 3888 (engineering notes §3.2, derived)', () => {
+  it('3667 = 64·180/π, and 10.8 × 360 = 3888 (EN 13906-3 constant, from memory; derived)', () => {
     expect((64 * 180) / Math.PI).toBeCloseTo(3667, 0);
     expect(torqueRatePerDegreeEn(1, 1, 1, 1) / (torqueRatePerTurn(1, 1, 1, 1) / 360)).toBeCloseTo(3888 / 3667, 12);
   });

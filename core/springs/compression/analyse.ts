@@ -1,14 +1,17 @@
-import { bergstraesser, wahl } from '../factors';
+import { bergstraesser, directShear, wahl } from '../factors';
 import { coilWireLength, helicalRate, torsionStressPerForce, wireMass } from '../helix';
-import { fatigueCheck } from '../fatigue';
+import { fatigueCheck, finiteLife, hasSteelFatigueData } from '../fatigue';
 import { bucklingDeflection, seatingCoefficient, slendernessLimit } from './buckling';
 import { minimumCoilGapSum, outsideDiameterGrowth } from './clearance';
-import { endForms, solidLength } from './ends';
+import { endForms, maximumSolidLength, solidLength } from './ends';
 import { naturalFrequency } from './surge';
-import { solveCoiledDeflection } from './set-removal';
+import { coiledDeflectionFor, coiledLimits, SET_STROKES } from './set-removal';
+import type { CoiledBound, SetRemovalGoverning, SetRemovalMethod } from './set-removal';
+import { EN_COMPRESSION_SOLID_FRACTION, EN_COMPRESSION_SOLID_SOURCE } from '../../materials/allowables';
+import { wireDiameterTolerance } from '../../materials/diameter-tolerance';
 import { checkSpecified } from '../specified';
 import type { CompressionDesign } from './design';
-import type { CompressionLoadResult, CompressionReport, SetRemovalResult } from './report';
+import type { CoilerSettings, CompressionLoadResult, CompressionReport, SetRemovalResult, SetRemovalVerdict } from './report';
 
 function loadResult(x: CompressionDesign, rate: number, perForce: number, k: number, i: number): CompressionLoadResult {
   const load = x.loads[i]!;
@@ -21,25 +24,90 @@ function loadResult(x: CompressionDesign, rate: number, perForce: number, k: num
   };
 }
 
-function setRemoval(x: CompressionDesign, Ls: number, perDeflection: number, k: number, allowable: number): SetRemovalResult {
+interface MethodLimits {
+  method: SetRemovalMethod;
+  basis: string;
+  /** Basis stress ÷ uncorrected stress 8FD/(πd³). */
+  factor: number;
+  before: number;
+  after: number;
+}
+
+function methodLimits(x: CompressionDesign, c: number): [MethodLimits, MethodLimits] {
+  const Rm = x.wire.tensileStrength;
+  const f = x.wire.allowableStaticFraction;
+  return [
+    { method: 'handbook', basis: HANDBOOK_BASIS, factor: directShear(c), before: f.beforeSetRemoval * Rm, after: f.afterSetRemoval * Rm },
+    { method: 'en13906', basis: EN_BASIS, factor: 1, before: EN_COMPRESSION_SOLID_FRACTION * Rm, after: (4 / 3) * EN_COMPRESSION_SOLID_FRACTION * Rm },
+  ];
+}
+
+const HANDBOOK_BASIS = 'stress with the direct-shear factor Ks (Shigley 9e Eq. 10-2) against the before / after set-removal ' +
+  'fractions of Shigley 9e Table 10-6; the set model yields on this stress';
+const EN_BASIS = `uncorrected stress 8FD/(πd³) against ${EN_COMPRESSION_SOLID_SOURCE}; the set model yields on this stress, ` +
+  'and after presetting the limit is the fully plastic wire\'s 4/3 of it (derived: no EN limit after presetting is known)';
+
+function verdict(x: CompressionDesign, m: MethodLimits, Ls: number, perDeflection: number): SetRemovalVerdict {
   const s0 = x.L0 - Ls;
-  const tauY = x.wire.allowableStaticFraction.beforeSetRemoval * x.wire.tensileStrength;
-  const solution = solveCoiledDeflection(s0, tauY / perDeflection);
-  const ratio = (k * perDeflection * s0) / allowable;
-  const afterLimit = x.wire.allowableStaticFraction.afterSetRemoval * x.wire.tensileStrength;
-  const reachable = solution.reachable;
+  const stressAtSolid = m.factor * perDeflection * s0;
+  const sY = m.before / (m.factor * perDeflection);
+  const required = s0 > sY;
+  const coiledDeflection = coiledDeflectionFor(s0, sY);
+  const reachable = !Number.isNaN(coiledDeflection);
+  const expectedSet = coiledDeflection - s0;
+  const coiled = reachable ? Ls + coiledDeflection : null;
+  const coiledPitch = coiled === null ? null : endForms[x.ends].pitch(coiled, x.d, x.na);
+  const bound: CoiledBound | null = coiled === null ? 'beyond-fully-plastic'
+    : expectedSet > coiledLimits.maximumSetPerFinishedDeflection * s0 ? 'set-over-deflection'
+      : required && (coiledPitch ?? 0) > coiledLimits.maximumPitchPerMeanDiameter * x.D ? 'pitch-over-coiler' : null;
   return {
-    required: ratio > 1,
-    coiledFreeLength: reachable ? Ls + solution.coiledDeflection : null,
-    expectedSet: reachable ? solution.expectedSet : null,
-    ratio,
-    setFraction: reachable ? solution.expectedSet / solution.coiledDeflection : null,
-    achievable: perDeflection * s0 <= afterLimit,
+    method: m.method, basis: m.basis, stressAtSolid, allowableBefore: m.before, allowableAfter: m.after,
+    required, ratio: stressAtSolid / m.before,
+    coiledFreeLength: bound === null ? coiled : null,
+    expectedSet: reachable ? expectedSet : null,
+    coiledPitch,
+    setFraction: reachable && coiledDeflection > 0 ? expectedSet / coiledDeflection : null,
+    achievable: stressAtSolid <= m.after,
+    bound,
+  };
+}
+
+/** Larger is stricter: fails after set removal, then passes a physical limit, then needs set removal, then the larger set. */
+function strictness(v: SetRemovalVerdict): number {
+  if (!v.achievable) return 4;
+  if (v.bound !== null) return 3;
+  return v.required ? 1 + (v.setFraction ?? 0) : 0;
+}
+
+function setRemoval(x: CompressionDesign, Ls: number, perDeflection: number, c: number, governedBy: SetRemovalGoverning): SetRemovalResult {
+  const [hb, en] = methodLimits(x, c);
+  const handbook = verdict(x, hb, Ls, perDeflection);
+  const en13906 = verdict(x, en, Ls, perDeflection);
+  const governing: SetRemovalMethod = governedBy !== 'stricter' ? governedBy
+    : strictness(en13906) > strictness(handbook) ? 'en13906' : 'handbook';
+  const v = governing === 'handbook' ? handbook : en13906;
+  // Fields listed one by one: a spread here made the analysis several times slower (npm run bench).
+  return {
+    method: v.method, basis: v.basis, stressAtSolid: v.stressAtSolid, allowableBefore: v.allowableBefore,
+    allowableAfter: v.allowableAfter, required: v.required, ratio: v.ratio, coiledFreeLength: v.coiledFreeLength,
+    expectedSet: v.expectedSet, coiledPitch: v.coiledPitch, setFraction: v.setFraction, achievable: v.achievable,
+    bound: v.bound, governing, governedBy, methods: { handbook, en13906 },
+  };
+}
+
+function coilerSettings(x: CompressionDesign, set: SetRemovalResult, finishedPitch: number): CoilerSettings {
+  const freeLength = !set.required ? x.L0 : set.coiledFreeLength;
+  const pitch = freeLength === null ? null : endForms[x.ends].pitch(freeLength, x.d, x.na);
+  return {
+    freeLength, pitch, totalCoils: x.nt, activeCoils: x.na,
+    wireLength: x.na * coilWireLength(x.D, pitch ?? finishedPitch) + (x.nt - x.na) * Math.PI * x.D,
+    expectedSet: set.required ? set.expectedSet ?? 0 : 0,
+    pressStrokes: set.required ? SET_STROKES : 0,
   };
 }
 
 /** Geometry, rate, stresses, limits and manufacturing quantities of a compression spring (internal units). */
-export function analyseCompression(x: CompressionDesign): CompressionReport {
+export function analyseCompression(x: CompressionDesign, governedBy: SetRemovalGoverning = 'stricter'): CompressionReport {
   const { d, D, na, nt, L0, wire } = x;
   const c = D / d;
   const k = bergstraesser(c);
@@ -50,20 +118,27 @@ export function analyseCompression(x: CompressionDesign): CompressionReport {
   const solidForce = rate * (L0 - Ls);
   const allowable = wire.allowableStaticFraction.beforeSetRemoval * wire.tensileStrength;
   const nu = seatingCoefficient[x.seating];
-  const wireLength = na * coilWireLength(D, pitch) + (nt - na) * Math.PI * D;
+  const set = setRemoval(x, Ls, perForce * rate, c, governedBy);
+  const coiler = coilerSettings(x, set, pitch);
+  const wireLength = coiler.wireLength;
+  const dMax = d + wireDiameterTolerance(d);
+  const LsMax = maximumSolidLength(x.ends, dMax, nt);
+  const gaps = minimumCoilGapSum(D, d, na, x.duty.type === 'cyclic');
   const loads: CompressionLoadResult[] = [];
   for (let i = 0; i < x.loads.length; i++) loads.push(loadResult(x, rate, perForce, k, i));
-  const fatigue = x.duty.type === 'cyclic'
+  const fatigue = x.duty.type === 'cyclic' && hasSteelFatigueData(wire.family)
     ? fatigueCheck(
       k * perForce * rate * (L0 - x.duty.between[0]),
       k * perForce * rate * (L0 - x.duty.between[1]),
-      wire.tensileStrength, x.duty.peened)
+      wire.tensileStrength, x.duty.peened, finiteLife('compression', x.duty.cycles, x.duty.peened, wire.tensileStrength))
     : null;
   const sK = bucklingDeflection(L0, D, nu, wire.shearModulus, wire.elasticModulus);
   return {
     kind: 'compression', units: x.units, material: wire.gradeId, wireDiameter: d, ends: x.ends,
     springIndex: c, meanDiameter: D, outerDiameter: D + d, innerDiameter: D - d, activeCoils: na, totalCoils: nt,
-    freeLength: L0, pitch, rate, solidLength: Ls, solidForce, storedEnergyAtSolid: (solidForce * (L0 - Ls)) / 2,
+    freeLength: L0, pitch, rate, solidLength: Ls,
+    solidLengthMaximum: LsMax, solidLengthMaximumSource: endForms[x.ends].maximumSolidSource, wireDiameterMaximum: dMax,
+    solidForce, storedEnergyAtSolid: (solidForce * (L0 - Ls)) / 2,
     tensileStrength: wire.tensileStrength, tensileStrengthBasis: wire.tensileStrengthBasis,
     tensileStrengthSource: wire.tensileStrengthSource,
     shearModulus: wire.shearModulus, elasticModulus: wire.elasticModulus, density: wire.density,
@@ -72,8 +147,8 @@ export function analyseCompression(x: CompressionDesign): CompressionReport {
     allowableStress: allowable,
     allowableStressSetRemoved: wire.allowableStaticFraction.afterSetRemoval * wire.tensileStrength,
     loads,
-    minimumWorkingLength: Ls + minimumCoilGapSum(D, d, na, x.duty.type === 'cyclic'),
-    coilGapSum: minimumCoilGapSum(D, d, na, x.duty.type === 'cyclic'),
+    minimumWorkingLength: LsMax + gaps,
+    coilGapSum: gaps,
     bucklingDeflection: sK,
     slendernessLimit: slendernessLimit(nu, wire.shearModulus, wire.elasticModulus),
     slenderness: L0 / D,
@@ -81,7 +156,8 @@ export function analyseCompression(x: CompressionDesign): CompressionReport {
     naturalFrequency: naturalFrequency(d, D, na, wire.shearModulus, wire.density),
     wireLength,
     mass: wireMass(d, wireLength, wire.density),
-    setRemoval: setRemoval(x, Ls, perForce * rate, k, allowable),
+    setRemoval: set,
+    coiler,
     fatigue,
     findings: [],
   };

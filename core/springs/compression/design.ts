@@ -17,6 +17,8 @@ export interface CompressionDesign extends CoilBody {
     | { type: 'static' }
     | { type: 'cyclic'; between: [number, number]; cycles: number; peened: boolean; frequency?: number };
   freeParameters: FreeParameter[];
+  /** EN 15800 tolerance grade the drawing names, if any. */
+  toleranceGrade: 1 | 2 | 3 | undefined;
 }
 
 function loadsInternal(spec: CompressionSpec, mm: number): CompressionDesign['loads'] {
@@ -56,5 +58,6 @@ export function compressionDesign(spec: CompressionSpec): CompressionDesign | un
     coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active',
     ends: spec.ends, L0: spec.freeLength * mm, loads: loadsInternal(spec, mm),
     seating: spec.seating, duty: dutyInternal(spec, mm), freeParameters: spec.freeParameters,
+    toleranceGrade: spec.toleranceGrade,
   };
 }

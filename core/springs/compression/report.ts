@@ -4,6 +4,7 @@ import type { QuantityMap } from '../../units';
 import type { FatigueResult } from '../fatigue';
 import { fatigueQuantities } from '../fatigue';
 import type { CompressionEnds } from '../../spec/compression';
+import type { CoiledBound, SetRemovalGoverning, SetRemovalMethod } from './set-removal';
 
 export interface CompressionLoadResult {
   length: number;
@@ -18,18 +19,53 @@ export interface CompressionLoadResult {
   withinTolerance: boolean | null;
 }
 
-export interface SetRemovalResult {
+/** One method's set-removal verdict: every decision is taken on the one stress named in `basis`. */
+export interface SetRemovalVerdict {
+  method: SetRemovalMethod;
+  /** The stress the decisions use and the sources of its limits. */
+  basis: string;
+  /** Basis stress at solid length. */
+  stressAtSolid: number;
+  /** Limit without set removal; the set-removal model yields at this same stress. */
+  allowableBefore: number;
+  /** Limit after set removal on the same stress. */
+  allowableAfter: number;
+  /** Stress at solid over the limit before set removal: exactly when the expected set is above zero. */
   required: boolean;
-  /** Free length to coil to, before pressing to solid. */
-  /** Null when the set model cannot reach the finished free length (beyond a fully plastic section). */
-  coiledFreeLength: number | null;
-  expectedSet: number | null;
-  /** Corrected stress at solid ÷ allowable before set removal (the trade's "stress ratio"). */
+  /** Stress at solid ÷ limit before set removal (the trade's "stress ratio"). */
   ratio: number;
-  /** Set as a fraction of the coiled deflection to solid (trade rule: at least 10 %). */
+  /** Free length to coil to, before pressing to solid; null when a physical limit is passed (`bound`). */
+  coiledFreeLength: number | null;
+  /** Set the model predicts; null when no coiled length reaches the finished one. */
+  expectedSet: number | null;
+  /** Pitch of the active coils at the coiled free length; null when unreachable. */
+  coiledPitch: number | null;
+  /** Set as a fraction of the coiled deflection to solid. */
   setFraction: number | null;
-  /** False when even pressing to solid cannot bring the uncorrected solid stress within the set-removed allowable. */
+  /** False when even after set removal the stress at solid is over the method's limit. */
   achievable: boolean;
+  /** The physical limit the coiled length passes, if any. */
+  bound: CoiledBound | null;
+}
+
+export interface SetRemovalResult extends SetRemovalVerdict {
+  /** The method whose verdict routes the job, and the shop setting that chose it. */
+  governing: SetRemovalMethod;
+  governedBy: SetRemovalGoverning;
+  methods: Record<SetRemovalMethod, SetRemovalVerdict>;
+}
+
+/** What the coiler is set to: the spring as coiled, before any set removal. */
+export interface CoilerSettings {
+  /** Null when set removal is needed but no coiled length is within the physical limits. */
+  freeLength: number | null;
+  pitch: number | null;
+  totalCoils: number;
+  activeCoils: number;
+  /** Developed wire per piece at the coiled pitch (the press does not change the wire's length). */
+  wireLength: number;
+  expectedSet: number;
+  pressStrokes: number;
 }
 
 /** Analysis of one compression spring. Internal units here; `compressionReportQuantities` converts out. */
@@ -41,7 +77,12 @@ export interface CompressionReport extends CoilReport {
   freeLength: number;
   pitch: number;
   rate: number;
+  /** Handbook solid length d·(Nt + solidExtra), nominal wire (Machinery's Handbook 31e Table 3). */
   solidLength: number;
+  /** Largest solid length with the wire at its upper tolerance (EN 13906-1 for closed ends; handbook form otherwise). */
+  solidLengthMaximum: number;
+  solidLengthMaximumSource: string;
+  wireDiameterMaximum: number;
   solidForce: number;
   storedEnergyAtSolid: number;
   tensileStrengthSource: string;
@@ -62,8 +103,14 @@ export interface CompressionReport extends CoilReport {
   outerDiameterAtSolid: number;
   naturalFrequency: number;
   setRemoval: SetRemovalResult;
+  coiler: CoilerSettings;
   fatigue: FatigueResult | null;
 }
+
+const setRemovalQuantities: QuantityMap = {
+  stressAtSolid: 'stress', allowableBefore: 'stress', allowableAfter: 'stress',
+  coiledFreeLength: 'length', expectedSet: 'length', coiledPitch: 'length',
+};
 
 export const compressionReportQuantities: QuantityMap = {
   ...coilReportQuantities,
@@ -78,6 +125,8 @@ export const compressionReportQuantities: QuantityMap = {
   },
   minimumWorkingLength: 'length', coilGapSum: 'length', bucklingDeflection: 'length',
   outerDiameterAtSolid: 'length',
-  setRemoval: { coiledFreeLength: 'length', expectedSet: 'length' },
+  solidLengthMaximum: 'length', wireDiameterMaximum: 'length',
+  setRemoval: { ...setRemovalQuantities, methods: { handbook: setRemovalQuantities, en13906: setRemovalQuantities } },
+  coiler: { freeLength: 'length', pitch: 'length', wireLength: 'length', expectedSet: 'length' },
   fatigue: fatigueQuantities,
 };

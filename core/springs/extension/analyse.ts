@@ -1,6 +1,6 @@
 import { EN_EXTENSION_STATIC_FRACTION, extensionAllowables } from '../../materials';
 import { bendingInner, bergstraesser, hookTorsion } from '../factors';
-import { fatigueCheck } from '../fatigue';
+import { fatigueCheck, finiteLife, hasSteelFatigueData } from '../fatigue';
 import { coilWireLength, helicalRate, torsionStressPerForce, wireMass } from '../helix';
 import { checkSpecified } from '../specified';
 import type { ExtensionDesign } from './design';
@@ -54,7 +54,11 @@ export function analyseExtension(x: ExtensionDesign): ExtensionReport {
   const window = initialTensionStressRange(c);
   const Fi = x.initialTension ?? window.centre / perForce;
   // Section A bends about the loop's mean radius r1 ≈ D/2, so C1 = C; section B turns about the side-bend radius r2.
-  const r2 = Math.min(x.ends[0].bendRadius, x.ends[1].bendRadius);
+  const tighter = x.ends[1].bendRadius < x.ends[0].bendRadius ? x.ends[1] : x.ends[0];
+  const r2 = tighter.bendRadius;
+  // Assumed only when the radius used is one the drawing did not give (a given radius is never "assumed").
+  const r2Assumed = x.ends[0].bendRadius === x.ends[1].bendRadius
+    ? x.ends[0].bendRadiusAssumed && x.ends[1].bendRadiusAssumed : tighter.bendRadiusAssumed;
   const kA = bendingInner(c);
   const kB = hookTorsion((2 * r2) / d);
   const fraction = extensionAllowables[wire.family];
@@ -66,8 +70,9 @@ export function analyseExtension(x: ExtensionDesign): ExtensionReport {
   const safe = safeForce(perForce, k, kA, kB, d, D, allow);
   const loopWire = (extensionEnds[x.ends[0].form].wireInCoils + extensionEnds[x.ends[1].form].wireInCoils) * Math.PI * D;
   const wireLength = nb * coilWireLength(D, d) + loopWire + x.ends[0].extension + x.ends[1].extension;
-  const fatigue = x.duty.type === 'cyclic'
-    ? fatigueCheck(k * perForce * (Fi + rate * (x.duty.between[0] - L0)), k * perForce * (Fi + rate * (x.duty.between[1] - L0)), Rm, false)
+  const fatigue = x.duty.type === 'cyclic' && hasSteelFatigueData(wire.family)
+    ? fatigueCheck(k * perForce * (Fi + rate * (x.duty.between[0] - L0)), k * perForce * (Fi + rate * (x.duty.between[1] - L0)), Rm, false,
+      finiteLife('extension', x.duty.cycles, false, Rm))
     : null;
   const safeExtension = Math.max(0, (safe.force - Fi) / rate);
   return {
@@ -79,7 +84,7 @@ export function analyseExtension(x: ExtensionDesign): ExtensionReport {
     loads, tensileStrength: Rm, tensileStrengthBasis: wire.tensileStrengthBasis,
     shearModulus: wire.shearModulus, elasticModulus: wire.elasticModulus,
     stressCorrectionFactor: k, hookBendingFactor: kA, hookTorsionFactor: kB,
-    hookBendRadius: r2, hookBendRadiusAssumed: x.ends[0].bendRadiusAssumed || x.ends[1].bendRadiusAssumed,
+    hookBendRadius: r2, hookBendRadiusAssumed: r2Assumed,
     bodyStress: k * perForce * largest, hookBendingStress: safe.bendingPerForce * largest, hookTorsionStress: kB * perForce * largest,
     allowables: { ...allow, bodyEn: EN_EXTENSION_STATIC_FRACTION * Rm, source: fraction.source },
     maximumSafeForce: safe.force, maximumSafeExtension: safeExtension, maximumSafeLength: L0 + safeExtension,

@@ -6,7 +6,7 @@ import type { ExtensionEndForm } from '../../spec/extension';
  * for two machine or full loops (from memory); EN 13906-2 Annex A gives LH ≈ 0.8–1.1·Di for a full loop
  * (from memory). An extended hook adds its straight length.
  * Wire per end: a full, crossover or side loop takes about one coil (π·D), a machine loop about ¾ of one
- * (shop-practice notes §4.1, common practice).
+ * (common trade practice, as spring makers' nomenclature pages describe loops; see docs/sources.md).
  */
 export interface ExtensionEndData {
   /** Inside height in inside diameters. */

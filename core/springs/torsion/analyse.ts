@@ -1,4 +1,5 @@
 import { EN_TORSION_STATIC_FRACTION, torsionAllowables } from '../../materials';
+import { TORSION_UNWIND_FACTOR, TORSION_UNWIND_SOURCE } from '../../materials/allowables';
 import { bendingInner, bendingOuter, enBending } from '../factors';
 import { coilWireLength, wireMass } from '../helix';
 import { checkSpecified } from '../specified';
@@ -59,7 +60,9 @@ export function analyseTorsion(x: TorsionDesign): TorsionReport {
   const insideLoaded = Dl - d;
   const clearance = x.arborDiameter === null ? null : insideLoaded - x.arborDiameter;
   const family = torsionAllowables[wire.family];
-  const allowable = family.bending * wire.tensileStrength;
+  const unwinding = x.loadDirection === 'opening';
+  const direction = unwinding ? TORSION_UNWIND_FACTOR : 1;
+  const allowable = direction * family.bending * wire.tensileStrength;
   const wireLength = nb * coilWireLength(D, d) + x.legs[0].length + x.legs[1].length;
   return {
     kind: 'torsion', units: x.units, material: wire.gradeId, wireDiameter: d, springIndex: c,
@@ -75,7 +78,8 @@ export function analyseTorsion(x: TorsionDesign): TorsionReport {
     bodyLength: d * (nb + 1),
     bodyLengthAtLoad: d * (nb + 1 + (x.loadDirection === 'closing' ? (maxAngle / 360) * (nb / na) : 0)),
     tensileStrength: wire.tensileStrength, tensileStrengthBasis: wire.tensileStrengthBasis, elasticModulus: wire.elasticModulus,
-    allowableStress: allowable, allowableStressEn: EN_TORSION_STATIC_FRACTION * wire.tensileStrength, allowableSource: family.source,
+    allowableStress: allowable, allowableStressEn: direction * EN_TORSION_STATIC_FRACTION * wire.tensileStrength,
+    allowableSource: unwinding ? `${family.source}; ${TORSION_UNWIND_SOURCE}` : family.source,
     maximumSafeAngle: allowable / (ki * perMoment * perDegree),
     windDirection: x.windDirection, loadDirection: x.loadDirection,
     wireLength, mass: wireMass(d, wireLength, wire.density),

@@ -9,6 +9,13 @@ import { statusLabels } from '../../model/labels';
 import { CallOutcome } from './BackupPanels';
 import { useLongCall } from './useLongCall';
 
+/** What an export did; jobs whose stored spec no longer reads went out as stored, and are named. */
+function exportedText(v: ExportResult): string {
+  const done = `${v.count} job${v.count === 1 ? '' : 's'} exported${v.file ? ` to ${v.file}` : ''}.`;
+  const problems = v.problems ?? [];
+  return problems.length === 0 ? done : `${done} Exported as stored, to be put right: ${problems.map((p) => p.message).join('; ')}.`;
+}
+
 export function ExportPanel() {
   const api = useApi();
   const platform = usePlatform();
@@ -33,7 +40,7 @@ export function ExportPanel() {
       </div>
       <PlainInput label="Write to a file (optional)" value={file} onChange={setFile} hint="Leave empty to download the file" />
       <button type="button" className="button button--primary" disabled={running} onClick={() => void go()}>Export</button>
-      <CallOutcome call={call} done={(v) => `${v.count} job${v.count === 1 ? '' : 's'} exported${v.file ? ` to ${v.file}` : ''}.`} />
+      <CallOutcome call={call} done={exportedText} />
     </section>
   );
 }

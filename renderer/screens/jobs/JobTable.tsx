@@ -36,6 +36,10 @@ function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sor
 
 const day = (iso: string) => iso.slice(0, 10);
 
+/** A job whose stored spec no longer reads still lists, marked, with why beside its spring. */
+const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
+  [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
+
 export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
@@ -64,7 +68,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           // A torsion spring is compared on its body length and its rate per degree (see db/jobs/shape).
           const torsion = j.shape.kind === 'torsion';
           return (
-            <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={selected.has(j.id) ? 'is-selected' : undefined}>
+            <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={rowClass(j, selected.has(j.id))}>
               <td className="check">
                 <input type="checkbox" aria-label={`Select job ${j.number}`} checked={selected.has(j.id)} onChange={(e) => onSelect(j.id, e.target.checked)} />
               </td>
@@ -72,7 +76,8 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
-              <td>{kindLabels[j.shape.kind] ?? j.shape.kind}<br /><span className="muted">{j.shape.material}</span></td>
+              <td>{kindLabels[j.shape.kind] ?? j.shape.kind}<br /><span className="muted">{j.shape.material}</span>
+                {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{torsion ? <><br /><span className="muted">body</span></> : null}</td>

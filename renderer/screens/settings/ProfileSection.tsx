@@ -52,6 +52,8 @@ export function DefaultsSection() {
         <SSelect path="defaults.paperSize" label="Paper" choices={[{ value: 'letter', label: 'Letter' }, { value: 'a4', label: 'A4' }]} />
         <SText path="defaults.currency" label="Currency (ISO code)" placeholder="USD" />
         <SNumber path="defaults.quoteValidityDays" label="Quotes valid for" unit="days" />
+        <SSelect path="defaults.setRemovalMethod" label="Set removal routed by"
+          choices={[{ value: 'stricter', label: 'The stricter method' }, { value: 'handbook', label: 'Handbook (Shigley Table 10-6)' }, { value: 'en13906', label: 'EN 13906-1 static' }]} />
       </div>
     </section>
   );

@@ -14,15 +14,16 @@ import { SimilarJobsDialog } from '../shared/SimilarJobs';
 import { SpecForm } from './form/SpecForm';
 import { CostPane } from './panes/CostPane';
 import { DocumentsPane } from './panes/DocumentsPane';
+import { FirstOffPane } from './panes/FirstOffPane';
 import { HistoryPane } from './panes/HistoryPane';
 import { PlanPane } from './panes/PlanPane';
 import { ResultsPanel } from './results/ResultsPanel';
 import { Toolbar } from './Toolbar';
 
-type Tab = 'spec' | 'plan' | 'cost' | 'documents' | 'history';
+type Tab = 'spec' | 'plan' | 'cost' | 'documents' | 'first-off' | 'history';
 const tabs: { id: Tab; label: string }[] = [
   { id: 'spec', label: 'Spec & results' }, { id: 'plan', label: 'Manufacturing plan' }, { id: 'cost', label: 'Cost & price' },
-  { id: 'documents', label: 'Documents' }, { id: 'history', label: 'History' },
+  { id: 'documents', label: 'Documents' }, { id: 'first-off', label: 'First-off' }, { id: 'history', label: 'History' },
 ];
 
 /** Waits for the shop's settings, so a new job starts in the shop's default units. */
@@ -99,6 +100,7 @@ function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' 
           {tab === 'plan' ? <TabPanel idPrefix="job" id="plan"><PlanPane editor={editor} onGo={(p) => goTo(`spec.${p}`)} /></TabPanel> : null}
           {tab === 'cost' ? <TabPanel idPrefix="job" id="cost"><CostPane editor={editor} /></TabPanel> : null}
           {tab === 'documents' ? <TabPanel idPrefix="job" id="documents"><DocumentsPane editor={editor} /></TabPanel> : null}
+          {tab === 'first-off' ? <TabPanel idPrefix="job" id="first-off"><FirstOffPane editor={editor} /></TabPanel> : null}
           {tab === 'history' ? <TabPanel idPrefix="job" id="history"><HistoryPane editor={editor} /></TabPanel> : null}
         </div>
       ) : null}

@@ -8,7 +8,7 @@ import { job, spec, tempDir } from './helpers';
 const root = resolve(__dirname, '../../..');
 
 function cli(...args: string[]): { code: number; out: string; err: string; json: () => unknown; errors: () => { code: string; path: string; message: string }[] } {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+  const r = spawnSync(process.execPath, ['scripts/cli.mjs', ...args], { cwd: root, encoding: 'utf8' });
   return {
     code: r.status ?? -1, out: r.stdout, err: r.stderr,
     json: () => JSON.parse(r.stdout),
@@ -40,10 +40,13 @@ describe('command line: jobs', () => {
     const found = cli('jobs', 'find', 'harr', '--db', db).json() as { job: { partNumber: string } }[];
     expect(found.map((h) => h.job.partNumber)).toEqual(['HX-10']);
     writeFileSync(join(dir, 'ask.json'), JSON.stringify(spec({ freeLength: 55 })));
-    const similar = cli('jobs', 'similar', join(dir, 'ask.json'), '--limit', '1', '--db', db).json() as Record<string, unknown>[];
-    expect(similar).toHaveLength(1);
+    const similar = cli('jobs', 'similar', join(dir, 'ask.json'), '--limit', '2', '--db', db).json() as { id: number; score: number; distance: number }[];
+    // Asked L0 55: job 2 (L0 56) is nearer than job 1 (L0 50); the score is exp(−distance), below 1 for a different spring.
+    expect(similar.map((s) => s.id)).toEqual([2, 1]);
     expect(similar[0]).toMatchObject({ id: 2, number: 'J-26-0002', differences: { wireDiameter: 'same', freeLength: '+2 %' } });
-    expect(typeof similar[0]!.score).toBe('number');
+    for (const s of similar) expect(s.score).toBeCloseTo(Math.exp(-s.distance), 12);
+    expect(similar[0]!.distance).toBeGreaterThan(0);
+    expect(similar[0]!.distance).toBeLessThan(similar[1]!.distance);
     const revisions = cli('jobs', 'revisions', '1', '--db', db).json() as { revision: number }[];
     expect(revisions.map((r) => r.revision)).toEqual([1]);
   });
@@ -72,6 +75,10 @@ describe('command line: db and demo', () => {
     const count = demoJobs.length;
     expect(demo.json()).toMatchObject({ jobs: count });
     expect(cli('demo', '--db', db).errors()[0]).toMatchObject({ code: 'store-not-empty' });
+
+    // The demo shop was indexed by this engine: nothing is stale until --all asks for every job.
+    expect(cli('db', 'reindex', '--db', db).json()).toMatchObject({ checked: 0, reindexed: 0, problems: [] });
+    expect(cli('db', 'reindex', '--all', '--db', db).json()).toMatchObject({ checked: count, reindexed: count, changed: 0 });
 
     const backup = cli('db', 'backup', '--db', db, '--out', join(dir, 'demo-backup.db'));
     expect(backup.code).toBe(0);

@@ -50,7 +50,7 @@ describe('jobs', () => {
     expect(restored.status).toBe('draft');
     expect(totalCoils(restored.spec)).toBe(10);
     const history = value(jobRevisions(store, created.id));
-    expect(history.map((r) => [r.revision, r.reason, r.fields.status, totalCoils(r.spec)])).toEqual([
+    expect(history.map((r) => [r.revision, r.reason, r.fields.status, totalCoils(r.spec!)])).toEqual([
       [4, 'restored revision 1', 'draft', 10],
       [3, 'status', 'quoted', 12],
       [2, 'saved', 'draft', 12],

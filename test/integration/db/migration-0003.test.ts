@@ -1,7 +1,7 @@
 import Database from 'better-sqlite3';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { migrate, schemaVersion } from '../../../db';
+import { LATEST_VERSION, migrate, migrations, schemaVersion } from '../../../db';
 import { tempDir } from './helpers';
 
 describe('migration 0003 (quotes)', () => {
@@ -18,6 +18,16 @@ describe('migration 0003 (quotes)', () => {
     expect(() => db.exec('DELETE FROM quotes')).toThrow(/cannot be deleted/);
     expect(() => db.exec(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec, settings, prices,
       quantity_breaks, document) VALUES ('Q-2', 9, 1, 'x', 30, 'USD', '{}', '{}', '{}', '{}', '[]', '{}')`)).toThrow(/FOREIGN KEY/);
+    db.close();
+  });
+
+  it('a migration run brings a new file straight to the latest version in one go, and a second run does nothing', () => {
+    expect(LATEST_VERSION).toBe(migrations[migrations.length - 1]!.version);
+    expect(LATEST_VERSION).toBeGreaterThanOrEqual(3);
+    const db = new Database(join(tempDir(), 'all.db'));
+    expect(migrate(db)).toEqual({ from: 0, to: LATEST_VERSION });
+    expect(db.prepare("SELECT count(*) AS n FROM sqlite_schema WHERE name = 'quotes'").get()).toEqual({ n: 1 });
+    expect(migrate(db)).toEqual({ from: LATEST_VERSION, to: LATEST_VERSION });
     db.close();
   });
 });

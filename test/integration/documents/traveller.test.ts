@@ -33,7 +33,7 @@ describe('traveller PDF', () => {
     expect(field(model.material.fields, 'Wire per piece')).toBe(wire);
     const coil = model.operations.find((o) => o.title.startsWith('Coil'))!;
     expect(field(coil.settings, 'Coiled free length')).toBe(coiled);
-    // Lot 1000 at AQL 1.0, normal single sampling, level II: code J, n = 80, Ac 2 / Re 3 (shop-practice notes §8 row 16).
+    // Lot 1000 at AQL 1.0, normal single sampling, level II: code J, n = 80, Ac 2 / Re 3 (ISO 2859-1 Table 1 and Table 2-A).
     expect(plan.inspection).toMatchObject({ code: 'J', sampleSize: 80, accept: 2, reject: 3 });
     const text = (await pdfText(await renderTraveller(model))).all;
     expect(text).toContain(`Wire per piece ${wire}`);

@@ -11,6 +11,7 @@ import { useQuery } from '../../../hooks/useQuery';
 import { parseNumber } from '../../../model/numbers';
 import { Findings } from '../results/Findings';
 import { Inspection, Operations } from './PlanTables';
+import { SetCalibrationPanel } from './SetCalibrationPanel';
 import { RoutingJudgement } from './RoutingJudgement';
 
 function initialQuantity(editor: JobEditor): string {
@@ -78,6 +79,7 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
         {notes.map((n) => <Caution key={n} title={floorTitle(n)}>{n}</Caution>)}
       </div>
       <Operations plan={plan} />
+      <SetCalibrationPanel spec={spec} />
       <Inspection plan={plan} />
       {plan.findings.length > 0 ? <Findings findings={plan.findings} onGo={onGo} title="Planning findings" /> : null}
     </>

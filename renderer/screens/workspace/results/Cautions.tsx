@@ -10,7 +10,8 @@ export const NEAR_SOLID_RATIO = 0.85;
 export function SpringCautions({ r, spec }: { r: SpringReport; spec: Spec }) {
   const { settings } = useShopData();
   const finish = settings?.finishes.find((f) => f.id === spec.finish);
-  const solid = r.kind === 'compression' ? r.stressAtSolid / r.allowableStress : 0;
+  // The set-removal verdict's own ratio: the governing method's stress at solid over its limit without set removal.
+  const solid = r.kind === 'compression' ? r.setRemoval.ratio : 0;
   return (
     <div className="cautions">
       <StoredEnergyCaution />

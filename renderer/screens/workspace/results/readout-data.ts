@@ -29,11 +29,11 @@ function compressionFigures(r: CompressionReport): Readout[] {
     { name: 'Spring index', symbol: 'w', value: significant(r.springIndex) },
     { name: 'Active / total coils', symbol: 'n / Nt', value: `${significant(r.activeCoils)} / ${significant(r.totalCoils)}` },
     { name: 'Outside / inside diameter', symbol: 'OD / ID', value: `${q(r.outerDiameter, 'length', u)} / ${q(r.innerDiameter, 'length', u)}` },
-    { name: 'Solid length', symbol: 'Ls', value: q(r.solidLength, 'length', u) },
+    { name: 'Solid length / maximum', symbol: 'Ls / Lc,max', value: `${q(r.solidLength, 'length', u)} / ${q(r.solidLengthMaximum, 'length', u)}` },
     { name: 'Force at solid', symbol: 'Fs', value: q(r.solidForce, 'force', u) },
     { name: 'Minimum working length', symbol: 'Ln', value: q(r.minimumWorkingLength, 'length', u) },
     { name: 'Pitch', symbol: 'p', value: q(r.pitch, 'length', u) },
-    { name: 'Coil to (set removal)', symbol: 'L0 coiled', value: !set.required ? 'not needed' : set.coiledFreeLength === null ? 'by trials' : q(set.coiledFreeLength, 'length', u) },
+    { name: 'Coil to (set removal)', symbol: 'L0 coiled', value: !set.required ? 'not needed' : set.coiledFreeLength === null ? 'no length within limits' : `${q(set.coiledFreeLength, 'length', u)} (${set.governing === 'handbook' ? 'handbook' : 'EN 13906-1'} governs)` },
     { name: 'Buckling', symbol: 'sk', value: r.bucklingDeflection === null ? 'stable' : `at ${q(r.freeLength - r.bucklingDeflection, 'length', u)}` },
     { name: 'Natural frequency', symbol: 'fe', value: q(r.naturalFrequency, 'frequency', u) },
     { name: 'Wire length / mass', symbol: 'l / m', value: `${q(r.wireLength, 'length', u)} / ${q(r.mass, 'mass', u)}` },
@@ -81,13 +81,19 @@ export function readouts(r: SpringReport): Readout[] {
 }
 
 function compressionBars(r: CompressionReport): StressBar[] {
-  const set = r.setRemoval.required;
-  const basis = set ? 'uncorrected, against the allowable after set removal' : 'corrected, against the allowable';
-  const working = set ? r.allowableStressSetRemoved : r.allowableStress;
-  const bars: StressBar[] = r.loads.map((l, i) => ({ label: `τ at L${i + 1}`, value: set ? l.stressUncorrected : l.stress, allowable: working, basis }));
-  bars.push({ label: 'τ at solid', value: r.stressAtSolid, allowable: r.allowableStress, basis: 'corrected, against the allowable before set removal' });
-  if (set) bars.push({ label: 'τ at solid, set removed', value: r.stressAtSolidUncorrected, allowable: r.allowableStressSetRemoved, basis: 'uncorrected, against the allowable after set removal' });
-  if (r.fatigue) bars.push({ label: 'τ max in cycle', value: r.fatigue.stressMax, allowable: working, basis: 'corrected, against the static allowable' });
+  const s = r.setRemoval;
+  const toSolid = r.freeLength - r.solidLength;
+  const working = s.required ? s.allowableAfter : s.allowableBefore;
+  const name = (m: 'handbook' | 'en13906') => (m === 'handbook' ? 'handbook, Ks stress' : 'EN 13906-1, uncorrected stress');
+  const basis = `${name(s.governing)}, against the allowable ${s.required ? 'after' : 'before'} set removal`;
+  const bars: StressBar[] = r.loads.map((l, i) => ({
+    label: `τ at L${i + 1}`, value: toSolid > 0 ? (l.deflection / toSolid) * s.stressAtSolid : 0, allowable: working, basis,
+  }));
+  for (const v of [s.methods.handbook, s.methods.en13906]) {
+    bars.push({ label: `τ at solid (${name(v.method)})`, value: v.stressAtSolid, allowable: v.required ? v.allowableAfter : v.allowableBefore,
+      basis: `${v.required ? 'after' : 'before'} set removal${v.method === s.governing ? ', governs' : ''}` });
+  }
+  if (r.fatigue) bars.push({ label: 'τ max in cycle', value: r.fatigue.stressMax, allowable: r.allowableStress, basis: 'corrected, against the static allowable' });
   return bars;
 }
 

@@ -1,0 +1,60 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { BenchRow, BenchSuite } from '../harness';
+
+/** A DEMO part (invented): what an estimator would type for a small compression spring. */
+const DEMO_SPEC = {
+  kind: 'compression', units: 'metric', material: 'en10270-1-dh', wireDiameter: 1.6, outerDiameter: 14,
+  totalCoils: 9, ends: 'closed-ground', freeLength: 42, loads: [{ length: 30 }], notes: 'DEMO data: bench part',
+};
+
+const RUNS = 9;
+const TARGET_RATIO = 2.5;
+
+function timed(args: string[]): number {
+  const t0 = performance.now();
+  const r = spawnSync('npm', args, { cwd: process.cwd(), encoding: 'utf8', shell: process.platform === 'win32' });
+  const ms = performance.now() - t0;
+  if (r.status !== 0) throw new Error(`npm ${args.join(' ')} failed: ${r.stderr}`);
+  return ms;
+}
+
+const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+const row = (name: string, value: number, unit: string, target?: string, pass?: boolean): BenchRow =>
+  ({ suite: 'cli', name, value, unit, ...(target === undefined ? {} : { target, pass }) });
+
+/**
+ * One command-line call against npm starting and doing nothing, measured side by side: the two
+ * alternate, so a busy machine slows both alike, and the medians are compared.
+ */
+export const cliSuite: BenchSuite = {
+  name: 'cli',
+  run(): BenchRow[] {
+    const dir = mkdtempSync(join(tmpdir(), 'coilwright-bench-cli-'));
+    try {
+      const file = join(dir, 'demo-spring.json');
+      writeFileSync(file, JSON.stringify(DEMO_SPEC));
+      const calc = ['run', '-s', 'cli', '--', 'calc', file];
+      const idle = ['-s', 'pkg', 'get', 'name'];
+      timed(calc); // builds the command line's bundle when a source is newer than it
+      timed(idle);
+      const calcTimes: number[] = [];
+      const idleTimes: number[] = [];
+      for (let i = 0; i < RUNS; i++) {
+        calcTimes.push(timed(calc));
+        idleTimes.push(timed(idle));
+      }
+      const ratio = median(calcTimes) / median(idleTimes);
+      return [
+        row('npm run -s cli -- calc FILE (median of 9)', median(calcTimes), 'ms'),
+        row('npm -s pkg get name (median of 9, same run)', median(idleTimes), 'ms'),
+        row('calc call against npm doing nothing', ratio, '×', `≤ ${TARGET_RATIO}×`, ratio <= TARGET_RATIO),
+      ];
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  },
+};
