@@ -7,8 +7,9 @@ import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { quotingSuite } from './suites/quoting';
 import { cliSuite } from './suites/cli';
+import { designSuite } from './suites/design';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, designSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -2,7 +2,7 @@ import type { Quantity, UnitSystem } from './units';
 import { fromInternal, unitSymbol } from './units';
 
 /** Decimal places the trade reads lengths in: 0.01 mm, 0.001 in. */
-const lengthDecimals: Record<UnitSystem, number> = { metric: 2, inch: 3 };
+export const lengthDecimals: Record<UnitSystem, number> = { metric: 2, inch: 3 };
 
 /** Three significant digits, without exponent notation for ordinary magnitudes. */
 export function significant(value: number, digits = 3): string {

@@ -26,3 +26,5 @@ export { acceptJobCost, acceptedSettings } from './settings-versions';
 export type { AcceptedSettings } from './settings-versions';
 export { recordFirstOff, listFirstOff } from './first-off/records';
 export { setCalibration } from './first-off/calibration';
+export { adoptDesign, jobRequirement } from './jobs/requirements';
+export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';

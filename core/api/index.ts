@@ -3,6 +3,7 @@ import { storeMethods } from './store';
 import { shopMethods } from './shop';
 import { documentMethods } from './documents';
 import { firstOffMethods } from './first-off';
+import { designMethods } from './design';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
@@ -18,6 +19,7 @@ export const contract = {
   ...shopMethods,
   ...documentMethods,
   ...firstOffMethods,
+  ...designMethods,
 };
 
 export type Contract = typeof contract;

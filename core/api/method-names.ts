@@ -13,6 +13,7 @@ export const apiMethodNames = [
   'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'backup', 'restore',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
+  'designSprings', 'adoptDesign', 'jobRequirement',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

@@ -138,6 +138,12 @@ export const costingSchema = z.object({
   breakFactors: z.array(z.number().finite().positive().max(1000)).min(1).max(8).default([0.5, 1, 2, 5]),
 }).strict();
 
+/** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
+export const designStepsSchema = z.object({
+  coilStep: z.number().finite().min(0.05).max(1).default(0.25),
+  diameterStep: z.number().finite().min(0.01).max(5).default(0.1),
+}).strict();
+
 function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): void {
   const seen = new Set<string>();
   items.forEach((item, i) => {
@@ -162,6 +168,7 @@ export const settingsSchemas = {
     inspectionMinutesPerPiece: 0.5, packagingPerPiece: 0.01,
     minimumOrderValue: 150, unitPriceRounding: { rule: 'none' }, breakFactors: [0.5, 1, 2, 5],
   }),
+  design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();

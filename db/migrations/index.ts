@@ -6,6 +6,7 @@ import { updateToVersion0003 } from './0003-quotes';
 import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
 import { updateToVersion0007 } from './0007-estimating';
+import { updateToVersion0008 } from './0008-job-requirements';
 
 export interface Migration {
   version: number;
@@ -21,6 +22,7 @@ export const migrations: readonly Migration[] = [
   { version: 4, name: 'first-off records', update: updateToVersion0004 },
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
   { version: 7, name: 'estimating', update: updateToVersion0007 },
+  { version: 8, name: 'job requirements', update: updateToVersion0008 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -5,7 +5,8 @@ export type Route =
   /** `key` tells one opening of the workspace from the next (a new job keeps its key once saved). */
   | { screen: 'job'; id: number | null; key: string }
   | { screen: 'settings' }
-  | { screen: 'data' };
+  | { screen: 'data' }
+  | { screen: 'design' };
 
 /** Decides whether the screen may be left now; false keeps the estimator where they are. */
 export type LeaveGuard = () => Promise<boolean>;

@@ -10,6 +10,7 @@ import { JobsScreen } from './jobs/JobsScreen';
 import { Workspace } from './workspace/Workspace';
 import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
+import { DesignScreen } from './design/DesignScreen';
 
 export function App() {
   return (
@@ -90,6 +91,7 @@ function Shell() {
           {route.screen === 'job' ? <Workspace key={route.key} jobId={route.id} /> : null}
           {route.screen === 'settings' ? <SettingsScreen /> : null}
           {route.screen === 'data' ? <DataScreen /> : null}
+          {route.screen === 'design' ? <DesignScreen /> : null}
         </main>
       </div>
       <ShortcutsDialog open={help} onClose={() => setHelp(false)} />

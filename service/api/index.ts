@@ -6,6 +6,7 @@ import { storeHandlers } from './store';
 import { shopHandlers } from './shop';
 import { documentHandlers } from './documents';
 import { firstOffHandlers } from './first-off';
+import { designHandlers } from './design';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
@@ -20,7 +21,7 @@ export interface Service {
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
   const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
-    ...firstOffHandlers(ctx) };
+    ...firstOffHandlers(ctx), ...designHandlers(ctx) };
   return {
     handlers,
     store: () => ctx.store,

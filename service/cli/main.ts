@@ -14,6 +14,7 @@ const commands: Record<string, () => Promise<Command>> = {
   db: async () => (await import('./db-commands')).dbCommand,
   demo: async () => (await import('./db-commands')).demoCommand,
   print: async () => (await import('./print-commands')).printCommand,
+  design: async () => (await import('./design-commands')).designCommand,
   'first-off': async () => (await import('./first-off-commands')).firstOffCommand,
 };
 

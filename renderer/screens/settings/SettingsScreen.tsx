@@ -12,6 +12,7 @@ import { useShopData } from '../../hooks/shop-data';
 import { friendlyError } from '../../model/errors';
 import { setAt, getAt } from '../../model/paths';
 import { CostingSection } from './CostingSection';
+import { DesignStepsSection } from './DesignStepsSection';
 import type { SettingsDraft } from './draft';
 import { SettingsDraftContext } from './draft';
 import { FinishesSection, MachinesSection } from './MachinesSection';
@@ -21,7 +22,7 @@ import { MaterialPricesSection, WireStockSection } from './StockSection';
 const sections = [
   ['settings-profile', 'Shop profile'], ['settings-defaults', 'Defaults'], ['settings-machines', 'Machines & rates'],
   ['settings-prices', 'Material prices'], ['settings-finishes', 'Finishes'], ['settings-stock', 'Wire stock'],
-  ['settings-costing', 'Costing'], ['settings-numbering', 'Numbering'],
+  ['settings-costing', 'Costing'], ['settings-design', 'Design search'], ['settings-numbering', 'Numbering'],
 ] as const;
 
 /** Every path in the draft, so each error finds the field it belongs to. */
@@ -115,6 +116,7 @@ function SettingsEditor({ saved }: { saved: Settings }) {
                 <FinishesSection />
                 <WireStockSection />
                 <CostingSection />
+                <DesignStepsSection />
                 <NumberingSection />
               </form>
             )}
