@@ -2,20 +2,20 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BenchRow, BenchSuite } from './harness';
 import { engineSuite } from './suites/engine';
-import { storeSuite } from './suites/store';
+import { storeMillionSuite, storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
 import { quotingSuite } from './suites/quoting';
 import { cliSuite } from './suites/cli';
 import { designSuite } from './suites/design';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, documentsSuite, rendererSuite, cliSuite, designSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];
   const rows: BenchRow[] = [];
   for (const suite of suites) {
-    if (only && suite.name !== only) continue;
+    if (only ? suite.name !== only : suite.onlyWhenAsked) continue;
     rows.push(...(await suite.run()));
   }
   const dir = join(process.cwd(), 'bench', 'results');

@@ -7,7 +7,8 @@ export type UnitSystem = 'metric' | 'inch';
 export type Quantity =
   | 'length' | 'force' | 'stress' | 'rate' | 'torque' | 'torqueRatePerTurn' | 'torqueRatePerDegree'
   | 'mass' | 'density' | 'temperature' | 'frequency' | 'angle' | 'count' | 'ratio' | 'percent'
-  | 'energy' | 'time' | 'lengthLong' | 'massBulk';
+  | 'energy' | 'time' | 'lengthLong' | 'massBulk' | 'minutes' | 'days' | 'money' | 'ordinal' | 'figure'
+  | 'perHour' | 'stockLength' | 'stockMass';
 
 // Exact definitions: 1 in = 25.4 mm; 1 lbf = 4.4482216152605 N; 1 lb = 0.45359237 kg (NIST SP 811, Appendix B).
 export const MM_PER_IN = 25.4;
@@ -38,6 +39,18 @@ const metric: Record<Quantity, UnitDef> = {
   percent: { factor: 1, symbol: '%' },
   energy: { factor: 1, symbol: 'N·mm' },
   time: { factor: 1, symbol: 's' },
+  minutes: { factor: 1, symbol: 'min' },
+  days: { factor: 1, symbol: 'd' },
+  // Money is in the shop's currency, named beside it; a unit system does not change it.
+  money: { factor: 1, symbol: '' },
+  /** A number that names rather than measures: a grade, a sequence number, a format version. */
+  ordinal: { factor: 1, symbol: '' },
+  /** A figure's natural size in drawing units; only its aspect ratio is used. */
+  figure: { factor: 1, symbol: '' },
+  perHour: { factor: 1, symbol: '/h' },
+  // Wire stock is bought by the metre and the kilogram in every unit system: these never convert.
+  stockLength: { factor: 1, symbol: 'm' },
+  stockMass: { factor: 1, symbol: 'kg' },
 };
 
 const inch: Record<Quantity, UnitDef> = {
@@ -70,26 +83,97 @@ export function fromInternal(value: number, quantity: Quantity, units: UnitSyste
   return value / def.factor - (def.offset ?? 0);
 }
 
+/** True when a value of this quantity reads the same in every unit system (counts, angles, percent). */
+export function sameInBothSystems(quantity: Quantity): boolean {
+  const a = metric[quantity];
+  const b = inch[quantity];
+  return a.factor === b.factor && (a.offset ?? 0) === (b.offset ?? 0) && a.symbol === b.symbol;
+}
+
 export function unitSymbol(quantity: Quantity, units: UnitSystem): string {
   return systems[units][quantity].symbol;
 }
 
-/** Converts every field of `value` named in `fields` (a quantity map); nested objects and arrays follow the map. */
-export type QuantityMap = { [field: string]: Quantity | QuantityMap };
+/**
+ * What each number of a value measures, field by field; nested objects and lists follow the map. `OWN`
+ * marks a number whose object names its quantity itself in a `quantity` field (operation settings,
+ * inspection characteristics).
+ */
+export type QuantityMap = { [field: string]: Quantity | typeof OWN | QuantityMap };
+
+export const OWN = 'own-quantity';
+
+const quantities = new Set<string>(Object.keys(metric));
+const isQuantity = (q: unknown): q is Quantity => typeof q === 'string' && quantities.has(q);
+
+/** The quantity `m` declares for a number inside `parent`: its own, or its object's `quantity` field. */
+function declared(m: Quantity | typeof OWN, parent: Record<string, unknown>): Quantity | undefined {
+  if (m !== OWN) return m;
+  return isQuantity(parent.quantity) ? parent.quantity : undefined;
+}
+
+/** Whether every quantity a map names reads the same in internal units (then converting is a no-op). */
+function identityIn(map: QuantityMap, units: UnitSystem): boolean {
+  return Object.values(map).every((m) => (typeof m === 'string'
+    ? m === OWN ? false : systems[units][m].factor === 1 && (systems[units][m].offset ?? 0) === 0
+    : identityIn(m, units)));
+}
+
+const identityMaps: Record<UnitSystem, WeakMap<QuantityMap, boolean>> = { metric: new WeakMap(), inch: new WeakMap() };
+
+/** Cached per map: specs convert on every analysis, and a metric spec's map is all identities. */
+function isIdentity(map: QuantityMap, units: UnitSystem): boolean {
+  let known = identityMaps[units].get(map);
+  if (known === undefined) {
+    known = identityIn(map, units);
+    identityMaps[units].set(map, known);
+  }
+  return known;
+}
 
 export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: 'in' | 'out'): T {
+  if (isIdentity(map, units)) return value;
   const convert = direction === 'in' ? toInternal : fromInternal;
-  const walk = (v: unknown, m: Quantity | QuantityMap): unknown => {
+  const walk = (v: unknown, m: Quantity | typeof OWN | QuantityMap, parent: Record<string, unknown>): unknown => {
     if (v === null || v === undefined) return v;
-    if (Array.isArray(v)) return v.map((item) => walk(item, m));
-    if (typeof m === 'string') return typeof v === 'number' ? convert(v, m, units) : v;
+    if (Array.isArray(v)) return v.map((item) => walk(item, m, parent));
+    if (typeof m === 'string') {
+      const q = declared(m, parent);
+      return typeof v === 'number' && q !== undefined ? convert(v, q, units) : v;
+    }
     if (typeof v !== 'object') return v;
-    const out: Record<string, unknown> = {};
-    for (const [key, inner] of Object.entries(v as Record<string, unknown>)) {
-      const sub = m[key];
-      out[key] = sub === undefined ? inner : walk(inner, sub);
+    const object = v as Record<string, unknown>;
+    // A copy keeps the object's shape; only the fields the map declares are replaced.
+    const out: Record<string, unknown> = { ...object };
+    for (const key in m) {
+      const inner = object[key];
+      if (inner !== undefined) out[key] = walk(inner, m[key]!, object);
     }
     return out;
   };
-  return walk(value, map) as T;
+  return walk(value, map, {}) as T;
+}
+
+/**
+ * Every number in `value` the map declares no quantity for, by path ("loads[0].stress"): a number without
+ * a quantity cannot be converted or labelled, so a model must have none.
+ */
+export function undeclaredNumbers(value: unknown, map: QuantityMap | Quantity | typeof OWN, path = '', parent: Record<string, unknown> = {}): string[] {
+  if (typeof value === 'number') return typeof map === 'string' && declared(map, parent) !== undefined ? [] : [path || '(value)'];
+  if (Array.isArray(value)) return value.flatMap((item, i) => undeclaredNumbers(item, map, `${path}[${i}]`, parent));
+  if (value === null || typeof value !== 'object') return [];
+  const object = value as Record<string, unknown>;
+  const fields = typeof map === 'string' ? {} : map;
+  return Object.entries(object).flatMap(([key, inner]) =>
+    undeclaredNumbers(inner, fields[key] ?? {}, path === '' ? key : `${path}.${key}`, object));
+}
+
+/** The quantity a map declares at a dotted path ("materialOverrides.density"; list items share their map). */
+export function quantityAt(map: QuantityMap, path: string): Quantity | undefined {
+  let at: Quantity | typeof OWN | QuantityMap | undefined = map;
+  for (const key of path.split('.')) {
+    if (at === undefined || typeof at === 'string') return undefined;
+    at = at[key];
+  }
+  return isQuantity(at) ? at : undefined;
 }

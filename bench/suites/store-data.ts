@@ -21,8 +21,45 @@ export function customerName(i: number): string {
   return `${customerStems[i % customerStems.length]} ${customerTrades[Math.floor(i / customerStems.length) % customerTrades.length]} ${Math.floor(i / 160) + 1} (bench)`;
 }
 
-/** A valid compression spec with d log-uniform over 0.2–12 mm; one in three in inch units. */
+/**
+ * The share of each kind in a generated store: compression most, torsion rare (1 %), so the bench sees
+ * how a search for a rare kind behaves in a store of mostly another kind.
+ */
+export const KIND_SHARES = { compression: 0.94, extension: 0.05, torsion: 0.01 } as const;
+
+/** A valid spec of a kind drawn by KIND_SHARES. */
 export function benchSpec(random: () => number): Record<string, unknown> {
+  const pick = random();
+  if (pick < KIND_SHARES.torsion) return torsionSpec(random);
+  if (pick < KIND_SHARES.torsion + KIND_SHARES.extension) return extensionSpec(random);
+  return compressionSpec(random);
+}
+
+/** A valid extension spec: d 0.3–6 mm, index 5–12, full loops, initial tension well inside the window. */
+export function extensionSpec(random: () => number): Record<string, unknown> {
+  const d = 0.3 * Math.exp(random() * Math.log(20));
+  const index = 5 + random() * 7;
+  const round = (v: number) => Number(v.toPrecision(4));
+  return {
+    kind: 'extension', units: 'metric', material: 'en10270-1-sh', wireDiameter: round(d), outerDiameter: round(d * (index + 1)),
+    bodyCoils: 8 + Math.round(random() * 30) + 0.5, ends: ['full-loop', 'full-loop'],
+  };
+}
+
+/** A valid torsion spec: d 0.5–5 mm, index 6–12, two legs, loaded to close. */
+export function torsionSpec(random: () => number): Record<string, unknown> {
+  const d = 0.5 * Math.exp(random() * Math.log(10));
+  const index = 6 + random() * 6;
+  const round = (v: number) => Number(v.toPrecision(4));
+  return {
+    kind: 'torsion', units: 'metric', material: 'astm-a228', wireDiameter: round(d), outerDiameter: round(d * (index + 1)),
+    bodyCoils: 3 + Math.round(random() * 12) + 0.25, legs: [{ length: round(d * 12) }, { length: round(d * 15) }],
+    windDirection: 'right', loadDirection: 'closing',
+  };
+}
+
+/** A valid compression spec with d log-uniform over 0.2–12 mm; one in three in inch units. */
+export function compressionSpec(random: () => number): Record<string, unknown> {
   const d = 0.2 * Math.exp(random() * Math.log(60));
   const index = 4 + random() * 10;
   const na = 3 + Math.round(random() * 22);
@@ -71,6 +108,14 @@ export function benchQueries(random: () => number, count: number): string[] {
       case 2: return `${words[Math.floor(random() * words.length)]} ${words[Math.floor(random() * words.length)]}`;
       default: return `D${String(n * 7 % 1000003).padStart(7, '0').slice(0, 5)}`;
     }
+  });
+}
+
+/** Single words as an estimator types them, one keystroke at a time: 1 to 4 characters of a real word. */
+export function oneWordQueries(random: () => number, count: number): string[] {
+  return Array.from({ length: count }, (_, i) => {
+    const pool = [...words, ...customerStems];
+    return pool[Math.floor(random() * pool.length)]!.slice(0, 1 + (i % 4));
   });
 }
 

@@ -90,8 +90,12 @@ export const listJobsSchema = z.object({
   sort: jobSortSchema.default('updated'),
   direction: z.enum(['asc', 'desc']).optional(),
   limit: z.number().int().min(1).max(500).default(50),
-  offset: z.number().int().min(0).default(0),
-}).strict();
+  /** Rows to skip: for small jumps; a long list pages with `after`, which costs the same on every page. */
+  offset: z.number().int().min(0).max(100_000).default(0),
+  /** The `next` of the previous page: the list continues after that row (keyset paging). */
+  after: z.string().min(1).max(400).optional(),
+}).strict().refine((q) => q.after === undefined || q.offset === 0,
+  { message: 'give either after (the next page) or offset, not both', path: ['after'] });
 export type ListJobsInput = z.input<typeof listJobsSchema>;
 export type ListJobsQuery = z.output<typeof listJobsSchema>;
 

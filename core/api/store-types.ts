@@ -1,4 +1,4 @@
-import type { Spec } from '../spec';
+import type { Spec, SpringKind } from '../spec';
 import type { Settings } from '../settings/schema';
 import type { JobStatus } from './store-schemas';
 import type { IssueDecision } from '../quoting/problems';
@@ -13,7 +13,7 @@ export interface Customer {
 }
 
 export interface JobShape {
-  kind: string;
+  kind: SpringKind;
   material: string;
   materialFamily: string;
   units: 'metric' | 'inch';
@@ -73,6 +73,8 @@ export interface JobPage {
   total: number;
   limit: number;
   offset: number;
+  /** Pass as `after` for the page that follows; null on the last page. */
+  next: string | null;
 }
 
 /** The fields of a job as one revision saved them. */

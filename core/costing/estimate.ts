@@ -11,6 +11,8 @@ import { noJudgement } from '../quoting/judgement';
 import type { JobJudgement } from '../quoting/judgement';
 
 export { wirePrice } from './wire-price';
+import { effectiveFinish } from '../finishing/effective';
+import { formatQuantity } from '../format';
 
 /** Quantity breaks when the spec names none (common practice for a first quote). */
 export const DEFAULT_QUANTITIES = [100, 1000, 5000];
@@ -23,7 +25,7 @@ function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Miss
   const item = `Wire: ${plan.material.name}`;
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
-      message: `no price for ${plan.material.grade} at ${plan.material.wireDiameter.toFixed(2)} mm: material is not costed` });
+      message: `no price for ${plan.material.grade} at ${formatQuantity(plan.material.wireDiameter, 'length', plan.units)}: material is not costed` });
     return { key: 'material', item, basis: `${figure(kg, 3)} kg, no price on file`, amount: 0, group: 'material' };
   }
   return {
@@ -84,7 +86,7 @@ function operationLines(plan: ManufacturingPlan, missing: Missing): CostLine[] {
 }
 
 function outsideLines(plan: ManufacturingPlan, settings: Settings, spec: Spec): CostLine[] {
-  const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
+  const { finish } = effectiveFinish(spec, settings.finishes);
   if (!finish) return [];
   const kg = rounded(plan.orderQuantity * plan.massPerPiece, 3);
   const byKg = finish.pricePerKg !== undefined ? kg * finish.pricePerKg : 0;

@@ -1,3 +1,4 @@
+import type { QuantityMap } from '../units';
 import type { WorkCentreChoice } from '../process/work-centre';
 
 export type CostGroup = 'material' | 'setup' | 'run' | 'batch' | 'outside' | 'inspection' | 'packaging' | 'overhead' | 'margin' | 'minimum' | 'adjustment' | 'charge';
@@ -45,3 +46,9 @@ export interface CostEstimate {
   /** Prices or machines the estimate had to do without; each names the setting to fill in. */
   missing: MissingCost[];
 }
+
+/** What each number of a cost estimate measures; money is in the estimate's currency in every unit system. */
+export const costQuantities: QuantityMap = {
+  minimumOrderValue: 'money',
+  breaks: { quantity: 'count', startQuantity: 'count', unitPrice: 'money', total: 'money', lines: { amount: 'money' } },
+};

@@ -11,7 +11,7 @@ import { overMax, underMin } from './misses';
  * need them explained. Buckling is accepted when a bore or a rod guides the spring.
  */
 const disqualifyingWarnings = new Set([
-  'coil-clearance', 'set-beyond-model', 'set-too-small', 'set-ratio-high', 'index-outside-preferred',
+  'coil-clearance', 'set-below-length-tolerance', 'set-ratio-high', 'index-outside-preferred',
   'grinding-fine-wire', 'fatigue-marginal', 'surge', 'grade-not-for-cyclic-duty', 'temperature-below-grade',
   'over-determined', 'buckling',
 ]);

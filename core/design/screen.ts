@@ -4,7 +4,11 @@ import { bergstraesser } from '../springs/factors';
 import { coilWireLength, helicalRate, torsionStressPerForce } from '../springs/helix';
 import { endForms, solidLength } from '../springs/compression/ends';
 import { minimumCoilGapSum, outsideDiameterGrowth } from '../springs/compression/clearance';
-import { fatigueCheck, fatigueCriteria } from '../springs/fatigue';
+import { fatigueCheck, fatigueCriteria, finiteLife, hasSteelFatigueData } from '../springs/fatigue';
+import { setRemoval } from '../springs/compression/analyse';
+import type { SetRemovalResult } from '../springs/compression/report';
+import { coiledLimits } from '../springs/compression/set-removal';
+import { setControlTolerance } from '../review/compression';
 import { reviewLimits } from '../review/limits';
 import { boreLimit, rodLimit } from './clearance';
 import type { DesignPoint } from './space';
@@ -53,38 +57,51 @@ function loadMisses(req: RequirementInternal, rate: number, L0: number, out: Mis
   }
 }
 
+/** The coiled length's bound as a miss, by the quantity that bounds it (the review's coiled-length-out-of-bounds error). */
+function boundMiss(p: DesignPoint, Ls: number, set: SetRemovalResult): Miss | null {
+  if (set.bound === 'pitch-over-coiler') {
+    return overMax('set-removal', 'function', 'length', set.coiledPitch ?? 0, coiledLimits.maximumPitchPerMeanDiameter * p.D);
+  }
+  if (set.bound === 'set-over-deflection') {
+    return overMax('set-removal', 'function', 'length', set.expectedSet ?? 0, coiledLimits.maximumSetPerFinishedDeflection * (p.L0 - Ls));
+  }
+  return set.bound === null ? null : overMax('solid-stress', 'envelope', 'stress', set.stressAtSolid, set.allowableAfter);
+}
+
 /**
- * The review's set-removal rules with the engine's own set model: the set must reach the trade's share of the
- * deflection to solid, and the stress ratio must stay within its maximum. `yieldShare` is the uncorrected
- * stress at solid over the yield the model uses, i.e. the deflection to solid over the yield deflection.
+ * The review's set-removal rules on the engine's own decision (both methods, the stricter governing, as
+ * analyseSpec judges a spec): within the allowable after set removal, a coiled length inside the coiler's and
+ * the model's bounds, a set the first-off can measure against the free-length tolerance, and the stress ratio.
  */
-function setRemovalMisses(ratio: number, yieldShare: number, out: Miss[]): void {
-  push(out, overMax('set-removal', 'maxStressRatio', 'ratio', ratio, reviewLimits.maximumSetRatio));
-  void yieldShare;
+function setRemovalMisses(req: RequirementInternal, p: DesignPoint, Ls: number, set: SetRemovalResult, out: Miss[]): void {
+  const solidMiss = overMax('solid-stress', 'envelope', 'stress', set.stressAtSolid, set.allowableAfter);
+  push(out, solidMiss);
+  if (solidMiss || !set.achievable || !set.required) return;
+  push(out, boundMiss(p, Ls, set));
+  const tolerance = set.bound === null
+    ? setControlTolerance({ freeLength: p.L0, toleranceGrade: req.toleranceGrade, springIndex: p.D / p.d, activeCoils: p.na })
+    : null;
+  if (tolerance) push(out, underMin('set-removal', 'function', 'length', set.expectedSet ?? 0, tolerance.plusMinus));
+  push(out, overMax('set-removal', 'function', 'ratio', set.ratio, reviewLimits.maximumSetRatio));
 }
 
 function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProperties, rate: number, Ls: number, out: Miss[]): boolean {
-  const k = bergstraesser(p.D / p.d);
+  const c = p.D / p.d;
   const perForce = torsionStressPerForce(p.D, p.d);
-  const solidU = perForce * rate * (p.L0 - Ls);
-  const before = wire.allowableStaticFraction.beforeSetRemoval * wire.tensileStrength;
-  const after = wire.allowableStaticFraction.afterSetRemoval * wire.tensileStrength;
-  const required = (k * solidU) / before > 1;
-  const solidMiss = overMax('solid-stress', 'envelope', 'stress', solidU, after);
-  push(out, solidMiss);
-  if (!solidMiss) {
-    const share = (p.L0 - req.deepestLength) / (p.L0 - Ls);
-    const stressed = share * (required ? solidU : k * solidU);
-    push(out, overMax('working-stress', 'function', 'stress', stressed, required ? after : before));
-  }
-  if (required) setRemovalMisses(k * solidU / before, solidU / before, out);
-  if (req.maxStressRatio !== null) push(out, overMax('stress-ratio', 'maxStressRatio', 'ratio', (k * solidU) / before, req.maxStressRatio));
-  if (req.duty.type === 'cyclic') {
+  const set = setRemoval({ wire, d: p.d, D: p.D, na: p.na, ends: p.ends, L0: p.L0 }, Ls, perForce * rate, c, 'stricter');
+  setRemovalMisses(req, p, Ls, set, out);
+  if (req.maxStressRatio !== null) push(out, overMax('stress-ratio', 'maxStressRatio', 'ratio', set.ratio, req.maxStressRatio));
+  if (req.duty.type === 'cyclic' && hasSteelFatigueData(wire.family)) {
     const [a, b] = req.duty.between;
-    const f = fatigueCheck(k * perForce * rate * (p.L0 - a), k * perForce * rate * (p.L0 - b), wire.tensileStrength, p.peened);
-    if (f.verdict !== 'pass') push(out, underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
+    const k = bergstraesser(c);
+    const life = finiteLife('compression', req.duty.cycles, p.peened, wire.tensileStrength);
+    const f = fatigueCheck(k * perForce * rate * (p.L0 - a), k * perForce * rate * (p.L0 - b), wire.tensileStrength, p.peened, life);
+    if (f.verdict === 'pass') return set.required;
+    // Under the endurance cycles the verdict is the finite-life limit's, else Goodman's.
+    push(out, life ? overMax('fatigue-life', 'duty', 'stress', f.stressMax, life.limit)
+      : underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
   }
-  return required;
+  return set.required;
 }
 
 /** Limits that rule out a whole grade: cyclic duty on a grade not made for it, a service temperature outside its range. */

@@ -47,12 +47,14 @@ function engineCheck(ctx: Context, point: DesignPoint): AcceptedDesign | null {
   return null;
 }
 
-/** Allowable ÷ stress at the shortest working length, less one, as the review compares them. */
+/**
+ * Allowable ÷ stress at the shortest working length, less one, on the governing set-removal method's stress
+ * basis and its allowable before or after set removal, as the review compares them at solid.
+ */
 export function stressMargin(req: RequirementInternal, r: CompressionReport): number {
   const share = (r.freeLength - req.deepestLength) / (r.freeLength - r.solidLength);
-  const set = r.setRemoval.required;
-  const stressed = share * (set ? r.stressAtSolidUncorrected : r.stressAtSolid);
-  return (set ? r.allowableStressSetRemoved : r.allowableStress) / stressed - 1;
+  const s = r.setRemoval;
+  return (s.required ? s.allowableAfter : s.allowableBefore) / (share * s.stressAtSolid) - 1;
 }
 
 /** Walks one combination's diameters; the engine then judges survivors in order of wire used. */

@@ -1,4 +1,9 @@
 /** The cautions every printed document carries (common trade practice, in the project's own words; see docs/sources.md). */
+import { effectiveFinish } from '../finishing/effective';
+import type { FinishChoice } from '../finishing/effective';
+import type { ManufacturingPlan } from '../process/plan';
+import type { OperationKind } from '../process/types';
+import type { Finish } from '../settings/schema';
 import type { NoticeModel } from './types';
 
 export const STORED_ENERGY_CAUTION =
@@ -41,4 +46,14 @@ export function safetyNotes(c: SafetyContext): string[] {
   if (c.grinds) notes.push('Grinding wheels can burst if misused: check each wheel, its flanges and the guard before the run.');
   if (c.heatTreats) notes.push('Ovens and plating lines are hot and use acids: follow the local occupational-safety rules.');
   return notes;
+}
+
+/** What the floor must know for this plan: from its operations and the order's effective finish and bake. */
+export function planSafetyNotes(plan: ManufacturingPlan, spec: FinishChoice, finishes: readonly Finish[]): string[] {
+  const has = (kind: OperationKind) => plan.operations.some((op) => op.kind === kind);
+  const { finish, bakeSpecification } = effectiveFinish(spec, finishes);
+  return safetyNotes({
+    pressesToSolid: has('set'), grinds: has('grind'), heatTreats: has('stress-relieve') || has('bake'),
+    electroplated: finish?.electroplated ?? false, bakeSpecification,
+  });
 }

@@ -1,5 +1,7 @@
 import type { Settings } from '../settings/schema';
-import type { Spec } from '../spec';
+import type { Spec, SpringKind } from '../spec';
+import { effectiveFinish } from '../finishing/effective';
+import { kindLabel } from '../vocabulary';
 import type { Field, Letterhead } from './types';
 
 export function letterhead(settings: Settings): Letterhead {
@@ -20,8 +22,8 @@ export function drawingText(number: string, revision: string): string {
 }
 
 /** "compression" → "Compression spring", the drawing's heading when the part has no number. */
-export function kindTitle(kind: string): string {
-  return `${kind.slice(0, 1).toUpperCase()}${kind.slice(1)} spring`;
+export function kindTitle(kind: SpringKind): string {
+  return `${kindLabel(kind)} spring`;
 }
 
 /**
@@ -29,12 +31,9 @@ export function kindTitle(kind: string): string {
  * bake: the one the customer or the finish names, never one chosen here.
  */
 export function orderFields(spec: Spec, settings: Settings): Field[] {
-  const finish = spec.finish && spec.finish !== 'none' ? settings.finishes.find((f) => f.id === spec.finish) : undefined;
-  const fields: Field[] = [{ label: 'Finish', value: finish?.name ?? (spec.finish && spec.finish !== 'none' ? spec.finish : 'none (plain)') }];
-  if (finish?.electroplated) {
-    const bake = spec.bakeSpecification ?? finish.bakeSpecification;
-    fields.push({ label: 'Hydrogen relief bake', value: bake ?? 'to be named by the customer' });
-  }
+  const { id, finish, bakeSpecification } = effectiveFinish(spec, settings.finishes);
+  const fields: Field[] = [{ label: 'Finish', value: finish?.name ?? id ?? 'none (plain)' }];
+  if (finish?.electroplated) fields.push({ label: 'Hydrogen relief bake', value: bakeSpecification ?? 'to be named by the customer' });
   fields.push({ label: 'Tolerance grade', value: String(spec.toleranceGrade ?? settings.defaults.toleranceGrade) });
   return fields;
 }

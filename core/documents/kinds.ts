@@ -4,7 +4,7 @@ import type { Settings } from '../settings/schema';
 import type { ExtensionSpec, TorsionSpec } from '../spec';
 import type { ExtensionReport } from '../springs/extension/report';
 import type { TorsionReport } from '../springs/torsion/report';
-import { extensionEnds } from '../springs/extension/ends';
+import { extensionEndTerms, legFormTerms, loadDirectionTerms } from '../vocabulary';
 import { findGrade } from '../materials';
 import { orderFields } from './common';
 import { piecesText, plainText, wordText } from './text';
@@ -27,7 +27,7 @@ export function extensionFields(spec: ExtensionSpec, r: ExtensionReport, setting
     { label: 'Wire Ø d', value: len(r.wireDiameter) },
     { label: 'Outside Ø De', value: len(r.outerDiameter) },
     { label: 'Body coils Nb', value: plainText(r.bodyCoils) },
-    { label: 'Ends', value: r.ends.map((e) => extensionEnds[e].label).join(' / ') },
+    { label: 'Ends', value: r.ends.map((e) => extensionEndTerms[e].long).join(' / ') },
     { label: 'Free length inside ends L0', value: len(r.freeLength) },
     { label: 'Initial tension F0', value: `${force(r.initialTension)}${r.initialTensionProposed ? ' (proposed)' : ''}` },
     ...r.loads.map((l, i) => ({
@@ -51,10 +51,10 @@ export function torsionFields(spec: TorsionSpec, r: TorsionReport, settings: Set
     { label: 'Wire Ø d', value: len(r.wireDiameter) },
     { label: 'Outside Ø De', value: len(r.outerDiameter) },
     { label: 'Body coils Nb', value: plainText(r.bodyCoils) },
-    { label: 'Legs', value: spec.legs.map((l) => `${len(l.length)} ${l.form}`).join(' / ') },
+    { label: 'Legs', value: spec.legs.map((l) => `${len(l.length)} ${legFormTerms[l.form].long}`).join(' / ') },
     { label: 'Free angle', value: spec.freeAngle === undefined ? 'as drawn' : `${plainText(spec.freeAngle, 0)}°${spec.freeAngleTolerance ? ` ±${plainText(spec.freeAngleTolerance, 1)}°` : ''}` },
     { label: 'Direction of wind', value: wordText(spec.windDirection) },
-    { label: 'Loaded', value: spec.loadDirection === 'closing' ? 'closing (winds the body up)' : 'opening (unwinds the body)' },
+    { label: 'Loaded', value: loadDirectionTerms[spec.loadDirection].long },
     ...r.loads.map((l) => ({
       label: `Torque at ${plainText(l.angle, 1)}°`,
       value: l.specifiedTorque === null ? `${torque(l.torque)} (reference)` : `${torque(l.specifiedTorque)}${tolerance(l.tolerancePercent)}`,

@@ -1,6 +1,7 @@
 /** Formatting for printed documents: deterministic (no locale), in the trade's usual precision. */
 import { formatQuantity } from '../format';
 import type { Quantity, UnitSystem } from '../units';
+import { compressionEndTerms, windTerms } from '../vocabulary';
 
 /** Groups thousands with a comma: 12,345.60. */
 function grouped(fixed: string): string {
@@ -59,15 +60,10 @@ export function addDays(isoDay: string, days: number): string {
   return new Date(Date.parse(`${dayOf(isoDay)}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 }
 
-const words: Record<string, string> = {
-  'closed-ground': 'closed and ground',
-  'open-ground': 'open and ground',
-  closed: 'closed, not ground',
-  open: 'open, not ground',
-  right: 'right-hand',
-  left: 'left-hand',
-  either: 'either (maker\'s choice)',
-};
+/** Schema words the documents spell out, in the shared vocabulary's long form. */
+const words: Record<string, string> = Object.fromEntries(
+  [...Object.entries(compressionEndTerms), ...Object.entries(windTerms)].map(([id, t]) => [id, t.long]),
+);
 
 /** A schema word as the shop reads it ("closed-ground" → "closed and ground"); other text as it is. */
 export function wordText(value: string): string {

@@ -5,7 +5,7 @@ import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
 import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
-import { cautionNotice, safetyNotes } from './cautions';
+import { cautionNotice, planSafetyNotes } from './cautions';
 import { drawingText, kindTitle, letterhead, present } from './common';
 import { springContent } from './spring';
 import { dayOf, piecesText } from './text';
@@ -58,16 +58,6 @@ function findingLines(findings: readonly Finding[]): string[] {
     .map((f) => `${f.severity === 'error' ? 'ERROR' : 'Warning'}: ${f.message}${f.fix ? ` (${f.fix})` : ''}`);
 }
 
-function safety(spec: Spec, settings: Settings, plan: ManufacturingPlan): string[] {
-  const has = (kind: string) => plan.operations.some((op) => op.kind === kind);
-  const finish = settings.finishes.find((f) => f.id === spec.finish);
-  return safetyNotes({
-    pressesToSolid: has('set'), grinds: has('grind'), heatTreats: has('stress-relieve') || has('bake'),
-    electroplated: finish?.electroplated ?? false,
-    bakeSpecification: spec.bakeSpecification ?? finish?.bakeSpecification ?? null,
-  });
-}
-
 export function travellerDocument(input: TravellerInput): TravellerDocument {
   const { spec, settings, job } = input;
   const plan = planManufacture(spec, settings, job.orderQuantity, job.judgement);
@@ -82,7 +72,7 @@ export function travellerDocument(input: TravellerInput): TravellerDocument {
     operations: plan.operations.map((op) => operationModel(op, plan.units)),
     inspection: { summary: samplingSummary(plan.inspection), table: inspectionTable(plan.inspection, plan.units), signOff: INSPECTION_SIGN_OFF },
     figures: [spring.drawing, spring.diagram],
-    safety: safety(spec, settings, plan),
+    safety: planSafetyNotes(plan, spec, settings.finishes),
     findings: findingLines(plan.findings),
   };
 }

@@ -3,6 +3,8 @@
  * string. A PDF writer draws a model and nothing else, so a model kept with an issued quote prints the same
  * document years later, whatever has changed in the shop's prices or in the engine since.
  */
+import type { QuantityMap } from '../units';
+
 export type PaperSize = 'letter' | 'a4';
 
 export const DOCUMENT_VERSION = 1;
@@ -111,3 +113,19 @@ export interface TravellerDocument extends DocumentCommon {
 }
 
 export type PrintedDocument = QuoteDocument | TravellerDocument;
+
+const figureQuantities: QuantityMap = { width: 'figure', height: 'figure' };
+const tableQuantities: QuantityMap = { columns: { weight: 'ratio' } };
+
+/**
+ * What the few numbers of a document model measure; everything else in a model is text, formatted in the
+ * job's units before it gets here.
+ */
+export const documentQuantities: QuantityMap = {
+  version: 'ordinal',
+  issue: { validityDays: 'days' },
+  drawing: figureQuantities,
+  figures: figureQuantities,
+  prices: { table: tableQuantities },
+  inspection: { table: tableQuantities },
+};

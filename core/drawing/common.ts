@@ -14,6 +14,7 @@ import { group, line, plainNumber, textWidth } from './svg';
 import type { TableRow } from './table';
 import { cellPadding, dataTable } from './table';
 import { fontSize, ink, lineWeight, seriesColours } from './style';
+import { windTerms } from '../vocabulary';
 
 /** A screen rectangle. */
 export interface Box {
@@ -58,7 +59,8 @@ export function fitView(extent: Extent, box: Box): ViewPlacement {
   };
 }
 
-export const windText: Record<WindDirection, string> = { right: 'right-hand', left: 'left-hand', either: 'either' };
+/** The drawing's short words for the wind, from the shared vocabulary. */
+export const windText: Record<WindDirection, string> = { right: windTerms.right.short, left: windTerms.left.short, either: windTerms.either.short };
 
 const sheetMargin = 8;
 

@@ -4,14 +4,10 @@ import type { CompressionLoadResult, CompressionReport } from '../springs/compre
 import { formatQuantity } from '../format';
 import { plainNumber } from './svg';
 import type { TableRow } from './table';
+import type { Wind } from '../vocabulary';
+import { compressionEndTerms, symbols as s, windTerms } from '../vocabulary';
 
-export type WindDirection = 'right' | 'left' | 'either';
-
-const windText: Record<WindDirection, string> = { right: 'right-hand', left: 'left-hand', either: 'either' };
-
-const endsText: Record<CompressionEnds, string> = {
-  'closed-ground': 'closed, ground', closed: 'closed', 'open-ground': 'open, ground', open: 'open',
-};
+export type WindDirection = Wind;
 
 export interface DataBlockInput {
   report: CompressionReport;
@@ -30,7 +26,7 @@ export function wireDiameter(report: CompressionReport): number {
 
 export function diameterLabel(input: Pick<DataBlockInput, 'report' | 'diameter'>): { symbol: string; value: number } {
   const r = input.report;
-  return input.diameter === 'inner' ? { symbol: 'Di', value: r.innerDiameter } : { symbol: 'De', value: r.outerDiameter };
+  return input.diameter === 'inner' ? { symbol: s.innerDiameter, value: r.innerDiameter } : { symbol: s.outerDiameter, value: r.outerDiameter };
 }
 
 export function parameterRows(input: DataBlockInput): TableRow[] {
@@ -38,16 +34,16 @@ export function parameterRows(input: DataBlockInput): TableRow[] {
   const diameter = diameterLabel(input);
   const rows: [string, string][] = [
     ['Material', r.material],
-    ['d', lengthText(r, wireDiameter(r))],
+    [s.wireDiameter, lengthText(r, wireDiameter(r))],
     [diameter.symbol, lengthText(r, diameter.value)],
-    ['L0', lengthText(r, r.freeLength)],
-    ['n', plainNumber(r.activeCoils)],
-    ['nt', plainNumber(r.totalCoils)],
-    ['Ls', lengthText(r, r.solidLength)],
-    ['R', formatQuantity(r.rate, 'rate', r.units)],
-    ['Ends', endsText[input.ends]],
+    [s.freeLength, lengthText(r, r.freeLength)],
+    [s.activeCoils, plainNumber(r.activeCoils)],
+    [s.totalCoils, plainNumber(r.totalCoils)],
+    [s.solidLength, lengthText(r, r.solidLength)],
+    [s.rate, formatQuantity(r.rate, 'rate', r.units)],
+    ['Ends', compressionEndTerms[input.ends].short],
   ];
-  if (input.wind) rows.push(['Wind', windText[input.wind]]);
+  if (input.wind) rows.push(['Wind', windTerms[input.wind].short]);
   return rows.map((cells) => ({ cells }));
 }
 

@@ -1,11 +1,11 @@
 /** The data block beside an extension spring view, with the symbols of ISO 2162-2 / EN 13906-2. */
 import { formatQuantity } from '../format';
-import { extensionEnds } from '../springs/extension/ends';
 import type { ExtensionReport } from '../springs/extension/report';
 import { angleText, specifiedText, windText } from './common';
 import type { WindDirection } from './compression-data';
 import { plainNumber } from './svg';
 import type { TableRow } from './table';
+import { extensionEndTerms, symbols as s } from '../vocabulary';
 
 /** Angle of one loop to the other about the axis (0° in line), as the drawing asks for it. */
 export interface LoopPosition {
@@ -18,7 +18,7 @@ export function extensionLength(report: ExtensionReport, value: number): string 
 }
 
 function endRows(report: ExtensionReport): [string, string][] {
-  const [first, second] = report.ends.map((form) => extensionEnds[form].label);
+  const [first, second] = report.ends.map((form) => extensionEndTerms[form].short);
   return first === second ? [['Ends', `${first}, both`]] : [['End 1', first ?? ''], ['End 2', second ?? '']];
 }
 
@@ -29,14 +29,14 @@ export function extensionParameterRows(
   const length = (v: number) => extensionLength(r, v);
   const rows: [string, string][] = [
     ['Material', r.material],
-    ['d', length(r.wireDiameter)],
-    ['De', length(r.outerDiameter)],
-    ['Nb', plainNumber(r.bodyCoils)],
-    ['L0', length(r.freeLength)],
-    ['F0', formatQuantity(r.initialTension, 'force', r.units)],
-    ['R', formatQuantity(r.rate, 'rate', r.units)],
-    ['Ln', length(r.maximumSafeLength)],
-    ['Fn', formatQuantity(r.maximumSafeForce, 'force', r.units)],
+    [s.wireDiameter, length(r.wireDiameter)],
+    [s.outerDiameter, length(r.outerDiameter)],
+    [s.bodyCoils, plainNumber(r.bodyCoils)],
+    [s.freeLength, length(r.freeLength)],
+    [s.initialTension, formatQuantity(r.initialTension, 'force', r.units)],
+    [s.rate, formatQuantity(r.rate, 'rate', r.units)],
+    [s.maximumSafeLength, length(r.maximumSafeLength)],
+    [s.maximumSafeForce, formatQuantity(r.maximumSafeForce, 'force', r.units)],
     ...endRows(r),
   ];
   if (stated.directionOfWind) rows.push(['Wind', windText[stated.directionOfWind]]);

@@ -12,6 +12,7 @@ import { loadPoints, risingLabel, toleranceLegend, upperValue } from './common';
 import type { LoadDeflectionOptions } from './load-deflection';
 import { group, line, polyline, svgDocument } from './svg';
 import { lineWeight, mutedInk, seriesColours } from './style';
+import { symbols } from '../vocabulary';
 
 interface Axes {
   chart: Chart;
@@ -79,12 +80,12 @@ export function extensionLoadDiagram(report: ExtensionReport, options: LoadDefle
   const limit = dashed(mutedInk);
   return svgDocument(c.width, c.height, [
     axesMarkup(c, { x: `${lengthWord} (${unitSymbol('length', report.units)})`, y: `Force (${unitSymbol('force', report.units)})` }),
-    verticalMarker(c, a.xOf(report.maximumSafeLength), 'Ln', limit),
+    verticalMarker(c, a.xOf(report.maximumSafeLength), symbols.maximumSafeLength, limit),
     group([polyline(characteristic, stroke)], 'characteristic'),
     initialTension(a, report),
     loadPoints(c, a.points),
     legend(c, [
-      { label: 'characteristic', stroke }, { label: 'Ln maximum safe length', stroke: limit }, ...toleranceLegend(a.points, 'force'),
+      { label: 'characteristic', stroke }, { label: `${symbols.maximumSafeLength} maximum safe length`, stroke: limit }, ...toleranceLegend(a.points, 'force'),
     ], 'left'),
   ]);
 }

@@ -7,6 +7,7 @@ import { at, axesMarkup, dashed, legend, marker, plotArea, pointLabel, verticalM
 import type { Point } from './svg';
 import { group, line, polyline, svgDocument } from './svg';
 import { ink, lineWeight, mutedInk, seriesColours } from './style';
+import { symbols } from '../vocabulary';
 
 export interface LoadDeflectionOptions extends ChartSize {
   abscissa?: 'length' | 'deflection';
@@ -66,9 +67,9 @@ function testLoads(a: Axes, report: CompressionReport): string {
 function limits(a: Axes, report: CompressionReport): { markup: string[]; legend: LegendEntry[] } {
   const markup = [
     verticalMarker(a.chart, a.xOf(report.solidLength), 'Ls', { stroke: mutedInk, width: lineWeight.thin }),
-    verticalMarker(a.chart, a.xOf(report.minimumWorkingLength), 'Ln', dashed(mutedInk)),
+    verticalMarker(a.chart, a.xOf(report.minimumWorkingLength), symbols.minimumWorkingLength, dashed(mutedInk)),
   ];
-  const entries: LegendEntry[] = [{ label: 'Ln minimum working length', stroke: dashed(mutedInk) }];
+  const entries: LegendEntry[] = [{ label: `${symbols.minimumWorkingLength} minimum working length`, stroke: dashed(mutedInk) }];
   if (report.loads.some((l) => l.specifiedForce !== null && l.tolerancePercent !== null)) {
     entries.push({ label: 'specified force and tolerance', stroke: { stroke: ink, width: lineWeight.thin } });
   }

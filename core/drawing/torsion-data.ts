@@ -6,10 +6,7 @@ import { angleText, specifiedText, windText } from './common';
 import type { LegLayout } from './torsion-legs';
 import { plainNumber } from './svg';
 import type { TableRow } from './table';
-
-const loadingText: Record<TorsionReport['loadDirection'], string> = {
-  closing: 'closing (winds up)', opening: 'opening (unwinds)',
-};
+import { loadDirectionTerms, symbols as s } from '../vocabulary';
 
 export function torsionLength(report: TorsionReport, value: number): string {
   return formatQuantity(value, 'length', report.units);
@@ -30,19 +27,19 @@ export function torsionParameterRows(report: TorsionReport, layout: LegLayout, f
   const length = (v: number) => torsionLength(r, v);
   const rows: [string, string][] = [
     ['Material', r.material],
-    ['d', length(r.wireDiameter)],
-    ['De', length(r.outerDiameter)],
-    ['Di', length(r.innerDiameter)],
-    ['Nb', plainNumber(r.bodyCoils)],
+    [s.wireDiameter, length(r.wireDiameter)],
+    [s.outerDiameter, length(r.outerDiameter)],
+    [s.innerDiameter, length(r.innerDiameter)],
+    [s.bodyCoils, plainNumber(r.bodyCoils)],
     ['Leg 1', legText(r, r.legLengths[0], layout.legs[0].form)],
     ['Leg 2', legText(r, r.legLengths[1], layout.legs[1].form)],
     ['Free angle', freeAngleText(layout, freeAngleTolerance)],
     ['Wind', windText[r.windDirection]],
-    ['Loading', loadingText[r.loadDirection]],
-    ['R', formatQuantity(r.ratePerDegree, 'torqueRatePerDegree', r.units)],
+    ['Loading', loadDirectionTerms[r.loadDirection].short],
+    [s.rate, formatQuantity(r.ratePerDegree, 'torqueRatePerDegree', r.units)],
   ];
   if (r.arborDiameter !== null) rows.push(['Arbor', length(r.arborDiameter)]);
-  if (r.maximumAngle > 0) rows.push([`Di at ${angleText(r.maximumAngle)}`, length(r.insideDiameterAtLoad)]);
+  if (r.maximumAngle > 0) rows.push([`${s.innerDiameter} at ${angleText(r.maximumAngle)}`, length(r.insideDiameterAtLoad)]);
   return rows.map((cells) => ({ cells }));
 }
 

@@ -13,8 +13,11 @@ const bands: readonly (readonly [number, number])[] = [
   [10, 0.05], [11.1, 0.07], [18, 0.08], [Infinity, 0.09],
 ];
 
+/** The standard the bands come from, as a job's documents cite it (the source below adds which bands were checked). */
+export const WIRE_DIAMETER_TOLERANCE_STANDARD = 'EN 10218-2 class T5 (as used by EN 10270-1)';
+
 export const wireDiameterToleranceSource: Sourced = {
-  source: 'EN 10218-2 class T5 (as used by EN 10270-1); 0.30–0.50 mm band via durofer.ch, other bands from memory',
+  source: `${WIRE_DIAMETER_TOLERANCE_STANDARD}; 0.30–0.50 mm band via durofer.ch, other bands from memory`,
   verified: false,
 };
 

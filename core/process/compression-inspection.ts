@@ -3,7 +3,7 @@ import { endSquarenessTolerance, freeLengthTolerance, loadTolerance } from '../t
 import type { CompressionDesign } from '../springs/compression/design';
 import type { CompressionReport } from '../springs/compression/report';
 import { endForms } from '../springs/compression/ends';
-import { wireDiameterToleranceSource } from '../materials/diameter-tolerance';
+import { WIRE_DIAMETER_TOLERANCE_STANDARD } from '../materials/diameter-tolerance';
 import type { Finding } from '../result';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { diameterCharacteristic, HUNDRED_PERCENT_LOAD_TOLERANCE, LOAD_GAUGE, limited, reference, sampledInspection } from './inspection-plan';
@@ -33,7 +33,7 @@ function lengthCharacteristics(x: CompressionDesign, r: CompressionReport, grade
   if (fl.ok && !fl.value.reference) out.push(limited('Free length', 'length', r.freeLength, fl.value.plusMinus, 'height gauge', fl.source));
   else out.push(reference('Free length (reference)', 'length', r.freeLength, 'height gauge', fl.ok ? fl.source : fl.message));
   out.push({ ...reference('Solid length (maximum)', 'length', r.solidLength, 'load tester to solid',
-    `${r.solidLengthMaximumSource}, d_max = d + wire tolerance (${wireDiameterToleranceSource.source})`),
+    `${r.solidLengthMaximumSource}, d_max = d + wire tolerance (${WIRE_DIAMETER_TOLERANCE_STANDARD}, partly from memory)`),
   upper: r.solidLengthMaximum, reference: false });
   if (endForms[x.ends].ground) {
     const sq = endSquarenessTolerance({ L0: r.freeLength, D: r.meanDiameter, d: x.d, grade, groundEnds: true });

@@ -1,6 +1,8 @@
 import type { ExtensionDesign } from '../springs/extension/design';
 import type { ExtensionReport } from '../springs/extension/report';
 import { extensionEnds } from '../springs/extension/ends';
+import { formatQuantity } from '../format';
+import { extensionEndTerms } from '../vocabulary';
 import type { Settings } from '../settings/schema';
 import type { Operation } from './types';
 import { coilerPiecesPerHour, machinePiecesPerHour } from './work-centre';
@@ -9,7 +11,7 @@ import { finishOperations, inspect, machineOperation, pack, sequenced, stressRel
 
 const endText = (x: ExtensionDesign, i: 0 | 1): string => {
   const e = x.ends[i];
-  return `${extensionEnds[e.form].label}${e.extension > 0 ? `, straight ${e.extension.toFixed(2)} mm` : ''}`;
+  return `${extensionEndTerms[e.form].short}${e.extension > 0 ? `, straight ${formatQuantity(e.extension, 'length', x.units)}` : ''}`;
 };
 
 function coil(settings: Settings, x: ExtensionDesign, r: ExtensionReport, c: RoutingChoices, loopsOnCoiler: boolean): Draft {

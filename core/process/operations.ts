@@ -4,6 +4,7 @@ import type { Operation, OperationSetting } from './types';
 import type { WorkCentreOffer } from './work-centre';
 import { capableMachines, machinePiecesPerHour } from './work-centre';
 import { bakeGuidance } from '../finishing/bake';
+import { formatQuantity } from '../format';
 
 /** Operations every kind of spring shares: stress relief, peening, finishing and bake, inspection, packing. */
 /** Job-level choices the routing depends on (from the spec's order fields). */
@@ -36,7 +37,7 @@ export function machineOperation(
 ): Draft {
   const machineKind = kind === 'finish' || kind === 'bake' || kind === 'inspect' || kind === 'extra' ? null : kind;
   const offers = machineKind ? offersFor(settings, machineKind, x.d, piecesPerHour) : [];
-  const notes = offers.length > 0 || MANUAL.has(kind) ? [] : [`no ${kind} machine in the shop's list takes ${x.d.toFixed(2)} mm wire`];
+  const notes = offers.length > 0 || MANUAL.has(kind) ? [] : [`no ${kind} machine in the shop's list takes ${formatQuantity(x.d, 'length', x.units)} wire`];
   return {
     kind, title, workCentre: null, choice: null, offers, outside: false, settings: opSettings,
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: scrapOf(settings, kind), notes,
@@ -46,7 +47,7 @@ export function machineOperation(
 export function stressRelieve(settings: Settings, x: CoilBody): Draft {
   const op = machineOperation(settings, x, 'stress-relieve', 'Stress relieve', [
     { label: 'Temperature', value: x.wire.stressRelief.temperature, quantity: 'temperature' },
-    { label: 'Time at temperature (min)', value: x.wire.stressRelief.minutes },
+    { label: 'Time at temperature', value: x.wire.stressRelief.minutes, quantity: 'minutes' },
     { label: 'Coil diameter in the oven', value: x.wire.stressRelief.diameterChange },
   ], () => null);
   op.notes.push('time is at temperature; add heat-up for batch loads');

@@ -1,29 +1,16 @@
 import type { Finding } from '../result';
-import type { QuantityMap, UnitSystem } from '../units';
-import { convertFields, fromInternal } from '../units';
+import type { QuantityMap } from '../units';
+import { convertFields, OWN } from '../units';
 import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import type { ToleranceGrade } from '../tolerances';
 import type { CoilBody } from '../springs/coil-body';
-import { compressionDesign } from '../springs/compression/design';
-import { analyseCompression } from '../springs/compression/analyse';
-import { extensionDesign } from '../springs/extension/design';
-import { analyseExtension } from '../springs/extension/analyse';
-import { torsionDesign } from '../springs/torsion/design';
-import { analyseTorsion } from '../springs/torsion/analyse';
-import { reviewCompression } from '../review/compression';
-import { reviewExtension } from '../review/extension';
-import { reviewTorsion } from '../review/torsion';
+import { kindEntryOf } from '../kinds/registry';
 import { checkBakeSpecification } from '../finishing/bake';
+import { effectiveFinish } from '../finishing/effective';
 import { findGrade } from '../materials';
-import { compressionRouting } from './compression-routing';
-import { extensionRouting } from './extension-routing';
-import { torsionRouting } from './torsion-routing';
 import type { RoutingChoices } from './operations';
-import { compressionInspection } from './compression-inspection';
-import { extensionInspection } from './extension-inspection';
-import { torsionInspection } from './torsion-inspection';
-import type { Characteristic, InspectionPlan } from './inspection-plan';
+import type { InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
 import { assignWorkCentres } from './assign';
 import { judgedOperations, pinsOf, withRunOverrides } from './judged-routing';
@@ -31,7 +18,7 @@ import type { RemovedOperation } from './judged-routing';
 import { noJudgement } from '../quoting/judgement';
 import type { JobJudgement } from '../quoting/judgement';
 import { wirePrice } from '../costing/wire-price';
-import type { LotWire, Operation, OperationSetting } from './types';
+import type { LotWire, Operation } from './types';
 
 /** How the shop makes one order of a spring. Internal units; `planInSpecUnits` converts out. */
 export interface ManufacturingPlan {
@@ -63,13 +50,11 @@ function wireDiameterTolerance(gradeId: string): string {
 }
 
 function routingChoices(spec: Spec, settings: Settings, findings: Finding[], tensileStrength: number): RoutingChoices {
-  const finishId = spec.finish ?? 'none';
-  const finish = finishId === 'none' ? null : settings.finishes.find((f) => f.id === finishId) ?? null;
-  if (finishId !== 'none' && !finish) {
+  const { id: finishId, finish, bakeSpecification: bake } = effectiveFinish(spec, settings.finishes);
+  if (finishId !== null && !finish) {
     findings.push({ code: 'unknown-finish', severity: 'error', path: 'finish',
       message: `finish "${finishId}" is not in the shop's finishes`, fix: 'choose one from Settings → Finishes, or "none"' });
   }
-  const bake = spec.bakeSpecification ?? finish?.bakeSpecification ?? null;
   if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength));
   const peened = spec.duty.type === 'cyclic' && spec.duty.peened;
   return {
@@ -96,35 +81,16 @@ const unknownGrade = (spec: Spec): never => {
 };
 
 function plannerFor(spec: Spec, settings: Settings): KindPlanner {
-  switch (spec.kind) {
-    case 'compression': {
-      const x = compressionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseCompression(x, settings.defaults.setRemovalMethod);
-      return {
-        body: x, findings: reviewCompression(x, r), coiledFreeLength: r.coiler.freeLength, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => compressionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => compressionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-    case 'extension': {
-      const x = extensionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseExtension(x);
-      return {
-        body: x, findings: reviewExtension(x, r), coiledFreeLength: r.freeLength, freeLength: r.freeLength, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => extensionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => extensionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-    case 'torsion': {
-      const x = torsionDesign(spec) ?? unknownGrade(spec);
-      const r = analyseTorsion(x);
-      return {
-        body: x, findings: reviewTorsion(x, r), coiledFreeLength: null, freeLength: null, wireLength: r.wireLength, mass: r.mass,
-        route: (c) => torsionRouting(settings, x, r, c),
-        inspect: (lot, aql, grade, f) => torsionInspection(x, r, lot, aql, grade, f),
-      };
-    }
-  }
+  const kind = kindEntryOf(spec.kind);
+  const x = kind.design(spec) ?? unknownGrade(spec);
+  const r = kind.analyse(x, settings);
+  const lengths = kind.freeLengths(r);
+  return {
+    body: x, findings: kind.review(x, r), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
+    wireLength: r.wireLength, mass: r.mass,
+    route: (c) => kind.routing(settings, x, r, c),
+    inspect: (lot, aql, grade, f) => kind.inspection(x, r, lot, aql, grade, f),
+  };
 }
 
 /** The wire in one piece at the newest price on file (0 when none): what a scrapped piece throws away. */
@@ -172,28 +138,30 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
   };
 }
 
-/** Unit map for converting a plan to the spec's units (operation settings carry their own quantity). */
-const planQuantities: QuantityMap = {
-  material: { wireDiameter: 'length', tensileStrength: 'stress' },
-  coiledFreeLength: 'length', freeLength: 'length', wireLengthPerPiece: 'length', massPerPiece: 'mass', massPer1000: 'massBulk',
+/** What each number of an operation measures; a setting names its own quantity. */
+export const operationQuantities: QuantityMap = {
+  sequence: 'ordinal', setupMinutes: 'minutes', piecesPerHour: 'perHour',
+  batch: { capacityPieces: 'count', cycleMinutes: 'minutes', batches: 'count' },
+  scrapFraction: 'ratio', settings: { value: OWN },
 };
 
-const convertSetting = (s: OperationSetting, units: UnitSystem): OperationSetting =>
-  s.quantity && typeof s.value === 'number' ? { ...s, value: fromInternal(s.value, s.quantity, units) } : s;
+/** What each number of an inspection plan measures; a characteristic names its own quantity. */
+export const inspectionQuantities: QuantityMap = {
+  lotSize: 'count', aql: 'percent', sampleSize: 'count', accept: 'count', reject: 'count',
+  characteristics: { atLength: 'length', nominal: OWN, lower: OWN, upper: OWN },
+};
 
-const convertCharacteristic = (c: Characteristic, units: UnitSystem): Characteristic => {
-  const out = (v: number | null) => (v === null ? null : fromInternal(v, c.quantity, units));
-  const atLength = c.atLength === null ? null : fromInternal(c.atLength, 'length', units);
-  return { ...c, nominal: fromInternal(c.nominal, c.quantity, units), lower: out(c.lower), upper: out(c.upper), atLength };
+/** What each number of a plan measures; `planInSpecUnits` converts with it. The lot's wire stays in m and kg. */
+export const planQuantities: QuantityMap = {
+  orderQuantity: 'count', toleranceGrade: 'ordinal',
+  material: { wireDiameter: 'length', tensileStrength: 'stress' },
+  coiledFreeLength: 'length', freeLength: 'length', wireLengthPerPiece: 'length', massPerPiece: 'mass', massPer1000: 'massBulk',
+  lotWire: { startQuantity: 'count', metres: 'stockLength', kg: 'stockMass' },
+  operations: operationQuantities,
+  inspection: inspectionQuantities,
 };
 
 /** The plan in the spec's unit system; the lot's wire stays in metres and kg, as wire is bought. */
 export function planInSpecUnits(plan: ManufacturingPlan): ManufacturingPlan {
-  const u = plan.units;
-  const base = convertFields(plan, planQuantities, u, 'out');
-  return {
-    ...base,
-    operations: plan.operations.map((op) => ({ ...op, settings: op.settings.map((s) => convertSetting(s, u)) })),
-    inspection: { ...plan.inspection, characteristics: plan.inspection.characteristics.map((c) => convertCharacteristic(c, u)) },
-  };
+  return convertFields(plan, planQuantities, plan.units, 'out');
 }

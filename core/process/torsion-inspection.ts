@@ -3,6 +3,7 @@ import type { TorsionDesign } from '../springs/torsion/design';
 import type { TorsionReport } from '../springs/torsion/report';
 import { realisticFreeAngleTolerance } from '../review/torsion';
 import type { Finding } from '../result';
+import { DEFAULT_LOAD_TOLERANCE_PERCENT } from '../springs/specified';
 import type { Characteristic, InspectionPlan } from './inspection-plan';
 import { diameterCharacteristic, HUNDRED_PERCENT_LOAD_TOLERANCE, limited, reference, sampledInspection } from './inspection-plan';
 
@@ -14,7 +15,7 @@ function torqueCharacteristic(x: TorsionDesign, r: TorsionReport, grade: Toleran
   const l = r.loads[i]!;
   const name = `Torque at ${l.angle}°`;
   if (l.specifiedTorque === null) return reference(`${name} (reference)`, 'torque', l.torque, GAUGE, 'calculated');
-  const percent = x.loads[i]?.tolerancePercent ?? 10;
+  const percent = x.loads[i]?.tolerancePercent ?? DEFAULT_LOAD_TOLERANCE_PERCENT;
   const source = x.loads[i]?.tolerancePercent !== undefined ? 'drawing' : `${TORSION_TOLERANCE_SOURCE}; ±10 % common trade practice`;
   return limited(name, 'torque', l.specifiedTorque, (l.specifiedTorque * percent) / 100, GAUGE, source,
     grade === 1 || percent < HUNDRED_PERCENT_LOAD_TOLERANCE);

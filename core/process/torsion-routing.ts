@@ -6,6 +6,8 @@ import { coilerPiecesPerHour, machinePiecesPerHour } from './work-centre';
 import type { Draft, RoutingChoices } from './operations';
 import { finishOperations, inspect, machineOperation, pack, sequenced, stressRelieve } from './operations';
 import { TORSION_TOLERANCE_SOURCE } from './torsion-inspection';
+import { legFormTerms } from '../vocabulary';
+import { formatQuantity } from '../format';
 
 function coil(settings: Settings, x: TorsionDesign, r: TorsionReport): Draft {
   return machineOperation(settings, x, 'coil', 'Coil with legs', [
@@ -22,7 +24,7 @@ function coil(settings: Settings, x: TorsionDesign, r: TorsionReport): Draft {
 
 function formLegs(settings: Settings, x: TorsionDesign): Draft {
   return machineOperation(settings, x, 'leg-form', 'Form legs', x.legs.map((leg, i) => ({
-    label: `Leg ${i + 1}`, value: `${leg.form}${leg.bendRadius === null ? '' : `, bend radius ${leg.bendRadius.toFixed(2)} mm`}`,
+    label: `Leg ${i + 1}`, value: `${legFormTerms[leg.form].long}${leg.bendRadius === null ? '' : `, bend radius ${formatQuantity(leg.bendRadius, 'length', x.units)}`}`,
   })), machinePiecesPerHour);
 }
 

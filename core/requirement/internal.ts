@@ -26,6 +26,8 @@ export interface RequirementInternal {
   families?: GradeFamily[];
   ends: CompressionEnds[];
   wireSizes: WireSizeSource;
+  /** EN 15800 tolerance grade the drawing will name, if the customer gives one. */
+  toleranceGrade: 1 | 2 | 3 | undefined;
 }
 
 export function requirementInternal(r: CompressionRequirement): RequirementInternal {
@@ -55,5 +57,6 @@ export function requirementInternal(r: CompressionRequirement): RequirementInter
     seating: r.seating,
     deepestLength: Math.min(...working),
     grades: r.choices.grades, families: r.choices.families, ends: r.choices.ends, wireSizes: r.choices.wireSizes,
+    toleranceGrade: r.choices.toleranceGrade,
   };
 }

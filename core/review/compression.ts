@@ -42,10 +42,15 @@ const boundWords: Record<CoiledBound, { message: string; fix: string }> = {
   },
 };
 
-/** The set the first-off can tell from the coiling scatter: at least the free-length tolerance (common trade practice). */
-function setControlTolerance(x: CompressionDesign, r: CompressionReport): { plusMinus: number; source: string } | null {
+/**
+ * The set the first-off can tell from the coiling scatter: at least the free-length tolerance (common trade
+ * practice). Null when the shop's table gives no tolerance for the spring. The design search screens with it too.
+ */
+export function setControlTolerance(
+  s: { freeLength: number; toleranceGrade: 1 | 2 | 3 | undefined; springIndex: number; activeCoils: number },
+): { plusMinus: number; source: string } | null {
   const t = freeLengthTolerance({
-    L0: r.freeLength, grade: x.toleranceGrade ?? 2, index: r.springIndex, activeCoils: r.activeCoils, loadSpecified: false,
+    L0: s.freeLength, grade: s.toleranceGrade ?? 2, index: s.springIndex, activeCoils: s.activeCoils, loadSpecified: false,
   });
   return t.ok && !t.value.reference ? { plusMinus: t.value.plusMinus, source: t.source } : null;
 }
@@ -53,7 +58,9 @@ function setControlTolerance(x: CompressionDesign, r: CompressionReport): { plus
 function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const s = r.setRemoval;
   const u = x.units;
-  const tolerance = setControlTolerance(x, r);
+  const tolerance = setControlTolerance({
+    freeLength: r.freeLength, toleranceGrade: x.toleranceGrade, springIndex: r.springIndex, activeCoils: r.activeCoils,
+  });
   if (tolerance && (s.expectedSet ?? 0) < tolerance.plusMinus) {
     add(out, 'warning', 'set-below-length-tolerance', 'freeLength',
       `the expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)} is under the free-length tolerance ` +

@@ -26,4 +26,15 @@ export const reviewLimits = {
   minimumLegBendRadius: 1,
   /** Torsion arbor: about 10 % clearance to the smallest loaded inside diameter (common practice). */
   minimumArborClearance: 0.1,
+  /**
+   * A stress from 85 % of its allowable is shown as near it, and a compression spring's solid stress from
+   * there on calls for the near-solid caution (common trade practice: keep a margin to the allowable).
+   */
+  nearAllowableRatio: 0.85,
 } as const;
+
+/** Whether a stress is near its allowable, or over it. */
+export function allowableBand(stress: number, allowable: number): 'ok' | 'near' | 'over' {
+  const ratio = stress / allowable;
+  return ratio > 1 ? 'over' : ratio >= reviewLimits.nearAllowableRatio ? 'near' : 'ok';
+}

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { QuantityMap } from '../units';
 import { SPEC_VERSION } from './versions';
 
 /** Schema pieces shared by every spring kind. Values are in the spec's own unit system. */
@@ -63,3 +64,23 @@ export const cyclicDutySchema = z
     frequency: positive.optional(),
   })
   .strict();
+
+/**
+ * What each number of a spec measures, declared once: the engine converts a spec in with it, the form's
+ * unit switch converts what was typed with it, and the unit test walks every number against it.
+ */
+export const coilBodyQuantities: QuantityMap = {
+  version: 'ordinal', wireDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length', meanDiameter: 'length',
+  materialOverrides: { shearModulus: 'stress', elasticModulus: 'stress', tensileStrength: 'stress', density: 'density' },
+};
+
+export const orderQuantities: QuantityMap = {
+  quantities: 'count', toleranceGrade: 'ordinal', aql: 'percent',
+  serviceTemperature: { min: 'temperature', max: 'temperature' },
+};
+
+/** A test point along the axis: its length, the force asked there and the tolerance on that force. */
+export const lengthLoadQuantities: QuantityMap = { length: 'length', force: 'force', tolerancePercent: 'percent' };
+
+/** Cyclic duty between two working lengths (compression, extension). */
+export const lengthDutyQuantities: QuantityMap = { between: 'length', cycles: 'count', frequency: 'frequency' };

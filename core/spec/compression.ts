@@ -1,5 +1,9 @@
 import { z } from 'zod';
-import { coilBodyShape, cyclicDutySchema, toleranceShape, orderFieldsShape, positive, staticDutySchema } from './common';
+import type { QuantityMap } from '../units';
+import {
+  coilBodyQuantities, coilBodyShape, cyclicDutySchema, lengthDutyQuantities, lengthLoadQuantities, orderFieldsShape,
+  orderQuantities, positive, staticDutySchema, toleranceShape,
+} from './common';
 
 export const compressionEndsSchema = z.enum(['closed-ground', 'closed', 'open-ground', 'open']);
 
@@ -45,3 +49,10 @@ export type CompressionSpecInput = z.input<typeof compressionSpecSchema>;
 export type CompressionEnds = z.infer<typeof compressionEndsSchema>;
 export type FreeParameter = z.infer<typeof freeParameterSchema>;
 export type Seating = z.infer<typeof seatingSchema>;
+
+/** What each number of a compression spec measures (see coilBodyQuantities). */
+export const compressionSpecQuantities: QuantityMap = {
+  ...coilBodyQuantities, ...orderQuantities,
+  totalCoils: 'count', activeCoils: 'count', freeLength: 'length',
+  loads: lengthLoadQuantities, duty: lengthDutyQuantities,
+};

@@ -1,5 +1,9 @@
 import { z } from 'zod';
-import { coilBodyShape, cyclicDutySchema, nonNegative, orderFieldsShape, positive, staticDutySchema, toleranceShape } from './common';
+import type { QuantityMap } from '../units';
+import {
+  coilBodyQuantities, coilBodyShape, cyclicDutySchema, lengthDutyQuantities, lengthLoadQuantities, nonNegative,
+  orderFieldsShape, orderQuantities, positive, staticDutySchema, toleranceShape,
+} from './common';
 
 /** End forms of extension springs (EN 13906-2 Annex A names the same families). */
 export const extensionEndFormSchema = z.enum(['machine-loop', 'full-loop', 'crossover-loop', 'side-loop', 'extended-hook']);
@@ -50,3 +54,11 @@ export type ExtensionSpec = z.infer<typeof extensionSpecSchema>;
 export type ExtensionSpecInput = z.input<typeof extensionSpecSchema>;
 export type ExtensionEndForm = z.infer<typeof extensionEndFormSchema>;
 export type ExtensionEndInput = z.infer<typeof extensionEndSchema>;
+
+/** What each number of an extension spec measures (see coilBodyQuantities). */
+export const extensionSpecQuantities: QuantityMap = {
+  ...coilBodyQuantities, ...orderQuantities,
+  bodyCoils: 'count', ends: { gap: 'length', extension: 'length', bendRadius: 'length' },
+  freeLength: 'length', bodyLength: 'length', initialTension: 'force', loads: lengthLoadQuantities,
+  loopAngle: 'angle', loopAngleTolerance: 'angle', duty: lengthDutyQuantities,
+};

@@ -2,12 +2,10 @@ import { z } from 'zod';
 import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
+import { kindEntryOf } from '../kinds/registry';
 import { compressionSpecSchema } from './compression';
-import { compressionSpecErrors } from './compression-rules';
 import { extensionSpecSchema } from './extension';
-import { extensionSpecErrors } from './extension-rules';
 import { torsionSpecSchema } from './torsion';
-import { torsionSpecErrors } from './torsion-rules';
 import { upgradeSpec } from './versions';
 
 export * from './compression';
@@ -16,13 +14,17 @@ export * from './torsion';
 export { SPEC_VERSION, specUpgrades, upgradeSpec } from './versions';
 export type { RawSpec, SpecUpgrade } from './versions';
 
-/** The one input shape of a spring, for every kind; the same in the UI, the store, the CLI and import files. */
+/**
+ * The one input shape of a spring, for every kind; the same in the UI, the store, the CLI and import files.
+ * The kind union comes from here; the kind registry (core/kinds/registry.ts) must then have an entry for each.
+ */
 export const specSchema = z.discriminatedUnion('kind', [compressionSpecSchema, extensionSpecSchema, torsionSpecSchema]);
 
 export type Spec = z.infer<typeof specSchema>;
 export type SpecInput = z.input<typeof specSchema>;
 export type SpringKind = Spec['kind'];
-export const springKinds: readonly SpringKind[] = ['compression', 'extension', 'torsion'];
+/** Every kind, in the schema's order (the order select lists show them in). */
+export const springKinds: readonly SpringKind[] = specSchema.options.map((o) => o.shape.kind.value);
 
 /** Schema errors with the spec's own wording for a wrong kind. */
 function schemaErrors(error: z.ZodError): FieldError[] {
@@ -45,7 +47,6 @@ export function parseSpec(raw: unknown): Result<Spec> {
   const parsed = specSchema.safeParse(upgraded.value);
   if (!parsed.success) return fail(schemaErrors(parsed.error));
   const spec = parsed.data;
-  const errors = spec.kind === 'compression' ? compressionSpecErrors(spec)
-    : spec.kind === 'extension' ? extensionSpecErrors(spec) : torsionSpecErrors(spec);
+  const errors = kindEntryOf(spec.kind).specErrors(spec);
   return errors.length > 0 ? fail(errors) : ok(spec);
 }

@@ -1,5 +1,8 @@
 import { z } from 'zod';
-import { coilBodyShape, nonNegative, orderFieldsShape, positive, staticDutySchema, toleranceShape } from './common';
+import type { QuantityMap } from '../units';
+import {
+  coilBodyQuantities, coilBodyShape, nonNegative, orderFieldsShape, orderQuantities, positive, staticDutySchema, toleranceShape,
+} from './common';
 
 export const legFormSchema = z.enum(['tangent', 'radial', 'hooked']);
 
@@ -49,3 +52,12 @@ export const torsionSpecSchema = z
 export type TorsionSpec = z.infer<typeof torsionSpecSchema>;
 export type TorsionSpecInput = z.input<typeof torsionSpecSchema>;
 export type LegForm = z.infer<typeof legFormSchema>;
+
+/** What each number of a torsion spec measures (see coilBodyQuantities); working positions are angles. */
+export const torsionSpecQuantities: QuantityMap = {
+  ...coilBodyQuantities, ...orderQuantities,
+  bodyCoils: 'count', legs: { length: 'length', bendRadius: 'length' },
+  freeAngle: 'angle', freeAngleTolerance: 'angle', arborDiameter: 'length',
+  loads: { angle: 'angle', torque: 'torque', tolerancePercent: 'percent' },
+  duty: { between: 'angle', cycles: 'count', frequency: 'frequency' },
+};

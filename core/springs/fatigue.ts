@@ -121,5 +121,6 @@ export function fatigueCheck(stressA: number, stressB: number, tensileStrength: 
 export const fatigueQuantities: QuantityMap = {
   stressMin: 'stress', stressMax: 'stress', stressAlternating: 'stress', stressMean: 'stress',
   stressRange: 'stress', ultimateShear: 'stress', enduranceAlternating: 'stress', enduranceMean: 'stress',
-  finiteLife: { limit: 'stress' },
+  goodmanSafetyFactor: 'ratio', gerberSafetyFactor: 'ratio',
+  finiteLife: { limit: 'stress', cycles: 'count', fraction: 'ratio' },
 };

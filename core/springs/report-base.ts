@@ -21,6 +21,6 @@ export interface CoilReport {
 
 export const coilReportQuantities: QuantityMap = {
   wireDiameter: 'length', meanDiameter: 'length', outerDiameter: 'length', innerDiameter: 'length',
-  tensileStrength: 'stress', elasticModulus: 'stress', wireLength: 'length', mass: 'mass',
+  tensileStrength: 'stress', elasticModulus: 'stress', wireLength: 'length', mass: 'mass', springIndex: 'ratio',
 };
 

@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import { customerRefSchema, jobInputSchema } from '../../core/api/store';
 import type { JobDetails } from '../../core/api/store';
+import { kindEntryOf } from '../../core/kinds/registry';
+import type { SpringKind } from '../../core/spec';
+import { springKinds } from '../../core/spec';
+import type { Quantity } from '../../core/units';
+import { unitSymbol } from '../../core/units';
+import { symbols } from '../../core/vocabulary';
 import type { FirstOffExport } from './first-off';
 import { importedFirstOffSchema } from './first-off';
 
@@ -42,15 +48,34 @@ export const documentHeadSchema = z.object({
   jobs: z.array(z.unknown()),
 }).strict();
 
+/** A shape column's unit in internal units, as its header names it. */
+const internal = (quantity: Quantity): string => unitSymbol(quantity, 'metric');
+
+/** What a shape column holds for kinds that differ from the rest, from each kind's registry entry: "torsion: body". */
+function kindExceptions(describe: (kind: SpringKind) => string | null): string {
+  return springKinds.flatMap((k) => {
+    const text = describe(k);
+    return text === null ? [] : [`; ${k}: ${text}`];
+  }).join('');
+}
+
+/** The rate's quantity most kinds share; kinds with another name theirs in the header. */
+const rateQuantity = (k: SpringKind): Quantity => kindEntryOf(k).shape.rateQuantity;
+const commonRate: Quantity = 'rate';
+
 /**
- * Column order of the CSV job list. Shape columns are in internal units (the length is the free length,
- * or the body length of a torsion spring; the rate is N/mm, or N·mm per degree for torsion) and are
- * ignored on import, where the spec column is the source.
+ * Column order of the CSV job list. Shape columns are in internal units, their headers derived from the
+ * quantities each kind declares for its compared length and rate (the length is the free length, or the
+ * body length of a torsion spring), and are ignored on import, where the spec column is the source.
  */
 export const CSV_COLUMNS = [
   'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units', 'd_mm', 'D_mm',
-  'OD_mm', 'length_mm (L0; torsion: body)', 'activeCoils', 'rate (N/mm; torsion: N·mm/°)', 'spec', 'judgement',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units',
+  `d_${internal('length')}`, `D_${internal('length')}`, `OD_${internal('length')}`,
+  `length_${internal('length')} (${symbols.freeLength}${kindExceptions((k) => kindEntryOf(k).shape.lengthNote)})`,
+  'activeCoils',
+  `rate (${internal(commonRate)}${kindExceptions((k) => (rateQuantity(k) === commonRate ? null : internal(rateQuantity(k))))})`,
+  'spec', 'judgement',
 ] as const;
 
 export const CSV_IMPORTED = new Set<string>([

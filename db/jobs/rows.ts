@@ -1,3 +1,4 @@
+import type { SpringKind } from '../../core/spec';
 import type { Job, JobDetails, JobShape, JobStatus, JobSummary, StoredProblem } from '../../core/api/store';
 import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
@@ -24,7 +25,8 @@ export interface JobRow {
   revision: number;
   created_at: string;
   updated_at: string;
-  kind: string;
+  /** Written from a parsed spec's kind (db/jobs/shape). */
+  kind: SpringKind;
   material: string;
   material_family: string;
   units: 'metric' | 'inch';

@@ -1,31 +1,19 @@
 import { analyseSpec } from '../../core/calculate';
-import type { SpringReport } from '../../core/calculate';
+import { kindEntryOf } from '../../core/kinds/registry';
 import { findGrade } from '../../core/materials';
 import type { Spec } from '../../core/spec';
 import { toInternal } from '../../core/units';
 import type { JobShape } from '../../core/api/store';
 
 /**
- * The length and rate each kind is compared on. Similar-job search only compares jobs of one kind, so
- * each kind may use its own: free length and N/mm for compression; free length inside the ends and N/mm
- * for extension; body length and N·mm per degree for torsion.
- */
-function lengthAndRate(report: SpringReport): { length: number; rate: number } {
-  switch (report.kind) {
-    case 'compression': return { length: report.freeLength, rate: report.rate };
-    case 'extension': return { length: report.freeLength, rate: report.rate };
-    case 'torsion': return { length: report.bodyLength, rate: report.ratePerDegree };
-  }
-}
-
-/**
  * The indexed numbers of a job, in internal units (mm, N/mm) whatever the spec's unit system, from
- * the same analysis the engine shows, so the search compares what the shop would compare.
+ * the same analysis the engine shows, so the search compares what the shop would compare. Each kind's
+ * registry entry names the length and rate it is compared on (similar-job search compares one kind only).
  */
 export function jobShape(spec: Spec): JobShape {
   const report = analyseSpec(spec);
+  const shape = kindEntryOf(report.kind).shape;
   const d = toInternal(spec.wireDiameter, 'length', spec.units);
-  const { length, rate } = lengthAndRate(report);
   return {
     kind: spec.kind,
     material: spec.material,
@@ -34,8 +22,8 @@ export function jobShape(spec: Spec): JobShape {
     wireDiameter: d,
     meanDiameter: report.meanDiameter,
     outerDiameter: report.meanDiameter + d,
-    freeLength: length,
+    freeLength: shape.length(report),
     activeCoils: report.activeCoils,
-    rate,
+    rate: shape.rate(report),
   };
 }

@@ -7,6 +7,7 @@ import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
 import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
+import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 
 export interface Migration {
   version: number;
@@ -23,6 +24,7 @@ export const migrations: readonly Migration[] = [
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
   { version: 7, name: 'estimating', update: updateToVersion0007 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
+  { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -1,5 +1,6 @@
 import type { JobPage, ListJobsQuery } from '../../core/api/store';
 import { listJobsSchema } from '../../core/api/store';
+import { fieldError } from '../../core/result';
 import { invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
@@ -12,11 +13,13 @@ interface Where {
   params: unknown[];
 }
 
-const dateColumn = { created: 'j.created_at', updated: 'j.updated_at', due: 'j.due_date' } as const;
+type Filters = Pick<ListJobsQuery, 'status' | 'customerId' | 'kind' | 'material' | 'dates'>;
+
+const dateColumn = { created: 'created_at', updated: 'updated_at', due: 'due_date' } as const;
 
 /** Date bounds on ISO stamps: "to" includes the whole day. Due dates are plain YYYY-MM-DD. */
-function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>): void {
-  const column = dateColumn[dates.field];
+function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, table: string): void {
+  const column = `${table}${dateColumn[dates.field]}`;
   if (dates.from) {
     where.clauses.push(`${column} >= ?`);
     where.params.push(dates.from);
@@ -27,54 +30,121 @@ function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>): 
   }
 }
 
-export function jobFilter(q: Pick<ListJobsQuery, 'status' | 'customerId' | 'kind' | 'material' | 'dates'>): Where {
+/** The filters as SQL on the jobs table; `table` is its alias with the dot ("j.") or "" for job_counts. */
+export function jobFilter(q: Filters, table = 'j.'): Where {
   const where: Where = { clauses: [], params: [] };
   if (q.status !== undefined) {
     const statuses = Array.isArray(q.status) ? q.status : [q.status];
-    where.clauses.push(`j.status IN (${statuses.map(() => '?').join(', ')})`);
+    where.clauses.push(`${table}status IN (${statuses.map(() => '?').join(', ')})`);
     where.params.push(...statuses);
   }
   if (q.customerId !== undefined) {
-    where.clauses.push('j.customer_id = ?');
+    where.clauses.push(`${table}customer_id = ?`);
     where.params.push(q.customerId);
   }
   if (q.kind !== undefined) {
-    where.clauses.push('j.kind = ?');
+    where.clauses.push(`${table}kind = ?`);
     where.params.push(q.kind);
   }
   if (q.material !== undefined) {
-    where.clauses.push('j.material = ?');
+    where.clauses.push(`${table}material = ?`);
     where.params.push(q.material);
   }
-  if (q.dates) dateClauses(where, q.dates);
+  if (q.dates) dateClauses(where, q.dates, table);
   return where;
 }
 
-function orderBy(q: ListJobsQuery): string {
-  const direction = q.direction ?? (q.sort === 'updated' ? 'desc' : 'asc');
-  const d = direction === 'desc' ? 'DESC' : 'ASC';
-  if (q.sort === 'number') return `j.number ${d}`;
-  if (q.sort === 'customer') return `c.name_key ${d}, j.number ${d}`;
-  return `j.updated_at ${d}, j.id ${d}`;
+/**
+ * The columns each sort orders by, ending in a unique one so that a page can continue exactly after its
+ * last row (keyset paging). Every combination with one filter has an index in this order (migration 0009).
+ */
+const SORT_KEYS = {
+  updated: ['updated_at', 'id'],
+  number: ['number'],
+  customer: ['customer_key', 'number'],
+} as const;
+
+type SortColumn = (typeof SORT_KEYS)[keyof typeof SORT_KEYS][number];
+
+/** Within one customer every job has the same customer key: ordering by it is ordering by number. */
+function sortColumns(q: ListJobsQuery): readonly SortColumn[] {
+  return q.sort === 'customer' && q.customerId !== undefined ? SORT_KEYS.number : SORT_KEYS[q.sort];
 }
 
-export function listJobsSql(q: ListJobsQuery): { sql: string; count: string; params: unknown[] } {
+function descending(q: ListJobsQuery): boolean {
+  return (q.direction ?? (q.sort === 'updated' ? 'desc' : 'asc')) === 'desc';
+}
+
+/** A page's continuation: the sort values of its last row, as an opaque URL-safe string. */
+export function cursorOf(row: Record<string, unknown>, columns: readonly SortColumn[]): string {
+  return Buffer.from(JSON.stringify(columns.map((c) => row[c]))).toString('base64url');
+}
+
+function decodeCursor(text: string, columns: readonly SortColumn[]): unknown[] | null {
+  try {
+    const values: unknown = JSON.parse(Buffer.from(text, 'base64url').toString('utf8'));
+    const fits = Array.isArray(values) && values.length === columns.length
+      && values.every((v) => typeof v === 'string' || (typeof v === 'number' && Number.isFinite(v)));
+    return fits ? values : null;
+  } catch {
+    return null;
+  }
+}
+
+export interface ListSql {
+  sql: string;
+  params: unknown[];
+  columns: readonly SortColumn[];
+}
+
+/** The page query: filters, then (for a following page) the keyset bound, in the sort's index order. */
+export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null): ListSql {
   const where = jobFilter(q);
+  const columns = sortColumns(q);
+  const desc = descending(q);
+  if (after !== null) {
+    const tuple = columns.map((c) => `j.${c}`).join(', ');
+    where.clauses.push(columns.length === 1 ? `${tuple} ${desc ? '<' : '>'} ?` : `(${tuple}) ${desc ? '<' : '>'} (${columns.map(() => '?').join(', ')})`);
+    where.params.push(...after);
+  }
   const clause = where.clauses.length > 0 ? `WHERE ${where.clauses.join(' AND ')}` : '';
+  const order = columns.map((c) => `j.${c} ${desc ? 'DESC' : 'ASC'}`).join(', ');
   return {
-    sql: `SELECT ${SUMMARY_COLUMNS} FROM ${JOB_FROM} ${clause} ORDER BY ${orderBy(q)} LIMIT ? OFFSET ?`,
-    count: `SELECT count(*) AS n FROM jobs j ${clause}`,
+    sql: `SELECT ${SUMMARY_COLUMNS}, j.customer_key FROM ${JOB_FROM} ${clause} ORDER BY ${order} LIMIT ? OFFSET ?`,
     params: where.params,
+    columns,
   };
 }
 
-/** A page of the job list with the total that matches the filters. */
+/**
+ * How many jobs match. Status, kind and material are summed from job_counts (a few hundred rows kept by
+ * triggers); a customer or a date range counts through its own index.
+ */
+export function countJobsSql(q: Filters): { sql: string; params: unknown[] } {
+  if (q.customerId === undefined && q.dates === undefined) {
+    const where = jobFilter(q, '');
+    const clause = where.clauses.length > 0 ? `WHERE ${where.clauses.join(' AND ')}` : '';
+    return { sql: `SELECT coalesce(sum(n), 0) AS n FROM job_counts ${clause}`, params: where.params };
+  }
+  const where = jobFilter(q);
+  return { sql: `SELECT count(*) AS n FROM jobs j WHERE ${where.clauses.join(' AND ')}`, params: where.params };
+}
+
+/** A page of the job list with the total that matches the filters and the key to the next page. */
 export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
   const parsed = parseWith(listJobsSchema, raw ?? {});
   if (!parsed.ok) return invalid(parsed.errors);
   const q = parsed.value;
-  const { sql, count, params } = listJobsSql(q);
-  const rows = store.sql(sql).all(...params, q.limit, q.offset) as JobRow[];
-  const total = (store.sql(count).get(...params) as { n: number }).n;
-  return success({ jobs: rows.map((r) => toSummary(r)), total, limit: q.limit, offset: q.offset });
+  const after = q.after === undefined ? null : decodeCursor(q.after, sortColumns(q));
+  if (q.after !== undefined && after === null) {
+    return invalid([fieldError('bad-cursor', 'after', 'this page key is not from this list and sort: start again from the first page')]);
+  }
+  const { sql, params, columns } = listJobsSql(q, after);
+  const rows = store.sql(sql).all(...params, q.limit + 1, q.offset) as (JobRow & { customer_key: string })[];
+  const more = rows.length > q.limit;
+  const page = more ? rows.slice(0, q.limit) : rows;
+  const count = countJobsSql(q);
+  const total = (store.sql(count.sql).get(...count.params) as { n: number }).n;
+  const next = more ? cursorOf(page[page.length - 1] as unknown as Record<string, unknown>, columns) : null;
+  return success({ jobs: page.map((r) => toSummary(r)), total, limit: q.limit, offset: q.offset, next });
 }

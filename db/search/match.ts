@@ -5,6 +5,8 @@ import { fail, fieldError, ok } from '../../core/result';
  * Turns what a user typed into a safe FTS5 MATCH expression. Each whitespace-separated word becomes a
  * quoted phrase with a prefix star, so "spr" finds "spring" and "CS-10" finds "CS-1042"; the words
  * are ANDed. Quoting means operators (AND, NEAR, column filters, brackets) in user text are plain text.
+ * A single letter or digit is matched as a whole word ("rev B", "A 2"): as a prefix it would match most
+ * of a large store and tell the estimator nothing; the index keeps prefixes of two and three characters.
  */
 export function matchExpression(text: string): Result<string> {
   const words = text
@@ -14,5 +16,5 @@ export function matchExpression(text: string): Result<string> {
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"*`).join(' '));
+  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"${[...w].length > 1 ? '*' : ''}`).join(' '));
 }

@@ -7,16 +7,21 @@ import type { JobRow } from '../jobs/rows';
 import { JOB_FROM, SUMMARY_COLUMNS, toSummary } from '../jobs/rows';
 import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
+import type { Spec } from '../../core/spec';
 import type { ShapePoint } from './similarity';
 import { WEIGHTS, describeDifferences, distance } from './similarity';
 
 interface Candidate extends ShapePoint {
   id: number;
-  kind: string;
 }
 
-const SHAPE_COLUMNS = `id, kind, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
+const SHAPE_COLUMNS = `id, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
   family AS materialFamily`;
+
+/** Each kind's own R*Tree (migration 0009): a search reads only the jobs of the kind asked about. */
+const SHAPE_TABLES: Record<Spec['kind'], string> = {
+  compression: 'job_shape_compression', extension: 'job_shape_extension', torsion: 'job_shape_torsion',
+};
 
 /** R*Tree coordinate names and the spec dimension each one holds. */
 const BOX_DIMENSIONS = [
@@ -28,27 +33,36 @@ const BOX_DIMENSIONS = [
  * jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative error
  * below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
  */
-const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c]) => `${WEIGHTS[dimensionOf(c)]} * abs(ln(${c}_min / ?))`).join(' + ');
+const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c, key]) => `${WEIGHTS[key]} * abs(ln(${c}_min / ?))`).join(' + ');
 const GEOMETRY_MARGIN = 1e-5;
 
-function dimensionOf(column: (typeof BOX_DIMENSIONS)[number][0]): (typeof BOX_DIMENSIONS)[number][1] {
-  return BOX_DIMENSIONS.find(([c]) => c === column)![1];
-}
-
 /** Jobs inside the box around the asked spring (one range per coordinate) whose geometry is near enough. */
-export const BOX_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape
+export const boxSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}
   WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
     AND ${GEOMETRY_SQL} <= ?`;
 
-const ALL_OF_KIND_SQL = `SELECT ${SHAPE_COLUMNS} FROM job_shape WHERE kind = ?`;
+/** Every job of the kind, read from its shape table: the full scan, and the baseline the search is measured against. */
+export const scanSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}`;
 
-/** Every job of the kind, read straight through the jobs table: the bench's full-scan baseline. */
-export const SCAN_SQL = `SELECT id, kind, d AS wireDiameter, mean_diameter AS meanDiameter, free_length AS freeLength,
-  active_coils AS activeCoils, rate, material, material_family AS materialFamily FROM jobs NOT INDEXED WHERE kind = ?`;
+const KIND_COUNT_SQL = 'SELECT coalesce(sum(n), 0) AS n FROM job_counts WHERE kind = ?';
 
-const START_RADIUS = 0.25;
 /** Past this radius the box holds nearly every job of the kind; reading them all is simpler. */
 const MAX_RADIUS = 6;
+
+/**
+ * Where the search starts. Jobs within distance r grow about as N·r⁴ (four independent dimensions: the
+ * rate follows from them), so a radius that finds about `limit` jobs among N of the kind scales as
+ * (limit/N)^¼. DENSITY_RADIUS is that radius for one job per job of the kind, measured on the bench's
+ * generated store; the search stays exact whatever the start, only its cost depends on it.
+ */
+const DENSITY_RADIUS = 1.1;
+const START_RADIUS_RANGE = [0.02, 0.5] as const;
+
+export function startRadius(limit: number, jobsOfKind: number): number {
+  if (jobsOfKind <= 0) return START_RADIUS_RANGE[1];
+  const r = DENSITY_RADIUS * (limit / jobsOfKind) ** 0.25;
+  return Math.min(START_RADIUS_RANGE[1], Math.max(START_RADIUS_RANGE[0], r));
+}
 
 /**
  * A job at distance ≤ r has, in each dimension, w·|ln(p/a)| ≤ r, so p lies within a·e^(±r/w): the box.
@@ -65,12 +79,17 @@ function boxParams(a: JobShape, radius: number): unknown[] {
   return params;
 }
 
+/** The kind's shape table, or null for a kind the store does not index (no job of it can exist). */
+function kindOf(asked: JobShape): Spec['kind'] | null {
+  return Object.hasOwn(SHAPE_TABLES, asked.kind) ? asked.kind as Spec['kind'] : null;
+}
+
 type Scored = { id: number; distance: number };
 
 function topScored(asked: JobShape, candidates: Candidate[], limit: number, exclude?: number): Scored[] {
   const scored: Scored[] = [];
   for (const c of candidates) {
-    if (c.id !== exclude && c.kind === asked.kind) scored.push({ id: c.id, distance: distance(asked, c) });
+    if (c.id !== exclude) scored.push({ id: c.id, distance: distance(asked, c) });
   }
   scored.sort((x, y) => x.distance - y.distance || x.id - y.id);
   return scored.slice(0, limit);
@@ -83,15 +102,18 @@ function topScored(asked: JobShape, candidates: Candidate[], limit: number, excl
  * that radius finds every job at least as near, so the loop always ends with the exact answer.
  */
 export function nearestJobs(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
-  let radius = START_RADIUS;
+  const kind = kindOf(asked);
+  if (kind === null) return [];
+  const jobsOfKind = (store.sql(KIND_COUNT_SQL).get(kind) as { n: number }).n;
+  let radius = startRadius(limit, jobsOfKind);
   while (radius <= MAX_RADIUS) {
-    const top = topScored(asked, store.sql(BOX_SQL).all(...boxParams(asked, radius)) as Candidate[], limit, exclude);
+    const top = topScored(asked, store.sql(boxSql(kind)).all(...boxParams(asked, radius)) as Candidate[], limit, exclude);
     const kth = top.length === limit ? top[limit - 1]!.distance : Infinity;
     if (kth <= radius) return top;
     const within = top.filter((s) => s.distance <= radius).length;
     radius = Math.min(kth, radius * widening(within, limit));
   }
-  return topScored(asked, store.sql(ALL_OF_KIND_SQL).all(asked.kind) as Candidate[], limit, exclude);
+  return topScored(asked, store.sql(scanSql(kind)).all() as Candidate[], limit, exclude);
 }
 
 /**
@@ -106,7 +128,8 @@ function widening(within: number, limit: number): number {
 
 /** The same ranking by scoring every job of the kind: the baseline the pre-filter is measured against. */
 export function nearestJobsByScan(store: Store, asked: JobShape, limit: number, exclude?: number): Scored[] {
-  return topScored(asked, store.sql(SCAN_SQL).all(asked.kind) as Candidate[], limit, exclude);
+  const kind = kindOf(asked);
+  return kind === null ? [] : topScored(asked, store.sql(scanSql(kind)).all() as Candidate[], limit, exclude);
 }
 
 function hits(store: Store, asked: JobShape, scored: Scored[]): SimilarJob[] {

@@ -8,9 +8,19 @@ import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
 import { matchExpression } from './match';
 
+/**
+ * How many matches are ranked at most. A short prefix in a large store matches hundreds of thousands of
+ * jobs; ranking them all costs time in proportion. Past this many, the newest matches are ranked (job ids
+ * grow with time, so the rowid order of the index is newest-last): the jobs a shop most likely means.
+ */
+export const RANKED_MATCHES = 2000;
+
+/** The rowid of the RANKED_MATCHES-th newest match, or nothing when there are fewer matches. */
+export const NEWEST_BOUND_SQL = `SELECT rowid FROM job_text WHERE job_text MATCH ? ORDER BY rowid DESC LIMIT 1 OFFSET ${RANKED_MATCHES - 1}`;
+
 /** The FTS query: best bm25 rank first (the table's rank is bm25 with per-column weights). */
 export const FIND_SQL = `SELECT ${SUMMARY_COLUMNS}, t.rank AS text_rank
-  FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? ORDER BY rank LIMIT ?) t
+  FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? AND rowid >= ? ORDER BY rank LIMIT ?) t
   JOIN jobs j ON j.id = t.rowid LEFT JOIN customers c ON c.id = j.customer_id
   ORDER BY t.rank`;
 
@@ -20,6 +30,7 @@ export function findJobs(store: Store, raw: unknown): StoreResult<TextHit[]> {
   if (!parsed.ok) return invalid(parsed.errors);
   const match = matchExpression(parsed.value.text);
   if (!match.ok) return invalid(match.errors);
-  const rows = store.sql(FIND_SQL).all(match.value, parsed.value.limit) as (JobRow & { text_rank: number })[];
+  const bound = store.sql(NEWEST_BOUND_SQL).get(match.value) as { rowid: number } | undefined;
+  const rows = store.sql(FIND_SQL).all(match.value, bound?.rowid ?? 0, parsed.value.limit) as (JobRow & { text_rank: number })[];
   return success(rows.map((row) => ({ job: toSummary(row), rank: row.text_rank })));
 }

@@ -1,7 +1,6 @@
 import type { CompressionEnds, CompressionSpec, FreeParameter, Seating } from '../../core/spec';
-import type { UnitSystem } from '../../core/units';
 import type { RawBuilder } from './convert';
-import { compact, convertText } from './convert';
+import { compact } from './convert';
 import type { DutyDraft } from './duty-draft';
 import { dutyFromSpec, dutyPaths, dutyRaw, emptyDuty } from './duty-draft';
 import { numberText } from './numbers';
@@ -44,18 +43,6 @@ export function compressionFromSpec(s: CompressionSpec): CompressionDraft {
   return {
     coilsGiven, coils: numberText(s[coilsGiven]), ends: s.ends, freeLength: numberText(s.freeLength), loads: loadsFromSpec(s.loads),
     seating: s.seating, duty: dutyFromSpec(s.duty, numberText), freeParameters: [...s.freeParameters],
-  };
-}
-
-export function convertLoads(loads: LoadDraft[], from: UnitSystem, to: UnitSystem): LoadDraft[] {
-  return loads.map((l) => ({ ...l, length: convertText(l.length, 'length', from, to), force: convertText(l.force, 'force', from, to) }));
-}
-
-export function convertCompression(d: CompressionDraft, from: UnitSystem, to: UnitSystem): CompressionDraft {
-  const length = (t: string) => convertText(t, 'length', from, to);
-  return {
-    ...d, freeLength: length(d.freeLength), loads: convertLoads(d.loads, from, to),
-    duty: { ...d.duty, between: [length(d.duty.between[0]), length(d.duty.between[1])] },
   };
 }
 

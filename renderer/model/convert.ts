@@ -1,5 +1,5 @@
-import type { Quantity, UnitSystem } from '../../core/units';
-import { fromInternal, toInternal } from '../../core/units';
+import type { Quantity, QuantityMap, UnitSystem } from '../../core/units';
+import { fromInternal, OWN, sameInBothSystems, toInternal } from '../../core/units';
 import { numberText, parseNumber } from './numbers';
 
 /** Converts the text of one field between unit systems; text that is not a number is kept as typed. */
@@ -8,6 +8,28 @@ export function convertText(text: string, quantity: Quantity, from: UnitSystem, 
   const parsed = parseNumber(text);
   if (!parsed.ok || parsed.value === undefined) return text;
   return numberText(fromInternal(toInternal(parsed.value, quantity, from), quantity, to));
+}
+
+/**
+ * Converts every text of a draft part whose field the quantity map declares (the spec's own map from core,
+ * so the form converts exactly what the engine does). A draft part mirrors the spec's shape: nested parts
+ * and lists follow the map; quantities that read the same in both systems (counts, angles) keep their text.
+ */
+export function convertTexts<T>(draft: T, map: QuantityMap, from: UnitSystem, to: UnitSystem): T {
+  if (from === to) return draft;
+  const walk = (v: unknown, m: Quantity | typeof OWN | QuantityMap): unknown => {
+    if (Array.isArray(v)) return v.map((item) => walk(item, m));
+    if (m === OWN) return v;
+    if (typeof m === 'string') return typeof v === 'string' && !sameInBothSystems(m) ? convertText(v, m, from, to) : v;
+    if (v === null || typeof v !== 'object') return v;
+    const out: Record<string, unknown> = {};
+    for (const [key, inner] of Object.entries(v as Record<string, unknown>)) {
+      const sub = m[key];
+      out[key] = sub === undefined ? inner : walk(inner, sub);
+    }
+    return out;
+  };
+  return walk(draft, map) as T;
 }
 
 /** Collects field errors while a draft turns into the raw object the schema checks. */

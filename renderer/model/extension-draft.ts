@@ -1,9 +1,8 @@
 import type { ExtensionEndForm, ExtensionEndInput, ExtensionSpec } from '../../core/spec';
-import type { UnitSystem } from '../../core/units';
 import type { RawBuilder } from './convert';
-import { compact, convertText } from './convert';
+import { compact } from './convert';
 import type { LoadDraft } from './compression-draft';
-import { convertLoads, emptyLoad, loadsFromSpec, loadsRaw } from './compression-draft';
+import { emptyLoad, loadsFromSpec, loadsRaw } from './compression-draft';
 import type { DutyDraft } from './duty-draft';
 import { dutyFromSpec, dutyPaths, dutyRaw, emptyDuty } from './duty-draft';
 import { numberText } from './numbers';
@@ -50,16 +49,6 @@ export function extensionFromSpec(s: ExtensionSpec): ExtensionDraft {
     bodyCoils: numberText(s.bodyCoils), ends: [endFromSpec(s.ends[0]), endFromSpec(s.ends[1])], freeLength: numberText(s.freeLength), bodyLength: numberText(s.bodyLength),
     initialTension: numberText(s.initialTension), loads: loadsFromSpec(s.loads), loopAngle: numberText(s.loopAngle),
     loopAngleTolerance: numberText(s.loopAngleTolerance), mechanicalStop: s.mechanicalStop, duty: dutyFromSpec(s.duty, numberText),
-  };
-}
-
-export function convertExtension(d: ExtensionDraft, from: UnitSystem, to: UnitSystem): ExtensionDraft {
-  const length = (t: string) => convertText(t, 'length', from, to);
-  const end = (e: EndDraft): EndDraft => ({ ...e, gap: length(e.gap), extension: length(e.extension), bendRadius: length(e.bendRadius) });
-  return {
-    ...d, ends: [end(d.ends[0]), end(d.ends[1])], freeLength: length(d.freeLength), bodyLength: length(d.bodyLength),
-    initialTension: convertText(d.initialTension, 'force', from, to), loads: convertLoads(d.loads, from, to),
-    duty: { ...d.duty, between: [length(d.duty.between[0]), length(d.duty.between[1])] },
   };
 }
 

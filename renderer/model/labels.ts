@@ -1,27 +1,31 @@
 import type { JobStatus } from '../../core/api';
-import type { CompressionEnds, FreeParameter, Seating } from '../../core/spec';
+import type { CompressionEnds, ExtensionEndForm, FreeParameter, LegForm, Seating } from '../../core/spec';
+import type { Term, Wind } from '../../core/vocabulary';
+import {
+  compressionEndTerms, extensionEndTerms, legFormTerms, seatingTerms, sentenceCase, symbols, windTerms,
+} from '../../core/vocabulary';
+
+/** A select list's labels from the shared vocabulary's short terms. */
+const shortLabels = <K extends string>(terms: Record<K, Term>): Record<K, string> =>
+  Object.fromEntries(Object.entries<Term>(terms).map(([k, t]) => [k, sentenceCase(t.short)])) as Record<K, string>;
 
 export const statusLabels: Record<JobStatus, string> = {
   draft: 'Draft', quoted: 'Quoted', ordered: 'Ordered', 'in-production': 'In production', done: 'Done', lost: 'Lost',
 };
 
-export const kindLabels: Record<string, string> = { compression: 'Compression', extension: 'Extension', torsion: 'Torsion' };
+export const endsLabels: Record<CompressionEnds, string> = shortLabels(compressionEndTerms);
 
-export const endsLabels: Record<CompressionEnds, string> = {
-  'closed-ground': 'Closed, ground', closed: 'Closed', 'open-ground': 'Open, ground', open: 'Open',
-};
+export const seatingLabels: Record<Seating, string> = shortLabels(seatingTerms);
 
-export const seatingLabels: Record<Seating, string> = {
-  'both-fixed': 'Both ends on parallel plates (ν 0.5)', 'fixed-hinged': 'One plate, one pivot (ν 0.7)',
-  'both-hinged': 'Both ends pivoting (ν 1)', 'fixed-free': 'One end free (ν 2)',
-};
+export const windLabels: Record<Wind, string> = shortLabels(windTerms);
 
 export const freeParameterLabels: Record<FreeParameter, string> = {
   wireDiameter: 'Wire diameter', diameter: 'Coil diameter', coils: 'Number of coils', freeLength: 'Free length',
 };
 
 export const dimensionLabels = {
-  wireDiameter: 'd', outerDiameter: 'OD', meanDiameter: 'D', freeLength: 'L0', activeCoils: 'n', rate: 'R',
+  wireDiameter: symbols.wireDiameter, outerDiameter: symbols.outerDiameter, meanDiameter: symbols.meanDiameter,
+  freeLength: symbols.freeLength, activeCoils: symbols.activeCoils, rate: symbols.rate,
 } as const;
 
 const fieldNames: Record<string, string> = {
@@ -57,9 +61,6 @@ export function fieldName(path: string): string {
   return fieldNames[path] ?? path;
 }
 
-export const extensionEndLabels: Record<string, string> = {
-  'machine-loop': 'Machine loop', 'full-loop': 'Full loop', 'crossover-loop': 'Crossover loop', 'side-loop': 'Side loop',
-  'extended-hook': 'Extended hook',
-};
+export const extensionEndLabels: Record<ExtensionEndForm, string> = shortLabels(extensionEndTerms);
 
-export const legFormLabels: Record<string, string> = { tangent: 'Straight, tangent', radial: 'Straight, radial', hooked: 'Hooked' };
+export const legFormLabels: Record<LegForm, string> = shortLabels(legFormTerms);

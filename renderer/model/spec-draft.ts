@@ -1,15 +1,14 @@
+import { kindEntryOf } from '../../core/kinds/registry';
 import type { Spec, SpringKind } from '../../core/spec';
+import { springKinds } from '../../core/spec';
+import type { QuantityMap, UnitSystem } from '../../core/units';
+import { quantityAt } from '../../core/units';
+import { compact, convertTexts, RawBuilder } from './convert';
+import type { KindDraftModel, KindDrafts } from './kind-drafts';
+import { emptyKindDrafts, kindDraftModels } from './kind-drafts';
 import { SPEC_VERSION } from '../../core/spec/versions';
-import type { UnitSystem } from '../../core/units';
-import type { CompressionDraft } from './compression-draft';
-import { compressionFromSpec, compressionPaths, compressionRaw, convertCompression, emptyCompression } from './compression-draft';
-import { compact, convertText, RawBuilder } from './convert';
-import type { ExtensionDraft } from './extension-draft';
-import { convertExtension, emptyExtension, extensionFromSpec, extensionPaths, extensionRaw } from './extension-draft';
 import { numberText, parseList } from './numbers';
 import type { KindRaw } from './rows';
-import type { TorsionDraft } from './torsion-draft';
-import { convertTorsion, emptyTorsion, torsionFromSpec, torsionPaths, torsionRaw } from './torsion-draft';
 
 export type DiameterGiven = 'outerDiameter' | 'innerDiameter' | 'meanDiameter';
 
@@ -36,25 +35,27 @@ export interface OverridesDraft {
  * The spec as the estimator types it: every number is text until it parses, so nothing typed is lost.
  * Each kind keeps its own part, so switching the kind and back loses nothing either.
  */
-export interface SpecDraft {
+export interface SpecDraft extends KindDrafts {
   kind: SpringKind;
   units: UnitSystem;
   material: string;
   wireDiameter: string;
   diameterGiven: DiameterGiven;
   diameter: string;
-  compression: CompressionDraft;
-  extension: ExtensionDraft;
-  torsion: TorsionDraft;
   overrides: OverridesDraft;
   order: OrderDraft;
   notes: string;
 }
 
+/** The draft model of the chosen kind; the kind's part of the draft is the one `d.kind` names. */
+function modelOf<K extends SpringKind>(kind: K): KindDraftModel<K> {
+  return kindDraftModels[kind];
+}
+
 export function emptySpecDraft(units: UnitSystem, toleranceGrade: 1 | 2 | 3 | null = null): SpecDraft {
   return {
     kind: 'compression', units, material: '', wireDiameter: '', diameterGiven: 'outerDiameter', diameter: '',
-    compression: emptyCompression(), extension: emptyExtension(), torsion: emptyTorsion(),
+    ...emptyKindDrafts(),
     overrides: { shearModulus: '', elasticModulus: '', tensileStrength: '', density: '' },
     order: {
       quantities: '', toleranceGrade: toleranceGrade === null ? '' : (String(toleranceGrade) as '1'), finish: '',
@@ -70,9 +71,7 @@ export function draftFromSpec(s: Spec): SpecDraft {
   return {
     kind: s.kind, units: s.units, material: s.material, wireDiameter: numberText(s.wireDiameter),
     diameterGiven, diameter: numberText(s[diameterGiven]),
-    compression: s.kind === 'compression' ? compressionFromSpec(s) : emptyCompression(),
-    extension: s.kind === 'extension' ? extensionFromSpec(s) : emptyExtension(),
-    torsion: s.kind === 'torsion' ? torsionFromSpec(s) : emptyTorsion(),
+    ...emptyKindDrafts(), [s.kind]: modelOf(s.kind).fromSpec(s),
     overrides: {
       shearModulus: numberText(o?.shearModulus), elasticModulus: numberText(o?.elasticModulus),
       tensileStrength: numberText(o?.tensileStrength), density: numberText(o?.density),
@@ -88,21 +87,25 @@ export function draftFromSpec(s: Spec): SpecDraft {
   };
 }
 
-/** Every entered value in the other unit system; text that is not a number stays as typed. */
+/** The common fields of the draft as the spec's quantity map names them (the draft keeps a few under its own names). */
+function commonDraftQuantities(spec: QuantityMap, d: SpecDraft): QuantityMap {
+  const at = (path: string) => quantityAt(spec, path) ?? 'count';
+  return {
+    wireDiameter: at('wireDiameter'), diameter: at(d.diameterGiven), overrides: spec.materialOverrides ?? {},
+    order: { temperatureMin: at('serviceTemperature.min'), temperatureMax: at('serviceTemperature.max') },
+  };
+}
+
+/**
+ * Every entered value in the other unit system, each field by the quantity core declares for it in the
+ * kind's spec (every kind's part converts, so switching kind after units loses nothing); text that is not
+ * a number stays as typed.
+ */
 export function convertDraft(d: SpecDraft, to: UnitSystem): SpecDraft {
   const from = d.units;
   if (from === to) return d;
-  const c = (t: string, q: Parameters<typeof convertText>[1]) => convertText(t, q, from, to);
-  return {
-    ...d, units: to, wireDiameter: c(d.wireDiameter, 'length'), diameter: c(d.diameter, 'length'),
-    compression: convertCompression(d.compression, from, to), extension: convertExtension(d.extension, from, to),
-    torsion: convertTorsion(d.torsion, from, to),
-    overrides: {
-      shearModulus: c(d.overrides.shearModulus, 'stress'), elasticModulus: c(d.overrides.elasticModulus, 'stress'),
-      tensileStrength: c(d.overrides.tensileStrength, 'stress'), density: c(d.overrides.density, 'density'),
-    },
-    order: { ...d.order, temperatureMin: c(d.order.temperatureMin, 'temperature'), temperatureMax: c(d.order.temperatureMax, 'temperature') },
-  };
+  const kinds = Object.fromEntries(springKinds.map((k) => [k, convertTexts(d[k], kindEntryOf(k).specQuantities, from, to)])) as unknown as KindDrafts;
+  return { ...convertTexts(d, commonDraftQuantities(kindEntryOf(d.kind).specQuantities, d), from, to), ...kinds, units: to };
 }
 
 function overridesRaw(o: OverridesDraft, b: RawBuilder): Record<string, unknown> | undefined {
@@ -139,11 +142,7 @@ export interface DraftRaw extends KindRaw {
 }
 
 function kindRaw(d: SpecDraft, b: RawBuilder): KindRaw {
-  switch (d.kind) {
-    case 'compression': return compressionRaw(d.compression, b);
-    case 'extension': return extensionRaw(d.extension, b);
-    case 'torsion': return torsionRaw(d.torsion, b);
-  }
+  return modelOf(d.kind).toRaw(d[d.kind], b);
 }
 
 export function draftToRaw(d: SpecDraft): DraftRaw {
@@ -163,11 +162,7 @@ export function draftToRaw(d: SpecDraft): DraftRaw {
 }
 
 function kindPaths(d: SpecDraft): string[] {
-  switch (d.kind) {
-    case 'compression': return compressionPaths(d.compression);
-    case 'extension': return extensionPaths(d.extension);
-    case 'torsion': return torsionPaths(d.torsion);
-  }
+  return modelOf(d.kind).paths(d[d.kind]);
 }
 
 /** The spec paths the form has a field for, in reading order. */

@@ -1,7 +1,6 @@
 import type { LegForm, TorsionSpec } from '../../core/spec';
-import type { UnitSystem } from '../../core/units';
 import type { RawBuilder } from './convert';
-import { compact, convertText } from './convert';
+import { compact } from './convert';
 import type { DutyDraft } from './duty-draft';
 import { dutyFromSpec, dutyPaths, dutyRaw, emptyDuty } from './duty-draft';
 import { numberText } from './numbers';
@@ -52,15 +51,6 @@ export function torsionFromSpec(s: TorsionSpec): TorsionDraft {
     arborDiameter: numberText(s.arborDiameter),
     loads: s.loads.map((l) => ({ angle: numberText(l.angle), torque: numberText(l.torque), tolerancePercent: numberText(l.tolerancePercent) })),
     duty: dutyFromSpec(s.duty, numberText),
-  };
-}
-
-export function convertTorsion(d: TorsionDraft, from: UnitSystem, to: UnitSystem): TorsionDraft {
-  const length = (t: string) => convertText(t, 'length', from, to);
-  const leg = (l: LegDraft): LegDraft => ({ ...l, length: length(l.length), bendRadius: length(l.bendRadius) });
-  return {
-    ...d, legs: [leg(d.legs[0]), leg(d.legs[1])], arborDiameter: length(d.arborDiameter),
-    loads: d.loads.map((l) => ({ ...l, torque: convertText(l.torque, 'torque', from, to) })),
   };
 }
 

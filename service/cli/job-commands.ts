@@ -40,6 +40,8 @@ const subcommands: Record<string, Sub> = {
       ...(intOption(args, 'customer') !== undefined ? { customerId: intOption(args, 'customer') } : {}),
       ...(typeof args.options.get('kind') === 'string' ? { kind: args.options.get('kind') as string } : {}),
       ...(typeof args.options.get('sort') === 'string' ? { sort: args.options.get('sort') as never } : {}),
+      ...(typeof args.options.get('material') === 'string' ? { material: args.options.get('material') as string } : {}),
+      ...(typeof args.options.get('after') === 'string' ? { after: args.options.get('after') as string } : {}),
       limit: intOption(args, 'limit') ?? 50,
       offset: intOption(args, 'offset') ?? 0,
     });
@@ -63,7 +65,7 @@ export const jobsCommand: Command = {
   usage: [
     'jobs add FILE --db DB       store a job ({"customer":{"name":…},"partNumber":…,"drawing":…,"revision":…,"notes":…,"spec":{…}})',
     '  jobs show ID|NUMBER --db DB, jobs list [--status S[,S]] [--customer ID] [--kind K] [--sort number|updated|customer]',
-    '  [--limit N] [--offset N] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
+    '  [--material ID] [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
     '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB',
   ].join('\n'),
   async run(args, out) {

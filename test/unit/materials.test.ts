@@ -28,7 +28,7 @@ function props(id: string, d: number) {
 
 describe('minimum tensile strength: standards tables', () => {
   it('ASTM A228 music wire at 0.010, 0.063, 0.125 and 0.250 in', () => {
-    // ASTM A228 table as reprinted by interwiregroup.com (engineering.md §8 rows 1–3)
+    // ASTM A228 table as reprinted by interwiregroup.com
     const cases: [number, number, number][] = [[0.010, 387, 428], [0.063, 293, 324], [0.125, 261, 288], [0.250, 230, 255]];
     for (const [d, min, max] of cases) {
       const r = ksiAt('astm-a228', d);
@@ -38,7 +38,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('ASTM A227 hard-drawn at 0.062 in, class I and class II', () => {
-    // ASTM A227 table as reprinted by interwiregroup.com (engineering.md §8 row 4)
+    // ASTM A227 table as reprinted by interwiregroup.com
     expect(ksiAt('astm-a227-1', 0.062).min).toBeCloseTo(237, 9);
     expect(ksiAt('astm-a227-1', 0.062).max).toBeCloseTo(272, 9);
     expect(ksiAt('astm-a227-2', 0.062).min).toBeCloseTo(273, 9);
@@ -46,7 +46,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('EN 10270-1 SM and DM at 2, 5 and 10 mm', () => {
-    // EN 10270-1 as reprinted by mollificiomodenese.it (engineering.md §8 row 5)
+    // EN 10270-1 as reprinted by mollificiomodenese.it
     const cases: [number, number, number][] = [[2.0, 1760, 1970], [5.0, 1460, 1650], [10.0, 1240, 1400]];
     for (const id of ['en10270-1-sm', 'en10270-1-dm']) {
       for (const [d, min, max] of cases) {
@@ -56,7 +56,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('EN 10270-1 SH and DH at 0.30 and 0.40 mm', () => {
-    // EN 10270-1 as reprinted by durofer.ch (engineering.md §8 row 6)
+    // EN 10270-1 as reprinted by durofer.ch
     for (const id of ['en10270-1-sh', 'en10270-1-dh']) {
       expect(tensileStrengthAt(grade(id), 0.3)).toMatchObject({ min: 2660, max: 2940, verified: true });
       expect(tensileStrengthAt(grade(id), 0.4)).toMatchObject({ min: 2560, max: 2830, verified: true });
@@ -64,7 +64,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('EN 10270-3 1.4310 NS at 1, 2 and 5 mm, maximum = minimum + 15 %', () => {
-    // EN 10270-3 as reprinted by stahlbecker.com (engineering.md §8 row 7)
+    // EN 10270-3 as reprinted by stahlbecker.com
     const g = grade('en10270-3-1.4310');
     for (const [d, min] of [[1.0, 1900], [2.0, 1700], [5.0, 1450]] as const) {
       const r = tensileStrengthAt(g, d);
@@ -74,7 +74,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('EN 10270-2 FDC and VDSiCr at 0.60 mm', () => {
-    // EN 10270-2 as reprinted by metalleschmidt.de (engineering.md §8 row 8)
+    // EN 10270-2 as reprinted by metalleschmidt.de
     expect(tensileStrengthAt(grade('en10270-2-fdc'), 0.6)).toMatchObject({ min: 1900, max: 2100, basis: 'table' });
     expect(tensileStrengthAt(grade('en10270-2-fdsicr'), 0.6)).toMatchObject({ min: 2100, max: 2300, basis: 'table', verified: true });
     expect(tensileStrengthAt(grade('en10270-2-tdsicr'), 0.6)).toMatchObject({ min: 2080, max: 2230, basis: 'table', verified: true });
@@ -82,7 +82,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('the 1.4310 table is stepped: 0.9 mm takes the "≤ 1.00" band, 1.01 mm the next', () => {
-    // EN 10270-3 as reprinted by stahlbecker.com (engineering.md §4.4)
+    // EN 10270-3 as reprinted by stahlbecker.com
     const g = grade('en10270-3-1.4310');
     expect(tensileStrengthAt(g, 0.9).min).toBe(1900);
     expect(tensileStrengthAt(g, 1.01).min).toBe(1850);
@@ -100,7 +100,7 @@ describe('minimum tensile strength: standards tables', () => {
   });
 
   it('a value interpolated towards a from-memory row says so', () => {
-    // EN 10270-1 SH rows: 0.45 mm read (durofer.ch), 1.0 mm from memory (engineering.md §4.4)
+    // EN 10270-1 SH rows: 0.45 mm read (durofer.ch), 1.0 mm from memory
     const r = tensileStrengthAt(grade('en10270-1-sh'), 0.7);
     expect(r.verified).toBe(false);
     expect(r.source).toContain('from memory');
@@ -113,14 +113,14 @@ describe('A / d^m fits', () => {
   const US_TO_SI = (A: number, m: number) => 6.894757 * 25.4 ** m * A;
 
   it('music wire A = 201 kpsi·in^m, m = 0.145 converts to about 2214 MPa·mm^m', () => {
-    // Shigley 9e Table 10-4 and chapter 10 worked solutions (engineering.md §8 row 10): 2214 ± 4
+    // Shigley 9e Table 10-4 (A in both unit columns): 2214 ± 4
     expect(Math.abs(US_TO_SI(201, 0.145) - 2214)).toBeLessThanOrEqual(4);
     const fit = grade('astm-a228').strengthFits[0];
     expect(Math.abs((fit?.A ?? 0) - 2214)).toBeLessThanOrEqual(4);
   });
 
   it('every inch-origin fit matches A_SI = 6.894757·25.4^m·A_US and the table\'s printed metric A within 0.3 %', () => {
-    // Shigley 9e Table 10-4, both unit columns (engineering.md §4.1 and §8 row 10)
+    // Shigley 9e Table 10-4, both unit columns
     let checked = 0;
     for (const g of wireGrades) {
       for (const f of g.strengthFits) {
@@ -139,7 +139,7 @@ describe('A / d^m fits', () => {
   });
 
   it('the handbook fit gives 245.8 ksi at 0.250 in while the library keeps the table\'s 230 ksi', () => {
-    // Shigley 9e Table 10-4 fit vs ASTM A228 via interwiregroup.com (engineering.md §8 row 24, ±0.2 ksi)
+    // Shigley 9e Table 10-4 fit vs ASTM A228 via interwiregroup.com (±0.2 ksi)
     const fit = grade('astm-a228').strengthFits[0];
     if (!fit) throw new Error('music wire fit missing');
     expect(Math.abs(fit.A / inch(0.25) ** fit.m / KSI - 245.8)).toBeLessThanOrEqual(0.2);
@@ -160,27 +160,27 @@ describe('A / d^m fits', () => {
 
 describe('elastic moduli, density, temperatures, process data', () => {
   it('music wire G by size band: 81.7 GPa at 0.050 in, 80.0 GPa at 0.150 in', () => {
-    // Shigley 9e Table 10-5, read (engineering.md §8 row 9)
+    // Shigley 9e Table 10-5, read
     expect(props('astm-a228', inch(0.05)).props.shearModulus / 1000).toBeCloseTo(81.7, 9);
     expect(props('astm-a228', inch(0.15)).props.shearModulus / 1000).toBeCloseTo(80.0, 9);
   });
 
   it('music wire and hard-drawn E and G at other bands', () => {
-    // Shigley 9e Table 10-5, read (engineering.md §4.2)
+    // Shigley 9e Table 10-5, read
     expect(props('astm-a228', inch(0.02)).props).toMatchObject({ elasticModulus: 203400, shearModulus: 82700 });
     expect(props('astm-a228', inch(0.1)).props).toMatchObject({ elasticModulus: 196500, shearModulus: 81000 });
     expect(props('astm-a227-1', inch(0.2)).props).toMatchObject({ elasticModulus: 196500, shearModulus: 78600 });
   });
 
   it('EN reference moduli', () => {
-    // EN 13906-1 values (engineering.md §4.2): EN 10270-1 confirmed on mollificiomodenese.it; the others from memory
+    // EN 13906-1 values: EN 10270-1 confirmed on mollificiomodenese.it; the others from memory
     expect(props('en10270-1-sm', 2).props).toMatchObject({ elasticModulus: 206000, shearModulus: 81500 });
     expect(props('en10270-2-fdc', 2).props).toMatchObject({ elasticModulus: 206000, shearModulus: 79500 });
     expect(props('en10270-3-1.4310', 2).props).toMatchObject({ elasticModulus: 185000, shearModulus: 70000 });
   });
 
   it('EN 10270-1 density 7.85 and working range −30…+100 °C; music wire 0.284 lb/in³ ≈ 7.86 g/cm³', () => {
-    // mollificiomodenese.it for EN 10270-1 SM; diamondwire.com for A228 (engineering.md §4.2)
+    // mollificiomodenese.it for EN 10270-1 SM; diamondwire.com for A228
     expect(props('en10270-1-dh', 1).props).toMatchObject({ density: 7.85, serviceTemperature: { min: -30, max: 100 } });
     expect(props('astm-a228', 1).props.density).toBeCloseTo(7.86, 2);
   });
@@ -193,7 +193,7 @@ describe('elastic moduli, density, temperatures, process data', () => {
   });
 
   it('stress-relief temperatures and times', () => {
-    // shop-practice.md §8 rows 20–22 (apexspring.com, chinaspringcorp.com, suzuki-garphyttan.com)
+    // makers' stress-relief tables: apexspring.com, chinaspringcorp.com, suzuki-garphyttan.com
     const a228 = props('astm-a228', 1).props.stressRelief;
     expect(a228.temperature).toBeCloseTo(260, 0);
     expect(a228.minutes).toBe(30);
@@ -207,13 +207,13 @@ describe('elastic moduli, density, temperatures, process data', () => {
   });
 
   it('dynamic grades', () => {
-    // EN 10270-1 D grades for dynamic duty (engineering.md §4.4); VD = valve-spring quality; Shigley 9e Table 10-3
+    // EN 10270-1 D grades for dynamic duty; VD = valve-spring quality; Shigley 9e Table 10-3
     const dynamic = wireGrades.filter((g) => g.dynamicGrade).map((g) => g.id).sort();
     expect(dynamic).toEqual(['astm-a228', 'astm-a232', 'en10270-1-dh', 'en10270-1-dm', 'en10270-2-tdsicr', 'en10270-2-vdsicr']);
   });
 
   it('relative cost, hard-drawn = 1', () => {
-    // Shigley 9e Table 10-4 cost column, from memory (engineering.md §4.1)
+    // Shigley 9e Table 10-4 cost column, from memory
     expect(props('astm-a227-1', 1).props.relativeCost).toBe(1.0);
     expect(props('astm-a228', 1).props.relativeCost).toBe(2.6);
     expect(props('astm-a401', 2).props.relativeCost).toBe(4.0);

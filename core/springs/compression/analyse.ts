@@ -33,7 +33,10 @@ interface MethodLimits {
   after: number;
 }
 
-function methodLimits(x: CompressionDesign, c: number): [MethodLimits, MethodLimits] {
+/** What the set-removal decision reads of a design: the wire, the coils, the end form and the free length. */
+export type SetRemovalInput = Pick<CompressionDesign, 'wire' | 'd' | 'D' | 'na' | 'ends' | 'L0'>;
+
+function methodLimits(x: SetRemovalInput, c: number): [MethodLimits, MethodLimits] {
   const Rm = x.wire.tensileStrength;
   const f = x.wire.allowableStaticFraction;
   return [
@@ -47,7 +50,7 @@ const HANDBOOK_BASIS = 'stress with the direct-shear factor Ks (Shigley 9e Eq. 1
 const EN_BASIS = `uncorrected stress 8FD/(πd³) against ${EN_COMPRESSION_SOLID_SOURCE}; the set model yields on this stress, ` +
   'and after presetting the limit is the fully plastic wire\'s 4/3 of it (derived: no EN limit after presetting is known)';
 
-function verdict(x: CompressionDesign, m: MethodLimits, Ls: number, perDeflection: number): SetRemovalVerdict {
+function verdict(x: SetRemovalInput, m: MethodLimits, Ls: number, perDeflection: number): SetRemovalVerdict {
   const s0 = x.L0 - Ls;
   const stressAtSolid = m.factor * perDeflection * s0;
   const sY = m.before / (m.factor * perDeflection);
@@ -79,7 +82,11 @@ function strictness(v: SetRemovalVerdict): number {
   return v.required ? 1 + (v.setFraction ?? 0) : 0;
 }
 
-function setRemoval(x: CompressionDesign, Ls: number, perDeflection: number, c: number, governedBy: SetRemovalGoverning): SetRemovalResult {
+/**
+ * Both methods' verdicts and the governing one for a finished spring, `perDeflection` the uncorrected stress
+ * per mm of deflection (8·D·rate/(π·d³)). Exported so the design search screens with the same decision.
+ */
+export function setRemoval(x: SetRemovalInput, Ls: number, perDeflection: number, c: number, governedBy: SetRemovalGoverning): SetRemovalResult {
   const [hb, en] = methodLimits(x, c);
   const handbook = verdict(x, hb, Ls, perDeflection);
   const en13906 = verdict(x, en, Ls, perDeflection);

@@ -1,7 +1,8 @@
 import type { CompressionSpec, CompressionEnds, FreeParameter, Seating } from '../../spec/compression';
-import { toInternal } from '../../units';
+import { compressionSpecQuantities } from '../../spec/compression';
+import { convertFields } from '../../units';
 import type { CoilBody } from '../coil-body';
-import { coilBody, millimetresPer } from '../coil-body';
+import { coilBody } from '../coil-body';
 import { endForms } from './ends';
 
 /** A compression spring in internal units (mm, N, MPa, kg/dm³, °C), with its wire resolved. */
@@ -21,33 +22,20 @@ export interface CompressionDesign extends CoilBody {
   toleranceGrade: 1 | 2 | 3 | undefined;
 }
 
-function loadsInternal(spec: CompressionSpec, mm: number): CompressionDesign['loads'] {
-  const newtons = toInternal(1, 'force', spec.units);
+function loadsOf(spec: CompressionSpec): CompressionDesign['loads'] {
   const out: CompressionDesign['loads'] = [];
-  for (const l of spec.loads) {
-    out.push({
-      length: l.length * mm,
-      force: l.force === undefined ? undefined : l.force * newtons,
-      tolerancePercent: l.tolerancePercent,
-    });
-  }
+  for (const l of spec.loads) out.push({ length: l.length, force: l.force, tolerancePercent: l.tolerancePercent });
   return out;
 }
 
-function dutyInternal(spec: CompressionSpec, mm: number): CompressionDesign['duty'] {
-  const duty = spec.duty;
-  if (duty.type === 'static') return duty;
-  return { ...duty, between: [duty.between[0] * mm, duty.between[1] * mm] };
-}
-
 /**
- * Converts a validated spec to internal units. Returns undefined only for an unknown grade, which
+ * Converts a validated spec to internal units with the kind's declared quantities. Returns undefined only for an unknown grade, which
  * validation has already reported.
  */
-export function compressionDesign(spec: CompressionSpec): CompressionDesign | undefined {
+export function compressionDesign(given: CompressionSpec): CompressionDesign | undefined {
+  const spec = convertFields(given, compressionSpecQuantities, given.units, 'in');
   const body = coilBody(spec);
   if (!body) return undefined;
-  const mm = millimetresPer(spec.units);
   const inactive = endForms[spec.ends].inactiveCoils;
   const nt = spec.totalCoils ?? (spec.activeCoils ?? Number.NaN) + inactive;
   // Fields listed one by one: an object spread of the body made these objects' shapes unstable and the
@@ -56,8 +44,8 @@ export function compressionDesign(spec: CompressionSpec): CompressionDesign | un
     units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
     wire: body.wire, wireFindings: body.wireFindings, nt, na: nt - inactive,
     coilsGiven: spec.totalCoils !== undefined ? 'total' : 'active',
-    ends: spec.ends, L0: spec.freeLength * mm, loads: loadsInternal(spec, mm),
-    seating: spec.seating, duty: dutyInternal(spec, mm), freeParameters: spec.freeParameters,
+    ends: spec.ends, L0: spec.freeLength, loads: loadsOf(spec),
+    seating: spec.seating, duty: spec.duty, freeParameters: spec.freeParameters,
     toleranceGrade: spec.toleranceGrade,
   };
 }

@@ -109,24 +109,29 @@ export interface CompressionReport extends CoilReport {
 
 const setRemovalQuantities: QuantityMap = {
   stressAtSolid: 'stress', allowableBefore: 'stress', allowableAfter: 'stress',
-  coiledFreeLength: 'length', expectedSet: 'length', coiledPitch: 'length',
+  coiledFreeLength: 'length', expectedSet: 'length', coiledPitch: 'length', ratio: 'ratio', setFraction: 'ratio',
 };
 
 export const compressionReportQuantities: QuantityMap = {
   ...coilReportQuantities,
-  freeLength: 'length',
+  freeLength: 'length', activeCoils: 'count', totalCoils: 'count',
+  stressCorrectionFactor: 'ratio', wahlFactor: 'ratio', slendernessLimit: 'ratio', slenderness: 'ratio',
+  naturalFrequency: 'frequency',
   pitch: 'length', rate: 'rate', solidLength: 'length', solidForce: 'force', storedEnergyAtSolid: 'energy',
   shearModulus: 'stress', density: 'density',
   stressAtSolid: 'stress', stressAtSolidUncorrected: 'stress', allowableStress: 'stress',
   allowableStressSetRemoved: 'stress',
   loads: {
     length: 'length', deflection: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress',
-    specifiedForce: 'force',
+    specifiedForce: 'force', tolerancePercent: 'percent',
   },
   minimumWorkingLength: 'length', coilGapSum: 'length', bucklingDeflection: 'length',
   outerDiameterAtSolid: 'length',
   solidLengthMaximum: 'length', wireDiameterMaximum: 'length',
   setRemoval: { ...setRemovalQuantities, methods: { handbook: setRemovalQuantities, en13906: setRemovalQuantities } },
-  coiler: { freeLength: 'length', pitch: 'length', wireLength: 'length', expectedSet: 'length' },
+  coiler: {
+    freeLength: 'length', pitch: 'length', wireLength: 'length', expectedSet: 'length',
+    totalCoils: 'count', activeCoils: 'count', pressStrokes: 'count',
+  },
   fatigue: fatigueQuantities,
 };

@@ -41,7 +41,7 @@ export function solveCoiledDeflection(finishedDeflection: number, yieldDeflectio
     : { coiledDeflection: s, expectedSet: s - finishedDeflection, reachable: true };
 }
 
-/** Presses to solid at set removal; some makers press several times (common practice, shop-practice notes §3.4). */
+/** Presses to solid at set removal; some makers press several times (common trade practice). */
 export const SET_STROKES = 3;
 
 /**

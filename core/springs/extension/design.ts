@@ -1,7 +1,8 @@
 import type { ExtensionEndInput, ExtensionSpec, ExtensionEndForm } from '../../spec/extension';
-import { toInternal } from '../../units';
+import { extensionSpecQuantities } from '../../spec/extension';
+import { convertFields } from '../../units';
 import type { CoilBody } from '../coil-body';
-import { coilBody, millimetresPer } from '../coil-body';
+import { coilBody } from '../coil-body';
 import { DEFAULT_BEND_RADIUS_IN_WIRE_DIAMETERS } from './ends';
 
 export interface ExtensionEnd {
@@ -28,37 +29,34 @@ export interface ExtensionDesign extends CoilBody {
   duty: { type: 'static' } | { type: 'cyclic'; between: [number, number]; cycles: number; peened: boolean; frequency?: number };
 }
 
-function endOf(input: ExtensionEndInput, d: number, mm: number): ExtensionEnd {
+function endOf(input: ExtensionEndInput, d: number): ExtensionEnd {
   const e = typeof input === 'string' ? { form: input } : input;
   return {
     form: e.form,
-    gap: (('gap' in e ? e.gap : undefined) ?? 0) * mm,
-    extension: (('extension' in e ? e.extension : undefined) ?? 0) * mm,
-    bendRadius: 'bendRadius' in e && e.bendRadius !== undefined ? e.bendRadius * mm : DEFAULT_BEND_RADIUS_IN_WIRE_DIAMETERS * d,
+    gap: ('gap' in e ? e.gap : undefined) ?? 0,
+    extension: ('extension' in e ? e.extension : undefined) ?? 0,
+    bendRadius: 'bendRadius' in e && e.bendRadius !== undefined ? e.bendRadius : DEFAULT_BEND_RADIUS_IN_WIRE_DIAMETERS * d,
     bendRadiusAssumed: !('bendRadius' in e && e.bendRadius !== undefined),
   };
 }
 
-export function extensionDesign(spec: ExtensionSpec): ExtensionDesign | undefined {
+/** Converts a validated spec to internal units with the kind's declared quantities; undefined for an unknown grade. */
+export function extensionDesign(given: ExtensionSpec): ExtensionDesign | undefined {
+  const spec = convertFields(given, extensionSpecQuantities, given.units, 'in');
   const body = coilBody(spec);
   if (!body) return undefined;
-  const mm = millimetresPer(spec.units);
-  const N = toInternal(1, 'force', spec.units);
-  const duty = spec.duty.type === 'static'
-    ? spec.duty
-    : { ...spec.duty, between: [spec.duty.between[0] * mm, spec.duty.between[1] * mm] as [number, number] };
   return {
     units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
     wire: body.wire, wireFindings: body.wireFindings,
     nb: spec.bodyCoils,
-    ends: [endOf(spec.ends[0], body.d, mm), endOf(spec.ends[1], body.d, mm)],
-    specifiedFreeLength: spec.freeLength === undefined ? null : spec.freeLength * mm,
-    specifiedBodyLength: spec.bodyLength === undefined ? null : spec.bodyLength * mm,
-    initialTension: spec.initialTension === undefined ? null : spec.initialTension * N,
-    loads: spec.loads.map((l) => ({ length: l.length * mm, force: l.force === undefined ? undefined : l.force * N, tolerancePercent: l.tolerancePercent })),
+    ends: [endOf(spec.ends[0], body.d), endOf(spec.ends[1], body.d)],
+    specifiedFreeLength: spec.freeLength ?? null,
+    specifiedBodyLength: spec.bodyLength ?? null,
+    initialTension: spec.initialTension ?? null,
+    loads: spec.loads.map((l) => ({ length: l.length, force: l.force, tolerancePercent: l.tolerancePercent })),
     loopAngle: spec.loopAngle ?? null,
     loopAngleTolerance: spec.loopAngleTolerance ?? null,
     mechanicalStop: spec.mechanicalStop,
-    duty,
+    duty: spec.duty,
   };
 }

@@ -8,6 +8,7 @@ import type { ExtensionEndForm } from '../../spec/extension';
  * Wire per end: a full, crossover or side loop takes about one coil (π·D), a machine loop about ¾ of one
  * (common trade practice, as spring makers' nomenclature pages describe loops; see docs/sources.md).
  */
+/** Geometry of each end form; its name is in core/vocabulary.ts. */
 export interface ExtensionEndData {
   /** Inside height in inside diameters. */
   heightInInsideDiameters: number;
@@ -15,15 +16,14 @@ export interface ExtensionEndData {
   wireInCoils: number;
   /** Formed on the coiler (true) or on a second machine after coiling. */
   formedOnCoiler: boolean;
-  label: string;
 }
 
 export const extensionEnds: Record<ExtensionEndForm, ExtensionEndData> = {
-  'machine-loop': { heightInInsideDiameters: 1, wireInCoils: 0.75, formedOnCoiler: true, label: 'machine loop' },
-  'full-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false, label: 'full loop' },
-  'crossover-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false, label: 'crossover loop' },
-  'side-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false, label: 'side loop' },
-  'extended-hook': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false, label: 'extended hook' },
+  'machine-loop': { heightInInsideDiameters: 1, wireInCoils: 0.75, formedOnCoiler: true },
+  'full-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false },
+  'crossover-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false },
+  'side-loop': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false },
+  'extended-hook': { heightInInsideDiameters: 1, wireInCoils: 1, formedOnCoiler: false },
 };
 
 /** Side-bend radius r2 assumed when the drawing gives none: 2·d, the least that keeps C2 = 2r2/d at 4 (Shigley 9e §10-11 asks C2 > 4). */

@@ -56,10 +56,11 @@ export interface ExtensionReport extends CoilReport {
 
 export const extensionReportQuantities: QuantityMap = {
   ...coilReportQuantities,
-  rate: 'rate',
+  rate: 'rate', bodyCoils: 'count', activeCoils: 'count',
+  stressCorrectionFactor: 'ratio', hookBendingFactor: 'ratio', hookTorsionFactor: 'ratio',
   bodyLength: 'length', loopHeights: 'length', freeLength: 'length', specifiedFreeLength: 'length',
   initialTension: 'force', initialTensionStress: 'stress', initialTensionStressRange: { min: 'stress', max: 'stress' },
-  loads: { length: 'length', extension: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress', specifiedForce: 'force' },
+  loads: { length: 'length', extension: 'length', force: 'force', stress: 'stress', stressUncorrected: 'stress', specifiedForce: 'force', tolerancePercent: 'percent' },
   shearModulus: 'stress', hookBendRadius: 'length',
   bodyStress: 'stress', hookBendingStress: 'stress', hookTorsionStress: 'stress',
   allowables: { body: 'stress', hookTorsion: 'stress', hookBending: 'stress', bodyEn: 'stress' },

@@ -1,7 +1,8 @@
 import type { LegForm, TorsionSpec } from '../../spec/torsion';
-import { toInternal } from '../../units';
+import { torsionSpecQuantities } from '../../spec/torsion';
+import { convertFields } from '../../units';
 import type { CoilBody } from '../coil-body';
-import { coilBody, millimetresPer } from '../coil-body';
+import { coilBody } from '../coil-body';
 
 export interface TorsionLeg {
   length: number;
@@ -22,22 +23,21 @@ export interface TorsionDesign extends CoilBody {
   duty: { type: 'static' } | { type: 'cyclic'; between: [number, number]; cycles: number; peened: boolean; frequency?: number };
 }
 
-export function torsionDesign(spec: TorsionSpec): TorsionDesign | undefined {
+/** Converts a validated spec to internal units with the kind's declared quantities; undefined for an unknown grade. */
+export function torsionDesign(given: TorsionSpec): TorsionDesign | undefined {
+  const spec = convertFields(given, torsionSpecQuantities, given.units, 'in');
   const body = coilBody(spec);
   if (!body) return undefined;
-  const mm = millimetresPer(spec.units);
-  const Nmm = toInternal(1, 'torque', spec.units);
   const leg = (i: 0 | 1): TorsionLeg => ({
-    length: spec.legs[i].length * mm, form: spec.legs[i].form,
-    bendRadius: spec.legs[i].bendRadius === undefined ? null : spec.legs[i].bendRadius! * mm,
+    length: spec.legs[i].length, form: spec.legs[i].form, bendRadius: spec.legs[i].bendRadius ?? null,
   });
   return {
     units: body.units, d: body.d, D: body.D, diameterGiven: body.diameterGiven, serviceTemperature: body.serviceTemperature,
     wire: body.wire, wireFindings: body.wireFindings, nb: spec.bodyCoils, legs: [leg(0), leg(1)],
     freeAngle: spec.freeAngle ?? null, freeAngleTolerance: spec.freeAngleTolerance ?? null,
     windDirection: spec.windDirection, loadDirection: spec.loadDirection,
-    arborDiameter: spec.arborDiameter === undefined ? null : spec.arborDiameter * mm,
-    loads: spec.loads.map((l) => ({ angle: l.angle, torque: l.torque === undefined ? undefined : l.torque * Nmm, tolerancePercent: l.tolerancePercent })),
+    arborDiameter: spec.arborDiameter ?? null,
+    loads: spec.loads.map((l) => ({ angle: l.angle, torque: l.torque, tolerancePercent: l.tolerancePercent })),
     duty: spec.duty,
   };
 }

@@ -51,11 +51,13 @@ export interface TorsionReport extends CoilReport {
 
 export const torsionReportQuantities: QuantityMap = {
   ...coilReportQuantities,
-  legLengths: 'length',
+  legLengths: 'length', bodyCoils: 'count', activeCoils: 'count',
+  bendingFactorInner: 'ratio', bendingFactorOuter: 'ratio', enBendingFactor: 'ratio',
+  maximumAngle: 'angle', maximumSafeAngle: 'angle', arborClearanceFraction: 'ratio',
   ratePerTurn: 'torqueRatePerTurn', ratePerDegree: 'torqueRatePerDegree', ratePerDegreeTheoretical: 'torqueRatePerDegree',
-  loads: { torque: 'torque', stress: 'stress', stressEn: 'stress', specifiedTorque: 'torque' },
+  loads: { angle: 'angle', torque: 'torque', stress: 'stress', stressEn: 'stress', specifiedTorque: 'torque', tolerancePercent: 'percent' },
   meanDiameterAtLoad: 'length', insideDiameterAtLoad: 'length', outsideDiameterAtLoad: 'length',
   arborDiameter: 'length', arborClearance: 'length', bodyLength: 'length', bodyLengthAtLoad: 'length',
   allowableStress: 'stress', allowableStressEn: 'stress',
-  fatigue: { stressMax: 'stress', limit: 'stress' },
+  fatigue: { stressMax: 'stress', limit: 'stress', fractionOfTensile: 'ratio', cycles: 'count' },
 };

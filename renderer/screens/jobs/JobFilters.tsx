@@ -3,7 +3,8 @@ import { jobStatuses } from '../../../core/api';
 import { springKinds } from '../../../core/spec';
 import { PlainInput, PlainSelect } from '../../components/Plain';
 import { useShopData } from '../../hooks/shop-data';
-import { kindLabels, statusLabels } from '../../model/labels';
+import { statusLabels } from '../../model/labels';
+import { kindLabel } from '../../../core/vocabulary';
 
 export interface Filters {
   status: string;
@@ -36,7 +37,7 @@ export function FilterBar({ text, onText, filters, onFilters, searchRef }: Filte
       <PlainSelect label="Status" value={filters.status} onChange={set('status')}
         choices={[{ value: '', label: 'Any status' }, ...jobStatuses.map((s) => ({ value: s, label: statusLabels[s] }))]} />
       <PlainSelect label="Kind" value={filters.kind} onChange={set('kind')}
-        choices={[{ value: '', label: 'Any kind' }, ...springKinds.map((k) => ({ value: k, label: kindLabels[k] ?? k }))]} />
+        choices={[{ value: '', label: 'Any kind' }, ...springKinds.map((k) => ({ value: k, label: kindLabel(k) }))]} />
       <PlainSelect label="Material" value={filters.material} onChange={set('material')}
         choices={[{ value: '', label: 'Any material' }, ...shop.grades.map((g) => ({ value: g.id, label: g.name }))]} />
       <PlainSelect label="Customer" value={filters.customerId} onChange={set('customerId')}

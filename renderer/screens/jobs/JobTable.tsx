@@ -1,6 +1,8 @@
 import type { JobSummary } from '../../../core/api';
 import { formatQuantity } from '../../../core/format';
-import { kindLabels, statusLabels } from '../../model/labels';
+import { statusLabels } from '../../model/labels';
+import { kindLabel } from '../../../core/vocabulary';
+import { kindEntryOf } from '../../../core/kinds/registry';
 
 export type SortKey = 'number' | 'updated' | 'customer';
 export interface Sort {
@@ -65,8 +67,8 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
       <tbody>
         {jobs.map((j) => {
           const u = j.shape.units;
-          // A torsion spring is compared on its body length and its rate per degree (see db/jobs/shape).
-          const torsion = j.shape.kind === 'torsion';
+          // Each kind is compared on its own length and rate (core/kinds: torsion on body length and rate per degree).
+          const compared = kindEntryOf(j.shape.kind).shape;
           return (
             <tr key={j.id} onDoubleClick={() => onOpen(j.id)} className={rowClass(j, selected.has(j.id))}>
               <td className="check">
@@ -76,12 +78,12 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
-              <td>{kindLabels[j.shape.kind] ?? j.shape.kind}<br /><span className="muted">{j.shape.material}</span>
+              <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span>
                 {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
-              <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{torsion ? <><br /><span className="muted">body</span></> : null}</td>
-              <td className="num">{formatQuantity(j.shape.rate, torsion ? 'torqueRatePerDegree' : 'rate', u)}</td>
+              <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
+              <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
               <td className="nowrap">{day(j.updatedAt)}</td>
               <td><button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button></td>
             </tr>

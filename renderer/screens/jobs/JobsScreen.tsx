@@ -20,21 +20,25 @@ const matches = (j: JobSummary, f: Filters): boolean =>
   (f.status === '' || j.status === f.status) && (f.kind === '' || j.shape.kind === f.kind)
   && (f.material === '' || j.shape.material === f.material) && (f.customerId === '' || String(j.customer?.id) === f.customerId);
 
-function useJobRows(text: string, filters: Filters, sort: Sort, page: number) {
+/** Pages follow each other by the key the store hands back with each page (keyset paging). */
+function useJobRows(text: string, filters: Filters, sort: Sort, after: string | undefined) {
   const api = useApi();
   const searching = text.trim() !== '';
   const input = {
     status: (filters.status || undefined) as JobStatus | undefined, kind: filters.kind || undefined,
     material: filters.material || undefined, customerId: filters.customerId ? Number(filters.customerId) : undefined,
-    sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, offset: page * PAGE_SIZE,
+    sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, after,
   };
   const list = useQuery(searching ? null : JSON.stringify(input), () => api.listJobs(input));
   const found = useQuery(searching ? text.trim() : null, () => api.findJobs({ text: text.trim(), limit: 200 }), 120);
   if (searching) {
     const jobs = (found.value ?? []).map((h) => h.job).filter((j) => matches(j, filters));
-    return { searching, jobs, total: jobs.length, state: found.state, error: found.error, reload: found.reload };
+    return { searching, jobs, total: jobs.length, next: null, state: found.state, error: found.error, reload: found.reload };
   }
-  return { searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, state: list.state, error: list.error, reload: list.reload };
+  return {
+    searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, next: list.value?.next ?? null,
+    state: list.state, error: list.error, reload: list.reload,
+  };
 }
 
 /** The job book: search by text, filter, sort, page, find similar springs, print travellers for a selection. */
@@ -44,12 +48,18 @@ export function JobsScreen() {
   const [text, setText] = useState('');
   const [filters, setFilters] = useState<Filters>(noFilters);
   const [sort, setSort] = useState<Sort>({ key: 'updated', direction: 'desc' });
-  const [page, setPage] = useState(0);
+  // The key of each page opened so far: [first page (none), second, …]; going back pops.
+  const [pageKeys, setPageKeys] = useState<(string | undefined)[]>([undefined]);
+  const page = pageKeys.length - 1;
+  const setPage = (to: number) => setPageKeys((keys) => (to === 0 ? [undefined] : to < keys.length - 1 ? keys.slice(0, to + 1) : keys));
   const [selected, setSelected] = useState<ReadonlySet<number>>(new Set());
   const [similar, setSimilar] = useState<{ spec: unknown; id: number; number: string } | null>(null);
   const [similarError, setSimilarError] = useState<string | null>(null);
   const searchRef = useRef<HTMLInputElement>(null);
-  const rows = useJobRows(text, filters, sort, page);
+  const rows = useJobRows(text, filters, sort, pageKeys[page]);
+  const nextPage = () => {
+    if (rows.next !== null) setPageKeys((keys) => [...keys, rows.next ?? undefined]);
+  };
   const { refresh } = useShopData();
   // Customers added with a job since the list was last open belong in the customer filter.
   useEffect(() => refresh(), [refresh]);
@@ -98,7 +108,8 @@ export function JobsScreen() {
         />
         {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
       </div>
-      {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} onPage={setPage} />}
+      {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} hasNext={rows.next !== null}
+        onPage={(to) => (to > page ? nextPage() : setPage(to))} />}
       <SimilarJobsDialog open={similar !== null} onClose={() => setSimilar(null)} spec={similar?.spec ?? null}
         excludeJobId={similar?.id} subject={`job ${similar?.number ?? ''}`} />
     </section>

@@ -39,7 +39,8 @@ function storedParts(file: string): { parts: Set<string>; integrity: string; con
     const rows = store.db.prepare('SELECT part_number FROM jobs').all() as { part_number: string }[];
     const checks = store.db.prepare(`SELECT
         (SELECT count(*) FROM jobs) AS jobs,
-        (SELECT count(*) FROM job_shape) AS shapes,
+        ((SELECT count(*) FROM job_shape_compression) + (SELECT count(*) FROM job_shape_extension)
+          + (SELECT count(*) FROM job_shape_torsion)) AS shapes,
         (SELECT count(*) FROM job_text) AS texts,
         (SELECT count(*) FROM jobs j WHERE j.revision <> (SELECT max(revision) FROM job_revisions r WHERE r.job_id = j.id)) AS gaps`).get() as Record<string, number>;
     const consistent = checks.jobs === checks.shapes && checks.jobs === checks.texts && checks.gaps === 0;

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { createJob, listJobs, setJobStatus } from '../../../db';
-import { listJobsSql } from '../../../db/search/list';
-import { BOX_SQL } from '../../../db/search/similar';
-import { FIND_SQL } from '../../../db/search/text';
+import { countJobsSql, listJobsSql } from '../../../db/search/list';
+import { boxSql } from '../../../db/search/similar';
+import { FIND_SQL, NEWEST_BOUND_SQL } from '../../../db/search/text';
 import { listJobsSchema } from '../../../core/api/store';
 import type { Store } from '../../../db';
 import { job, steppingClock, tempStore, value } from './helpers';
@@ -33,13 +33,57 @@ describe('job list', () => {
     const page = value(listJobs(store, { sort: 'number', limit: 4, offset: 4 }));
     expect(page.jobs.map((j) => j.number)).toEqual(['J-26-0005', 'J-26-0006', 'J-26-0007', 'J-26-0008']);
     expect(page.total).toBe(9);
+    const following = value(listJobs(store, { sort: 'number', limit: 4, after: page.next! }));
+    expect(following.jobs.map((j) => j.number)).toEqual(['J-26-0009']);
+    expect(following.next).toBeNull();
     expect(value(listJobs(store, { sort: 'customer', limit: 3 })).jobs.map((j) => j.customer!.name)).toEqual(['Abbey Locks', 'Abbey Locks', 'Abbey Locks']);
     expect(value(listJobs(store, { dates: { field: 'created', from: '2026-02-01', to: '2026-02-01' } })).total).toBe(9);
     expect(value(listJobs(store, { dates: { field: 'created', to: '2026-01-31' } })).total).toBe(0);
   });
 
-  it('names a bad filter', () => {
+  it('names a bad filter and a page key from another list', () => {
     expect(listJobs(tempStore(), { status: 'shipped' })).toMatchObject({ ok: false, error: { path: 'status' } });
+    const store = seeded();
+    const byNumber = value(listJobs(store, { sort: 'number', limit: 2 }));
+    expect(listJobs(store, { sort: 'customer', after: byNumber.next! })).toMatchObject({ ok: false, error: { path: 'after', code: 'bad-cursor' } });
+    expect(listJobs(store, { after: 'not a key' })).toMatchObject({ ok: false, error: { path: 'after' } });
+    expect(listJobs(store, { after: byNumber.next!, offset: 2, sort: 'number' })).toMatchObject({ ok: false, error: { path: 'after' } });
+  });
+
+  it('walks every sort and filter page by page, in the same order as one long page', () => {
+    const store = seeded();
+    const customers = value(listJobs(store, { limit: 500 })).jobs.map((j) => j.customer!.id);
+    const filters = [{}, { status: 'quoted' }, { kind: 'compression' }, { material: 'en10270-1-sh' }, { customerId: customers[0]! }];
+    for (const filter of filters) {
+      for (const sort of ['updated', 'number', 'customer'] as const) {
+        for (const direction of ['asc', 'desc'] as const) {
+          const whole = value(listJobs(store, { ...filter, sort, direction, limit: 500 }));
+          const walked: string[] = [];
+          let after: string | undefined;
+          do {
+            const page = value(listJobs(store, { ...filter, sort, direction, limit: 2, ...(after ? { after } : {}) }));
+            walked.push(...page.jobs.map((j) => j.number));
+            expect(page.total).toBe(whole.total);
+            after = page.next ?? undefined;
+          } while (after !== undefined);
+          expect(walked).toEqual(whole.jobs.map((j) => j.number));
+        }
+      }
+    }
+  });
+
+  it('keeps the counted total equal to a count of the rows through status changes and renames', () => {
+    const store = seeded();
+    const count = (q: Record<string, unknown>) => (store.db.prepare(`SELECT count(*) AS n FROM jobs j ${
+      Object.keys(q).length ? 'WHERE ' + Object.keys(q).map((k) => `j.${k} = ?`).join(' AND ') : ''}`).get(...Object.values(q)) as { n: number }).n;
+    const first = value(listJobs(store, { sort: 'number', limit: 1 })).jobs[0]!;
+    value(setJobStatus(store, { id: first.id, status: 'lost' }));
+    for (const q of [{}, { status: 'lost' }, { status: 'draft' }, { kind: 'compression' }, { material: 'en10270-1-sh' }]) {
+      expect(value(listJobs(store, q)).total).toBe(count(q));
+    }
+    store.db.prepare("UPDATE customers SET name = 'Zephyr Locks', name_key = 'zephyr locks' WHERE name = 'Abbey Locks'").run();
+    const last = value(listJobs(store, { sort: 'customer', direction: 'desc', limit: 1 })).jobs[0]!;
+    expect(last.customer!.name).toBe('Zephyr Locks');
   });
 });
 
@@ -58,18 +102,58 @@ describe('query plans', () => {
     expect(plan(store, sql, [...params, 50, 0])).toMatch(/SCAN j USING INDEX jobs_by_updated/);
   });
 
+  // Every sort the list offers, alone and under each filter the screen offers, first page and a following
+  // page: read in index order (no TEMP B-TREE sort of the matching jobs) through the index named here.
+  const intended: Record<string, Record<string, RegExp>> = {
+    none: { updated: /(SCAN|SEARCH) j USING INDEX jobs_by_updated/, number: /(SCAN|SEARCH) j USING INDEX sqlite_autoindex_jobs_1/, customer: /(SCAN|SEARCH) j USING INDEX jobs_by_customer_name/ },
+    status: { updated: /SEARCH j USING INDEX jobs_by_status \(status=\?/, number: /SEARCH j USING INDEX jobs_by_status_number \(status=\?/, customer: /SEARCH j USING INDEX jobs_by_status_customer \(status=\?/ },
+    kind: { updated: /SEARCH j USING INDEX jobs_by_kind \(kind=\?/, number: /SEARCH j USING INDEX jobs_by_kind_number \(kind=\?/, customer: /SEARCH j USING INDEX jobs_by_kind_customer \(kind=\?/ },
+    material: { updated: /SEARCH j USING INDEX jobs_by_material \(material=\?/, number: /SEARCH j USING INDEX jobs_by_material_number \(material=\?/, customer: /SEARCH j USING INDEX jobs_by_material_customer \(material=\?/ },
+    customerId: { updated: /SEARCH j USING INDEX jobs_by_customer \(customer_id=\?/, number: /SEARCH j USING INDEX jobs_by_customer_number \(customer_id=\?/, customer: /SEARCH j USING INDEX jobs_by_customer_number \(customer_id=\?/ },
+  };
+  const filterOf: Record<string, Record<string, unknown>> = {
+    none: {}, status: { status: 'quoted' }, kind: { kind: 'compression' }, material: { material: 'en10270-1-sh' }, customerId: { customerId: 1 },
+  };
+  for (const [filter, sorts] of Object.entries(intended)) {
+    for (const [sort, index] of Object.entries(sorts)) {
+      it(`sorts by ${sort} with ${filter === 'none' ? 'no filter' : `a ${filter} filter`} through its index, pages included`, () => {
+        const store = seeded();
+        for (const direction of ['asc', 'desc']) {
+          const q = listJobsSchema.parse({ ...filterOf[filter], sort, direction });
+          const first = listJobsSql(q);
+          const keyset = listJobsSql(q, first.columns.map(() => 'x'));
+          for (const page of [first, keyset]) {
+            const detail = plan(store, page.sql, [...page.params, 50, 0]);
+            expect(detail).toMatch(index);
+            expect(detail).not.toMatch(/TEMP B-TREE/);
+          }
+        }
+      });
+    }
+  }
+
+  it('counts status, kind and material from the kept counts, and a customer through its index', () => {
+    const store = seeded();
+    const byKind = countJobsSql({ kind: 'compression', status: 'quoted' });
+    expect(plan(store, byKind.sql, byKind.params)).toMatch(/job_counts/);
+    expect(plan(store, byKind.sql, byKind.params)).not.toMatch(/\bj\b|jobs/);
+    const byCustomer = countJobsSql({ customerId: 1 });
+    expect(plan(store, byCustomer.sql, byCustomer.params)).toMatch(/SEARCH j USING COVERING INDEX jobs_by_customer/);
+  });
+
   it('pre-filters similar jobs through the R*Tree alone', () => {
     const store = seeded();
-    const detail = plan(store, BOX_SQL, [3, 1, 20, 10, 60, 30, 12, 4, 9, 2, 2, 18, 50, 8, 3.5, 1]);
-    // One constraint on each of the ten box edges (columns 0–9), and no read of the jobs table.
-    expect(detail).toMatch(/^SCAN job_shape VIRTUAL TABLE INDEX 2:([A-E]\d){10}$/);
+    const detail = plan(store, boxSql('compression'), [3, 1, 20, 10, 60, 30, 12, 4, 9, 2, 2, 18, 50, 8, 3.5, 1]);
+    // One constraint on each of the ten box edges (d, D, L0, coils, rate: columns 0–9), and no read of the jobs table.
+    expect(detail).toMatch(/^SCAN job_shape_compression VIRTUAL TABLE INDEX 2:([A-E]\d){10}$/);
     expect(detail.match(/\d(?=[A-E]|$)/g)!.sort()).toEqual(['0', '1', '2', '3', '4', '5', '6', '7', '8', '9']);
   });
 
   it('searches text through the FTS5 index', () => {
     const store = seeded();
-    const detail = plan(store, FIND_SQL, ['"abbey"*', 25]);
+    const detail = plan(store, FIND_SQL, ['"abbey"*', 0, 25]);
     expect(detail).toMatch(/SCAN job_text VIRTUAL TABLE INDEX \d+:M/);
     expect(detail).toMatch(/SEARCH j USING INTEGER PRIMARY KEY/);
+    expect(plan(store, NEWEST_BOUND_SQL, ['"abbey"*'])).toMatch(/SCAN job_text VIRTUAL TABLE INDEX \d+:M/);
   });
 });

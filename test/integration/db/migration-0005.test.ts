@@ -43,7 +43,7 @@ describe('migration 0005 (the engine version of the search numbers)', () => {
     expect(result).toMatchObject({ engineVersion: ENGINE_VERSION, checked: 2, reindexed: 1, changed: 1 });
     expect(result.problems).toEqual([expect.objectContaining({ code: 'stored-spec-invalid', path: 'spec.material' })]);
     expect(result.problems[0]!.message).toContain(b.number);
-    const rates = store.db.prepare('SELECT id, rate FROM job_shape ORDER BY id').all() as { id: number; rate: number }[];
+    const rates = store.db.prepare('SELECT id, rate FROM job_shape_compression ORDER BY id').all() as { id: number; rate: number }[];
     expect(rates.find((r) => r.id === a.id)!.rate).toBeCloseTo(c.shape.rate, 9);
     expect(engineOf(store.db, a.id)).toBe(ENGINE_VERSION);
     expect(engineOf(store.db, b.id)).toBeNull();

@@ -6,9 +6,9 @@ import { jobPaths } from '../../../model/job-draft';
 import { convertDraft, draftPaths } from '../../../model/spec-draft';
 import type { Drafts } from '../../../hooks/useJobEditor';
 import { useStable } from '../../../hooks/useStable';
-import { CompressionSections } from '../kinds/compression/CompressionSections';
-import { ExtensionSections } from '../kinds/extension/ExtensionSections';
-import { TorsionSections } from '../kinds/torsion/TorsionSections';
+import type { SpringKind } from '../../../../core/spec';
+import { kindScreenOf } from '../kinds/kind-screens';
+import type { SpecDraft } from '../../../model/spec-draft';
 import { DiameterSection } from './DiameterSection';
 import { KindSwitch } from './KindSwitch';
 import type { Edit } from './edit';
@@ -23,6 +23,12 @@ interface SpecFormProps {
   edit: Edit;
   errors: FormError[];
   handle(h: FormHandle): void;
+}
+
+/** The sections only the chosen kind has, from the renderer's table of kinds. */
+function KindSections<K extends SpringKind>({ kind, spec, edit }: { kind: K; spec: SpecDraft; edit: Edit }) {
+  const { Sections } = kindScreenOf(kind);
+  return <Sections spring={spec[kind]} order={spec.order} units={spec.units} edit={edit} />;
 }
 
 /** The spec in the order an estimator reads a drawing: who and what, wire, diameters, coils, lengths, duty, finish, quantities. */
@@ -46,9 +52,7 @@ export function SpecForm({ drafts, edit, errors, handle }: SpecFormProps) {
           <JobSection job={drafts.job} edit={edit} />
           <WireSection units={spec.units} material={spec.material} wireDiameter={spec.wireDiameter} overrides={spec.overrides} edit={edit} />
           <DiameterSection units={spec.units} diameterGiven={spec.diameterGiven} diameter={spec.diameter} edit={edit} />
-          {spec.kind === 'compression' ? <CompressionSections spring={spec.compression} order={spec.order} units={spec.units} edit={edit} /> : null}
-          {spec.kind === 'extension' ? <ExtensionSections spring={spec.extension} order={spec.order} units={spec.units} edit={edit} /> : null}
-          {spec.kind === 'torsion' ? <TorsionSections spring={spec.torsion} units={spec.units} edit={edit} /> : null}
+          <KindSections kind={spec.kind} spec={spec} edit={edit} />
           <FinishSection order={spec.order} units={spec.units} edit={edit} />
           <QuantitySection order={spec.order} notes={spec.notes} edit={edit} />
         </form>

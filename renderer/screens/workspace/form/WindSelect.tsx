@@ -1,4 +1,5 @@
 import { SelectField } from '../../../components/form/inputs';
+import { windLabels } from '../../../model/labels';
 import type { OrderDraft } from '../../../model/spec-draft';
 import type { Edit } from './edit';
 import { editSpec } from './edit';
@@ -8,6 +9,6 @@ export function WindSelect({ order, edit }: { order: OrderDraft; edit: Edit }) {
   return (
     <SelectField path="spec.directionOfWind" label="Direction of wind" value={order.directionOfWind}
       onChange={(v) => editSpec(edit)((s) => ({ ...s, order: { ...s.order, directionOfWind: v } }))}
-      choices={[{ value: '', label: 'not stated' }, { value: 'right', label: 'right hand' }, { value: 'left', label: 'left hand' }, { value: 'either', label: 'either' }]} />
+      choices={[{ value: '', label: 'not stated' }, ...(['right', 'left', 'either'] as const).map((w) => ({ value: w, label: windLabels[w] }))]} />
   );
 }

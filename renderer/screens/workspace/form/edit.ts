@@ -1,8 +1,6 @@
-import type { CompressionDraft } from '../../../model/compression-draft';
-import type { ExtensionDraft } from '../../../model/extension-draft';
 import type { JobDraft } from '../../../model/job-draft';
+import type { KindDrafts } from '../../../model/kind-drafts';
 import type { SpecDraft } from '../../../model/spec-draft';
-import type { TorsionDraft } from '../../../model/torsion-draft';
 import type { Drafts } from '../../../hooks/useJobEditor';
 
 /** How a section changes its slice of the drafts. */
@@ -10,12 +8,6 @@ export type Edit = (change: (d: Drafts) => Drafts) => void;
 
 export const editJob = (edit: Edit) => (patch: Partial<JobDraft>) => edit((d) => ({ ...d, job: { ...d.job, ...patch } }));
 export const editSpec = (edit: Edit) => (change: (s: SpecDraft) => SpecDraft) => edit((d) => ({ ...d, spec: change(d.spec) }));
-
-interface KindDrafts {
-  compression: CompressionDraft;
-  extension: ExtensionDraft;
-  torsion: TorsionDraft;
-}
 
 /** Changes the part of the spec draft that belongs to one kind. */
 export const editKind = <K extends keyof KindDrafts>(edit: Edit, kind: K) => (change: (k: KindDrafts[K]) => KindDrafts[K]) =>

@@ -3,14 +3,15 @@ import { unitSymbol } from '../../../../core/units';
 import { numberText } from '../../../model/numbers';
 import type { JobEditor } from '../../../hooks/useJobEditor';
 import { timelineOf } from '../../../model/timeline';
-import { kindLabels, statusLabels } from '../../../model/labels';
+import { statusLabels } from '../../../model/labels';
+import { kindLabel } from '../../../../core/vocabulary';
 
 /** One line for a revision's spring; a stored spec holds its values in its own units. */
 function springText(s: Spec): string {
   const mm = unitSymbol('length', s.units);
   const coil = s.outerDiameter ?? s.innerDiameter ?? s.meanDiameter;
   const which = s.outerDiameter !== undefined ? 'OD' : s.innerDiameter !== undefined ? 'ID' : 'D';
-  return `${kindLabels[s.kind] ?? s.kind}: d ${numberText(s.wireDiameter)} ${mm}, ${which} ${numberText(coil)} ${mm}, ${s.material}`;
+  return `${kindLabel(s.kind)}: d ${numberText(s.wireDiameter)} ${mm}, ${which} ${numberText(coil)} ${mm}, ${s.material}`;
 }
 
 /** Every saved revision, newest first; any of them can come back (as a new revision: nothing is overwritten). */

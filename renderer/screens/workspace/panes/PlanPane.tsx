@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Spec } from '../../../../core/spec';
-import { safetyNotes } from '../../../../core/documents/cautions';
+import { planSafetyNotes } from '../../../../core/documents/cautions';
 import { useApi } from '../../../api';
 import { Caution } from '../../../components/Caution';
 import { PlainInput } from '../../../components/Plain';
@@ -55,12 +55,7 @@ function floorTitle(note: string): string {
 
 function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; onGo(path: string): void }) {
   const { settings } = useShopData();
-  const kinds = new Set(plan.operations.map((o) => o.kind));
-  const finish = settings?.finishes.find((f) => f.id === spec.finish);
-  const notes = safetyNotes({
-    pressesToSolid: kinds.has('set'), grinds: kinds.has('grind'), heatTreats: kinds.has('stress-relieve') || kinds.has('bake'),
-    electroplated: finish?.electroplated ?? false, bakeSpecification: spec.bakeSpecification ?? finish?.bakeSpecification ?? null,
-  });
+  const notes = planSafetyNotes(plan, spec, settings?.finishes ?? []);
   const u = plan.units;
   const len = (v: number) => `${v.toFixed(u === 'inch' ? 3 : 2)} ${u === 'inch' ? 'in' : 'mm'}`;
   return (

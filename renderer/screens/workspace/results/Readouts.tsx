@@ -1,5 +1,7 @@
 import type { SpringReport } from '../../../../core/calculate';
 import { formatQuantity } from '../../../../core/format';
+import { allowableBand } from '../../../../core/review/limits';
+import { captions, kindTerms } from '../../../../core/vocabulary';
 import { loadRows, readouts, stressBars } from './readout-data';
 
 /** The figures an estimator checks first, in the job's units. `r` in internal units. */
@@ -23,10 +25,10 @@ export function KeyFigures({ r }: { r: SpringReport }) {
 export function LoadTable({ r }: { r: SpringReport }) {
   const rows = loadRows(r);
   if (rows.length === 0) return null;
-  const torsion = r.kind === 'torsion';
+  const angles = kindTerms[r.kind].workingPosition === 'angle';
   return (
-    <table className="table table--compact loadtable" aria-label={torsion ? 'Torques at the working angles' : 'Forces at the test lengths'}>
-      <thead><tr><th scope="col">Test</th><th scope="col" className="num">{torsion ? 'Deflection' : 'Length'}</th><th scope="col" className="num">{torsion ? 'Torque' : 'Force'}</th><th scope="col" className="num">Asked</th><th scope="col">Within?</th></tr></thead>
+    <table className="table table--compact loadtable" aria-label={angles ? 'Torques at the working angles' : 'Forces at the test lengths'}>
+      <thead><tr><th scope="col">Test</th><th scope="col" className="num">{angles ? 'Deflection' : 'Length'}</th><th scope="col" className="num">{angles ? 'Torque' : 'Force'}</th><th scope="col" className="num">Asked</th><th scope="col">Within?</th></tr></thead>
       <tbody>
         {rows.map((row) => (
           <tr key={row.point}>
@@ -39,21 +41,19 @@ export function LoadTable({ r }: { r: SpringReport }) {
   );
 }
 
-const band = (ratio: number): 'ok' | 'near' | 'over' => (ratio > 1 ? 'over' : ratio >= 0.85 ? 'near' : 'ok');
-
 /** A bar's full width is 125 % of the allowable; the mark at 80 % of the width is the allowable itself. */
 export function StressBars({ r }: { r: SpringReport }) {
   const u = r.units;
   return (
     <section className="panel" aria-labelledby="stress-title">
-      <h3 id="stress-title" className="panel__title">Stress against allowable</h3>
-      {stressBars(r).length === 0 ? <p className="muted">Give a working {r.kind === 'torsion' ? 'angle' : 'length'} to see its stress.</p> : null}
+      <h3 id="stress-title" className="panel__title">{captions.stressChart}</h3>
+      {stressBars(r).length === 0 ? <p className="muted">Give a working {kindTerms[r.kind].workingPosition} to see its stress.</p> : null}
       <ul className="bars">
         {stressBars(r).map((b) => {
           const ratio = b.value / b.allowable;
           const text = `${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`;
           return (
-            <li key={b.label} className={`bar bar--${band(ratio)}`}>
+            <li key={b.label} className={`bar bar--${allowableBand(b.value, b.allowable)}`}>
               <span className="bar__label">{b.label}</span>
               <div className="bar__track" role="meter" aria-label={`${b.label}, ${b.basis}`} aria-valuemin={0}
                 aria-valuemax={Math.round(b.allowable)} aria-valuenow={Math.round(b.value)} aria-valuetext={text}>

@@ -3,6 +3,7 @@ import type { SpringReport } from '../../../../core/calculate';
 import type { Spec } from '../../../../core/spec';
 import { goodmanDiagram, specDrawingOptions, springDiagram, springDrawing } from '../../../../core/drawing';
 import { Figure } from '../../../components/Figure';
+import { captions, kindTerms } from '../../../../core/vocabulary';
 
 interface FigureProps {
   r: SpringReport;
@@ -11,12 +12,6 @@ interface FigureProps {
 }
 
 const SIZE = { width: 520, height: 300 };
-
-const diagramLabels: Record<SpringReport['kind'], string> = {
-  compression: 'Force against length, free length to solid',
-  extension: 'Force against length inside the ends, from the initial tension',
-  torsion: 'Torque against deflection angle',
-};
 
 /** The spring drawing, its characteristic and, for cyclic compression duty, the Goodman diagram. `r` in internal units. */
 export const SpringFigures = memo(function SpringFigures({ r, spec, title }: FigureProps) {
@@ -28,8 +23,8 @@ export const SpringFigures = memo(function SpringFigures({ r, spec, title }: Fig
   return (
     <section className="panel" aria-labelledby="drawings-title">
       <h3 id="drawings-title" className="panel__title">Drawing and diagrams</h3>
-      <Figure svg={svgs.drawing} label="Spring drawing at the free position, with its data block" />
-      <Figure svg={svgs.diagram} label={diagramLabels[r.kind]} />
+      <Figure svg={svgs.drawing} label={captions.springDrawing} />
+      <Figure svg={svgs.diagram} label={kindTerms[r.kind].document.diagramCaption} />
       {svgs.goodman ? <Figure svg={svgs.goodman} label="Fatigue: alternating against mean stress (Goodman and Gerber)" /> : null}
     </section>
   );

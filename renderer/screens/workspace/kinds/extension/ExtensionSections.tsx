@@ -18,7 +18,7 @@ function EndFields({ end, i, length, onChange }: { end: EndDraft; i: number; len
   return (
     <>
       <SelectField path={`spec.ends[${i}]`} label={name} value={end.form} onChange={(v) => onChange({ form: v })}
-        choices={extensionEndFormSchema.options.map((f) => ({ value: f, label: extensionEndLabels[f] ?? f }))} />
+        choices={extensionEndFormSchema.options.map((f) => ({ value: f, label: extensionEndLabels[f] }))} />
       <TextField path={`spec.ends[${i}].gap`} label={`${name}: loop opening`} unit={length} numeric value={end.gap} onChange={(v) => onChange({ gap: v })} />
       {end.form === 'extended-hook' ? (
         <TextField path={`spec.ends[${i}].extension`} label={`${name}: hook extension`} unit={length} numeric value={end.extension}

@@ -3,7 +3,7 @@ import { legFormSchema } from '../../../../../core/spec';
 import type { UnitSystem } from '../../../../../core/units';
 import { unitSymbol } from '../../../../../core/units';
 import { SelectField, TextField } from '../../../../components/form/inputs';
-import { legFormLabels } from '../../../../model/labels';
+import { legFormLabels, windLabels } from '../../../../model/labels';
 import type { LegDraft, TorsionDraft } from '../../../../model/torsion-draft';
 import { emptyAngleLoad } from '../../../../model/torsion-draft';
 import { DutySection } from '../../form/DutySection';
@@ -17,7 +17,7 @@ function LegFields({ leg, i, length, onChange }: { leg: LegDraft; i: number; len
     <>
       <TextField path={`spec.legs[${i}].length`} label={`${name}: length`} unit={length} numeric value={leg.length} onChange={(v) => onChange({ length: v })} />
       <SelectField path={`spec.legs[${i}].form`} label={`${name}: form`} value={leg.form} onChange={(v) => onChange({ form: v })}
-        choices={legFormSchema.options.map((f) => ({ value: f, label: legFormLabels[f] ?? f }))} />
+        choices={legFormSchema.options.map((f) => ({ value: f, label: legFormLabels[f] }))} />
       <TextField path={`spec.legs[${i}].bendRadius`} label={`${name}: bend radius`} unit={length} numeric value={leg.bendRadius}
         onChange={(v) => onChange({ bendRadius: v })} />
     </>
@@ -37,7 +37,7 @@ export const TorsionSections = memo(function TorsionSections({ spring, units, ed
         <div className="grid grid--4">
           <TextField path="spec.bodyCoils" label="Body coils" numeric value={spring.bodyCoils} onChange={(v) => set((k) => ({ ...k, bodyCoils: v }))} />
           <SelectField path="spec.windDirection" label="Direction of wind" value={spring.windDirection} onChange={(v) => set((k) => ({ ...k, windDirection: v }))}
-            choices={[{ value: 'right', label: 'right hand' }, { value: 'left', label: 'left hand' }]} />
+            choices={(['right', 'left'] as const).map((w) => ({ value: w, label: windLabels[w] }))} />
           <SelectField path="spec.loadDirection" label="Load" value={spring.loadDirection} onChange={(v) => set((k) => ({ ...k, loadDirection: v }))}
             choices={[{ value: 'closing', label: 'closes the coils (usual)' }, { value: 'opening', label: 'opens the coils' }]} />
           <TextField path="spec.arborDiameter" label="Arbor diameter" unit={length} numeric value={spring.arborDiameter}
