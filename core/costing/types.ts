@@ -50,5 +50,9 @@ export interface CostEstimate {
 /** What each number of a cost estimate measures; money is in the estimate's currency in every unit system. */
 export const costQuantities: QuantityMap = {
   minimumOrderValue: 'money',
-  breaks: { quantity: 'count', startQuantity: 'count', unitPrice: 'money', total: 'money', lines: { amount: 'money' } },
+  breaks: {
+    quantity: 'count', startQuantity: 'count', unitPrice: 'money', total: 'money', lines: { amount: 'money' },
+    routing: { lotCost: 'money', difference: 'money', runnerUp: { lotCost: 'money' } },
+  },
+  charges: { amount: 'money' },
 };

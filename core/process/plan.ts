@@ -143,6 +143,13 @@ export const operationQuantities: QuantityMap = {
   sequence: 'ordinal', setupMinutes: 'minutes', piecesPerHour: 'perHour',
   batch: { capacityPieces: 'count', cycleMinutes: 'minutes', batches: 'count' },
   scrapFraction: 'ratio', settings: { value: OWN },
+  workCentre: { hourlyRate: 'money' },
+  choice: { lotCost: 'money', difference: 'money', runnerUp: { lotCost: 'money' } },
+  offers: {
+    hourlyRate: 'money', setupMinutes: 'minutes', piecesPerHour: 'perHour', scrapFraction: 'ratio', lotCost: 'money',
+    batch: { capacityPieces: 'count', cycleMinutes: 'minutes' },
+  },
+  overrides: { value: 'figure', shopDefault: 'figure' },
 };
 
 /** What each number of an inspection plan measures; a characteristic names its own quantity. */
