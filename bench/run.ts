@@ -8,8 +8,9 @@ import { rendererSuite } from './suites/renderer';
 import { quotingSuite } from './suites/quoting';
 import { cliSuite } from './suites/cli';
 import { designSuite } from './suites/design';
+import { fuzzSuite } from './suites/fuzz';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

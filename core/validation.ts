@@ -11,6 +11,12 @@ export function zodErrors(error: z.ZodError, prefix: readonly PropertyKey[] = []
       for (const key of issue.keys) {
         out.push(fieldError('unknown-field', formatPath([...prefix, ...issue.path, key]), `unknown field "${key}"`));
       }
+    } else if (issue.code === 'invalid_union' && issue.errors.length > 0) {
+      // Report the alternative that came closest (fewest issues), with its own field paths.
+      const closest = issue.errors.reduce((a, b) => (b.length < a.length ? b : a));
+      out.push(...zodErrors({ issues: closest } as z.ZodError, [...prefix, ...issue.path]));
+    } else if (issue.code === 'custom' && typeof issue.params?.code === 'string') {
+      out.push(fieldError(issue.params.code, formatPath([...prefix, ...issue.path]), issue.message));
     } else {
       out.push(fieldError(`invalid-${issue.code.replace(/_/g, '-')}`, formatPath([...prefix, ...issue.path]), issue.message));
     }

@@ -8,9 +8,10 @@ import path from 'node:path';
 import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
 import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
-import { createService, dispatch } from '../service/api';
+import { createService } from '../service/api';
 import type { Service } from '../service/api';
 import { createDataActions } from './shell/data-actions';
+import { registerDataActionIpc } from './shell/data-ipc';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
@@ -79,7 +80,7 @@ function sendCommand(previews: PdfPreviews, command: MenuCommand, windowId: numb
 function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): void {
   const data = createDataActions({
     dialogs: electronDialogs(liveMainWindow),
-    call: (name, input) => dispatch(service.handlers, name, input, { onUnexpected: (m, e) => faults.report(`menu:${m}`, e) }),
+    call: (name, input) => service.files.run(name, input as never),
     notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
     documentsDir: app.getPath('documents'),
     today: () => new Date().toISOString().slice(0, 10),
@@ -93,6 +94,7 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
     exportJobs: guard('export', data.exportJobs),
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));
+  registerDataActionIpc(ipcMain, data, { onUnexpected: (context, e) => faults.report(context, e) });
 }
 
 /** The PDF writer's fonts: shipped as resources when packaged, assets/fonts of the project otherwise. */

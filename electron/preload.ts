@@ -1,13 +1,14 @@
 /**
  * The sandboxed preload: one bundled file that may require only 'electron'. It exposes one function
- * per API method, the menu-command listener and the two PDF functions; never ipcRenderer itself.
+ * per API method, the menu-command listener, the two PDF functions and the data-action request; never
+ * ipcRenderer itself.
  */
 import { contextBridge, ipcRenderer } from 'electron';
 import type { Api } from '../core/api';
 import {
-  MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, apiChannel, apiMethodNames, menuCommands,
+  DATA_ACTION_CHANNEL, MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, apiChannel, apiMethodNames, menuCommands,
 } from '../core/api/method-names';
-import type { CoilwrightBridge, MenuCommand, PdfFile } from '../core/api/method-names';
+import type { CoilwrightBridge, DataActionName, MenuCommand, PdfFile } from '../core/api/method-names';
 
 function buildApi(): Api {
   const api: Record<string, (input: unknown) => Promise<unknown>> = {};
@@ -32,6 +33,7 @@ const bridge: CoilwrightBridge = {
   onMenuCommand,
   previewPdf: (file: PdfFile) => ipcRenderer.invoke(PDF_PREVIEW_CHANNEL, file),
   savePdf: (file: PdfFile) => ipcRenderer.invoke(PDF_SAVE_CHANNEL, file),
+  runDataAction: (name: DataActionName) => ipcRenderer.invoke(DATA_ACTION_CHANNEL, name),
 };
 
 contextBridge.exposeInMainWorld('coilwright', bridge);

@@ -10,7 +10,7 @@ export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'backup', 'restore',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
   'designSprings', 'adoptDesign', 'jobRequirement',
@@ -27,6 +27,14 @@ export const apiChannel = (name: string): string => `api:${name}`;
 export const MENU_COMMAND_CHANNEL = 'menu-command';
 export const PDF_PREVIEW_CHANNEL = 'pdf:preview';
 export const PDF_SAVE_CHANNEL = 'pdf:save';
+export const DATA_ACTION_CHANNEL = 'data:action';
+
+/**
+ * What the window may ask the shell to do with files, by name only: main shows the file dialog, asks
+ * before a restore, and runs it. The window never sees or gives a path.
+ */
+export const dataActionNames = ['backup', 'restore', 'importJobs', 'exportJobs'] as const;
+export type DataActionName = (typeof dataActionNames)[number];
 
 /** What the menu asks the renderer to do. Backup, restore, import and export run in main; then 'data-changed'. */
 export const menuCommands = [
@@ -48,4 +56,6 @@ export interface CoilwrightBridge {
   previewPdf(file: PdfFile): Promise<ApiResult<{ opened: true }>>;
   /** Asks where to save; `saved` is null when the user cancelled. */
   savePdf(file: PdfFile): Promise<ApiResult<{ saved: string | null }>>;
+  /** Runs a File-menu data action in main (its dialogs and confirmation included); resolves when it is over. */
+  runDataAction(name: DataActionName): Promise<ApiResult<{ finished: DataActionName }>>;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { method } from './contract';
+import { specBounds } from '../spec/bounds';
 import type { ManufacturingPlan } from '../process/plan';
 import type { CostEstimate } from '../costing/types';
 import type { CostChanges } from '../costing/changes';
@@ -16,7 +17,7 @@ export interface JobCostReview {
 }
 
 const jobId = z.number().int().positive();
-const quantity = z.number().int().min(1).max(10_000_000);
+const quantity = z.number().int().min(1).max(specBounds.orderQuantity.max, `at most ${specBounds.orderQuantity.max}: ${specBounds.orderQuantity.reason}`);
 
 /** A spec with, for a stored job, its order quantity and the estimator's overrides. */
 const planInput = z.object({ spec: z.unknown(), orderQuantity: quantity, judgement: jobJudgementSchema.optional() }).strict();

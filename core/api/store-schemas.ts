@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { jobJudgementSchema, noJudgement } from '../quoting/judgement';
+import { specBounds } from '../spec/bounds';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
 export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
@@ -24,7 +25,7 @@ const fields = {
   status: jobStatusSchema,
   notes: z.string().max(4000),
   dueDate: isoDateSchema.nullable(),
-  orderQuantity: z.number().int().positive().nullable(),
+  orderQuantity: z.number().int().positive().max(specBounds.orderQuantity.max, `at most ${specBounds.orderQuantity.max}: ${specBounds.orderQuantity.reason}`).nullable(),
   leadTimeDays: z.number().int().min(0).max(3650).nullable(),
   judgement: jobJudgementSchema,
 };
@@ -146,23 +147,40 @@ export const addAttachmentSchema = z.object({
 
 export const jobAttachmentsSchema = z.object({ jobId: id }).strict();
 
+/** Export as the screen asks for it: the text comes back, and the user's browser or the shell saves it. */
 export const exportJobsSchema = z.object({
   format: z.enum(['json', 'csv']).default('json'),
-  /** Written here when given; otherwise the text comes back in the result. */
-  file: z.string().min(1).optional(),
   status: statusFilterSchema.optional(),
 }).strict();
 
+/**
+ * Export to a file, for the command line and the desktop shell's own save dialog only: never part of the
+ * contract, so the screen cannot name a file. An existing file is replaced only with `force`.
+ */
+export const exportFileSchema = exportJobsSchema.extend({
+  file: z.string().min(1).optional(),
+  force: z.boolean().default(false),
+}).strict();
+
+/** Import as the screen sends it: the text of a file the user picked. */
 export const importJobsSchema = z.object({
+  text: z.string(),
+  format: z.enum(['json', 'csv']).optional(),
+  /** Give imported jobs new numbers from this store's sequence instead of keeping theirs. */
+  renumber: z.boolean().default(false),
+}).strict();
+
+/** Import from a file (command line and the shell's open dialog only) or from text. */
+export const importFileSchema = z.object({
   file: z.string().min(1).optional(),
   text: z.string().optional(),
   format: z.enum(['json', 'csv']).optional(),
-  /** Give imported jobs new numbers from this store's sequence instead of keeping theirs. */
   renumber: z.boolean().default(false),
 }).strict().refine((i) => (i.file === undefined) !== (i.text === undefined), {
   message: 'give either file or text', path: ['file'],
 });
 
+/** Backup and restore name files, so only the command line and the desktop shell (through its dialogs) reach them. */
 export const backupSchema = z.object({ file: z.string().min(1) }).strict();
 export const restoreSchema = z.object({ file: z.string().min(1) }).strict();
 export const saveSettingsSchema = z.object({ settings: z.record(z.string(), z.unknown()) }).strict();

@@ -9,7 +9,10 @@ export type * from './store-types';
 
 const none = z.object({}).strict();
 
-/** Job store methods: jobs and their history, search, settings, quotes, attachments, exchange, backups. */
+/**
+ * Job store methods: jobs and their history, search, settings, quotes, attachments, exchange. No method
+ * takes a file path: backups, restores and file exchange belong to the host (service/api/files.ts).
+ */
 export const storeMethods = {
   createJob: method<typeof s.jobInputSchema, t.Job>(s.jobInputSchema),
   updateJob: method<typeof s.jobPatchSchema, t.Job>(s.jobPatchSchema),
@@ -32,6 +35,4 @@ export const storeMethods = {
   exportJobs: method<typeof s.exportJobsSchema, t.ExportResult>(s.exportJobsSchema),
   importJobs: method<typeof s.importJobsSchema, t.ImportResult>(s.importJobsSchema),
   reindexJobs: method<typeof s.reindexJobsSchema, t.ReindexResult>(s.reindexJobsSchema),
-  backup: method<typeof s.backupSchema, t.BackupResult>(s.backupSchema),
-  restore: method<typeof s.restoreSchema, t.RestoreResult>(s.restoreSchema),
 };

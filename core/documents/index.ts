@@ -10,3 +10,4 @@ export { isQuoteDocument, parseQuoteDocument } from './guards';
 export * as documentText from './text';
 export { parsePrintFile, travellerQuantity, isJobFile } from './job-file';
 export type { PrintJob } from './job-file';
+export { cleanLogoSvg } from './logo-svg';

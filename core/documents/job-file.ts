@@ -5,7 +5,9 @@
 import type { JobJudgement } from '../quoting/judgement';
 import { z } from 'zod';
 import type { FieldError, Result } from '../result';
-import { fail, fieldError, formatPath, ok } from '../result';
+import { fail, fieldError, ok } from '../result';
+import { customerRefSchema, isoDateSchema, jobInputSchema, jobStatusSchema } from '../api/store-schemas';
+import { zodErrors } from '../validation';
 import { parseSpec } from '../spec';
 import type { Spec } from '../spec';
 
@@ -26,19 +28,27 @@ export interface PrintJob {
   judgement?: JobJudgement;
 }
 
-const jobFileSchema = z.object({
-  customer: z.object({ name: z.string().trim().min(1).max(120), email: z.string().optional(), phone: z.string().optional() }).nullable().optional(),
+/**
+ * The job file every command reads (`jobs add`, `sheet`, `price`, `print`): the fields of a new job, the
+ * drawing and its revision also under their short names, and the customer's purchase order for documents.
+ * Unknown fields are errors, so a misspelt `orderQty` is never read as no order quantity.
+ */
+export const jobFileSchema = z.object({
+  customer: customerRefSchema.nullable().optional(),
+  customerId: z.number().int().positive().optional(),
   partNumber: z.string().trim().max(64).default(''),
+  status: jobStatusSchema.optional(),
+  notes: z.string().max(4000).optional(),
   drawing: z.string().trim().max(64).optional(),
   drawingNumber: z.string().trim().max(64).optional(),
   revision: z.string().trim().max(16).optional(),
   drawingRevision: z.string().trim().max(16).optional(),
   purchaseOrder: z.string().trim().max(64).optional(),
-  orderQuantity: z.number().int().positive().nullable().optional(),
-  dueDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD').nullable().optional(),
+  orderQuantity: jobInputSchema.shape.orderQuantity.unwrap().optional(),
+  dueDate: isoDateSchema.nullable().optional(),
   leadTimeDays: z.number().int().min(0).max(3650).nullable().optional(),
   spec: z.unknown(),
-});
+}).strict();
 
 export const isJobFile = (raw: unknown): boolean =>
   typeof raw === 'object' && raw !== null && !Array.isArray(raw) && !('kind' in raw) && 'spec' in raw;
@@ -56,7 +66,7 @@ function fromSpec(spec: Spec): PrintJob {
 
 function jobOf(raw: unknown): Result<PrintJob> {
   const parsed = jobFileSchema.safeParse(raw);
-  if (!parsed.success) return fail(parsed.error.issues.map((i) => fieldError('invalid-job-file', formatPath(i.path), i.message)));
+  if (!parsed.success) return fail(zodErrors(parsed.error));
   const j = parsed.data;
   const spec = parseSpec(j.spec);
   if (!spec.ok) return fail(prefixed('spec', spec.errors));

@@ -4,6 +4,8 @@
  * also reads as a view. Model units, x along the axis, y across it (positive downward, as on screen).
  */
 import type { Point } from './svg';
+import { group, line } from './svg';
+import { dash, lineWeight } from './style';
 
 export type Hand = 'right' | 'left';
 
@@ -14,25 +16,61 @@ export interface CoilStroke {
   front: boolean;
 }
 
-/** Turn numbers at the stroke ends: every half turn, then the fractional end if there is one. */
-function strokeTurns(totalTurns: number): number[] {
+/**
+ * A body of more turns than this is drawn as ISO 2162-1 allows for long springs: a few turns at each
+ * end at their true places, the middle turns left out and marked by thin chain lines through the wire
+ * centres. It keeps a drawing (and every print of it) the same size whatever the coil count.
+ */
+export const MAX_DRAWN_TURNS = 24;
+/** Turns drawn at each end of a body that is shortened. */
+export const TURNS_DRAWN_EACH_END = 4;
+
+interface StrokeVertex { turns: number; half: number }
+
+/** Turn numbers at the stroke ends: every half turn (only the end groups of a long body), then the fractional end. */
+function strokeVertices(totalTurns: number): StrokeVertex[] {
   const halves = Math.floor(totalTurns * 2 + 1e-9);
-  const turns = Array.from({ length: halves + 1 }, (_, i) => i / 2);
-  if (totalTurns - halves / 2 > 1e-6) turns.push(totalTurns);
-  return turns;
+  const kept = totalTurns > MAX_DRAWN_TURNS ? 2 * TURNS_DRAWN_EACH_END : Infinity;
+  const head = Array.from({ length: Math.min(halves, kept) + 1 }, (_, i) => i);
+  const tail = kept === Infinity ? [] : Array.from({ length: kept + 1 }, (_, i) => halves - kept + i);
+  const vertices = [...head, ...tail.filter((h) => h > head[head.length - 1]!)].map((h) => ({ turns: h / 2, half: h }));
+  if (totalTurns - halves / 2 > 1e-6) vertices.push({ turns: totalTurns, half: halves + 1 });
+  return vertices;
+}
+
+/** The turns left out of a long body's drawing (from, to), or null when every turn is drawn. */
+export function omittedTurns(totalTurns: number): { from: number; to: number } | null {
+  if (!(totalTurns > MAX_DRAWN_TURNS)) return null;
+  const halves = Math.floor(totalTurns * 2 + 1e-9);
+  return { from: TURNS_DRAWN_EACH_END, to: (halves - 2 * TURNS_DRAWN_EACH_END) / 2 };
 }
 
 /**
  * Strokes of a helix of `totalTurns` turns with mean radius `radius`; `axialAt(t)` is the axial position
  * of the wire centre after t turns. A right-hand helix seen from the side with its axis horizontal has
- * its near strokes running from upper left to lower right.
+ * its near strokes running from upper left to lower right. A long body has no strokes in its omitted middle.
  */
 export function coilStrokes(
   totalTurns: number, axialAt: (turns: number) => number, radius: number, hand: Hand,
 ): CoilStroke[] {
   const sign = hand === 'right' ? -1 : 1;
-  const vertices = strokeTurns(totalTurns).map((t) => ({ x: axialAt(t), y: sign * radius * Math.cos(2 * Math.PI * t) }));
-  return vertices.slice(1).map((to, i) => ({ from: vertices[i] as Point, to, front: i % 2 === 0 }));
+  const vertices = strokeVertices(totalTurns).map((v) => ({ ...v, x: axialAt(v.turns), y: sign * radius * Math.cos(2 * Math.PI * v.turns) }));
+  const strokes: CoilStroke[] = [];
+  vertices.slice(1).forEach((to, i) => {
+    const from = vertices[i]!;
+    if (to.half - from.half === 1) strokes.push({ from: { x: from.x, y: from.y }, to: { x: to.x, y: to.y }, front: from.half % 2 === 0 });
+  });
+  return strokes;
+}
+
+/** The mark of omitted turns: thin chain lines along both rows of wire centres across the gap. */
+export function omittedTurnsMark(
+  totalTurns: number, axialAt: (turns: number) => number, radius: number, screen: (p: Point) => Point,
+): string {
+  const gap = omittedTurns(totalTurns);
+  if (!gap) return '';
+  const [a, b] = [axialAt(gap.from), axialAt(gap.to)];
+  return group([-radius, radius].map((y) => line(screen({ x: a, y }), screen({ x: b, y }), { width: lineWeight.thin, dash: dash.chain })), 'omitted-turns');
 }
 
 /** Half circle from `fromAngle`, sampled evenly plus at its extreme points so the outline reaches them. */

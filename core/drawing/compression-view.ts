@@ -3,7 +3,7 @@ import type { CompressionEnds } from '../spec/compression';
 import type { CompressionReport } from '../springs/compression/report';
 import { endForms } from '../springs/compression/ends';
 import type { CoilStroke, Hand } from './coils';
-import { clipToSlab, coilStrokes, wireOutline } from './coils';
+import { clipToSlab, coilStrokes, omittedTurnsMark, wireOutline } from './coils';
 import type { Point } from './svg';
 import { group, polygon } from './svg';
 import { centreLine } from './dimension';
@@ -74,6 +74,7 @@ export function springView(g: SpringGeometry, hand: Hand, v: ViewPlacement): str
   const end = screen({ x: g.L0, y: 0 });
   return group([
     group(ordered.map((s) => strokeOutline(s, g, screen)), 'coils'),
+    omittedTurnsMark(g.nt, axialProfile(g), g.R, screen),
     group([centreLine({ x: start.x - overhang, y: start.y }, { x: end.x + overhang, y: end.y })], 'centre-line'),
   ], 'view');
 }

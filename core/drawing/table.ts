@@ -1,6 +1,6 @@
 /** A ruled data block of text cells, as drawings carry their technical data beside the view. */
 import type { Point } from './svg';
-import { group, line, rect, text } from './svg';
+import { group, line, rect, text, textWidth } from './svg';
 import { ink, lineWeight, paper } from './style';
 
 export interface TableRow {
@@ -17,12 +17,26 @@ export interface TableOptions {
 
 export const cellPadding = 3;
 
+const ELLIPSIS = '...';
+
+/** Text cut with an ellipsis to the cell's width, so a long part number never runs across the view. */
+export function fitText(content: string, width: number, size: number, bold = false): string {
+  const room = (width - 2 * cellPadding) / (bold ? 1.06 : 1);
+  if (textWidth(content, size) <= room) return content;
+  const chars = [...content];
+  // No glyph is narrower than 0.3 em, which bounds how many can fit before measuring.
+  let kept = Math.min(chars.length, Math.ceil(room / (0.3 * size)));
+  while (kept > 0 && textWidth(`${chars.slice(0, kept).join('').trimEnd()}${ELLIPSIS}`, size) > room) kept--;
+  return `${chars.slice(0, kept).join('').trimEnd()}${ELLIPSIS}`;
+}
+
 function rowMarkup(row: TableRow, top: number, left: number, o: TableOptions): string[] {
   const baseline = top + o.rowHeight / 2 + o.size * 0.36;
   const edges = o.columns.reduce<number[]>((acc, w) => [...acc, (acc[acc.length - 1] ?? left) + w], [left]);
   const spans = row.cells.length === 1;
   const style = { size: o.size, bold: row.bold };
-  const cells = row.cells.map((cell, i) => text({ x: (edges[i] ?? left) + cellPadding, y: baseline }, cell, style));
+  const widthOf = (i: number) => (spans ? edges[edges.length - 1]! - left : (o.columns[i] ?? 0));
+  const cells = row.cells.map((cell, i) => text({ x: (edges[i] ?? left) + cellPadding, y: baseline }, fitText(cell, widthOf(i), o.size, row.bold), style));
   const rule = (x: number) => line({ x, y: top }, { x, y: top + o.rowHeight }, { width: lineWeight.thin });
   const rules = spans ? [] : edges.slice(1, -1).map(rule);
   return [...cells, ...rules];

@@ -3,7 +3,7 @@
  * centreline (loops, hooks, legs) and closed rings. Model units in, screen points out through `screen`.
  */
 import type { CoilStroke, Hand } from './coils';
-import { coilStrokes, wireOutline } from './coils';
+import { coilStrokes, omittedTurnsMark, wireOutline } from './coils';
 import type { Point } from './svg';
 import { group, polygon } from './svg';
 import { ink, lineWeight, paper } from './style';
@@ -34,7 +34,10 @@ export function woundStrokes(b: WoundBody): CoilStroke[] {
 export function woundBodyView(b: WoundBody, screen: ToScreen): string {
   const strokes = woundStrokes(b);
   const ordered = [...strokes.filter((s) => !s.front), ...strokes.filter((s) => s.front)];
-  return group(ordered.map((s) => wireShape(wireOutline(s, b.d / 2), screen)), 'coils');
+  return group([
+    ...ordered.map((s) => wireShape(wireOutline(s, b.d / 2), screen)),
+    omittedTurnsMark(b.turns, (t) => b.d / 2 + t * b.d, b.R, screen),
+  ], 'coils');
 }
 
 const sub = (a: Point, b: Point): Point => ({ x: a.x - b.x, y: a.y - b.y });

@@ -5,7 +5,7 @@ import { formatQuantity } from '../format';
 import type { UnitSystem } from '../units';
 import { fromInternal, toInternal } from '../units';
 import { zodErrors } from '../validation';
-import { setModelValues } from '../process/set-model-values';
+import { finishedLengths } from '../process/set-model-values';
 import type { FirstOffFields } from './record';
 import { firstOffFieldsSchema } from './record';
 
@@ -68,7 +68,7 @@ function unitsError(raw: unknown, spec: Spec, prefix: Path): FieldError[] {
 
 /** Checks a first-off record against the job's spec; every problem is a field error under `prefix`. */
 export function checkFirstOff(raw: unknown, spec: Spec, prefix: Path = []): Result<FirstOffFields> {
-  const model = setModelValues(spec);
+  const model = finishedLengths(spec);
   if (!model) {
     return fail([fieldError('not-compression', at(prefix, 'jobId'), 'first-off records of set removal are kept for compression springs only')]);
   }

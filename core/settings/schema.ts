@@ -2,14 +2,16 @@ import { z } from 'zod';
 import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
+import { bounded } from './bounds';
 
 /**
  * Shop settings: one validated JSON document per key, stored one row per key. Every number given as a
  * default below is a demo default: a round figure to start from, not a sourced value. A shop replaces
  * them with its own.
  */
-const money = z.number().finite().min(0);
-const percent = z.number().finite().min(0).max(1000);
+const money = bounded('money');
+const percent = bounded('percent');
+const minutes = bounded('minutes');
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'a date as YYYY-MM-DD');
 const text = (max: number) => z.string().max(max);
 
@@ -35,7 +37,7 @@ const sequence = {
   /** `{yy}` and `{yyyy}` are replaced by the year of issue, e.g. "J-{yy}-" gives "J-26-0001". */
   prefix: text(24),
   width: z.number().int().min(1).max(10),
-  next: z.number().int().min(1),
+  next: bounded('sequence'),
 };
 
 export const numberingSchema = z.object({
@@ -50,7 +52,7 @@ export const machineOperations = [
 ] as const;
 export type MachineOperation = (typeof machineOperations)[number];
 
-const range = z.object({ min: z.number().finite().min(0), max: z.number().finite().positive() }).strict()
+const range = z.object({ min: bounded('wireMm'), max: bounded('wireMm').positive() }).strict()
   .refine((r) => r.max >= r.min, { message: 'max must not be below min', path: ['max'] });
 
 export const machineSchema = z.object({
@@ -60,18 +62,18 @@ export const machineSchema = z.object({
   wireRange: range,
   hourlyRate: money,
   /** Minutes to set the machine up for one lot, whatever its size. */
-  setupMinutes: z.number().finite().min(0),
+  setupMinutes: minutes,
   /** Run rate of a piece-paced machine other than a coiler (grinder, press, tester, packing bench). */
   piecesPerHour: z.number().finite().positive().max(1_000_000).optional(),
   /** This machine's own scrap, when it differs from the operation's in Costing. */
   scrapPercent: z.number().finite().min(0).max(50).optional(),
   speedModel: z.object({
-    feedMetresPerMinute: z.number().finite().positive(),
-    maxPiecesPerMinute: z.number().finite().positive(),
+    feedMetresPerMinute: bounded('feedMetresPerMinute'),
+    maxPiecesPerMinute: bounded('piecesPerMinute'),
   }).strict().optional(),
   batch: z.object({
-    capacityPieces: z.number().int().positive(),
-    cycleMinutes: z.number().finite().positive(),
+    capacityPieces: bounded('batchPieces'),
+    cycleMinutes: bounded('cycleMinutes'),
   }).strict().optional(),
 }).strict().refine((m) => m.operation !== 'coil' || m.speedModel !== undefined, {
   message: 'a coiler needs a speed model', path: ['speedModel'],
@@ -79,8 +81,8 @@ export const machineSchema = z.object({
 
 export const materialPriceSchema = z.object({
   grade: z.string().min(1),
-  dMin: z.number().finite().min(0),
-  dMax: z.number().finite().positive(),
+  dMin: bounded('wireMm'),
+  dMax: bounded('wireMm').positive(),
   pricePerKg: money,
   date: isoDate,
   supplier: text(120).default(''),
@@ -99,8 +101,8 @@ export const finishSchema = z.object({
 
 export const wireStockSchema = z.object({
   grade: z.string().min(1),
-  d: z.number().finite().positive(),
-  kg: z.number().finite().min(0),
+  d: bounded('wireMm').positive(),
+  kg: bounded('stockKg'),
   heatNumber: text(60).optional(),
 }).strict();
 
@@ -125,12 +127,12 @@ export type ExtraOperation = z.infer<typeof extraOperationSchema>;
 export const costingSchema = z.object({
   /** Per operation name (a machine operation, or any key a costing model reads). Demo defaults. */
   scrapPercentByOperation: z.record(z.string(), percent).default({ coil: 3, grind: 1, 'stress-relieve': 0.5 }),
-  setupScrapMetres: z.number().finite().min(0).default(5),
+  setupScrapMetres: bounded('scrapMetres').default(5),
   overheadPercent: percent.default(25),
   marginPercent: percent.default(20),
   inspectionHourlyRate: money.default(45),
-  firstArticleMinutes: z.number().finite().min(0).default(20),
-  inspectionMinutesPerPiece: z.number().finite().min(0).default(0.5),
+  firstArticleMinutes: minutes.default(20),
+  inspectionMinutesPerPiece: minutes.default(0.5),
   packagingPerPiece: money.default(0.01),
   minimumOrderValue: money.default(150),
   unitPriceRounding: unitPriceRoundingSchema.default({ rule: 'none' }),

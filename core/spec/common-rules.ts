@@ -2,6 +2,9 @@ import type { FieldError } from '../result';
 import { fieldError } from '../result';
 import { findGrade } from '../materials';
 import type { CoilBodySpec } from '../springs/coil-body';
+import { wireProperties } from '../materials/properties';
+import { toInternal } from '../units';
+import { POISSON_RATIO } from './bounds';
 
 /** Index below which a coil cannot be wound on an arbor at all (the spec is rejected). */
 export const MINIMUM_INDEX = 2;
@@ -19,6 +22,23 @@ export function meanDiameterOf(s: CoilBodySpec): { D: number; path: string } {
   return { D: s.meanDiameter ?? Number.NaN, path: 'meanDiameter' };
 }
 
+/** A given shear or elastic modulus must pair with the other (given or the grade's) as a metal's moduli do. */
+function modulusPairErrors(s: CoilBodySpec): FieldError[] {
+  const o = s.materialOverrides;
+  if (o?.shearModulus === undefined && o?.elasticModulus === undefined) return [];
+  const stress = (v: number | undefined) => (v === undefined ? undefined : toInternal(v, 'stress', s.units));
+  const w = wireProperties(s.material, toInternal(s.wireDiameter, 'length', s.units), {
+    ...(o.shearModulus !== undefined ? { shearModulus: stress(o.shearModulus) } : {}),
+    ...(o.elasticModulus !== undefined ? { elasticModulus: stress(o.elasticModulus) } : {}),
+  });
+  if (!w) return [];
+  const nu = w.props.elasticModulus / (2 * w.props.shearModulus) - 1;
+  if (nu >= POISSON_RATIO.min && nu <= POISSON_RATIO.max) return [];
+  const path = o.shearModulus !== undefined ? 'materialOverrides.shearModulus' : 'materialOverrides.elasticModulus';
+  return [fieldError('moduli-do-not-pair', path,
+    `G and E give Poisson's ratio ${nu.toPrecision(3)}, outside ${POISSON_RATIO.min}–${POISSON_RATIO.max}: ${POISSON_RATIO.reason}; check the certificate values and their units`)];
+}
+
 /** Wire grade known, exactly one coil diameter, and an index a coil can be wound at. */
 export function coilBodyErrors(s: CoilBodySpec): FieldError[] {
   const errors: FieldError[] = [];
@@ -27,6 +47,7 @@ export function coilBodyErrors(s: CoilBodySpec): FieldError[] {
   }
   errors.push(...diameterErrors(s));
   if (errors.length > 0) return errors;
+  errors.push(...modulusPairErrors(s));
   const { D, path } = meanDiameterOf(s);
   if (!(D / s.wireDiameter >= MINIMUM_INDEX)) {
     errors.push(fieldError('index-too-small', path,

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { QuantityMap } from '../units';
+import { ISO_2859_AQLS } from './bounds';
 import { SPEC_VERSION } from './versions';
 
 /** Schema pieces shared by every spring kind. Values are in the spec's own unit system. */
@@ -30,7 +31,9 @@ export const orderFieldsShape = {
   toleranceGrade: z.union([z.literal(1), z.literal(2), z.literal(3)]).optional(),
   finish: z.string().min(1).max(64).optional(),
   bakeSpecification: z.string().min(1).max(120).optional(),
-  aql: positive.optional(),
+  aql: positive.refine((v) => ISO_2859_AQLS.some((a) => Math.abs(a - v) <= a * 1e-9), {
+    message: `an AQL from ISO 2859-1's list: ${ISO_2859_AQLS.join(', ')}`, params: { code: 'aql-not-iso-2859' },
+  }).optional(),
   directionOfWind: z.enum(['right', 'left', 'either']).optional(),
   shotPeen: z.boolean().optional(),
   serviceTemperature: serviceTemperatureSchema.optional(),

@@ -4,6 +4,7 @@ import {
   coilBodyQuantities, coilBodyShape, cyclicDutySchema, lengthDutyQuantities, lengthLoadQuantities, orderFieldsShape,
   orderQuantities, positive, staticDutySchema, toleranceShape,
 } from './common';
+import { checkBounds, kindBounds } from './bounds';
 
 export const compressionEndsSchema = z.enum(['closed-ground', 'closed', 'open-ground', 'open']);
 
@@ -42,7 +43,8 @@ export const compressionSpecSchema = z
     freeParameters: z.array(freeParameterSchema).max(4).default([]),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.compression));
 
 export type CompressionSpec = z.infer<typeof compressionSpecSchema>;
 export type CompressionSpecInput = z.input<typeof compressionSpecSchema>;

@@ -4,6 +4,7 @@ import {
   coilBodyQuantities, coilBodyShape, cyclicDutySchema, lengthDutyQuantities, lengthLoadQuantities, nonNegative,
   orderFieldsShape, orderQuantities, positive, staticDutySchema, toleranceShape,
 } from './common';
+import { checkBounds, kindBounds } from './bounds';
 
 /** End forms of extension springs (EN 13906-2 Annex A names the same families). */
 export const extensionEndFormSchema = z.enum(['machine-loop', 'full-loop', 'crossover-loop', 'side-loop', 'extended-hook']);
@@ -48,7 +49,8 @@ export const extensionSpecSchema = z
     duty: z.discriminatedUnion('type', [staticDutySchema, cyclicDutySchema]).default({ type: 'static' }),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.extension));
 
 export type ExtensionSpec = z.infer<typeof extensionSpecSchema>;
 export type ExtensionSpecInput = z.input<typeof extensionSpecSchema>;

@@ -50,3 +50,4 @@ export function parseSpec(raw: unknown): Result<Spec> {
   const errors = kindEntryOf(spec.kind).specErrors(spec);
   return errors.length > 0 ? fail(errors) : ok(spec);
 }
+export * from './bounds';

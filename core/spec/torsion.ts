@@ -3,6 +3,7 @@ import type { QuantityMap } from '../units';
 import {
   coilBodyQuantities, coilBodyShape, nonNegative, orderFieldsShape, orderQuantities, positive, staticDutySchema, toleranceShape,
 } from './common';
+import { checkBounds, kindBounds } from './bounds';
 
 export const legFormSchema = z.enum(['tangent', 'radial', 'hooked']);
 
@@ -47,7 +48,8 @@ export const torsionSpecSchema = z
     duty: z.discriminatedUnion('type', [staticDutySchema, torsionCyclicDutySchema]).default({ type: 'static' }),
     ...orderFieldsShape,
   })
-  .strict();
+  .strict()
+  .superRefine(checkBounds(kindBounds.torsion));
 
 export type TorsionSpec = z.infer<typeof torsionSpecSchema>;
 export type TorsionSpecInput = z.input<typeof torsionSpecSchema>;

@@ -1,8 +1,10 @@
 /**
- * Text that a spreadsheet would run as a formula (=, +, -, @, tab or CR first) is written behind an
- * apostrophe, which spreadsheets show as plain text; reading strips it again.
+ * Text that a spreadsheet would run as a formula (=, +, -, @, tab or CR first, also after leading blanks or
+ * line feeds, and their fullwidth forms ＝ ＋ － ＠) is written behind an apostrophe, which spreadsheets show
+ * as plain text; reading strips it again. Text that itself starts with an apostrophe gets one more, so a
+ * leading apostrophe of the user's survives the round trip.
  */
-const FORMULA_START = /^[=+\-@\t\r]/;
+const FORMULA_START = /^(['\t\r]|[\s\u3000]*[=+\-@\uff1d\uff0b\uff0d\uff20])/;
 
 /** RFC 4180 CSV: fields with a comma, quote or line break are quoted, quotes doubled; CRLF between rows. */
 export function csvField(value: unknown): string {

@@ -69,7 +69,7 @@ const commonRate: Quantity = 'rate';
  * body length of a torsion spring), and are ignored on import, where the spec column is the source.
  */
 export const CSV_COLUMNS = [
-  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
   'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units',
   `d_${internal('length')}`, `D_${internal('length')}`, `OD_${internal('length')}`,
   `length_${internal('length')} (${symbols.freeLength}${kindExceptions((k) => kindEntryOf(k).shape.lengthNote)})`,
@@ -79,6 +79,6 @@ export const CSV_COLUMNS = [
 ] as const;
 
 export const CSV_IMPORTED = new Set<string>([
-  'number', 'customer', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
+  'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
   'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec', 'judgement',
 ]);

@@ -1,7 +1,7 @@
-import { writeFileSync } from 'node:fs';
+import { existsSync, writeFileSync } from 'node:fs';
 import type { ExportResult, JobStatus, StoredProblem } from '../../core/api/store';
-import { exportJobsSchema } from '../../core/api/store';
-import { invalid, success } from '../errors';
+import { exportFileSchema } from '../../core/api/store';
+import { failure, invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
 import { SUMMARY_COLUMNS, judgementOf, storedSpecOf } from '../jobs/rows';
@@ -65,7 +65,7 @@ export function jobsDocument(store: Store, status?: JobStatus | JobStatus[]): Jo
 
 function csvRow(row: ExportRow): unknown[] {
   return [
-    row.number, row.customer_name ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
+    row.number, row.customer_name ?? '', row.customer_email ?? '', row.customer_phone ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
     row.notes, row.due_date, row.order_quantity, row.lead_time_days, row.created_at, row.updated_at, row.kind,
     row.material, row.units, row.d, row.mean_diameter, row.mean_diameter + row.d, row.free_length,
     row.active_coils, row.rate, row.spec, row.judgement,
@@ -83,9 +83,12 @@ export function jobsCsv(store: Store, status?: JobStatus | JobStatus[]): { text:
 }
 
 export function exportJobs(store: Store, raw: unknown): StoreResult<ExportResult> {
-  const parsed = parseWith(exportJobsSchema, raw ?? {});
+  const parsed = parseWith(exportFileSchema, raw ?? {});
   if (!parsed.ok) return invalid(parsed.errors);
-  const { format, file, status } = parsed.value;
+  const { format, file, status, force } = parsed.value;
+  if (file !== undefined && !force && existsSync(file)) {
+    return failure('file-exists', `${file} already exists: choose a new name, or replace it on purpose (--force)`, 'file');
+  }
   const rows = readRows(store, status);
   const text = format === 'csv' ? csvOf(rows.map((r) => r.row)) : `${JSON.stringify(documentOf(store, rows, firstOffByJob(store)), null, 2)}\n`;
   const problems = problemsOf(rows);

@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import type { ImportResult } from '../../core/api/store';
-import { importJobsSchema } from '../../core/api/store';
+import { importFileSchema } from '../../core/api/store';
 import type { FieldError, Result } from '../../core/result';
 import { fail, fieldError, formatPath, ok } from '../../core/result';
 import { failure, invalid, success } from '../errors';
@@ -86,6 +86,17 @@ function csvValue(column: string, text: string, at: PropertyKey[]): Result<unkno
   return ok(text);
 }
 
+/** The e-mail and phone columns belong to the customer object; without a customer they say nothing. */
+function withCustomerContact(raw: Record<string, unknown>): Record<string, unknown> {
+  const { customerEmail, customerPhone, ...rest } = raw;
+  if (rest.customer === null || rest.customer === undefined) return rest;
+  const contact = {
+    ...(customerEmail !== undefined && customerEmail !== '' ? { email: customerEmail } : {}),
+    ...(customerPhone !== undefined && customerPhone !== '' ? { phone: customerPhone } : {}),
+  };
+  return { ...rest, customer: { ...(rest.customer as object), ...contact } };
+}
+
 function csvItems(text: string): Result<ImportItem[]> {
   let records;
   try {
@@ -107,7 +118,7 @@ function csvItems(text: string): Result<ImportItem[]> {
       if (value.ok) raw[column] = value.value;
       else errors.push(...value.errors);
     });
-    return { at, raw };
+    return { at, raw: withCustomerContact(raw) };
   });
   return errors.length > 0 ? fail(errors) : ok(items);
 }
@@ -129,7 +140,7 @@ function detectFormat(text: string, file: string | undefined, given: 'json' | 'c
 
 /** Checks every record (schema, parseSpec, numbers), then writes all of them in one transaction, or none. */
 export function importJobs(store: Store, input: unknown): StoreResult<ImportResult> {
-  const parsed = parseWith(importJobsSchema, input);
+  const parsed = parseWith(importFileSchema, input);
   if (!parsed.ok) return invalid(parsed.errors);
   const text = importText(parsed.value);
   if (!text.ok) return invalid(text.errors);

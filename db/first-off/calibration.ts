@@ -4,6 +4,8 @@ import { calibrateSet, calibrationInSpecUnits } from '../../core/process/set-cal
 import type { PastFirstOff, SetCalibration } from '../../core/process/set-calibration';
 import { setModelValues } from '../../core/process/set-model-values';
 import type { SetModelValues } from '../../core/process/set-model-values';
+import type { SetRemovalGoverning } from '../../core/springs/compression/set-removal';
+import { readSetting } from '../settings';
 import { toInternal } from '../../core/units';
 import { parseWith } from '../../core/validation';
 import { invalid, success } from '../errors';
@@ -35,18 +37,18 @@ const EVIDENCE_SQL = `SELECT r.id, r.job_id, j.number AS job_number, r.job_revis
 interface RevisionView { shape: JobShape; model: SetModelValues | null }
 
 /** The shape and model values of the spec a record was made to; null when that spec no longer analyses. */
-function revisionView(raw: string): RevisionView | null {
+function revisionView(raw: string, method: SetRemovalGoverning): RevisionView | null {
   const checked = checkSpec(JSON.parse(raw) as unknown, []);
-  return checked.ok ? { shape: checked.value.shape, model: setModelValues(checked.value.spec) } : null;
+  return checked.ok ? { shape: checked.value.shape, model: setModelValues(checked.value.spec, method) } : null;
 }
 
-function pastRecords(store: Store, asked: JobShape): PastFirstOff[] {
+function pastRecords(store: Store, asked: JobShape, method: SetRemovalGoverning): PastFirstOff[] {
   const rows = store.sql(EVIDENCE_SQL).all(asked.materialFamily) as EvidenceRow[];
   const views = new Map<string, RevisionView | null>();
   const out: PastFirstOff[] = [];
   for (const row of rows) {
     const key = `${row.job_id}:${row.job_revision}`;
-    if (!views.has(key)) views.set(key, revisionView(row.revision_spec));
+    if (!views.has(key)) views.set(key, revisionView(row.revision_spec, method));
     const view = views.get(key)!;
     if (!view) continue;
     const mm = (v: number) => toInternal(v, 'length', row.units);
@@ -71,7 +73,9 @@ export function setCalibration(store: Store, raw: unknown): StoreResult<SetCalib
   const checked = checkSpec(parsed.value.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   const { spec, shape } = checked.value;
-  const model = setModelValues(spec);
-  const past = model ? pastRecords(store, shape) : [];
+  // Past records are read against the model as the shop routes now, so their ratio applies to this spring's value.
+  const method = readSetting(store, 'defaults').setRemovalMethod;
+  const model = setModelValues(spec, method);
+  const past = model ? pastRecords(store, shape, method) : [];
   return success(calibrationInSpecUnits(calibrateSet({ materialFamily: shape.materialFamily, units: spec.units, model }, past)));
 }

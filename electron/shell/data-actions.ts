@@ -1,5 +1,6 @@
 import path from 'node:path';
-import type { ApiResult, MethodName } from '../../core/api';
+import type { ApiResult } from '../../core/api';
+import type { FileActionName } from '../../service/api/files';
 import type { BackupResult, ExportResult, ImportResult, RestoreResult } from '../../core/api/store-types';
 import type { MenuCommand } from '../../core/api/method-names';
 
@@ -18,7 +19,8 @@ export interface DataDialogs {
 
 export interface DataActionDeps {
   dialogs: DataDialogs;
-  call(name: MethodName, input: unknown): Promise<ApiResult<unknown>>;
+  /** The host's file actions (not the contract): paths come only from the dialogs above. */
+  call(name: FileActionName, input: unknown): Promise<ApiResult<unknown>>;
   /** Tells the renderer to reload what it shows. */
   notify(command: MenuCommand): void;
   documentsDir: string;
@@ -27,15 +29,15 @@ export interface DataActionDeps {
 
 const backupFilter: FileFilter = { name: 'Coilwright backup', extensions: ['db'] };
 const jobFilters: FileFilter[] = [{ name: 'Jobs (JSON)', extensions: ['json'] }, { name: 'Jobs (CSV)', extensions: ['csv'] }];
-const failedTitle: Partial<Record<MethodName, string>> = {
+const failedTitle: Record<FileActionName, string> = {
   backup: 'Backup failed', restore: 'Restore failed', importJobs: 'Import failed', exportJobs: 'Export failed',
 };
 const formatOf = (file: string): 'json' | 'csv' => (path.extname(file).toLowerCase() === '.csv' ? 'csv' : 'json');
 
-async function run<T>(deps: DataActionDeps, name: MethodName, input: unknown, done: (value: T) => [string, string]): Promise<boolean> {
+async function run<T>(deps: DataActionDeps, name: FileActionName, input: unknown, done: (value: T) => [string, string]): Promise<boolean> {
   const result = await deps.call(name, input);
   if (!result.ok) {
-    await deps.dialogs.tell('warning', failedTitle[name] ?? `${name} failed`, result.error.message);
+    await deps.dialogs.tell('warning', failedTitle[name], result.error.message);
     return false;
   }
   const [message, detail] = done(result.value as T);
@@ -43,7 +45,10 @@ async function run<T>(deps: DataActionDeps, name: MethodName, input: unknown, do
   return true;
 }
 
-/** Backup, restore, import and export from the File menu: a file dialog in main, then the service. */
+/**
+ * Backup, restore, import and export from the File menu or the Data screen: a file dialog in main, the
+ * confirmation in main, then the host's file action. The window only names the action.
+ */
 export function createDataActions(deps: DataActionDeps) {
   const { dialogs } = deps;
   return {
@@ -74,7 +79,8 @@ export function createDataActions(deps: DataActionDeps) {
       const defaultPath = path.join(deps.documentsDir, `coilwright-jobs-${deps.today()}.json`);
       const file = await dialogs.saveFile({ title: 'Export jobs', defaultPath, filters: jobFilters });
       if (file === null) return;
-      await run<ExportResult>(deps, 'exportJobs', { format: formatOf(file), file },
+      // The system's save dialog has asked before replacing a file, so the export may replace it.
+      await run<ExportResult>(deps, 'exportJobs', { format: formatOf(file), file, force: true },
         (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`,
           [file, ...(v.problems ?? []).map((p) => `Exported as stored, to be put right: ${p.message}`)].join('\n')]);
     },

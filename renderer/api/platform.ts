@@ -1,4 +1,6 @@
 import { shellBridge } from './bridge';
+import { createStoreFiles } from './store-files';
+import type { StoreFiles } from './store-files';
 
 /** Everything the UI needs from the page or the shell besides the API; the screens never reach for globals. */
 export interface Platform {
@@ -16,6 +18,8 @@ export interface Platform {
   readDataUrl(file: File): Promise<string>;
   /** Whether the desktop shell (rather than a browser tab) carries the UI. */
   desktop: boolean;
+  /** Backup and restore of the whole store, without the page naming a file. */
+  storeFiles: StoreFiles;
 }
 
 function bytesOf(base64: string): Uint8Array<ArrayBuffer> {
@@ -41,6 +45,7 @@ export function createPlatform(): Platform {
   const bridge = shellBridge();
   return {
     desktop: bridge !== undefined,
+    storeFiles: createStoreFiles(bridge, download),
     saveFile({ fileName, mimeType, text, base64 }) {
       const body = base64 !== undefined ? bytesOf(base64) : (text ?? '');
       download(new Blob([body], { type: mimeType }), fileName);

@@ -5,15 +5,20 @@ import type { StoreContext, TypedHandlers } from './store';
 import { storeHandlers } from './store';
 import { shopHandlers } from './shop';
 import { documentHandlers } from './documents';
+import { fileActions } from './files';
+import type { FileActions } from './files';
 import { firstOffHandlers } from './first-off';
 import { designHandlers } from './design';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
+export type { FileActionName, FileActions } from './files';
 
 /** The whole API over one store: engine methods plus store methods. `store()` is the store open now. */
 export interface Service {
   handlers: Handlers;
+  /** Backup, restore and file exchange by path: for the command line and the shell's dialogs, never the window. */
+  files: FileActions;
   store(): Store;
   close(): void;
 }
@@ -24,6 +29,7 @@ export function createService(store: Store, openOptions: OpenOptions = {}): Serv
     ...firstOffHandlers(ctx), ...designHandlers(ctx) };
   return {
     handlers,
+    files: fileActions(ctx),
     store: () => ctx.store,
     close: () => ctx.store.close(),
   };

@@ -3,9 +3,9 @@ import type { ApiResult, Contract, MethodOutput } from '../../core/api';
 import type { storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
-  addAttachment, backupStore, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
+  addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
-  restoreStore, saveSettings, setJobStatus, similarJobs, updateJob,
+  saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
 /** Issuing a quote prices the job: the document handlers answer it. */
@@ -44,11 +44,5 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     exportJobs: (input) => exportJobs(ctx.store, input),
     importJobs: (input) => importJobs(ctx.store, input),
     reindexJobs: (input) => reindexJobs(ctx.store, input),
-    backup: (input) => backupStore(ctx.store, input.file),
-    restore: async (input) => {
-      const outcome = await restoreStore(ctx.store, input.file, ctx.openOptions);
-      ctx.store = outcome.store;
-      return outcome.result;
-    },
   };
 }

@@ -1,28 +1,37 @@
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, requireOption, toJson } from './io';
+import type { ApiResult } from '../../core/api';
+import type { FileActions } from '../api';
 import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
 import { createDemoShop } from '../../db';
 
-type Sub = (args: ParsedArgs, call: Caller, out: (text: string) => void) => Promise<void>;
+type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller) => Promise<void>;
+
+/** The command line names its files itself: it reaches the host's file actions, which the window cannot. */
+async function must<T>(result: Promise<ApiResult<T>>): Promise<T> {
+  const r = await result;
+  if (!r.ok) raise(r.error);
+  return r.value;
+}
 
 const subcommands: Record<string, Sub> = {
-  backup: async (args, call, out) => out(toJson(await call('backup', { file: requireOption(args, 'out') }))),
-  restore: async (args, call, out) => out(toJson(await call('restore', { file: requireOption(args, 'from') }))),
-  export: async (args, call, out) => {
+  backup: async (args, files, out) => out(toJson(await must(files.run('backup', { file: requireOption(args, 'out') })))),
+  restore: async (args, files, out) => out(toJson(await must(files.run('restore', { file: requireOption(args, 'from') })))),
+  export: async (args, files, out) => {
     const file = args.options.get('out');
-    const result = await call('exportJobs', {
-      format: args.options.has('csv') ? 'csv' : 'json',
+    const result = await must(files.run('exportJobs', {
+      format: args.options.has('csv') ? 'csv' : 'json', force: args.options.has('force'),
       ...(typeof file === 'string' ? { file } : {}),
-    });
+    }));
     if (result.text !== undefined) out(result.text.replace(/\r?\n$/, ''));
     else out(toJson({ format: result.format, count: result.count, file: result.file }));
   },
-  import: async (args, call, out) => out(toJson(await call('importJobs', {
+  import: async (args, files, out) => out(toJson(await must(files.run('importJobs', {
     file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
-  }))),
-  reindex: async (args, call, out) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
+  })))),
+  reindex: async (args, _files, out, call) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };
 
 export const dbCommand: Command = {
@@ -30,7 +39,8 @@ export const dbCommand: Command = {
   usage: [
     'db backup --db DB --out FILE     online backup of the store to a new file, verified',
     '  db restore --db DB --from FILE  replace the store with a verified backup (the old one is kept beside it)',
-    '  db export --db DB [--out FILE] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV',
+    '  db export --db DB [--out FILE [--force]] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV;',
+    '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
     '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
   ].join('\n'),
@@ -38,7 +48,7 @@ export const dbCommand: Command = {
     const name = args.positional[0];
     const sub = name === undefined ? undefined : subcommands[name];
     if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    await withStore(args, (call) => sub(args, call, out));
+    await withStore(args, (call, service) => sub(args, service.files, out, call));
   },
 };
 

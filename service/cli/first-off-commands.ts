@@ -1,6 +1,7 @@
 import type { SetCalibration } from '../../core/process/set-calibration';
 import { NO_RECORDS, calibrateSet, calibrationInSpecUnits } from '../../core/process/set-calibration';
 import { setModelValues } from '../../core/process/set-model-values';
+import type { SetRemovalGoverning } from '../../core/springs/compression/set-removal';
 import { findGrade } from '../../core/materials';
 import type { Spec } from '../../core/spec';
 import type { Command } from './commands';
@@ -52,9 +53,9 @@ export const firstOffCommand: Command = {
 };
 
 /** The calibration `sheet` prints beside the plan: through the API over the store named by --db, else the model's value with why. */
-export async function sheetCalibration(args: ParsedArgs, spec: Spec): Promise<SetCalibration> {
+export async function sheetCalibration(args: ParsedArgs, spec: Spec, method: SetRemovalGoverning): Promise<SetCalibration> {
   if (typeof args.options.get('db') === 'string') return withStore(args, (call) => call('setCalibration', { spec }));
-  const target = { materialFamily: findGrade(spec.material)?.family ?? 'unknown', units: spec.units, model: setModelValues(spec) };
+  const target = { materialFamily: findGrade(spec.material)?.family ?? 'unknown', units: spec.units, model: setModelValues(spec, method) };
   const c = calibrationInSpecUnits(calibrateSet(target, []));
   return c.reason === NO_RECORDS ? { ...c, reason: 'no job store named (--db), so no first-off records: the model\'s coiled free length stands' } : c;
 }

@@ -1,4 +1,4 @@
-import { parseSpec } from '../../core/spec';
+import { parsePrintFile } from '../../core/documents';
 import type { Spec } from '../../core/spec';
 import { defaultSettings } from '../../core/settings/schema';
 import type { Settings } from '../../core/settings/schema';
@@ -11,13 +11,11 @@ import { InputError, readJson, toJson } from './io';
 import { intOption, positional } from './store-session';
 import { sheetCalibration } from './first-off-commands';
 
-/** A spec file, or a job file whose `spec` (and `orderQuantity`) are used. */
+/** A spec file, or a job file (checked as `jobs add` and `print` check it) whose `spec` and `orderQuantity` are used. */
 export function specAndQuantity(raw: unknown): { spec: Spec; orderQuantity?: number } {
-  const isJob = typeof raw === 'object' && raw !== null && !('kind' in raw) && 'spec' in raw;
-  const parsed = parseSpec(isJob ? (raw as { spec: unknown }).spec : raw);
-  if (!parsed.ok) throw new InputError(isJob ? parsed.errors.map((e) => ({ ...e, path: `spec.${e.path}` })) : parsed.errors);
-  const q = isJob ? (raw as { orderQuantity?: unknown }).orderQuantity : undefined;
-  return { spec: parsed.value, orderQuantity: typeof q === 'number' ? q : undefined };
+  const parsed = parsePrintFile(raw);
+  if (!parsed.ok) throw new InputError(parsed.errors);
+  return { spec: parsed.value.spec, orderQuantity: parsed.value.orderQuantity ?? undefined };
 }
 
 /** The shop's settings from --db, or a new shop's defaults when no store is named. */
@@ -54,8 +52,9 @@ export const sheetCommand: Command = {
   usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
   async run(args, out) {
     const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
-    const plan = planManufacture(spec, settingsFor(args, false), orderQuantity(args, fromFile, spec));
-    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec) }));
+    const settings = settingsFor(args, false);
+    const plan = planManufacture(spec, settings, orderQuantity(args, fromFile, spec));
+    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec, settings.defaults.setRemovalMethod) }));
   },
 };
 

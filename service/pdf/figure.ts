@@ -1,14 +1,20 @@
 /** SVG figures and logos placed in the flow with svg-to-pdfkit, their aspect ratio kept. */
 import SVGtoPDF from 'svg-to-pdfkit';
 import type { FigureModel } from '../../core/documents';
+import { cleanLogoSvg } from '../../core/documents';
 import type { Doc } from './layout';
 import { contentWidth, ensureSpace, leftEdge, put } from './layout';
 import { colour, gap, size } from './style';
 
 const CAPTION = 12;
 
+/** Images only from embedded PNG/JPEG data: the writer never opens a file or address an SVG names. */
+const embeddedOnly = (link: string): string => (/^data:image\/(png|jpeg);base64,/.test(link) ? link : '');
+
 export function drawSvg(doc: Doc, svg: string, x: number, y: number, width: number, height: number): void {
-  SVGtoPDF(doc, svg, x, y, { width, height, preserveAspectRatio: 'xMidYMid meet' });
+  SVGtoPDF(doc, svg, x, y, {
+    width, height, preserveAspectRatio: 'xMidYMid meet', imageCallback: embeddedOnly, documentCallback: () => [],
+  });
 }
 
 /** The figure as large as fits `maxWidth` × `maxHeight` (never enlarged), centred, caption below. */
@@ -36,8 +42,11 @@ export function drawLogo(doc: Doc, dataUrl: string, x: number, y: number, width:
   if (!m) return false;
   const bytes = Buffer.from(m[2]!, 'base64');
   try {
-    if (m[1] === 'svg+xml') drawSvg(doc, bytes.toString('utf8'), x, y, width, height);
-    else doc.image(bytes, x, y, { fit: [width, height] });
+    if (m[1] === 'svg+xml') {
+      const svg = cleanLogoSvg(bytes.toString('utf8'));
+      if (svg === null) return false;
+      drawSvg(doc, svg, x, y, width, height);
+    } else doc.image(bytes, x, y, { fit: [width, height] });
     return true;
   } catch {
     return false;

@@ -6,6 +6,8 @@ declare module 'svg-to-pdfkit' {
     assumePt?: boolean;
     precision?: number;
     warningCallback?: (message: string) => void;
+    imageCallback?: (link: string) => string;
+    documentCallback?: (file: string) => string[] | string;
     fontCallback?: (family: string, bold: boolean, italic: boolean) => string;
   }
   /** Draws SVG markup into a pdfkit document at (x, y). */

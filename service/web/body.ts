@@ -11,15 +11,18 @@ function collect(req: IncomingMessage, limit: number): Promise<Buffer | null> {
   return new Promise((resolve, reject) => {
     const chunks: Buffer[] = [];
     let size = 0;
-    req.on('data', (chunk: Buffer) => {
+    const onData = (chunk: Buffer) => {
       size += chunk.length;
       if (size > limit) {
         chunks.length = 0;
+        req.off('data', onData);
+        req.pause();
         resolve(null);
       } else {
         chunks.push(chunk);
       }
-    });
+    };
+    req.on('data', onData);
     req.on('end', () => resolve(Buffer.concat(chunks)));
     req.on('error', reject);
   });

@@ -8,6 +8,7 @@ import type { Service } from '../api';
 import { openShopStore } from '../host/first-run';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
+import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
 import { sendFile, sendJson, sendText } from './respond';
 
 export const WEB_HOST = '127.0.0.1';
@@ -19,6 +20,8 @@ export interface WebServerOptions {
   port?: number;
   token?: string;
   maxBodyBytes?: number;
+  /** Largest backup a restore may upload (2 GiB unless given). */
+  maxUploadBytes?: number;
   /** Where unexpected failures go; stderr by default. */
   onUnexpected?: (context: string, error: unknown) => void;
 }
@@ -37,6 +40,7 @@ interface Context {
   staticDir: string;
   token: string;
   maxBodyBytes: number;
+  maxUploadBytes: number;
   port: () => number;
   onUnexpected: (context: string, error: unknown) => void;
 }
@@ -54,12 +58,20 @@ function foreignOrigin(req: IncomingMessage, port: number): boolean {
   return origin !== undefined && origin !== `http://${WEB_HOST}:${port}` && origin !== `http://localhost:${port}`;
 }
 
+/** Answers 413 and closes the connection once the answer is out: the rest of the body is never read. */
+function refuseBody(req: IncomingMessage, res: ServerResponse, error: ApiError): void {
+  res.setHeader('connection', 'close');
+  res.once('finish', () => req.socket.destroy());
+  sendJson(res, 413, { ok: false, error });
+}
+
 async function callApi(ctx: Context, req: IncomingMessage, res: ServerResponse, method: string): Promise<void> {
   if (!(req.headers['content-type'] ?? '').toLowerCase().startsWith('application/json')) {
     return sendJson(res, 415, valueError('unsupported-media-type', 'send the input as application/json'));
   }
   if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
   const body = await readJsonBody(req, ctx.maxBodyBytes);
+  if (!body.ok && body.status === 413) return refuseBody(req, res, body.error);
   if (!body.ok) return sendJson(res, body.status, { ok: false, error: body.error });
   const result = await dispatch(ctx.service.handlers, method, body.value, { onUnexpected: (m, e) => ctx.onUnexpected(`api:${m}`, e) });
   const status = !result.ok && result.error.code === 'unknown-method' ? 404 : 200;
@@ -97,6 +109,12 @@ async function route(ctx: Context, req: IncomingMessage, res: ServerResponse): P
     return isApi ? sendJson(res, 401, valueError('unauthorized', 'open the address printed by "npm run web" first')) : sendText(res, 401, 'unauthorized');
   }
   if (isApi) return routeApi(ctx, req, res, pathname);
+  if (pathname === BACKUP_ROUTE && req.method === 'GET') return sendBackup(ctx.service, res, new Date().toISOString().slice(0, 10));
+  if (pathname === RESTORE_ROUTE) {
+    if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'a restore is sent with POST'));
+    if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
+    return receiveRestore(ctx.service, req, res, ctx.maxUploadBytes);
+  }
   if (req.method !== 'GET' && req.method !== 'HEAD') return sendText(res, 405, 'method not allowed');
   return sendFile(res, ctx.staticDir, pathname, req.method === 'HEAD');
 }
@@ -129,6 +147,7 @@ export async function startWebServer(options: WebServerOptions): Promise<WebServ
     staticDir: options.staticDir,
     token: options.token ?? newToken(),
     maxBodyBytes: options.maxBodyBytes ?? 5_000_000,
+    maxUploadBytes: options.maxUploadBytes ?? 2 * 1024 ** 3,
     port: () => port,
     onUnexpected: options.onUnexpected ?? ((context, e) => console.error(`[${context}]`, e)),
   };

@@ -74,7 +74,7 @@ describe('starting the shell', () => {
   });
 
   it('registers every API method and the two PDF channels, all sender-checked', async () => {
-    expect([...captured.ipcMain.keys()].sort()).toEqual([...methodNames.map(apiChannel), 'pdf:preview', 'pdf:save'].sort());
+    expect([...captured.ipcMain.keys()].sort()).toEqual([...methodNames.map(apiChannel), 'pdf:preview', 'pdf:save', 'data:action'].sort());
     for (const channel of captured.ipcMain.keys()) {
       expect(await invoke(channel, ipcEvent('https://evil.example/'), {}), channel).toMatchObject({ ok: false, error: { code: 'untrusted-sender' } });
     }

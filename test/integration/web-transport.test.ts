@@ -1,6 +1,6 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { request } from 'node:http';
-import type { AddressInfo } from 'node:net';
+import { Agent, request } from 'node:http';
+import type { AddressInfo, Socket } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -192,6 +192,68 @@ describe('the loopback web transport', () => {
     const fine = await raw(small, { path: '/api/listGrades', method: 'POST', body: '{}',
       headers: { 'content-type': 'application/json', 'x-coilwright-token': small.token } });
     expect(fine.status).toBe(200);
+  });
+
+  it('stops reading a body as soon as it answers 413, closing the connection', async () => {
+    let serverSide: Socket | undefined;
+    small.server.once('connection', (socket: Socket) => { serverSide = socket; });
+    const status = await new Promise<number>((resolve) => {
+      let answered = 0;
+      const chunk = Buffer.alloc(16 * 1024, 0x20);
+      const req = request({ host: '127.0.0.1', port: small.port, path: '/api/calculate', method: 'POST', agent: new Agent({ keepAlive: true }),
+        headers: { 'content-type': 'application/json', 'x-coilwright-token': small.token, 'transfer-encoding': 'chunked' } }, (res) => {
+        answered = res.statusCode ?? 0;
+        res.resume();
+      });
+      req.on('error', () => undefined);
+      const pump = (): void => {
+        if (req.destroyed) return;
+        if (req.write(chunk)) setImmediate(pump);
+        else req.once('drain', pump);
+      };
+      req.on('socket', (socket) => {
+        socket.on('close', () => resolve(answered));
+        pump();
+      });
+    });
+    expect(status).toBe(413);
+    // The limit is 2000 bytes; a server that drains the rest of an endless body reads megabytes before it
+    // gives up. One socket buffer past the limit is all a server that stops at once can have taken in.
+    expect(serverSide!.bytesRead).toBeLessThan(512 * 1024);
+  });
+
+  it('answers 3 KB of deep nesting with a field error, not HTTP 500', async () => {
+    const body = `{"jobId":1,"quantityBreaks":[],"document":{},"prices":${'['.repeat(1400)}1${']'.repeat(1400)}}`;
+    expect(body.length).toBeLessThan(3100);
+    const res = await fetch(`http://127.0.0.1:${web.port}/api/issueQuote`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body });
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({ ok: false, error: { code: 'input-too-deep', path: 'prices' } });
+  });
+
+  it('downloads a backup and restores an uploaded one; no request names a path', async () => {
+    const created = await (await api('createJob', { partNumber: 'BACKED-UP', spec: valveSpringMetric })).json();
+    expect(created.ok).toBe(true);
+    const download = await fetch(`http://127.0.0.1:${web.port}/files/backup`, { headers: { cookie } });
+    expect(download.status).toBe(200);
+    expect(download.headers.get('content-disposition')).toMatch(/^attachment; filename="coilwright-backup-\d{4}-\d{2}-\d{2}\.db"$/);
+    const bytes = Buffer.from(await download.arrayBuffer());
+    expect(bytes.subarray(0, 15).toString()).toBe('SQLite format 3');
+    await api('createJob', { partNumber: 'AFTER-BACKUP', spec: valveSpringMetric });
+    const restored = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, 'content-type': 'application/octet-stream', 'x-file-name': 'shop%20backup.db' }, body: bytes,
+    });
+    expect(await restored.json()).toMatchObject({ ok: true, value: { restoredFrom: 'shop backup.db' } });
+    const list = await (await api('findJobs', { text: 'AFTER-BACKUP' })).json();
+    expect(list).toEqual({ ok: true, value: [] });
+    const notStore = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, 'content-type': 'application/octet-stream' }, body: '/etc/passwd',
+    });
+    expect((await notStore.json()).ok).toBe(false);
+    const foreign = await fetch(`http://127.0.0.1:${web.port}/files/restore`, {
+      method: 'POST', headers: { cookie, origin: 'https://evil.example', 'content-type': 'application/octet-stream' }, body: bytes,
+    });
+    expect(foreign.status).toBe(403);
+    expect((await fetch(`http://127.0.0.1:${web.port}/files/backup`)).status).toBe(401);
   });
 
   it('answers an unknown method with 404 and dispatch’s value', async () => {

@@ -23,7 +23,8 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
     await page.getByRole('tab', { name: 'First-off' }).click();
     await page.getByRole('heading', { name: `First-off inspection, job ${number}` }).waitFor();
     await expect(page.getByText('None yet.').isVisible()).resolves.toBe(true);
-    await field(page, 'Coiled free length used').fill('61.8');
+    // Coiled to about the set model's 65.4 mm for this spring.
+    await field(page, 'Coiled free length used').fill('65.4');
     // Below the solid length: a set larger than the coiled deflection.
     await field(page, 'Free length after set removal').fill('20');
     await field(page, 'Force at L1 = 45.00 mm').fill('15x');
@@ -46,9 +47,9 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
   });
 
   it('records the corrected first-off and lists it with its set', async () => {
-    await field(page, 'Free length after set removal').fill('60.02');
+    await field(page, 'Free length after set removal').fill('59.6');
     await page.getByRole('button', { name: 'Record first-off' }).click();
-    await page.getByRole('status').filter({ hasText: `First-off recorded for job ${number}: set 1.78 mm.` }).waitFor();
+    await page.getByRole('status').filter({ hasText: `First-off recorded for job ${number}: set 5.80 mm.` }).waitFor();
     const row = page.locator('section[aria-labelledby="first-off-records-title"] tbody tr');
     await expect(row.count()).resolves.toBe(1);
     await expect(row.first().textContent()).resolves.toContain('R. Demo');

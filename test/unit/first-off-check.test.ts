@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkFirstOff } from '../../core/first-off/check';
-import { setModelValues } from '../../core/process/set-model-values';
+import { finishedLengths } from '../../core/process/set-model-values';
 import { parseSpec } from '../../core/spec';
 import type { Spec } from '../../core/spec';
 import { MM_PER_IN } from '../../core/units';
@@ -22,7 +22,7 @@ describe('checking a first-off record against its job', () => {
   it('accepts a record in the job\'s units and compares it with the solid length in those units', () => {
     expect(checkFirstOff(record, inchSpring).ok).toBe(true);
     // Squared and ground ends: solid length Ls = d·Nt (Shigley, Mechanical Engineering Design, 9th ed., Table 10-1) = 0.12 × 9 = 1.08 in.
-    expect(setModelValues(inchSpring)!.solidLength).toBeCloseTo(1.08 * MM_PER_IN, 9);
+    expect(finishedLengths(inchSpring)!.solidLength).toBeCloseTo(1.08 * MM_PER_IN, 9);
     const below = checkFirstOff({ ...record, freeLengthAfterSet: 1.0, forces: [] }, inchSpring, ['firstOff', 2]);
     expect(below).toMatchObject({ ok: false, errors: [{ code: 'set-beyond-deflection', path: 'firstOff[2].freeLengthAfterSet' }] });
     if (!below.ok) expect(below.errors[0]!.message).toMatch(/1\.370 in\).*1\.080 in/);

@@ -11,8 +11,8 @@ export function DataScreen() {
       <div className="screen__head"><ScreenHeading id="data-title">Data &amp; backups</ScreenHeading></div>
       <p className="muted">
         {platform.desktop
-          ? 'The File menu offers the same with file dialogs. Paths here are on this computer.'
-          : 'Paths are on the computer that runs the Coilwright service (for this window, the same computer).'}
+          ? 'Files are chosen in the system’s own dialogs, as from the File menu.'
+          : 'Files come from and go to your browser: backups and exports download, restores and imports upload.'}
       </p>
       <div className="data-grid">
         <BackupPanel />

@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import type { ExportResult, ImportResult, JobStatus } from '../../../core/api';
 import { jobStatuses } from '../../../core/api';
 import { useApi, usePlatform } from '../../api';
-import { PlainInput, PlainSelect } from '../../components/Plain';
+import { PlainSelect } from '../../components/Plain';
 import { useCommandBus } from '../../hooks/commands';
 import { useShopData } from '../../hooks/shop-data';
 import { statusLabels } from '../../model/labels';
@@ -21,10 +21,9 @@ export function ExportPanel() {
   const platform = usePlatform();
   const [format, setFormat] = useState<'json' | 'csv'>('json');
   const [status, setStatus] = useState('');
-  const [file, setFile] = useState('');
   const { call, run, running } = useLongCall<ExportResult>();
   const go = async () => {
-    const input = { format, status: (status || undefined) as JobStatus | undefined, file: file.trim() || undefined };
+    const input = { format, status: (status || undefined) as JobStatus | undefined };
     const r = await run('Exporting…', () => api.exportJobs(input));
     if (r?.text !== undefined) {
       platform.saveFile({ fileName: `coilwright-jobs.${format}`, mimeType: format === 'csv' ? 'text/csv' : 'application/json', text: r.text });
@@ -38,7 +37,6 @@ export function ExportPanel() {
         <PlainSelect label="Jobs" value={status} onChange={setStatus}
           choices={[{ value: '', label: 'every job' }, ...jobStatuses.map((s) => ({ value: s, label: `${statusLabels[s]} only` }))]} />
       </div>
-      <PlainInput label="Write to a file (optional)" value={file} onChange={setFile} hint="Leave empty to download the file" />
       <button type="button" className="button button--primary" disabled={running} onClick={() => void go()}>Export</button>
       <CallOutcome call={call} done={exportedText} />
     </section>

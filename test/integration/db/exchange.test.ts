@@ -61,8 +61,8 @@ describe('export and import', () => {
     const csv = value(exportJobs(source, { format: 'csv' })).text!;
     const records = parseCsv(csv);
     expect(records).toHaveLength(3);
-    expect(records[0]!.fields.slice(0, 3)).toEqual(['number', 'customer', 'partNumber']);
-    expect(records[1]!.fields[6]).toBe('line one\nline two, with "quotes"');
+    expect(records[0]!.fields.slice(0, 5)).toEqual(['number', 'customer', 'customerEmail', 'customerPhone', 'partNumber']);
+    expect(records[1]!.fields[8]).toBe('line one\nline two, with "quotes"');
     expect(records[2]!.line).toBe(4);
     const target = tempStore();
     expect(value(importJobs(target, { text: csv, format: 'csv' })).imported).toHaveLength(2);
@@ -91,5 +91,25 @@ describe('CSV and spreadsheets', () => {
     expect(unguarded(parseCsv(guarded)[0]!.fields[0]!)).toBe('=HYPERLINK("http://x")');
     expect(csvField(-5)).toBe('-5');
     expect(unguarded("'plain")).toBe("'plain");
+  });
+
+  // OWASP "CSV Injection" guidance (common practice): spreadsheets skip leading blanks and line feeds and
+  // read the fullwidth signs as formula starts too, so those are guarded like a plain "=".
+  it.each([' =1+1', '\n=1+1', '\r\n=cmd', '＝1+1', '＋1', '－1', '＠SUM(A1)', '\u3000=1'])('guards %j and reads it back unchanged', (text) => {
+    const written = csvField(text);
+    expect(parseCsv(written)[0]!.fields[0]!.startsWith("'")).toBe(true);
+    expect(unguarded(parseCsv(written)[0]!.fields[0]!)).toBe(text);
+  });
+
+  it('keeps text that starts with an apostrophe, and the customer e-mail and phone, through a CSV round trip', () => {
+    const source = tempStore();
+    value(createJob(source, job({ partNumber: "'=not a formula", notes: "'quoted", customer: { name: 'Ardent Gate Co. (demo)', email: 'parts@ardent.example', phone: '+44 20 7946 0000' } })));
+    const csv = value(exportJobs(source, { format: 'csv' })).text!;
+    const target = tempStore();
+    value(importJobs(target, { text: csv, format: 'csv' }));
+    const back = JSON.parse(value(exportJobs(target, {})).text!).jobs[0];
+    expect(back.partNumber).toBe("'=not a formula");
+    expect(back.notes).toBe("'quoted");
+    expect(back.customer).toEqual({ name: 'Ardent Gate Co. (demo)', email: 'parts@ardent.example', phone: '+44 20 7946 0000' });
   });
 });

@@ -25,14 +25,29 @@ describe('store service', () => {
     service.close();
   });
 
+  it('takes no file path through any contract method: backups, restores and file exchange are the host\'s', async () => {
+    const service = createService(openStore(join(tempDir(), 'shop.db')));
+    expect(methodNames).not.toContain('backup');
+    expect(methodNames).not.toContain('restore');
+    for (const [name, input] of [
+      ['exportJobs', { file: '/etc/cron.d/x' }], ['importJobs', { file: '/etc/passwd' }], ['backup', { file: '/tmp/x.db' }], ['restore', { file: '/tmp/x.db' }],
+    ] as const) {
+      const r = await dispatch(service.handlers, name, input);
+      expect(r.ok, name).toBe(false);
+      expect(!r.ok && r.error.code, name).toMatch(/unknown-field|unknown-method|invalid/);
+      expect(!r.ok && r.error.message, name).not.toMatch(/root:|cron/);
+    }
+    service.close();
+  });
+
   it('swaps to the restored store after a restore', async () => {
     const dir = tempDir();
     const service = createService(openStore(join(dir, 'shop.db')));
     await dispatch(service.handlers, 'createJob', job({ partNumber: 'KEPT' }));
-    expect(await dispatch(service.handlers, 'backup', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
+    expect(await service.files.run('backup', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
     await dispatch(service.handlers, 'createJob', job({ partNumber: 'UNDONE' }));
     const before = service.store();
-    expect(await dispatch(service.handlers, 'restore', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
+    expect(await service.files.run('restore', { file: join(dir, 'b.db') })).toMatchObject({ ok: true });
     expect(service.store()).not.toBe(before);
     const page = await dispatch(service.handlers, 'listJobs', {});
     expect(page.ok && (page.value as { jobs: { partNumber: string }[] }).jobs.map((j) => j.partNumber)).toEqual(['KEPT']);

@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import QRCode from 'qrcode';
 import { describe, expect, it } from 'vitest';
 import { REVIEW_CAUTION, STORED_ENERGY_CAUTION, parseQuoteDocument, quoteDocument, withQuoteIssue } from '../../../core/documents';
@@ -87,6 +90,20 @@ describe('quote PDF', () => {
     const text = (await pdfText(await renderQuote(plated))).all;
     expect(text).toContain('Finish Zinc plate, clear');
     expect(text).toContain('Hydrogen relief bake ISO 9588, per drawing note 3');
+  });
+
+  it('never embeds a file an SVG logo names, only images carried inside it', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'cw-logo-'));
+    const local = join(dir, 'private.png');
+    writeFileSync(local, Buffer.from((await QRCode.toDataURL('private')).split(',')[1]!, 'base64'));
+    const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="40" height="20"><rect width="40" height="20" fill="#246"/><image href="${local}" width="20" height="20"/></svg>`;
+    const logo = `data:image/svg+xml;base64,${Buffer.from(svg).toString('base64')}`;
+    const pdf = await renderQuote(quote(spec, settingsWith({ shopProfile: { ...settings.shopProfile, logo } })));
+    rmSync(dir, { recursive: true, force: true });
+    expect(pdf.includes('/Subtype /Image')).toBe(false);
+    const embedded = svg.replace(local, await QRCode.toDataURL('inside', { margin: 1 }));
+    const inside = `data:image/svg+xml;base64,${Buffer.from(embedded).toString('base64')}`;
+    expect((await renderQuote(quote(spec, settingsWith({ shopProfile: { ...settings.shopProfile, logo: inside } })))).includes('/Subtype /Image')).toBe(true);
   });
 
   it('refuses a damaged stored model and names the field', () => {

@@ -1,0 +1,43 @@
+import type { z } from 'zod';
+import { inputError } from '../../core/api';
+import type { ApiResult } from '../../core/api';
+import { backupSchema, exportFileSchema, importFileSchema, restoreSchema } from '../../core/api/store';
+import type { BackupResult, ExportResult, ImportResult, RestoreResult } from '../../core/api/store';
+import { zodErrors } from '../../core/validation';
+import { backupStore, exportJobs, importJobs, restoreStore } from '../../db';
+import type { StoreContext } from './store';
+
+/**
+ * What names files on this computer: backup, restore, export to and import from a file. These are not
+ * contract methods, so neither the window (IPC) nor the web transport can reach them; the command line
+ * passes its explicit paths, and the desktop shell passes the paths its own file dialogs returned.
+ */
+const schemas = { backup: backupSchema, restore: restoreSchema, exportJobs: exportFileSchema, importJobs: importFileSchema };
+interface Outputs { backup: BackupResult; restore: RestoreResult; exportJobs: ExportResult; importJobs: ImportResult }
+
+export type FileActionName = keyof typeof schemas;
+export type FileActionInput<K extends FileActionName> = z.input<(typeof schemas)[K]>;
+
+export interface FileActions {
+  run<K extends FileActionName>(name: K, input: FileActionInput<K>): Promise<ApiResult<Outputs[K]>>;
+}
+
+export function fileActions(ctx: StoreContext): FileActions {
+  const handlers: { [K in FileActionName]: (input: z.output<(typeof schemas)[K]>) => Promise<ApiResult<Outputs[K]>> | ApiResult<Outputs[K]> } = {
+    backup: (input) => backupStore(ctx.store, input.file),
+    restore: async (input) => {
+      const outcome = await restoreStore(ctx.store, input.file, ctx.openOptions);
+      ctx.store = outcome.store;
+      return outcome.result;
+    },
+    exportJobs: (input) => exportJobs(ctx.store, input),
+    importJobs: (input) => importJobs(ctx.store, input),
+  };
+  return {
+    async run(name, input) {
+      const parsed = schemas[name].safeParse(input);
+      if (!parsed.success) return { ok: false, error: inputError(zodErrors(parsed.error)) };
+      return (handlers[name] as (i: unknown) => Promise<ApiResult<never>> | ApiResult<never>)(parsed.data);
+    },
+  };
+}
