@@ -5,12 +5,13 @@ import { engineSuite } from './suites/engine';
 import { storeMillionSuite, storeSuite } from './suites/store';
 import { documentsSuite } from './suites/documents';
 import { rendererSuite } from './suites/renderer';
+import { quotingSuite } from './suites/quoting';
 import { cliSuite } from './suites/cli';
 import { crashSuite } from './suites/crash';
 import { designSuite } from './suites/design';
 import { fuzzSuite } from './suites/fuzz';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite, quotingSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -1,5 +1,6 @@
-import type { IssueQuoteInput, Quote, QuoteSummary, RevisionFields } from '../core/api/store';
-import { issueQuoteSchema, listQuotesSchema } from '../core/api/store';
+import type { Quote, QuoteSummary, RevisionFields } from '../core/api/store';
+import { listQuotesSchema } from '../core/api/store';
+import type { IssueDecision } from '../core/quoting/problems';
 import type { Settings } from '../core/settings/schema';
 import { StoreError, failure, invalid, success } from './errors';
 import type { StoreResult } from './errors';
@@ -8,7 +9,7 @@ import { jobRow } from './jobs/read';
 import { storedSpecOf } from './jobs/rows';
 import { readStoredSpec } from './jobs/stored-spec';
 import { revisionFields, stateOfRow } from './jobs/state';
-import { attempt } from './jobs/write';
+import { attempt, updateJob } from './jobs/write';
 import { readSettings } from './settings';
 import type { Store } from './store';
 import { inTransaction } from './store';
@@ -17,6 +18,7 @@ import { parseWith } from '../core/validation';
 interface QuoteRow {
   id: number; number: string; job_id: number; job_revision: number; issued_at: string; validity_days: number;
   currency: string; job?: string; spec?: string; settings?: string; prices?: string; quantity_breaks?: string; document?: string;
+  decision?: string | null;
 }
 
 const DAY_MS = 86_400_000;
@@ -41,34 +43,55 @@ function toQuote(row: QuoteRow): StoreResult<Quote> {
     prices: JSON.parse(row.prices!),
     quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
     document: JSON.parse(row.document!),
+    decision: row.decision ? JSON.parse(row.decision) as IssueDecision : null,
   });
 }
 
+/** What the service worked out for a quote: the estimate, the breaks, the document model and any decision. */
+export interface QuoteSnapshot {
+  jobId: number;
+  /** The job revision the figures were worked from: the issue is refused if the job was saved since. */
+  jobRevision: number;
+  validityDays: number;
+  prices: unknown;
+  quantityBreaks: number[];
+  document: unknown;
+  decision: IssueDecision | null;
+}
+
+/** A quoted job moves to "quoted" from draft (or stays there when quoted again); later states are kept. */
+const MOVES_TO_QUOTED = new Set(['draft', 'quoted', 'lost']);
+
 /**
- * Issues a quote: copies the job as it stands, its spec, the whole shop settings and the caller's prices
- * and document inputs into one row that can never change afterwards.
+ * Records an issued quote: copies the job as it stands, its spec and the whole shop settings with the
+ * service's figures into one row that can never change afterwards, and moves the job to "quoted".
  */
-export function issueQuote(store: Store, raw: IssueQuoteInput): StoreResult<Quote> {
-  const parsed = parseWith(issueQuoteSchema, raw);
-  if (!parsed.ok) return invalid(parsed.errors);
-  const input = parsed.value;
+export function recordQuote(store: Store, snapshot: QuoteSnapshot): StoreResult<Quote> {
   return attempt(() => {
     const id = inTransaction(store, () => {
-      const row = jobRow(store, input.jobId);
-      if (!row) return undefined;
+      const row = jobRow(store, snapshot.jobId);
+      if (!row) throw new StoreError('not-found', `no job with id ${snapshot.jobId}`, 'jobId');
+      if (row.revision !== snapshot.jobRevision) {
+        throw new StoreError('stale-revision', `job ${row.number} was saved while the quote was being priced: issue it again`, 'jobId');
+      }
       const stored = storedSpecOf(row);
       if (!stored.ok) throw new StoreError(stored.problem.code, stored.problem.message, stored.problem.path);
       const settings = readSettings(store);
       const number = takeNumber(store, 'quotes');
       const job = { number: row.number, ...revisionFields(store, stateOfRow(row)) };
       const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
-                                  settings, prices, quantity_breaks, document) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
-        .run(number, row.id, row.revision, store.now().toISOString(), input.validityDays ?? settings.defaults.quoteValidityDays,
-          settings.defaults.currency, JSON.stringify(job), JSON.stringify(stored.spec), JSON.stringify(settings), JSON.stringify(input.prices),
-          JSON.stringify(input.quantityBreaks), JSON.stringify(input.document));
+                                  settings, prices, quantity_breaks, document, decision) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+        .run(number, row.id, row.revision, store.now().toISOString(), snapshot.validityDays, settings.defaults.currency,
+          JSON.stringify(job), JSON.stringify(stored.spec), JSON.stringify(settings), JSON.stringify(snapshot.prices),
+          JSON.stringify(snapshot.quantityBreaks), JSON.stringify(snapshot.document),
+          snapshot.decision === null ? null : JSON.stringify(snapshot.decision));
+      if (MOVES_TO_QUOTED.has(row.status) && row.status !== 'quoted') {
+        const moved = updateJob(store, { id: row.id, status: 'quoted' }, `quoted (${number})`);
+        if (!moved.ok) throw new StoreError(moved.error.code, moved.error.message, moved.error.path);
+      }
       return Number(result.lastInsertRowid);
     });
-    return id === undefined ? failure('not-found', `no job with id ${input.jobId}`, 'jobId') : getQuote(store, { id });
+    return getQuote(store, { id });
   });
 }
 

@@ -4,6 +4,7 @@ import { StoreError, invalid, success } from './errors';
 import type { StoreResult } from './errors';
 import type { Store } from './store';
 import { inTransaction } from './store';
+import { recordSettingsVersion } from './settings-versions';
 
 /** One settings document; a key never saved reads as its default. */
 export function readSetting<K extends SettingsKey>(store: Store, key: K): Settings[K] {
@@ -37,6 +38,7 @@ export function saveSettings(store: Store, patch: unknown): StoreResult<Settings
     for (const [key, value] of Object.entries(parsed.value)) {
       writeSetting(store, key as SettingsKey, value as Settings[SettingsKey]);
     }
+    recordSettingsVersion(store);
   });
   return success(readSettings(store));
 }

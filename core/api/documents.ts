@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { method } from './contract';
+import { issueQuoteSchema } from './store-schemas';
 
 const jobId = z.number().int().positive();
 
@@ -17,6 +18,7 @@ export interface PrintedPdf {
 export const documentMethods = {
   printTraveller: method<z.ZodObject<{ jobId: typeof jobId; quantity: z.ZodOptional<typeof jobId> }>, PrintedPdf>(
     z.object({ jobId, quantity: jobId.optional() }).strict()),
-  printQuote: method<z.ZodObject<{ jobId: typeof jobId }>, PrintedPdf>(z.object({ jobId }).strict()),
+  /** Issues the job's quote (priced by the service, guarded as `issueQuote`) and prints it. */
+  printQuote: method<typeof issueQuoteSchema, PrintedPdf>(issueQuoteSchema),
   reprintQuote: method<z.ZodObject<{ number: z.ZodString }>, PrintedPdf>(z.object({ number: z.string().min(1).max(40) }).strict()),
 };

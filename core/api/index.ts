@@ -9,6 +9,7 @@ import type { MethodInput, MethodOutput, ApiResult } from './contract';
 export * from './contract';
 export * from './store';
 export type { PrintedPdf } from './documents';
+export type { JobCostReview } from './shop';
 export * from './first-off';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */

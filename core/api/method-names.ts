@@ -11,7 +11,7 @@ export const apiMethodNames = [
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision',
   'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
   'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs',
-  'manufacturingPlan', 'costEstimate', 'printTraveller', 'printQuote', 'reprintQuote',
+  'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
   'designSprings', 'adoptDesign', 'jobRequirement',
 ] as const;

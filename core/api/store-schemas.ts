@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { jobJudgementSchema, noJudgement } from '../quoting/judgement';
 import { specBounds } from '../spec/bounds';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
@@ -26,6 +27,7 @@ const fields = {
   dueDate: isoDateSchema.nullable(),
   orderQuantity: z.number().int().positive().max(specBounds.orderQuantity.max, `at most ${specBounds.orderQuantity.max}: ${specBounds.orderQuantity.reason}`).nullable(),
   leadTimeDays: z.number().int().min(0).max(3650).nullable(),
+  judgement: jobJudgementSchema,
 };
 
 /** A new job. Give the customer by name (found or added) or by id, or leave it out. */
@@ -40,10 +42,14 @@ export const jobInputSchema = z.object({
   dueDate: fields.dueDate.default(null),
   orderQuantity: fields.orderQuantity.default(null),
   leadTimeDays: fields.leadTimeDays.default(null),
+  judgement: fields.judgement.default(noJudgement()),
   spec: z.unknown(),
 }).strict();
 export type JobInput = z.input<typeof jobInputSchema>;
 export type JobFields = z.output<typeof jobInputSchema>;
+
+export const jobChangeSchema = z.enum(['drawing-revision', 'correction']);
+export type JobChange = z.infer<typeof jobChangeSchema>;
 
 /** A save: only the fields given change; `expectedRevision` refuses the save if someone saved since. */
 export const jobPatchSchema = z.object({
@@ -59,7 +65,10 @@ export const jobPatchSchema = z.object({
   dueDate: fields.dueDate.optional(),
   orderQuantity: fields.orderQuantity.optional(),
   leadTimeDays: fields.leadTimeDays.optional(),
+  judgement: fields.judgement.optional(),
   spec: z.unknown().optional(),
+  /** Needed to edit a quoted, ordered or in-production job: a new drawing revision (give it) or a correction. */
+  change: jobChangeSchema.optional(),
 }).strict();
 export type JobPatch = z.input<typeof jobPatchSchema>;
 
@@ -108,13 +117,14 @@ export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ numbe
 export const restoreRevisionSchema = z.object({ id, revision: z.number().int().positive() }).strict();
 export const setJobStatusSchema = z.object({ id, status: jobStatusSchema, expectedRevision: z.number().int().positive().optional() }).strict();
 
-/** Costing is not built yet, so prices and document inputs are kept as the caller gives them (any JSON). */
+/**
+ * Issue a quote for a stored job: the service prices it and builds the document; nothing priced comes from
+ * the caller. `accept` is the estimator's reason for issuing despite open errors or an incomplete price.
+ */
 export const issueQuoteSchema = z.object({
   jobId: id,
   validityDays: z.number().int().min(1).max(365).optional(),
-  prices: z.json(),
-  quantityBreaks: z.array(z.json()).max(24),
-  document: z.json(),
+  accept: z.string().trim().min(3, 'say in a few words why the problems are accepted').max(500).optional(),
 }).strict();
 export type IssueQuoteInput = z.input<typeof issueQuoteSchema>;
 

@@ -1,6 +1,8 @@
 import type { Spec, SpringKind } from '../spec';
 import type { Settings } from '../settings/schema';
 import type { JobStatus } from './store-schemas';
+import type { IssueDecision } from '../quoting/problems';
+import type { JobJudgement } from '../quoting/judgement';
 
 /** What the store returns. Shape numbers are internal units: mm and N/mm. */
 export interface Customer {
@@ -35,6 +37,8 @@ export interface JobDetails {
   dueDate: string | null;
   orderQuantity: number | null;
   leadTimeDays: number | null;
+  /** The estimator's routing and price overrides, each with its reason. */
+  judgement: JobJudgement;
 }
 
 /**
@@ -131,6 +135,8 @@ export interface Quote extends QuoteSummary {
   prices: unknown;
   quantityBreaks: unknown[];
   document: unknown;
+  /** The estimator's decision on open problems at issue (reason and each problem); null when there were none. */
+  decision: IssueDecision | null;
 }
 
 export interface Attachment {

@@ -25,7 +25,7 @@ const common = {
   caution: z.object({ title: z.string(), paragraphs: z.array(z.string()).min(1) }),
 };
 
-const quoteSchema: z.ZodType<QuoteDocument> = z.object({
+const quoteSchema: z.ZodType<QuoteDocument, unknown> = z.object({
   ...common,
   type: z.literal('quote'),
   issue: z.object({ number: z.string(), date: z.string(), validUntil: z.string(), validityDays: z.number().int().positive() }),
@@ -34,6 +34,7 @@ const quoteSchema: z.ZodType<QuoteDocument> = z.object({
   specification: z.object({ heading: z.string(), fields: z.array(field) }),
   drawing: figure.nullable(),
   prices: z.object({ currency: z.string(), table, notes: z.array(z.string()) }),
+  exceptions: z.array(z.string()).default([]),
   leadTime: z.string(),
   terms: z.array(z.string()),
 });

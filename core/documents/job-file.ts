@@ -2,6 +2,7 @@
  * What a document needs to know about a job, read from a file: a bare spec, or a job file as `jobs add`
  * takes it ({customer:{name}, partNumber, drawing, revision, orderQuantity?, dueDate?, spec:{…}}).
  */
+import type { JobJudgement } from '../quoting/judgement';
 import { z } from 'zod';
 import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
@@ -23,6 +24,8 @@ export interface PrintJob {
   dueDate: string | null;
   leadTimeDays: number | null;
   spec: Spec;
+  /** The estimator's routing and price overrides for a stored job; none for a file. */
+  judgement?: JobJudgement;
 }
 
 /**

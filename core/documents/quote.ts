@@ -32,6 +32,8 @@ export interface QuoteInput {
   /** The quote number; "DRAFT" until the store issues one (see `withQuoteIssue`). */
   number?: string;
   validityDays?: number;
+  /** Engineering exceptions accepted at issue, already in the customer's words. */
+  exceptions?: string[];
 }
 
 export const OVER_UNDER_PERCENT = 10;
@@ -44,7 +46,10 @@ function priceTable(estimate: CostEstimate): TableModel {
       { header: `Unit price (${c})`, weight: 1, align: 'right' },
       { header: `Total (${c})`, weight: 1, align: 'right' },
     ],
-    rows: estimate.breaks.map((b) => [piecesText(b.quantity), unitPriceText(b.unitPrice), moneyText(b.total)]),
+    rows: [
+      ...estimate.breaks.map((b) => [piecesText(b.quantity), unitPriceText(b.unitPrice), moneyText(b.total)]),
+      ...(estimate.charges ?? []).map((ch) => [`${ch.item}, once per order`, '', moneyText(ch.amount)]),
+    ],
   };
 }
 
@@ -93,6 +98,7 @@ export function quoteDocument(input: QuoteInput): QuoteDocument {
     specification: { heading: spring.heading, fields: spring.fields },
     drawing: spring.drawing,
     prices: { currency: estimate.currency, table: priceTable(estimate), notes: priceNotes(estimate) },
+    exceptions: [...(input.exceptions ?? [])],
     leadTime: leadTimeText(job.leadTimeDays),
     terms: terms(estimate.currency, validityDays),
   };

@@ -27,8 +27,10 @@ export function moneyText(value: number): string {
  * the cent.
  */
 export function unitPriceText(value: number): string {
-  const decimals = value >= 100 ? 2 : value >= 1 ? 3 : 4;
-  return grouped(value.toFixed(decimals));
+  const usual = value >= 100 ? 2 : value >= 1 ? 3 : 4;
+  // A price the shop's rounding rule set (12.345 to 0.005) prints every place it has; an unrounded one the usual places.
+  const places = (String(Number(value.toPrecision(12))).split('.')[1] ?? '').length;
+  return grouped(value.toFixed(places <= 6 ? Math.max(usual, places) : usual));
 }
 
 /** A whole number of pieces, grouped: 5,000. */

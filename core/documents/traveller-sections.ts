@@ -2,7 +2,7 @@
 import { formatQuantity } from '../format';
 import type { ManufacturingPlan } from '../process/plan';
 import type { Characteristic, InspectionPlan } from '../process/inspection-plan';
-import type { Operation, OperationSetting } from '../process/types';
+import type { OperationOverride, Operation, OperationSetting } from '../process/types';
 import type { UnitSystem } from '../units';
 import { fixedText, percentText, piecesText, plainText, quantityText, wordText } from './text';
 import type { Field, OperationModel, TableModel } from './types';
@@ -59,7 +59,22 @@ function operationFields(op: Operation): Field[] {
   const pace = paceField(op);
   if (pace) fields.push(pace);
   if (op.scrapFraction > 0) fields.push({ label: 'Scrap allowance', value: percentText(op.scrapFraction) });
+  for (const o of op.overrides) fields.push({ label: `${OVERRIDE_LABELS[o.field]} set for this job`, value: overrideText(o) });
+  if (op.addedBecause) fields.push({ label: 'Added for this job', value: op.addedBecause });
   return fields;
+}
+
+export const OVERRIDE_LABELS: Record<OperationOverride['field'], string> = {
+  machine: 'Machine', setupMinutes: 'Setup', piecesPerHour: 'Run rate', scrapPercent: 'Scrap',
+};
+
+const OVERRIDE_UNITS: Record<OperationOverride['field'], string> = { machine: '', setupMinutes: ' min', piecesPerHour: ' pcs/h', scrapPercent: ' %' };
+
+/** "45 min (shop 30 min): new fixture" — the estimator's figure, the shop's beside it, and why. */
+export function overrideText(o: OperationOverride): string {
+  const unit = OVERRIDE_UNITS[o.field];
+  const show = (v: number | string) => (typeof v === 'number' ? `${plainText(v, 2)}${unit}` : v);
+  return `${show(o.value)} (shop ${o.shopDefault === null ? 'none' : show(o.shopDefault)}): ${o.reason}`;
 }
 
 function workCentreText(op: Operation): string {

@@ -1,4 +1,5 @@
 /** The shop traveller: what to make, from which wire, in which operations, what to check, and who signed. */
+import type { JobJudgement } from '../quoting/judgement';
 import type { Finding } from '../result';
 import { planManufacture } from '../process/plan';
 import type { ManufacturingPlan } from '../process/plan';
@@ -23,6 +24,8 @@ export interface TravellerJob {
   drawingRevision: string;
   purchaseOrder?: string;
   orderQuantity: number;
+  /** The estimator's routing overrides: the floor works to them, each shown with the shop's figure. */
+  judgement?: JobJudgement;
   dueDate: string | null;
 }
 
@@ -57,7 +60,7 @@ function findingLines(findings: readonly Finding[]): string[] {
 
 export function travellerDocument(input: TravellerInput): TravellerDocument {
   const { spec, settings, job } = input;
-  const plan = planManufacture(spec, settings, job.orderQuantity);
+  const plan = planManufacture(spec, settings, job.orderQuantity, job.judgement);
   const spring = springContent(spec, settings, job.partNumber || kindTitle(spec.kind));
   return {
     version: DOCUMENT_VERSION, type: 'traveller', paperSize: settings.defaults.paperSize, createdAt: input.printedAt,

@@ -79,6 +79,8 @@ export interface QuoteDocument extends DocumentCommon {
   specification: { heading: string; fields: Field[] };
   drawing: FigureModel | null;
   prices: { currency: string; table: TableModel; notes: string[] };
+  /** Engineering exceptions the shop accepted, in the customer's words. */
+  exceptions: string[];
   leadTime: string;
   terms: string[];
 }

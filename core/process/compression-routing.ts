@@ -58,7 +58,7 @@ function presetToSolid(settings: Settings, x: CompressionDesign, r: CompressionR
 
 /** The operations a compression spring needs, in shop order (shop-practice sequence: coil … inspect, pack). */
 export function compressionRouting(settings: Settings, x: CompressionDesign, r: CompressionReport, c: RoutingChoices): Operation[] {
-  const drafts: Draft[] = [coil(settings, x, r, c), stressRelieve(settings, x, c)];
+  const drafts: Draft[] = [coil(settings, x, r, c), stressRelieve(settings, x)];
   if (endForms[x.ends].ground) drafts.push(grind(settings, x, r));
   if (c.shotPeen) drafts.push(peen(settings, x));
   if (r.setRemoval.required) drafts.push(presetToSolid(settings, x, r));

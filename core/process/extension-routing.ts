@@ -44,7 +44,7 @@ export function extensionRouting(settings: Settings, x: ExtensionDesign, r: Exte
   const loopsOnCoiler = extensionEnds[x.ends[0].form].formedOnCoiler && extensionEnds[x.ends[1].form].formedOnCoiler;
   const drafts: Draft[] = [coil(settings, x, r, c, loopsOnCoiler)];
   if (!loopsOnCoiler) drafts.push(formLoops(settings, x, r));
-  drafts.push(stressRelieve(settings, x, c));
+  drafts.push(stressRelieve(settings, x));
   const finish = finishOperations(x, c);
   if (finish[0]) finish[0].notes.push('never stretch extension springs for plating: plating between opened coils raises the embrittlement risk');
   drafts.push(...finish, inspect(settings, x, 'Load test at length', 'extend once to the largest working length'), pack(settings, x));

@@ -1,7 +1,8 @@
 import type { CoilBody } from '../springs/coil-body';
-import type { Finish, Settings } from '../settings/schema';
+import type { Finish, Machine, MachineOperation, Settings } from '../settings/schema';
 import type { Operation, OperationSetting } from './types';
-import { chooseMachine, machinePiecesPerHour } from './work-centre';
+import type { WorkCentreOffer } from './work-centre';
+import { capableMachines, machinePiecesPerHour } from './work-centre';
 import { bakeGuidance } from '../finishing/bake';
 import { formatQuantity } from '../format';
 
@@ -12,37 +13,43 @@ export interface RoutingChoices {
   shotPeen: boolean;
   finish: Finish | null;
   bakeSpecification: string | null;
-  startQuantity: number;
 }
 
-export type Draft = Omit<Operation, 'sequence'>;
+export type Draft = Omit<Operation, 'sequence' | 'key' | 'overrides'>;
 
 const scrapOf = (settings: Settings, key: string): number => (settings.costing.scrapPercentByOperation[key] ?? 0) / 100;
 
+const MANUAL: ReadonlySet<Operation['kind']> = new Set(['pack', 'load-test', 'finish', 'bake', 'inspect']);
+
+/** What each capable machine would do: its run model; lot costs are filled in once the lot is known. */
+function offersFor(settings: Settings, kind: MachineOperation, d: number, piecesPerHour: (m: Machine) => number | null): WorkCentreOffer[] {
+  return capableMachines(settings.machines, kind, d).map((m) => ({
+    id: m.id, name: m.name, hourlyRate: m.hourlyRate, setupMinutes: m.setupMinutes,
+    piecesPerHour: m.batch ? null : piecesPerHour(m),
+    batch: m.batch ? { capacityPieces: m.batch.capacityPieces, cycleMinutes: m.batch.cycleMinutes } : null,
+    scrapFraction: m.scrapPercent !== undefined ? m.scrapPercent / 100 : scrapOf(settings, kind), lotCost: null,
+  }));
+}
+
 export function machineOperation(
   settings: Settings, x: CoilBody, kind: Operation['kind'] & string, title: string,
-  opSettings: OperationSetting[], piecesPerHour: (m: NonNullable<ReturnType<typeof chooseMachine>>) => number | null,
+  opSettings: OperationSetting[], piecesPerHour: (m: Machine) => number | null,
 ): Draft {
-  const machine = kind === 'finish' || kind === 'bake' || kind === 'inspect' ? null : chooseMachine(settings.machines, kind, x.d);
-  const manual = kind === 'pack' || kind === 'load-test' || kind === 'finish' || kind === 'bake' || kind === 'inspect';
-  const notes = machine || manual ? [] : [`no ${kind} machine in the shop's list takes ${formatQuantity(x.d, 'length', x.units)} wire`];
+  const machineKind = kind === 'finish' || kind === 'bake' || kind === 'inspect' || kind === 'extra' ? null : kind;
+  const offers = machineKind ? offersFor(settings, machineKind, x.d, piecesPerHour) : [];
+  const notes = offers.length > 0 || MANUAL.has(kind) ? [] : [`no ${kind} machine in the shop's list takes ${formatQuantity(x.d, 'length', x.units)} wire`];
   return {
-    kind, title, workCentre: machine && { id: machine.id, name: machine.name }, outside: false, settings: opSettings,
-    setupMinutes: machine?.setupMinutes ?? 0, piecesPerHour: machine ? piecesPerHour(machine) : null,
-    batch: null, scrapFraction: scrapOf(settings, kind), notes,
+    kind, title, workCentre: null, choice: null, offers, outside: false, settings: opSettings,
+    setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: scrapOf(settings, kind), notes,
   };
 }
 
-export function stressRelieve(settings: Settings, x: CoilBody, c: RoutingChoices): Draft {
+export function stressRelieve(settings: Settings, x: CoilBody): Draft {
   const op = machineOperation(settings, x, 'stress-relieve', 'Stress relieve', [
     { label: 'Temperature', value: x.wire.stressRelief.temperature, quantity: 'temperature' },
     { label: 'Time at temperature', value: x.wire.stressRelief.minutes, quantity: 'minutes' },
     { label: 'Coil diameter in the oven', value: x.wire.stressRelief.diameterChange },
   ], () => null);
-  const oven = chooseMachine(settings.machines, 'stress-relieve', x.d);
-  if (oven?.batch) {
-    op.batch = { ...oven.batch, batches: Math.ceil(c.startQuantity / oven.batch.capacityPieces) };
-  }
   op.notes.push('time is at temperature; add heat-up for batch loads');
   return op;
 }
@@ -60,7 +67,7 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   const f = c.finish;
   if (!f) return [];
   const finish: Draft = {
-    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, outside: true,
+    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, choice: null, offers: [], outside: true,
     settings: [{ label: 'Vendor', value: f.vendor || '(to be chosen)' }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0, notes: [],
   };
@@ -68,7 +75,7 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   finish.notes.push('stress relieve before plating; hydrogen embrittlement risk on high-strength wire');
   const guidance = bakeGuidance(x.wire.tensileStrength);
   const bake: Draft = {
-    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, outside: true,
+    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: true,
     settings: [
       { label: 'Bake specification', value: c.bakeSpecification ?? 'NOT NAMED: ask the customer' },
       ...(guidance.ok ? guidance.value.map((g) => ({ label: `${g.title} says`, value: g.says })) : []),
@@ -89,5 +96,12 @@ export function pack(settings: Settings, x: CoilBody): Draft {
   return machineOperation(settings, x, 'pack', 'Pack and label', [], machinePiecesPerHour);
 }
 
-/** Numbers the operations 10, 20, 30 … as routings are usually numbered. */
-export const sequenced = (drafts: Draft[]): Operation[] => drafts.map((d, i) => ({ ...d, sequence: (i + 1) * 10 }));
+/** Numbers the operations 10, 20, 30 … as routings are usually numbered, and keys each by its kind. */
+export function sequenced(drafts: Draft[]): Operation[] {
+  const seen = new Map<string, number>();
+  return drafts.map((d, i) => {
+    const n = (seen.get(d.kind) ?? 0) + 1;
+    seen.set(d.kind, n);
+    return { ...d, sequence: (i + 1) * 10, key: n === 1 ? d.kind : `${d.kind}#${n}`, overrides: [] };
+  });
+}

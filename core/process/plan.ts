@@ -12,6 +12,12 @@ import { findGrade } from '../materials';
 import type { RoutingChoices } from './operations';
 import type { InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
+import { assignWorkCentres } from './assign';
+import { judgedOperations, pinsOf, withRunOverrides } from './judged-routing';
+import type { RemovedOperation } from './judged-routing';
+import { noJudgement } from '../quoting/judgement';
+import type { JobJudgement } from '../quoting/judgement';
+import { wirePrice } from '../costing/wire-price';
 import type { LotWire, Operation } from './types';
 
 /** How the shop makes one order of a spring. Internal units; `planInSpecUnits` converts out. */
@@ -29,6 +35,8 @@ export interface ManufacturingPlan {
   massPer1000: number;
   lotWire: LotWire;
   operations: Operation[];
+  /** Operations the estimator took out of this job's routing, with the reason. */
+  removed: RemovedOperation[];
   inspection: InspectionPlan;
   findings: Finding[];
 }
@@ -41,7 +49,7 @@ function wireDiameterTolerance(gradeId: string): string {
   return standard.startsWith('EN 10270') ? `EN 10218-2 tolerance class (${standard})` : `${standard} diameter tolerance`;
 }
 
-function routingChoices(spec: Spec, settings: Settings, findings: Finding[], start: number, tensileStrength: number): RoutingChoices {
+function routingChoices(spec: Spec, settings: Settings, findings: Finding[], tensileStrength: number): RoutingChoices {
   const { id: finishId, finish, bakeSpecification: bake } = effectiveFinish(spec, settings.finishes);
   if (finishId !== null && !finish) {
     findings.push({ code: 'unknown-finish', severity: 'error', path: 'finish',
@@ -52,7 +60,7 @@ function routingChoices(spec: Spec, settings: Settings, findings: Finding[], sta
   return {
     directionOfWind: spec.kind === 'torsion' ? spec.windDirection : spec.directionOfWind ?? 'either',
     shotPeen: spec.kind === 'compression' && (spec.shotPeen ?? peened),
-    finish, bakeSpecification: bake, startQuantity: start,
+    finish, bakeSpecification: bake,
   };
 }
 
@@ -85,15 +93,38 @@ function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   };
 }
 
+/** The wire in one piece at the newest price on file (0 when none): what a scrapped piece throws away. */
+function pieceWireValue(settings: Settings, body: CoilBody, massPerPiece: number): number {
+  const price = wirePrice(settings.materialPrices, body.wire.gradeId, body.d);
+  return price ? massPerPiece * price.pricePerKg : 0;
+}
+
+/**
+ * Work centres for the lot. The start quantity depends on the chosen machines' scrap and the choice on the
+ * quantity, so the two are settled together (a few passes at most: scrap rates are small).
+ */
+function settleRouting(operations: Operation[], orderQuantity: number, pieceValue: number, judgement: JobJudgement) {
+  const pins = pinsOf(judgement);
+  const route = (pieces: number) => withRunOverrides(assignWorkCentres(operations, pieces, pieceValue, pins), judgement);
+  let start = orderQuantity;
+  let routed = route(start);
+  for (let pass = 0; pass < 4; pass++) {
+    const next = startQuantity(orderQuantity, routed);
+    if (next === start) break;
+    start = next;
+    routed = route(start);
+  }
+  return { start, routed };
+}
+
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
-export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number): ManufacturingPlan {
+export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number, judgement: JobJudgement = noJudgement()): ManufacturingPlan {
   const k = plannerFor(spec, settings);
   const { wire, d } = k.body;
   const findings = k.findings;
   const grade = (spec.toleranceGrade ?? settings.defaults.toleranceGrade) as ToleranceGrade;
-  // The routing's scrap rates set the start quantity, which in turn sets oven batches: route twice.
-  const first = k.route(routingChoices(spec, settings, [], orderQuantity, wire.tensileStrength));
-  const start = startQuantity(orderQuantity, first);
+  const judged = judgedOperations(k.route(routingChoices(spec, settings, findings, wire.tensileStrength)), judgement, settings, findings);
+  const { start, routed } = settleRouting(judged.operations, orderQuantity, pieceWireValue(settings, k.body, k.mass), judgement);
   return {
     kind: spec.kind, units: spec.units, orderQuantity, toleranceGrade: grade,
     material: { grade: wire.gradeId, name: wire.gradeName, wireDiameter: d, tensileStrength: wire.tensileStrength,
@@ -101,7 +132,7 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
     coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
     wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
     lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),
-    operations: k.route(routingChoices(spec, settings, findings, start, wire.tensileStrength)),
+    operations: routed, removed: judged.removed,
     inspection: k.inspect(orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
     findings,
   };
@@ -112,6 +143,13 @@ export const operationQuantities: QuantityMap = {
   sequence: 'ordinal', setupMinutes: 'minutes', piecesPerHour: 'perHour',
   batch: { capacityPieces: 'count', cycleMinutes: 'minutes', batches: 'count' },
   scrapFraction: 'ratio', settings: { value: OWN },
+  workCentre: { hourlyRate: 'money' },
+  choice: { lotCost: 'money', difference: 'money', runnerUp: { lotCost: 'money' } },
+  offers: {
+    hourlyRate: 'money', setupMinutes: 'minutes', piecesPerHour: 'perHour', scrapFraction: 'ratio', lotCost: 'money',
+    batch: { capacityPieces: 'count', cycleMinutes: 'minutes' },
+  },
+  overrides: { value: 'figure', shopDefault: 'figure' },
 };
 
 /** What each number of an inspection plan measures; a characteristic names its own quantity. */

@@ -32,7 +32,7 @@ function formLegs(settings: Settings, x: TorsionDesign): Draft {
 export function torsionRouting(settings: Settings, x: TorsionDesign, r: TorsionReport, c: RoutingChoices): Operation[] {
   const drafts: Draft[] = [coil(settings, x, r)];
   if (x.legs.some((l) => l.form !== 'tangent')) drafts.push(formLegs(settings, x));
-  drafts.push(stressRelieve(settings, x, c), ...finishOperations(x, c));
+  drafts.push(stressRelieve(settings, x), ...finishOperations(x, c));
   const test = inspect(settings, x, 'Torque test at angle, free-angle check', 'wind once to the largest working angle on an arbor');
   test.notes.push(`limits not on the drawing are ${TORSION_TOLERANCE_SOURCE}`);
   drafts.push(test, pack(settings, x));

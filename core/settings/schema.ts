@@ -61,7 +61,12 @@ export const machineSchema = z.object({
   operation: z.enum(machineOperations),
   wireRange: range,
   hourlyRate: money,
+  /** Minutes to set the machine up for one lot, whatever its size. */
   setupMinutes: minutes,
+  /** Run rate of a piece-paced machine other than a coiler (grinder, press, tester, packing bench). */
+  piecesPerHour: z.number().finite().positive().max(1_000_000).optional(),
+  /** This machine's own scrap, when it differs from the operation's in Costing. */
+  scrapPercent: z.number().finite().min(0).max(50).optional(),
   speedModel: z.object({
     feedMetresPerMinute: bounded('feedMetresPerMinute'),
     maxPiecesPerMinute: bounded('piecesPerMinute'),
@@ -101,6 +106,24 @@ export const wireStockSchema = z.object({
   heatNumber: text(60).optional(),
 }).strict();
 
+/** How unit prices are rounded, the same on the screen and every document. */
+export const unitPriceRoundingSchema = z.discriminatedUnion('rule', [
+  z.object({ rule: z.literal('none') }).strict(),
+  z.object({ rule: z.literal('significant'), digits: z.number().int().min(2).max(8) }).strict(),
+  z.object({ rule: z.literal('step'), step: z.number().finite().positive().max(1000) }).strict(),
+]);
+export type UnitPriceRounding = z.infer<typeof unitPriceRoundingSchema>;
+
+/** An operation the estimator may add to a job's routing (tumble, extra inspection, a customer's test). */
+export const extraOperationSchema = z.object({
+  id: z.string().min(1).max(40),
+  name: z.string().min(1).max(120),
+  hourlyRate: money,
+  setupMinutes: z.number().finite().min(0).max(10_000),
+  piecesPerHour: z.number().finite().positive().max(1_000_000),
+}).strict();
+export type ExtraOperation = z.infer<typeof extraOperationSchema>;
+
 export const costingSchema = z.object({
   /** Per operation name (a machine operation, or any key a costing model reads). Demo defaults. */
   scrapPercentByOperation: z.record(z.string(), percent).default({ coil: 3, grind: 1, 'stress-relieve': 0.5 }),
@@ -112,6 +135,9 @@ export const costingSchema = z.object({
   inspectionMinutesPerPiece: minutes.default(0.5),
   packagingPerPiece: money.default(0.01),
   minimumOrderValue: money.default(150),
+  unitPriceRounding: unitPriceRoundingSchema.default({ rule: 'none' }),
+  /** With no breaks given, the order quantity times each factor is priced (the order quantity itself always is). */
+  breakFactors: z.array(z.number().finite().positive().max(1000)).min(1).max(8).default([0.5, 1, 2, 5]),
 }).strict();
 
 /** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
@@ -137,11 +163,12 @@ export const settingsSchemas = {
   materialPrices: z.array(materialPriceSchema).max(2000).default([]),
   finishes: z.array(finishSchema).max(200).superRefine(uniqueIds).default([]),
   wireStock: z.array(wireStockSchema).max(5000).default([]),
+  extraOperations: z.array(extraOperationSchema).max(100).superRefine(uniqueIds).default([]),
   costing: costingSchema.default({
     scrapPercentByOperation: { coil: 3, grind: 1, 'stress-relieve': 0.5 }, setupScrapMetres: 5,
     overheadPercent: 25, marginPercent: 20, inspectionHourlyRate: 45, firstArticleMinutes: 20,
     inspectionMinutesPerPiece: 0.5, packagingPerPiece: 0.01,
-    minimumOrderValue: 150,
+    minimumOrderValue: 150, unitPriceRounding: { rule: 'none' }, breakFactors: [0.5, 1, 2, 5],
   }),
   design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
 };

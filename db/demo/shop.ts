@@ -20,14 +20,24 @@ export const demoSettings: SettingsInput = {
       speedModel: { feedMetresPerMinute: 40, maxPiecesPerMinute: 50 } },
     { id: 'coil-heavy', name: 'Demo CNC coiler, heavy wire', operation: 'coil', wireRange: { min: 4, max: 16 }, hourlyRate: 95, setupMinutes: 75,
       speedModel: { feedMetresPerMinute: 18, maxPiecesPerMinute: 12 } },
-    { id: 'grind-1', name: 'Demo double-disc end grinder', operation: 'grind', wireRange: { min: 0.5, max: 16 }, hourlyRate: 60, setupMinutes: 40 },
+    { id: 'grind-1', name: 'Demo double-disc end grinder', operation: 'grind', wireRange: { min: 0.5, max: 16 }, hourlyRate: 60, setupMinutes: 40,
+      piecesPerHour: 1500 },
+    { id: 'grind-2', name: 'Demo single-wheel end grinder', operation: 'grind', wireRange: { min: 0.5, max: 8 }, hourlyRate: 38, setupMinutes: 15,
+      piecesPerHour: 300, scrapPercent: 2 },
     { id: 'oven-1', name: 'Demo stress-relief oven', operation: 'stress-relieve', wireRange: { min: 0, max: 16 }, hourlyRate: 35, setupMinutes: 10,
       batch: { capacityPieces: 20000, cycleMinutes: 45 } },
-    { id: 'set-1', name: 'Demo set-removal press', operation: 'set', wireRange: { min: 0.3, max: 16 }, hourlyRate: 48, setupMinutes: 15 },
+    { id: 'set-1', name: 'Demo set-removal press', operation: 'set', wireRange: { min: 0.3, max: 16 }, hourlyRate: 48, setupMinutes: 15,
+      piecesPerHour: 900 },
     { id: 'peen-1', name: 'Demo shot-peen cabinet', operation: 'shot-peen', wireRange: { min: 1, max: 16 }, hourlyRate: 55, setupMinutes: 20,
       batch: { capacityPieces: 2000, cycleMinutes: 30 } },
-    { id: 'test-1', name: 'Demo load tester', operation: 'load-test', wireRange: { min: 0, max: 16 }, hourlyRate: 45, setupMinutes: 10 },
-    { id: 'pack-1', name: 'Demo packing bench', operation: 'pack', wireRange: { min: 0, max: 16 }, hourlyRate: 30, setupMinutes: 5 },
+    { id: 'test-1', name: 'Demo load tester', operation: 'load-test', wireRange: { min: 0, max: 16 }, hourlyRate: 45, setupMinutes: 10,
+      piecesPerHour: 600 },
+    { id: 'loop-1', name: 'Demo loop former', operation: 'loop-form', wireRange: { min: 0.3, max: 8 }, hourlyRate: 50, setupMinutes: 20,
+      piecesPerHour: 450 },
+    { id: 'leg-1', name: 'Demo leg former', operation: 'leg-form', wireRange: { min: 0.3, max: 8 }, hourlyRate: 50, setupMinutes: 25,
+      piecesPerHour: 400 },
+    { id: 'pack-1', name: 'Demo packing bench', operation: 'pack', wireRange: { min: 0, max: 16 }, hourlyRate: 30, setupMinutes: 5,
+      piecesPerHour: 2500 },
   ],
   materialPrices: [
     { grade: 'astm-a228', dMin: 0.1, dMax: 1, pricePerKg: 9.5, date: '2026-01-15', supplier: 'Demo Wire Supply' },
@@ -56,8 +66,13 @@ export const demoSettings: SettingsInput = {
   costing: {
     scrapPercentByOperation: { coil: 3, grind: 1.5, 'stress-relieve': 0.5, 'shot-peen': 0.5 },
     setupScrapMetres: 6, overheadPercent: 28, marginPercent: 22, inspectionHourlyRate: 48,
-    packagingPerPiece: 0.015, minimumOrderValue: 175,
+    packagingPerPiece: 0.015, minimumOrderValue: 175, unitPriceRounding: { rule: 'significant', digits: 4 },
   },
+  extraOperations: [
+    { id: 'tumble', name: 'Demo tumble deburr', hourlyRate: 32, setupMinutes: 10, piecesPerHour: 4000 },
+    { id: 'inspect-100', name: 'Demo extra inspection, every piece', hourlyRate: 48, setupMinutes: 5, piecesPerHour: 500 },
+    { id: 'customer-test', name: 'Demo customer\'s special test', hourlyRate: 55, setupMinutes: 30, piecesPerHour: 250 },
+  ],
 };
 
 /** DEMO customers: invented names, marked so nobody mistakes them for real ones. */

@@ -75,10 +75,10 @@ export const CSV_COLUMNS = [
   `length_${internal('length')} (${symbols.freeLength}${kindExceptions((k) => kindEntryOf(k).shape.lengthNote)})`,
   'activeCoils',
   `rate (${internal(commonRate)}${kindExceptions((k) => (rateQuantity(k) === commonRate ? null : internal(rateQuantity(k))))})`,
-  'spec',
+  'spec', 'judgement',
 ] as const;
 
 export const CSV_IMPORTED = new Set<string>([
   'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec', 'judgement',
 ]);

@@ -5,7 +5,7 @@ import { StoreError, failure, invalid, success } from '../errors';
 import { writeFileReplacing } from '../files';
 import type { StoreResult } from '../errors';
 import type { JobRow } from '../jobs/rows';
-import { SUMMARY_COLUMNS, storedSpecOf } from '../jobs/rows';
+import { SUMMARY_COLUMNS, judgementOf, storedSpecOf } from '../jobs/rows';
 import type { StoredSpec } from '../jobs/stored-spec';
 import { carriedSpec } from '../jobs/stored-spec';
 import { jobFilter } from '../search/list';
@@ -45,7 +45,7 @@ function toRecord({ row, stored }: ReadRow, firstOff: FirstOffExport[] | undefin
     partNumber: row.part_number, drawingNumber: row.drawing_number, drawingRevision: row.drawing_revision,
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
     leadTimeDays: row.lead_time_days, createdAt: row.created_at, updatedAt: row.updated_at,
-    spec: carriedSpec(stored),
+    judgement: judgementOf(row.judgement), spec: carriedSpec(stored),
     ...(firstOff ? { firstOff } : {}),
   };
 }
@@ -69,7 +69,7 @@ function csvRow(row: ExportRow): unknown[] {
     row.number, row.customer_name ?? '', row.customer_email ?? '', row.customer_phone ?? '', row.part_number, row.drawing_number, row.drawing_revision, row.status,
     row.notes, row.due_date, row.order_quantity, row.lead_time_days, row.created_at, row.updated_at, row.kind,
     row.material, row.units, row.d, row.mean_diameter, row.mean_diameter + row.d, row.free_length,
-    row.active_coils, row.rate, row.spec,
+    row.active_coils, row.rate, row.spec, row.judgement,
   ];
 }
 

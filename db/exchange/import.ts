@@ -72,11 +72,12 @@ function jsonItems(text: string): Result<ImportItem[]> {
 }
 
 function csvValue(column: string, text: string, at: PropertyKey[]): Result<unknown> {
-  if (column === 'spec') {
+  if (column === 'spec' || column === 'judgement') {
+    if (column === 'judgement' && text === '') return ok(undefined);
     try {
       return ok(JSON.parse(text));
     } catch (e) {
-      return fail([fieldError('invalid-json', formatPath([...at, 'spec']), `the spec column is not valid JSON (${(e as Error).message})`)]);
+      return fail([fieldError('invalid-json', formatPath([...at, column]), `the ${column} column is not valid JSON (${(e as Error).message})`)]);
     }
   }
   if (column === 'customer') return ok(text === '' ? null : { name: text });

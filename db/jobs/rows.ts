@@ -4,6 +4,8 @@ import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { StoredSpec } from './stored-spec';
 import { readStoredSpec } from './stored-spec';
+import { jobJudgementSchema, noJudgement } from '../../core/quoting/judgement';
+import type { JobJudgement } from '../../core/quoting/judgement';
 
 /** A jobs row joined with its customer's name, as the SELECTs below read it. */
 export interface JobRow {
@@ -19,6 +21,7 @@ export interface JobRow {
   due_date: string | null;
   order_quantity: number | null;
   lead_time_days: number | null;
+  judgement: string;
   revision: number;
   created_at: string;
   updated_at: string;
@@ -37,7 +40,7 @@ export interface JobRow {
 }
 
 export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
-  j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.revision, j.created_at,
+  j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.judgement, j.revision, j.created_at,
   j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.shape_engine, j.spec`;
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
@@ -47,8 +50,15 @@ export function jobDetailsOfRow(row: JobRow): JobDetails {
   return {
     partNumber: row.part_number, drawingNumber: row.drawing_number, drawingRevision: row.drawing_revision,
     status: row.status, notes: row.notes, dueDate: row.due_date, orderQuantity: row.order_quantity,
-    leadTimeDays: row.lead_time_days,
+    leadTimeDays: row.lead_time_days, judgement: judgementOf(row.judgement),
   };
+}
+
+/** The stored judgement; one saved before overrides existed (or unreadable) reads as none. */
+export function judgementOf(raw: unknown): JobJudgement {
+  if (raw === '{}' || raw === undefined || raw === null) return noJudgement();
+  const parsed = jobJudgementSchema.safeParse(typeof raw === 'string' ? JSON.parse(raw) : raw ?? {});
+  return parsed.success ? parsed.data : noJudgement();
 }
 
 export function shapeOf(row: JobRow): JobShape {

@@ -39,6 +39,7 @@ export function revisionFields(store: Store, state: JobState): RevisionFields {
     dueDate: state.dueDate,
     orderQuantity: state.orderQuantity,
     leadTimeDays: state.leadTimeDays,
+    judgement: state.judgement,
   };
 }
 
@@ -47,14 +48,14 @@ export function rowValues(state: JobState): unknown[] {
   const s = state.shape;
   return [
     state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
-    JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays,
+    JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays, JSON.stringify(state.judgement),
     s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
     state.shapeEngine,
   ];
 }
 
 export const ROW_COLUMNS = `customer_id, part_number, drawing_number, drawing_revision, status, spec, notes, due_date,
-  order_quantity, lead_time_days, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate,
+  order_quantity, lead_time_days, judgement, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate,
   shape_engine`;
 
 export const ROW_PLACEHOLDERS = ROW_COLUMNS.split(',').map(() => '?').join(', ');

@@ -1,3 +1,4 @@
+import type { z } from 'zod';
 import type { Job, JobStatus } from '../../core/api/store';
 import { jobPatchSchema } from '../../core/api/store';
 import { StoreError, failure, invalid } from '../errors';
@@ -14,6 +15,7 @@ import type { JobRow } from './rows';
 import { storedSpecOf } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
+import { judgementOf } from './rows';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
   store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
@@ -83,6 +85,38 @@ function loadForSave(store: Store, id: number, expectedRevision: number | undefi
   return row;
 }
 
+/** States in which the job has gone to the customer or the floor: an edit says what kind it is. */
+const COMMITTED: ReadonlySet<JobStatus> = new Set(['quoted', 'ordered', 'in-production']);
+
+/** Whether a save changes what the part is (anything but its status, notes and the estimator's pricing judgement). */
+const editsContent = (patch: Record<string, unknown>): boolean =>
+  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change'].includes(k));
+
+/**
+ * A done job is never edited in place; a quoted, ordered or in-production one only as a new drawing revision
+ * (which needs the new revision, and sends a quoted job back to draft for a new quote) or as a correction.
+ * Returns the reason the revision records.
+ */
+function changeReason(row: { number: string; status: JobStatus; drawing_revision: string }, patch: JobPatchValue, reason: string): string {
+  if (!editsContent(patch as Record<string, unknown>)) return reason;
+  if (row.status === 'done') {
+    throw new StoreError('job-done', `job ${row.number} is done and is not edited in place: copy it to a new job for a repeat or a change`, 'status');
+  }
+  if (!COMMITTED.has(row.status)) return reason;
+  if (patch.change === undefined) {
+    throw new StoreError('change-kind-needed',
+      `job ${row.number} is ${row.status}: say whether this edit is a new drawing revision or a correction`, 'change');
+  }
+  if (patch.change === 'correction') return 'correction';
+  const next = patch.drawingRevision;
+  if (next === undefined || next === row.drawing_revision) {
+    throw new StoreError('drawing-revision-needed', `a new drawing revision needs its revision letter or number (now "${row.drawing_revision}")`, 'drawingRevision');
+  }
+  return `drawing revision ${next}`;
+}
+
+type JobPatchValue = z.output<typeof jobPatchSchema>;
+
 /** A save that keeps the spec needs it to read; one that brings a new spec is how such a job is put right. */
 function refuseUnreadable(row: JobRow): void {
   const stored = storedSpecOf(row);
@@ -95,7 +129,7 @@ function refuseUnreadable(row: JobRow): void {
 export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreResult<Job> {
   const patch = parseWith(jobPatchSchema, raw);
   if (!patch.ok) return invalid(patch.errors);
-  const { id, expectedRevision, spec: rawSpec, customer, customerId, ...fields } = patch.value;
+  const { id, expectedRevision, spec: rawSpec, customer, customerId, change, ...fields } = patch.value;
   const checked = rawSpec === undefined ? undefined : checkSpec(rawSpec, ['spec']);
   if (checked && !checked.ok) return invalid(checked.errors);
   if (customer && customerId !== undefined) {
@@ -104,13 +138,15 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
   return attempt(() => {
     inTransaction(store, () => {
       const row = loadForSave(store, id, expectedRevision);
+      const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
       if (checked === undefined) refuseUnreadable(row);
       const defined = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
       const next: JobState = { ...current, ...defined, ...(checked?.ok ? checked.value : {}) };
+      if (change === 'drawing-revision' && row.status === 'quoted' && fields.status === undefined) next.status = 'draft';
       const resolved = resolveCustomer(store, { customer, customerId });
       if (resolved !== undefined) next.customerId = resolved;
-      saveState(store, id, row.revision, next, reason);
+      saveState(store, id, row.revision, next, why);
     });
     return getJob(store, id);
   });
@@ -132,9 +168,12 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   return attempt(() => {
     inTransaction(store, () => {
       const row = loadForSave(store, input.id, undefined);
+      if (row.status === 'done') {
+        throw new StoreError('job-done', `job ${row.number} is done and is not edited in place: copy it to a new job for a repeat or a change`, 'status');
+      }
       const { customerName: _name, ...fields } = old.fields;
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
-      const next: JobState = { ...fields, customerId: exists ? fields.customerId : null, ...checked.value };
+      const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
     });
     return getJob(store, input.id);

@@ -6,6 +6,7 @@ import { updateToVersion0003 } from './0003-quotes';
 import { updateToVersion0004 } from './0004-first-off-records';
 import { updateToVersion0005 } from './0005-shape-engine';
 import { updateToVersion0006 } from './0006-keep-issued-rows';
+import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 
@@ -23,6 +24,7 @@ export const migrations: readonly Migration[] = [
   { version: 4, name: 'first-off records', update: updateToVersion0004 },
   { version: 5, name: 'shape-engine', update: updateToVersion0005 },
   { version: 6, name: 'keep issued rows', update: updateToVersion0006 },
+  { version: 7, name: 'estimating', update: updateToVersion0007 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
 ];

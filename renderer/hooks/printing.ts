@@ -5,14 +5,16 @@ export type DocumentKind = 'quote' | 'traveller';
 
 export interface Printer {
   /** A new quote is issued (numbered, its prices kept) and printed; a traveller prints for `quantity` or the job's order. */
-  print(kind: DocumentKind, jobId: number, quantity?: number): Promise<ApiResult<PrintedPdf>>;
+  print(kind: DocumentKind, jobId: number, quantity?: number, accept?: string): Promise<ApiResult<PrintedPdf>>;
   reprint(quoteNumber: string): Promise<ApiResult<PrintedPdf>>;
 }
 
 export function usePrinter(): Printer {
   const api = useApi();
   return {
-    print: (kind, jobId, quantity) => (kind === 'quote' ? api.printQuote({ jobId }) : api.printTraveller({ jobId, quantity })),
+    print: (kind, jobId, quantity, accept) => (kind === 'quote'
+      ? api.printQuote({ jobId, ...(accept === undefined ? {} : { accept }) })
+      : api.printTraveller({ jobId, quantity })),
     reprint: (number) => api.reprintQuote({ number }),
   };
 }

@@ -1,5 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ApiError, Job, JobRevision } from '../../core/api';
+import type { JobChange } from '../../core/api/store';
+import type { JobJudgementInput } from '../../core/quoting/judgement';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
 import type { FormError } from '../model/errors';
@@ -45,10 +47,11 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const valid = evaluation.spec !== null && jobCheck.errors.length === 0;
 
   // The latest state for async work (saves, undo) that outlives the render it started in.
-  const live = useRef({ job, drafts, version, savedVersion });
+  const live = useRef({ job, drafts, version, savedVersion, change: undefined as JobChange | undefined });
   const inFlight = useRef<Promise<boolean> | null>(null);
 
   const adopt = useCallback((j: Job, replaceDrafts: boolean) => {
+    if (live.current.job?.id !== j.id) live.current.change = undefined;
     live.current.job = j;
     setJob(j);
     if (replaceDrafts) {
@@ -108,7 +111,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     }
     setSaving(true);
     const r = s.job
-      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input })
+      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input, ...(s.change ? { change: s.change } : {}) })
       : await api.createJob(input);
     setSaving(false);
     if (!r.ok) { setSaveError(r.error); return false; }
@@ -133,6 +136,25 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
       inFlight.current = null;
     }
   }, [saveOnce]);
+
+  /** The estimator says what an edit of a quoted or ordered job is; the pending save goes again with it. */
+  const setChange = useCallback(async (kind: JobChange): Promise<boolean> => {
+    live.current.change = kind;
+    setSaveError(null);
+    return save();
+  }, [save]);
+
+  /** Saves the estimator's routing and price overrides of the saved job; the error, or null when saved. */
+  const saveJudgement = useCallback(async (judgement: JobJudgementInput): Promise<ApiError | null> => {
+    while (inFlight.current) await inFlight.current;
+    const j = live.current.job;
+    if (!j) return null;
+    const r = await api.updateJob({ id: j.id, expectedRevision: j.revision, judgement });
+    if (!r.ok) return r.error;
+    adopt(r.value, false);
+    await loadRevisions(j.id);
+    return null;
+  }, [api, adopt, loadRevisions]);
 
   const dirty = version !== savedVersion;
   useEffect(() => {
@@ -181,7 +203,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
 
   return {
     job, drafts, edit, version, evaluation, jobCheck, valid, dirty, saving, saveError, serverErrors, loading, loadError,
-    revisions, save, revert, restore,
+    revisions, save, revert, restore, setChange, saveJudgement,
     undo: () => step(undoTarget), redo: () => step(redoTarget),
     canUndo: job !== null && (dirty || undoTarget(timeline) !== null),
     canRedo: job !== null && !dirty && redoTarget(timeline) !== null,

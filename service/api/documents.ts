@@ -2,8 +2,9 @@ import { inputError } from '../../core/api';
 import type { ApiResult } from '../../core/api';
 import type { documentMethods, PrintedPdf } from '../../core/api/documents';
 import type { Result } from '../../core/result';
-import { getJob, getQuote, getSettings, issueQuote, listCustomers } from '../../db';
-import { draftQuote, issuedQuoteDocument, quoteSnapshot, storedPrintJob, travellerFor } from '../pdf/printing';
+import { getJob, getQuote, getSettings, listCustomers } from '../../db';
+import { issuedQuoteDocument, storedPrintJob, travellerFor } from '../pdf/printing';
+import { issueJobQuote } from './quoting';
 import type { StoreContext, TypedHandlers } from './store';
 
 const asApi = <T>(r: Result<T>): ApiResult<T> => (r.ok ? r : { ok: false, error: inputError(r.errors) });
@@ -14,8 +15,8 @@ const writers = () => import('../pdf');
 const pdf = (buffer: Buffer, fileName: string, reference: string, findings: PrintedPdf['findings'] = []): ApiResult<PrintedPdf> =>
   ({ ok: true, value: { base64: buffer.toString('base64'), fileName, reference, findings } });
 
-/** Print handlers: the same steps as the command line's `print`, over the store the app has open. */
-export function documentHandlers(ctx: StoreContext, now: () => Date = () => new Date()): TypedHandlers<keyof typeof documentMethods> {
+/** Print handlers, and the issue of a quote: the same steps as the command line's, over the store the app has open. */
+export function documentHandlers(ctx: StoreContext, now: () => Date = () => new Date()): TypedHandlers<keyof typeof documentMethods | 'issueQuote'> {
   const jobAndSettings = (id: number) => {
     const job = getJob(ctx.store, id);
     if (!job.ok) return job;
@@ -25,6 +26,10 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
     return { ok: true as const, job: job.value, print, settings: settings.value };
   };
   return {
+    issueQuote: (input) => {
+      const issued = issueJobQuote(ctx.store, input, now());
+      return issued.ok ? { ok: true, value: issued.value.quote } : issued;
+    },
     printTraveller: async ({ jobId, quantity }) => {
       const j = jobAndSettings(jobId);
       if (!j.ok) return j;
@@ -32,15 +37,11 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
       if (!model.ok) return model;
       return pdf(await (await writers()).renderTraveller(model.value), `traveller-${j.job.number}.pdf`, j.job.number, model.value.findings);
     },
-    printQuote: async ({ jobId }) => {
-      const j = jobAndSettings(jobId);
-      if (!j.ok) return j;
-      const { model, estimate } = draftQuote(j.print, j.settings, now());
-      const quote = issueQuote(ctx.store, quoteSnapshot(jobId, model, estimate));
-      if (!quote.ok) return quote;
-      const issued = asApi(issuedQuoteDocument(quote.value));
+    printQuote: async (input) => {
+      const issued = issueJobQuote(ctx.store, input, now());
       if (!issued.ok) return issued;
-      return pdf(await (await writers()).renderQuote(issued.value), `quote-${quote.value.number}.pdf`, quote.value.number);
+      const number = issued.value.quote.number;
+      return pdf(await (await writers()).renderQuote(issued.value.model), `quote-${number}.pdf`, number);
     },
     reprintQuote: async ({ number }) => {
       const quote = getQuote(ctx.store, { number });

@@ -4,11 +4,12 @@ import type { storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
-  importJobs, issueQuote, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
+  importJobs, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
-type StoreMethodName = keyof typeof storeMethods;
+/** Issuing a quote prices the job: the document handlers answer it. */
+type StoreMethodName = Exclude<keyof typeof storeMethods, 'issueQuote'>;
 
 /** Handlers checked against the contract: each takes its method's parsed input and returns its output type. */
 export type TypedHandlers<K extends keyof Contract> = {
@@ -35,7 +36,6 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     listCustomers: () => ({ ok: true, value: listCustomers(ctx.store) }),
     getSettings: () => getSettings(ctx.store),
     saveSettings: (input) => saveSettings(ctx.store, input.settings),
-    issueQuote: (input) => issueQuote(ctx.store, input),
     listQuotes: (input) => listQuotes(ctx.store, input),
     getQuote: (input) => getQuote(ctx.store, input),
     addAttachment: (input) => addAttachment(ctx.store, input),

@@ -32,6 +32,16 @@ const printFile = (args: ParsedArgs, command: string) => {
   return must(parsePrintFile(readJson(file)));
 };
 
+/** `--accept "reason"`: issue despite open errors or an incomplete price, the reason kept with the quote. */
+function acceptOption(args: ParsedArgs): { accept?: string } {
+  const reason = args.options.get('accept');
+  if (reason === undefined) return {};
+  if (typeof reason !== 'string') {
+    throw new InputError([{ code: 'invalid-option', path: '--accept', message: '--accept needs the reason in quotes, e.g. --accept "customer agreed the stop"' }]);
+  }
+  return { accept: reason };
+}
+
 /** A stored job (--job ID|NUMBER) goes through the API, which issues its quote; a file prints as a draft. */
 async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string, unknown>> {
   const out = requireOption(args, 'out');
@@ -40,7 +50,7 @@ async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string
   if (typeof number === 'string' || typeof ref === 'string') {
     const printed = typeof number === 'string'
       ? await call('reprintQuote', { number })
-      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id });
+      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id, ...acceptOption(args) });
     write(out, Buffer.from(printed.base64, 'base64'));
     return { file: out, quote: printed.reference, issued: typeof number !== 'string', reprint: typeof number === 'string' };
   }
@@ -74,7 +84,8 @@ const subcommands: Record<string, (args: ParsedArgs, call: Caller) => Promise<Re
 export const printCommand: Command = {
   name: 'print',
   usage: [
-    'print quote FILE|--job ID --db DB --out x.pdf   quotation PDF; for a stored job the quote is issued and kept',
+    'print quote FILE|--job ID [--accept "reason"] --db DB --out x.pdf   quotation PDF; for a stored job the quote is issued',
+    '  and kept; open errors or an incomplete price refuse the issue unless --accept gives the reason for accepting them',
     '  print quote --quote NUMBER --db DB --out x.pdf reprint an issued quote from its snapshot',
     '  print traveller FILE|--job ID [--quantity N] --db DB --out x.pdf   shop traveller PDF',
   ].join('\n'),

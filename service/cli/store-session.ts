@@ -8,7 +8,10 @@ import { InputError, requireOption } from './io';
 /** Bad input becomes exit 2 with every field error; anything unexpected is exit 1. */
 export function raise(error: ApiError): never {
   if (error.code === 'unexpected') throw new Error(error.message);
-  throw new InputError(error.details ?? [{ code: error.code, message: error.message, path: error.path }]);
+  const head = { code: error.code, message: error.message, path: error.path };
+  const details = error.details ?? [];
+  // A refusal that stands above its details (e.g. a quote with open problems) is printed first, then each detail.
+  throw new InputError(details.length === 0 ? [head] : details[0]!.code === head.code ? details : [head, ...details]);
 }
 
 export function openService(args: ParsedArgs): Service {

@@ -16,24 +16,28 @@ export function storedPrintJob(job: Job, customers: readonly Customer[]): PrintJ
     number: job.number, customerName: job.customer?.name ?? null,
     customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
     partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
-    orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec,
+    orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec, judgement: job.judgement,
   };
 }
 
-export function draftQuote(print: PrintJob, settings: Settings, now: Date): { model: QuoteDocument; estimate: CostEstimate } {
-  const estimate = estimateCost(print.spec, settings);
+/** What a job's price depends on besides its spec and the shop: its order quantity and the estimator's overrides. */
+export const jobPricing = (print: Pick<PrintJob, 'orderQuantity' | 'judgement'>) =>
+  ({ orderQuantity: print.orderQuantity, ...(print.judgement ? { judgement: print.judgement } : {}) });
+
+export interface DraftOptions {
+  /** An estimate already worked (the issue prints exactly the figures it checked). */
+  estimate?: CostEstimate;
+  exceptions?: string[];
+  validityDays?: number;
+}
+
+export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
+  const estimate = options.estimate ?? estimateCost(print.spec, settings, undefined, jobPricing(print));
   const model = quoteDocument({
-    spec: print.spec, settings, estimate, issuedAt: now.toISOString(), validityDays: settings.defaults.quoteValidityDays, job: print,
+    spec: print.spec, settings, estimate, issuedAt: now.toISOString(),
+    validityDays: options.validityDays ?? settings.defaults.quoteValidityDays, job: print, exceptions: options.exceptions ?? [],
   });
   return { model, estimate };
-}
-
-/** What the store keeps when a quote is issued: the estimate and the document model, as plain JSON. */
-export function quoteSnapshot(jobId: number, draft: QuoteDocument, estimate: CostEstimate) {
-  return {
-    jobId, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
-    quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)),
-  };
 }
 
 /** An issued quote prints from its snapshot alone, whatever the prices are today. */

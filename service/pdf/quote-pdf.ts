@@ -79,6 +79,11 @@ export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
   fieldGrid(doc, m.specification.fields, { columns: 2 });
   space(doc);
   prices(doc, m);
+  if (m.exceptions.length > 0) {
+    heading(doc, 'Accepted deviations from the drawing');
+    paragraphs(doc, m.exceptions, { bullet: true });
+    space(doc);
+  }
   if (m.drawing) drawing(doc, m.drawing);
   heading(doc, 'Terms');
   paragraphs(doc, m.terms, { bullet: true });

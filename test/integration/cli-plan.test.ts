@@ -68,7 +68,7 @@ describe('command line: sheet and price', () => {
     expect(price.breaks.map((b: { quantity: number }) => b.quantity)).toEqual([100, 1000, 5000]);
     for (const b of price.breaks) {
       expect(b.lines.length).toBeGreaterThan(4);
-      for (const l of b.lines) expect(l).toEqual({ item: expect.any(String), basis: expect.any(String), amount: expect.any(Number), group: expect.any(String) });
+      for (const l of b.lines) expect(l).toEqual({ key: expect.any(String), item: expect.any(String), basis: expect.any(String), amount: expect.any(Number), group: expect.any(String) });
       expect(b.total).toBeCloseTo(b.lines.reduce((a: number, l: { amount: number }) => a + l.amount, 0), 6);
     }
     expect(price.breaks[2].unitPrice).toBeLessThan(price.breaks[0].unitPrice);

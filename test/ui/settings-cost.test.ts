@@ -62,6 +62,14 @@ describe('settings and the cost of a job', { timeout: UI_TEST_TIMEOUT }, () => {
     const after = await unitPriceAt(100);
     // The demo coiler's setup is 30 min: (400 − 68) × 0.5 h more over 100 pieces, before overhead and margin add to it.
     expect(after - priceAt100).toBeGreaterThanOrEqual(((400 - 68) * 0.5) / 100);
+    // The saved job says what the change moved, line by line, until the estimator accepts it.
+    const moved = page.locator('.settings-moved');
+    await moved.waitFor();
+    const setupRow = moved.locator('[data-line="coil:setup"]').first();
+    await expect(setupRow.textContent()).resolves.toMatch(/USD 34\.00.*USD 200\.00.*\+USD 166\.00/);
+    await screenshot(page, 'workspace-cost-settings-moved');
+    await moved.getByRole('button', { name: 'Accept the new figures' }).click();
+    await moved.waitFor({ state: 'detached' });
     await page.keyboard.press('Alt+3');
     await page.locator('#settings-machines-0-hourlyRate').fill('68');
     await page.getByRole('button', { name: 'Save settings' }).click();

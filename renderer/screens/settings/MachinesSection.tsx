@@ -27,6 +27,8 @@ function MachineFields({ prefix }: { prefix: string }) {
           <SNumber path={`${prefix}.speedModel.maxPiecesPerMinute`} label="Most pieces" unit="/min" />
         </>
       ) : null}
+      {operation !== 'coil' && !batch ? <SNumber path={`${prefix}.piecesPerHour`} label="Run rate" unit="pcs/h" optional /> : null}
+      <SNumber path={`${prefix}.scrapPercent`} label="Own scrap" unit="%" optional />
       <div className="field field--check">
         <input type="checkbox" id={`${prefix}-batch`} checked={batch}
           onChange={(e) => d.set(`${prefix}.batch`, e.target.checked ? { capacityPieces: 1000, cycleMinutes: 60 } : undefined)} />

@@ -1,3 +1,4 @@
+import { ChangeKind } from './ChangeKind';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Job } from '../../../core/api';
 import { usePlatform } from '../../api';
@@ -83,6 +84,7 @@ function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' 
     <section className="screen screen--workspace" aria-labelledby="job-title">
       <ScreenHeading id="job-title" visuallyHidden>{editor.job ? `Job ${editor.job.number}` : 'New job'}</ScreenHeading>
       <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={() => setSimilar(true)} />
+      <ChangeKind editor={editor} />
       <TabList<Tab> label="Job views" idPrefix="job" tabs={tabs} active={tab} onSelect={setTab} />
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
         <TabPanel idPrefix="job" id="spec">

@@ -2,9 +2,16 @@ import { spawn } from 'node:child_process';
 import { closeSync, existsSync, openSync, readdirSync, writeSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { backupStore, createJob, issueQuote, listJobs, openStore } from '../../../db';
+import { backupStore, createJob, recordQuote, getJob, listJobs, openStore } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { job, tempDir, track, value } from './helpers';
+
+/** The job's current revision: a quote is recorded against the revision it was priced from. */
+const revisionOf = (store: Parameters<typeof getJob>[0], id: number): number => {
+  const job = getJob(store, { id });
+  if (!job.ok) throw new Error(job.error.message);
+  return job.value.revision;
+};
 
 const root = resolve(__dirname, '../../..');
 const restorer = join(__dirname, 'fixtures', 'restorer.ts');
@@ -32,7 +39,7 @@ async function shop(): Promise<{ dir: string; file: string; backup: string }> {
   const backup = join(dir, 'backup.db');
   value(await backupStore(store, backup));
   value(createJob(store, job({ partNumber: 'AFTER-BACKUP' })));
-  value(issueQuote(store, { jobId: first.id, prices: {}, quantityBreaks: [], document: {} }));
+  value(recordQuote(store, { jobId: first.id, jobRevision: revisionOf(store, first.id), validityDays: 30, prices: {}, quantityBreaks: [], document: {}, decision: null }));
   store.close();
   return { dir, file, backup };
 }

@@ -2,10 +2,17 @@ import { spawn } from 'node:child_process';
 import { existsSync, renameSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { backupStore, createJob, findJobs, getSettings, issueQuote, listJobs, openStore, restoreStore, similarJobs } from '../../../db';
+import { backupStore, createJob, findJobs, getSettings, recordQuote, getJob, listJobs, openStore, restoreStore, similarJobs } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { startWebServer } from '../../../service/web/server';
 import { job, tempDir, track, value } from './helpers';
+
+/** The job's current revision: a quote is recorded against the revision it was priced from. */
+const revisionOf = (store: Parameters<typeof getJob>[0], id: number): number => {
+  const job = getJob(store, { id });
+  if (!job.ok) throw new Error(job.error.message);
+  return job.value.revision;
+};
 
 const root = resolve(__dirname, '../../..');
 
@@ -68,7 +75,7 @@ describe('a restore while another program has the store open', () => {
     const first = value(createJob(store, job({ partNumber: 'FIRST' })));
     value(await backupStore(store, join(dir, 'old.db')));
     const given = [value(createJob(store, job({ partNumber: 'SECOND' }))).number];
-    const quotes = [1, 2].map(() => value(issueQuote(store, { jobId: first.id, prices: {}, quantityBreaks: [], document: {} })).number);
+    const quotes = [1, 2].map(() => value(recordQuote(store, { jobId: first.id, jobRevision: revisionOf(store, first.id), validityDays: 30, prices: {}, quantityBreaks: [], document: {}, decision: null })).number);
     const outcome = await restoreStore(store, join(dir, 'old.db'));
     expect(outcome.result.ok).toBe(true);
     const now = track(outcome.store);
@@ -78,7 +85,7 @@ describe('a restore while another program has the store open', () => {
     expect(value(findJobs(now, { text: 'SECOND' }))).toEqual([]);
     expect(value(similarJobs(now, { spec: job().spec })).map((s) => s.job.partNumber)).toEqual(['FIRST']);
     const next = value(createJob(now, job({ partNumber: 'THIRD' }))).number;
-    const nextQuote = value(issueQuote(now, { jobId: first.id, prices: {}, quantityBreaks: [], document: {} })).number;
+    const nextQuote = value(recordQuote(now, { jobId: first.id, jobRevision: revisionOf(now, first.id), validityDays: 30, prices: {}, quantityBreaks: [], document: {}, decision: null })).number;
     expect(given).not.toContain(next);
     expect(quotes).not.toContain(nextQuote);
     expect(value(getSettings(now)).numbering.quotes.next).toBeGreaterThan(2);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { defaultSettings } from '../../../core/settings/schema';
-import { createJob, getQuote, getSettings, issueQuote, listQuotes, saveSettings, updateJob } from '../../../db';
+import { createJob, getJob, getQuote, getSettings, listQuotes, recordQuote, saveSettings, updateJob } from '../../../db';
+import type { QuoteSnapshot } from '../../../db';
 import { job, steppingClock, tempStore, totalCoils, value } from './helpers';
 
 const coiler = {
@@ -38,17 +39,22 @@ describe('settings', () => {
   });
 });
 
+const snapshot = (jobId: number, over: Partial<QuoteSnapshot> = {}): QuoteSnapshot => ({
+  jobId, jobRevision: 1, validityDays: 30, prices: {}, quantityBreaks: [], document: {}, decision: null, ...over,
+});
+
 describe('issued quotes', () => {
   it('keep the spec, settings and prices of the day they were issued', () => {
     const store = tempStore(steppingClock(Date.parse('2026-04-01T09:00:00Z')));
     value(saveSettings(store, { machines: [coiler], defaults: { currency: 'GBP', quoteValidityDays: 45 } }));
     const created = value(createJob(store, job({ notes: 'as quoted' })));
-    const quote = value(issueQuote(store, {
-      jobId: created.id, prices: { unit: [1.2, 0.9] }, quantityBreaks: [500, 1000], document: { paper: 'a4', lines: ['demo'] },
-    }));
+    const quote = value(recordQuote(store, snapshot(created.id, {
+      validityDays: 45, prices: { unit: [1.2, 0.9] }, quantityBreaks: [500, 1000], document: { paper: 'a4', lines: ['demo'] },
+    })));
+    expect(value(getJob(store, created.id)).status).toBe('quoted');
     expect(quote).toMatchObject({ number: 'Q-26-0001', jobRevision: 1, validityDays: 45, currency: 'GBP', validUntil: '2026-05-16' });
     value(saveSettings(store, { machines: [{ ...coiler, hourlyRate: 99 }], defaults: { currency: 'USD' } }));
-    value(updateJob(store, { id: created.id, notes: 'changed later', spec: job({}, { totalCoils: 14 }).spec }));
+    value(updateJob(store, { id: created.id, notes: 'changed later', spec: job({}, { totalCoils: 14 }).spec, change: 'correction' }));
     const again = value(getQuote(store, { number: 'Q-26-0001' }));
     expect(again.settings.machines[0]!.hourlyRate).toBe(70);
     expect(again.currency).toBe('GBP');
@@ -61,14 +67,14 @@ describe('issued quotes', () => {
   it('cannot be changed or deleted, even with SQL', () => {
     const store = tempStore();
     const created = value(createJob(store, job()));
-    const quote = value(issueQuote(store, { jobId: created.id, prices: {}, quantityBreaks: [], document: {} }));
+    const quote = value(recordQuote(store, snapshot(created.id)));
     expect(() => store.db.prepare("UPDATE quotes SET prices = '{\"unit\":0}' WHERE id = ?").run(quote.id)).toThrow(/cannot be changed/);
     expect(() => store.db.prepare('DELETE FROM quotes WHERE id = ?').run(quote.id)).toThrow(/cannot be deleted/);
     expect(value(getQuote(store, { id: quote.id })).prices).toEqual({});
   });
 
   it('reports an unknown job by its field', () => {
-    expect(issueQuote(tempStore(), { jobId: 3, prices: {}, quantityBreaks: [], document: {} }))
+    expect(recordQuote(tempStore(), snapshot(3)))
       .toMatchObject({ ok: false, error: { code: 'not-found', path: 'jobId' } });
   });
 });

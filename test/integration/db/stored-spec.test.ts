@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  createJob, exportJobs, findJobs, getJob, issueQuote, jobRevisions, listJobs, restoreRevision, setJobStatus, updateJob,
+  createJob, exportJobs, findJobs, getJob, jobRevisions, recordQuote, listJobs, restoreRevision, setJobStatus, updateJob,
 } from '../../../db';
 import { job, spec, tempStore, value } from './helpers';
 
@@ -79,7 +79,9 @@ describe('stored specs are read with the spec schema', () => {
 
   it('a quote is not issued from a job whose spec no longer reads; export keeps the job and names it', () => {
     const { store, broken } = storeWithOneBrokenJob();
-    const quote = issueQuote(store, { jobId: broken.id, prices: {}, quantityBreaks: [], document: {} });
+    const quote = recordQuote(store, {
+      jobId: broken.id, jobRevision: broken.revision, validityDays: 30, prices: {}, quantityBreaks: [], document: {}, decision: null,
+    });
     expect(quote.ok ? null : quote.error).toMatchObject({ code: 'stored-spec-invalid', path: 'spec.material' });
     const exported = value(exportJobs(store, { format: 'json' }));
     expect(exported.count).toBe(3);

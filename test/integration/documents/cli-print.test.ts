@@ -109,4 +109,35 @@ describe('command line: print quote and print traveller', () => {
     expect(cli(['print', 'quote', join(dir, 'spec.json'), '--db', db]).status).toBe(2);
     expect(cli(['print', 'label', '--db', db]).status).toBe(2);
   });
+
+  it('refuses to issue a quote with open errors unless --accept gives the reason, which the quote keeps', async () => {
+    const store = openStore(db);
+    let number = '';
+    try {
+      const created = createJob(store, { customer: { name: 'Tamsin Test Devices (demo)' }, partNumber: 'TTD-STOP-2',
+        spec: { ...valveSpec, loads: [{ length: 5 }] } });
+      if (!created.ok) throw new Error(JSON.stringify(created.error));
+      number = created.value.number;
+    } finally {
+      store.close();
+    }
+    const refused = cli(['print', 'quote', '--job', number, '--db', db, '--out', join(dir, 'refused.pdf')]);
+    expect(refused.status).toBe(2);
+    const errors = JSON.parse(refused.stderr).errors;
+    expect(errors[0]).toMatchObject({ code: 'issue-needs-decision', path: 'accept' });
+    expect(errors[0].message).toContain('--accept "reason"');
+    expect(errors.slice(1).map((e: { code: string }) => e.code)).toContain('working-length-below-solid');
+    const issued = cli(['print', 'quote', '--job', number, '--accept', 'customer fits a stop; 5 mm is the stop height', '--db', db, '--out', join(dir, 'accepted.pdf')]);
+    expect(issued.status, issued.stderr).toBe(0);
+    const reopened = openStore(db);
+    try {
+      const quote = getQuote(reopened, { number: JSON.parse(issued.stdout).quote });
+      expect(quote.ok && quote.value.decision?.reason).toBe('customer fits a stop; 5 mm is the stop height');
+    } finally {
+      reopened.close();
+    }
+    const text = (await pdfText(readFileSync(join(dir, 'accepted.pdf')))).all;
+    expect(text).toContain('Accepted deviations from the drawing');
+    expect(text).toContain('shorter than the spring\'s solid length');
+  });
 });

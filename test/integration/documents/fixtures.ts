@@ -20,7 +20,8 @@ export const shop: SettingsInput = {
       speedModel: { feedMetresPerMinute: 1, maxPiecesPerMinute: 25 } },
     { id: 'set-1', name: 'Test setting press', operation: 'set', wireRange: { min: 0.3, max: 16 }, hourlyRate: 40, setupMinutes: 15,
       speedModel: { feedMetresPerMinute: 1, maxPiecesPerMinute: 15 } },
-    { id: 'test-1', name: 'Test load tester', operation: 'load-test', wireRange: { min: 0, max: 16 }, hourlyRate: 45, setupMinutes: 10 },
+    { id: 'test-1', name: 'Test load tester', operation: 'load-test', wireRange: { min: 0, max: 16 }, hourlyRate: 45, setupMinutes: 10,
+      piecesPerHour: 500 },
   ],
   materialPrices: [
     { grade: 'en10270-1-dh', dMin: 0.3, dMax: 20, pricePerKg: 5.5, date: '2026-01-10', supplier: 'Demo Wire Mill' },

@@ -5,7 +5,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { parseQuoteDocument, quoteDocument, travellerDocument, withQuoteIssue } from '../../../core/documents';
 import { documentText } from '../../../core/documents';
 import { estimateCost } from '../../../core/costing/estimate';
-import { createJob, getQuote, issueQuote, openStore, saveSettings } from '../../../db';
+import { createJob, getQuote, openStore, recordQuote, saveSettings } from '../../../db';
 import type { Store } from '../../../db';
 import { renderQuote, renderTraveller } from '../../../service/pdf';
 import { settingsWith, shop, specOf, valveSpec } from './fixtures';
@@ -60,9 +60,9 @@ describe('the same model prints the same document', () => {
     const created = ok(createJob(store, { customer: { name: job.customerName }, partNumber: job.partNumber, spec: valveSpec }));
     const estimate = estimateCost(spec, settings);
     const draft = quoteDocument({ spec, settings, job, estimate, issuedAt: ISSUED_AT });
-    const issued = ok(issueQuote(store, {
-      jobId: created.id, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
-      quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)),
+    const issued = ok(recordQuote(store, {
+      jobId: created.id, jobRevision: created.revision, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
+      quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)), decision: null,
     }));
     const printed = await renderQuote(withQuoteIssue(draft, issued));
 

@@ -37,7 +37,7 @@ describe('printing through the API (what the app\'s Print menu calls)', () => {
 
   it('issues a quote, keeps it, and reprints it to the same bytes', async () => {
     const before = await dispatch(service.handlers, 'listQuotes', { jobId });
-    const issued = pdfOf(await dispatch(service.handlers, 'printQuote', { jobId }));
+    const issued = pdfOf(await dispatch(service.handlers, 'printQuote', { jobId, accept: 'stress at solid within 0.2 % of the allowable: customer fits a stop' }));
     const after = await dispatch(service.handlers, 'listQuotes', { jobId });
     expect((after as { value: unknown[] }).value.length).toBe((before as { value: unknown[] }).value.length + 1);
     const again = pdfOf(await dispatch(service.handlers, 'reprintQuote', { number: issued.reference }));

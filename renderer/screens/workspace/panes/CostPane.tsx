@@ -7,6 +7,9 @@ import { useNavigation } from '../../../hooks/navigation';
 import type { JobEditor } from '../../../hooks/useJobEditor';
 import { useQuery } from '../../../hooks/useQuery';
 import { money } from '../../../model/shown';
+import { unitPriceText } from '../../../../core/documents/text';
+import { SettingsMoved } from './SettingsMoved';
+import { PriceJudgement } from './PriceJudgement';
 
 /** The price of the spring being edited at each break, line by line, from the shop's rates and prices. */
 export function CostPane({ editor }: { editor: JobEditor }) {
@@ -14,17 +17,22 @@ export function CostPane({ editor }: { editor: JobEditor }) {
   const spec = editor.evaluation.spec;
   const quantities = spec?.quantities;
   const key = spec ? JSON.stringify(spec) : null;
-  const cost = useQuery(key, () => api.costEstimate({ spec, quantities }), 200);
+  const orderQuantity = editor.job?.orderQuantity ?? undefined;
+  const judgement = editor.job?.judgement;
+  const pricing = { ...(orderQuantity ? { orderQuantity } : {}), ...(judgement ? { judgement } : {}) };
+  const cost = useQuery(key === null ? null : `${key}|${JSON.stringify(pricing)}`, () => api.costEstimate({ spec, quantities, ...pricing }), 200);
   return (
     <div className="pane">
       <div className="pane__controls">
-        <p className="muted">Breaks from the spec’s price-break quantities ({quantities ? quantities.join(', ') : 'none given: 100, 1000, 5000'}).</p>
+        <p className="muted">{quantities ? `Breaks from the spec’s price-break quantities (${quantities.join(', ')})` : orderQuantity ? `No breaks given: the shop’s breaks around the order quantity, ${orderQuantity} pcs` : 'No breaks or order quantity given: 100, 1000, 5000'}{orderQuantity && quantities ? `, with the order quantity ${orderQuantity}` : ''}.</p>
         <button type="button" className="button" onClick={cost.reload} disabled={!spec}>Recalculate</button>
         {cost.state === 'loading' ? <span role="status" className="muted">Pricing…</span> : null}
       </div>
       {!spec ? <p className="notice">Complete the spec first: pricing needs a valid spring.</p> : null}
       {cost.error ? <p className="error-text" role="alert">{cost.error.message}</p> : null}
+      {editor.job && !editor.dirty && cost.value ? <SettingsMoved jobId={editor.job.id} revision={editor.job.revision} currency={cost.value.currency} /> : null}
       {spec && cost.value ? <CostBody estimate={cost.value} /> : null}
+      {spec && cost.value && editor.job && !editor.dirty ? <PriceJudgement editor={editor} estimate={cost.value} /> : null}
     </div>
   );
 }
@@ -54,13 +62,18 @@ function CostBody({ estimate }: { estimate: CostEstimate }) {
                 <tr key={b.quantity} className={i === chosen ? 'is-selected' : undefined}>
                   <td className="num">{b.quantity}</td>
                   <td className="num">{b.startQuantity}</td>
-                  <td className="num" data-unit-price={b.quantity}>{money(b.unitPrice, c)}</td>
+                  <td className="num" data-unit-price={b.quantity}>{c} {unitPriceText(b.unitPrice)}</td>
                   <td className="num">{money(b.total, c)}</td>
                   <td><button type="button" className="button button--small" aria-pressed={i === chosen} onClick={() => setChosen(i)}>Lines for {b.quantity}</button></td>
                 </tr>
               ))}
             </tbody>
           </table>
+          {estimate.charges.length > 0 ? (
+            <table className="table charges"><tbody>
+              {estimate.charges.map((ch) => <tr key={ch.key} data-line={ch.key}><th scope="row">{ch.item}</th><td className="muted">{ch.basis}</td><td className="num">{money(ch.amount, c)}</td></tr>)}
+            </tbody></table>
+          ) : null}
           <p className="muted">Minimum order value {money(estimate.minimumOrderValue, c)}.</p>
         </section>
         <Figure svg={curve} label="Unit price against order quantity" />
@@ -77,8 +90,8 @@ function CostLines({ pb, currency }: { pb: PriceBreak; currency: string }) {
       <table className="table">
         <thead><tr><th scope="col">Group</th><th scope="col">Item</th><th scope="col">Basis</th><th scope="col" className="num">Amount</th></tr></thead>
         <tbody>
-          {pb.lines.map((l, i) => (
-            <tr key={i}><td><span className={`tag tag--${l.group}`}>{l.group}</span></td><td>{l.item}</td><td className="muted">{l.basis}</td><td className="num">{money(l.amount, currency)}</td></tr>
+          {pb.lines.map((l) => (
+            <tr key={l.key} data-line={l.key}><td><span className={`tag tag--${l.group}`}>{l.group}</span></td><td>{l.item}</td><td className="muted">{l.basis}</td><td className="num">{money(l.amount, currency)}</td></tr>
           ))}
         </tbody>
         <tfoot><tr><th scope="row" colSpan={3}>Total</th><td className="num">{money(pb.total, currency)}</td></tr></tfoot>

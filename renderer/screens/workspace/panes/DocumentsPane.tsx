@@ -7,7 +7,9 @@ import { Progress } from '../../../components/Progress';
 import { usePrinter } from '../../../hooks/printing';
 import type { JobEditor } from '../../../hooks/useJobEditor';
 import { parseNumber } from '../../../model/numbers';
+import type { FieldError } from '../../../../core/result';
 import { IssuedQuotes } from './IssuedQuotes';
+import { IssueDecision } from './IssueDecision';
 
 /** Quote and traveller for the saved job, and the quotes already issued with their dates. */
 export function DocumentsPane({ editor }: { editor: JobEditor }) {
@@ -29,6 +31,7 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const [quantityText, setQuantityText] = useState('');
   const [issued, setIssued] = useState(0);
+  const [problems, setProblems] = useState<FieldError[] | null>(null);
   const parsed = parseNumber(quantityText);
   const quantity = parsed.ok && parsed.value !== undefined && Number.isInteger(parsed.value) && parsed.value > 0 ? parsed.value : undefined;
   const quantityBad = quantityText.trim() !== '' && quantity === undefined;
@@ -38,6 +41,10 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
     setOutcome(null);
     const r = await call();
     setBusy(null);
+    if (!r.ok && r.error.code === 'issue-needs-decision') {
+      setProblems(r.error.details ?? []);
+      return;
+    }
     if (!r.ok) {
       setOutcome({ tone: 'error', text: r.error.message, findings: [] });
       return;
@@ -81,6 +88,10 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
         the engineer’s review, the customer’s approval and the local codes. The traveller adds the floor cautions of its
         routing (set removal, grinding, ovens, plating and bake) and the review findings still open.
       </Caution>
+      <IssueDecision problems={problems} onCancel={() => setProblems(null)} onIssue={(reason) => {
+        setProblems(null);
+        void run('Issuing and printing the quote', () => printer.print('quote', job.id, undefined, reason));
+      }} />
       <IssuedQuotes job={job} refresh={issued} disabled={off} onReprint={(number) => void run(`Reprinting ${number}`, () => printer.reprint(number))} />
     </div>
   );

@@ -12,6 +12,7 @@ import { parseNumber } from '../../../model/numbers';
 import { Findings } from '../results/Findings';
 import { Inspection, Operations } from './PlanTables';
 import { SetCalibrationPanel } from './SetCalibrationPanel';
+import { RoutingJudgement } from './RoutingJudgement';
 
 function initialQuantity(editor: JobEditor): string {
   const q = editor.drafts.job.orderQuantity || editor.evaluation.spec?.quantities?.[0]?.toString();
@@ -25,8 +26,9 @@ export function PlanPane({ editor, onGo }: { editor: JobEditor; onGo(path: strin
   const parsed = parseNumber(quantityText);
   const quantity = parsed.ok && parsed.value !== undefined && Number.isInteger(parsed.value) && parsed.value >= 1 ? parsed.value : null;
   const spec = editor.evaluation.spec;
-  const key = spec && quantity ? JSON.stringify([spec, quantity]) : null;
-  const plan = useQuery(key, () => api.manufacturingPlan({ spec, orderQuantity: quantity ?? 1 }), 200);
+  const judgement = editor.job?.judgement;
+  const key = spec && quantity ? JSON.stringify([spec, quantity, judgement]) : null;
+  const plan = useQuery(key, () => api.manufacturingPlan({ spec, orderQuantity: quantity ?? 1, ...(judgement ? { judgement } : {}) }), 200);
   return (
     <div className="pane">
       <div className="pane__controls">
@@ -37,6 +39,7 @@ export function PlanPane({ editor, onGo }: { editor: JobEditor; onGo(path: strin
       {!spec ? <p className="notice">Complete the spec first: the plan needs a valid spring.</p> : null}
       {plan.error ? <p className="error-text" role="alert">{plan.error.message}</p> : null}
       {spec && plan.value ? <PlanBody plan={plan.value} spec={spec} onGo={onGo} /> : null}
+      {spec && plan.value && editor.job && !editor.dirty ? <RoutingJudgement editor={editor} plan={plan.value} /> : null}
     </div>
   );
 }

@@ -1,5 +1,28 @@
 import type { ManufacturingPlan } from '../../../../core/process/plan';
+import type { Operation } from '../../../../core/process/types';
 import { shown } from '../../../model/shown';
+import { OVERRIDE_LABELS, overrideText } from '../../../../core/documents/traveller-sections';
+
+/** Where the operation runs and why: the chosen machine's lot cost, the runner-up and what choosing it saves. */
+function WorkCentreCell({ op }: { op: Operation }) {
+  if (op.outside) return <span className="tag">outside</span>;
+  if (!op.workCentre) return op.offers.length === 0 && (op.kind === 'pack' || op.kind === 'load-test' || op.kind === 'inspect')
+    ? <span className="muted">by hand</span> : <span className="error-text">no work centre fits (Shop settings → Machines)</span>;
+  const c = op.choice;
+  const cost = (v: number) => v.toFixed(2);
+  return (
+    <span className="work-centre" data-op={op.key}>
+      <span className="muted">{op.workCentre.name}</span>
+      {c?.basis === 'pinned' ? <span className="tag">pinned</span> : null}
+      {c && c.lotCost !== null ? <span className="muted"> · lot {cost(c.lotCost)}</span> : null}
+      {c?.basis === 'no run model' ? <span className="error-text"> · no run rate on file</span> : null}
+      {c?.runnerUp ? (
+        <span className="muted runner-up"> · runner-up {c.runnerUp.name} at {cost(c.runnerUp.lotCost)}
+          {c.difference !== null ? ` (${c.difference >= 0 ? `${cost(c.difference)} dearer` : `${cost(-c.difference)} cheaper`})` : ''}</span>
+      ) : null}
+    </span>
+  );
+}
 
 export function Operations({ plan }: { plan: ManufacturingPlan }) {
   const u = plan.units;
@@ -16,8 +39,13 @@ export function Operations({ plan }: { plan: ManufacturingPlan }) {
               <td className="num">{op.sequence}</td>
               <td>
                 <strong>{op.title}</strong><br />
-                {op.outside ? <span className="tag">outside</span> : op.workCentre ? <span className="muted">{op.workCentre.name}</span>
-                  : <span className="error-text">no work centre fits (Shop settings → Machines)</span>}
+                <WorkCentreCell op={op} />
+                {op.overrides.map((o) => (
+                  <p key={o.field} className="op-override" data-override={`${op.key}:${o.field}`}>
+                    <span className="tag">set for this job</span> {OVERRIDE_LABELS[o.field]}: {overrideText(o)}
+                  </p>
+                ))}
+                {op.addedBecause ? <p className="op-override"><span className="tag">added</span> {op.addedBecause}</p> : null}
                 {op.notes.map((n) => <p key={n} className="op-note">{n}</p>)}
               </td>
               <td>
@@ -32,6 +60,11 @@ export function Operations({ plan }: { plan: ManufacturingPlan }) {
           ))}
         </tbody>
       </table>
+      {plan.removed.length > 0 ? (
+        <ul className="removed-ops">
+          {plan.removed.map((r) => <li key={r.key}><span className="tag">removed for this job</span> {r.title}: {r.reason}</li>)}
+        </ul>
+      ) : null}
     </section>
   );
 }
