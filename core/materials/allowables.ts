@@ -16,7 +16,7 @@ const T10_6 = 'Shigley 9e Table 10-6';
 export const staticAllowables: Readonly<Record<GradeFamily, Readonly<StaticAllowable>>> = Object.freeze({
   'cold-drawn-carbon': Object.freeze({
     beforeSetRemoval: 0.45, afterSetRemoval: 0.6,
-    source: `${T10_6}, music wire and cold-drawn carbon steel (45 % confirmed by the book's worked solutions; 60 % from memory)`,
+    source: `${T10_6}, music wire and cold-drawn carbon steel (45 % and 60 % from memory)`,
   }),
   'hardened-tempered': Object.freeze({
     beforeSetRemoval: 0.5, afterSetRemoval: 0.65,

@@ -41,7 +41,7 @@ const musicWire: WireGrade = {
   strengthTable: { form: 'points', rows: a228Rows, ...read('ASTM A228 tensile table, via interwiregroup.com') },
   strengthFits: [inchFit({
     A: 201, m: 0.145, dMin: 0.004, dMax: 0.256, printedMetricA: 2211,
-    ...read(`${T10_4} (music-wire row confirmed by the book's chapter 10 worked solutions)`),
+    ...read(`${T10_4} (music-wire row)`),
   })],
   moduli: {
     bands: inchBands([[0.0325, 203.4, 82.7], [0.0635, 200, 81.7], [0.125, 196.5, 81.0], [Infinity, 193, 80.0]]),

@@ -6,6 +6,7 @@ import { fail, fieldError, formatPath, ok } from '../../core/result';
 import type { Spec } from '../../core/spec';
 import { insertFirstOff } from '../first-off/records';
 import type { Store } from '../store';
+import type { FirstOffRow } from '../first-off/records';
 
 /** A first-off record in an export file: the measured values as entered, and when they were recorded. */
 export interface FirstOffExport extends FirstOffFields {
@@ -15,18 +16,8 @@ export interface FirstOffExport extends FirstOffFields {
 /** What an import file may carry beside a job: its first-off records (checked against the job's spec). */
 export const importedFirstOffSchema = z.array(z.unknown()).max(1000).optional();
 
-interface Row {
-  job_id: number;
-  units: 'metric' | 'inch';
-  coiled_free_length: number;
-  free_length_after_set: number;
-  outer_diameter: number;
-  forces: string;
-  measured_on: string;
-  measured_by: string;
-  notes: string;
-  recorded_at: string;
-}
+/** The stored columns of a record (the export reads the table itself, without the job's number). */
+type Row = Omit<FirstOffRow, 'id' | 'job_number' | 'job_revision'>;
 
 /** Every job's first-off records for export, by job id, oldest measurement first. */
 export function firstOffByJob(store: Store): Map<number, FirstOffExport[]> {

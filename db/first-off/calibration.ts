@@ -13,19 +13,10 @@ import type { StoreResult } from '../errors';
 import { checkSpec } from '../jobs/input';
 import { distance } from '../search/similarity';
 import type { Store } from '../store';
+import type { FirstOffRow } from './records';
 
-interface EvidenceRow {
-  id: number;
-  job_id: number;
-  job_number: string;
-  job_revision: number;
-  units: 'metric' | 'inch';
-  coiled_free_length: number;
-  free_length_after_set: number;
-  measured_on: string;
-  measured_by: string;
-  revision_spec: string;
-}
+type EvidenceRow = Pick<FirstOffRow, 'id' | 'job_id' | 'job_number' | 'job_revision' | 'units' | 'coiled_free_length'
+  | 'free_length_after_set' | 'measured_on' | 'measured_by'> & { revision_spec: string };
 
 /** Records of compression jobs of one grade family, each with the spec of the revision it was made to. */
 const EVIDENCE_SQL = `SELECT r.id, r.job_id, j.number AS job_number, r.job_revision, r.units, r.coiled_free_length,

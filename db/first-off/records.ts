@@ -8,7 +8,8 @@ import type { StoreResult } from '../errors';
 import type { Store } from '../store';
 import { inTransaction } from '../store';
 
-interface RecordRow {
+/** A first_off_records row joined with its job's number, as the store's queries read it. */
+export interface FirstOffRow {
   id: number;
   job_id: number;
   job_number: string;
@@ -32,7 +33,7 @@ const RECORD_SELECT = `SELECT r.*, j.number AS job_number FROM first_off_records
 /** The set a record shows, to a millionth of its unit: the readings are gauge values, not float noise. */
 const setOf = (coiled: number, after: number) => Number((coiled - after).toFixed(6));
 
-function toRecord(row: RecordRow): FirstOffRecord {
+function toRecord(row: FirstOffRow): FirstOffRecord {
   return {
     id: row.id, jobId: row.job_id, jobNumber: row.job_number, jobRevision: row.job_revision, units: row.units,
     coiledFreeLength: row.coiled_free_length, freeLengthAfterSet: row.free_length_after_set,
@@ -52,7 +53,7 @@ export function insertFirstOff(store: Store, jobId: number, jobRevision: number,
 }
 
 function recordById(store: Store, id: number): FirstOffRecord {
-  return toRecord(store.sql(`${RECORD_SELECT} WHERE r.id = ?`).get(id) as RecordRow);
+  return toRecord(store.sql(`${RECORD_SELECT} WHERE r.id = ?`).get(id) as FirstOffRow);
 }
 
 /**
@@ -77,6 +78,6 @@ export function recordFirstOff(store: Store, raw: unknown): StoreResult<FirstOff
 /** A job's first-off records, oldest measurement first. */
 export function listFirstOff(store: Store, jobId: number): StoreResult<FirstOffRecord[]> {
   if (!store.sql('SELECT 1 FROM jobs WHERE id = ?').get(jobId)) return failure('not-found', `no job with id ${jobId}`, 'jobId');
-  const rows = store.sql(`${RECORD_SELECT} WHERE r.job_id = ? ORDER BY r.measured_on, r.id`).all(jobId) as RecordRow[];
+  const rows = store.sql(`${RECORD_SELECT} WHERE r.job_id = ? ORDER BY r.measured_on, r.id`).all(jobId) as FirstOffRow[];
   return success(rows.map(toRecord));
 }

@@ -66,8 +66,8 @@ describe('uncorrected stress (Machinery\'s Handbook 31e Table 4, 8PD/(πd³))', 
 });
 
 describe('permanent set, elastic–perfectly-plastic bar in torsion', () => {
-  // Derived from the elastic–perfectly-plastic round bar in torsion (Kukta & Kirane, "Torsion – plastic behaviour",
-  // lecture notes, 2018; see docs/sources.md): T = (4/3)·TY·(1 − r³/4) and the
+  // Derived from the elastic–perfectly-plastic round bar in torsion (Beer, Johnston, DeWolf & Mazurek, Mechanics of
+  // Materials, 7th ed., §3.11, from memory; see docs/sources.md): T = (4/3)·TY·(1 − r³/4) and the
   // elastic spring-back T/(GJ).
   it.each([[1.1, 0.016], [1.2, 0.05], [1.3, 0.091], [1.5, 0.177], [2.0, 0.354]])(
     'τe/τY = %f leaves %f of the imposed deflection as set', (ratio, fraction) => {

@@ -222,7 +222,7 @@ describe('elastic moduli, density, temperatures, process data', () => {
 
 describe('allowable static torsion', () => {
   it('fractions of Sut before and after set removal by family', () => {
-    // Shigley 9e Table 10-6: 45 % confirmed by the book's worked solutions, the rest from memory; "after" = low end of range
+    // Shigley 9e Table 10-6: all fractions from memory; "after" = low end of range
     expect(staticAllowables['cold-drawn-carbon']).toMatchObject({ beforeSetRemoval: 0.45, afterSetRemoval: 0.6 });
     expect(staticAllowables['hardened-tempered']).toMatchObject({ beforeSetRemoval: 0.5, afterSetRemoval: 0.65 });
     expect(staticAllowables['austenitic-stainless']).toMatchObject({ beforeSetRemoval: 0.35, afterSetRemoval: 0.55 });

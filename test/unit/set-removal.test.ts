@@ -88,7 +88,7 @@ describe('set removal: one stress basis per method', () => {
       if (v.coiledFreeLength === null) return;
       expect(v.coiledFreeLength).toBeGreaterThanOrEqual(L0);
       const sY = yieldDeflections(shape).handbook;
-      // Elastic–perfectly-plastic round bar (Kukta & Kirane, Torsion – plastic behaviour): set = s(1 − 4r/3 + r⁴/3).
+      // Elastic–perfectly-plastic round bar (Beer, Johnston, DeWolf & Mazurek, Mechanics of Materials, 7th ed., §3.11, from memory): set = s(1 − 4r/3 + r⁴/3).
       expect(v.coiledFreeLength - permanentSet(v.coiledFreeLength - r.solidLength, sY)).toBeCloseTo(L0, 8);
     }), { numRuns: 300 });
   });

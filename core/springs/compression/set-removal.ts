@@ -4,7 +4,7 @@
  * The wire yields when the basis stress (a fixed multiple of 8FD/(πd³)) reaches τY. Pressing a spring whose
  * deflection s would cause the elastic stress τe > τY leaves the permanent set s_set = s·(1 − 4r/3 + r⁴/3),
  * r = τY/τe (torsion of a round bar with an elastic core of radius r·c; derived from the bar formulas
- * T = (4/3)·TY·(1 − r³/4) and the elastic spring-back T/(GJ), Kukta & Kirane, "Torsion – plastic behaviour").
+ * T = (4/3)·TY·(1 − r³/4) and the elastic spring-back T/(GJ), Beer, Johnston, DeWolf & Mazurek, Mechanics of Materials, 7th ed., §3.11, from memory).
  *
  * Stress is proportional to deflection, so with sY the deflection at which yield starts (τe = τY), the
  * finished length to solid is s − s_set = 4sY/3 − sY⁴/(3s³). Setting that equal to the finished deflection
