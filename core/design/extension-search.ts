@@ -20,7 +20,7 @@ import { extensionMisses } from './extension-accept';
 import type { Miss } from './misses';
 import { gradeMisses } from './screen';
 import type { DesignSteps } from './space';
-import { isEmptyGrid, meanDiameterGrid, toPlaces } from './space';
+import { isEmptyGrid, meanDiameterGrid, orderFieldsOf, toPlaces } from './space';
 import type { WireChoice } from './wire-sizes';
 import { wireChoices } from './wire-sizes';
 
@@ -79,7 +79,6 @@ export function extensionPoint(req: ExtensionRequirementInternal, wire: WireProp
 }
 
 export function extensionPointSpec(r: ExtensionRequirement, p: ExtensionPoint): ExtensionSpec {
-  const c = r.choices;
   return {
     kind: 'extension', version: 1, units: r.units, material: p.grade,
     wireDiameter: fromInternal(p.d, 'length', r.units), outerDiameter: fromInternal(p.D + p.d, 'length', r.units),
@@ -87,11 +86,7 @@ export function extensionPointSpec(r: ExtensionRequirement, p: ExtensionPoint): 
     loads: r.function.loads.map((l) => ({ length: l.length, force: l.force, ...(l.tolerancePercent !== undefined ? { tolerancePercent: l.tolerancePercent } : {}) })),
     mechanicalStop: r.mechanicalStop,
     duty: r.duty.type === 'static' ? { type: 'static' } : { type: 'cyclic', between: r.duty.between, cycles: r.duty.cycles, peened: false, ...(r.duty.frequency !== undefined ? { frequency: r.duty.frequency } : {}) },
-    ...(r.serviceTemperature ? { serviceTemperature: r.serviceTemperature } : {}),
-    ...(c.quantities ? { quantities: c.quantities } : {}),
-    ...(c.toleranceGrade !== undefined ? { toleranceGrade: c.toleranceGrade } : {}),
-    ...(c.finish !== undefined ? { finish: c.finish } : {}),
-    ...(r.reference ? { notes: `Designed from the requirement ${r.reference}` } : {}),
+    ...orderFieldsOf(r),
   };
 }
 

@@ -126,13 +126,24 @@ export function designPoint(
 
 const out = (v: number, units: CompressionRequirement['units']) => fromInternal(v, 'length', units);
 
+/** What every kind's designed spec carries over from the requirement: service, breaks, tolerances, finish, origin. */
+export function orderFieldsOf(r: Pick<CompressionRequirement, 'serviceTemperature' | 'reference'> & { choices: Pick<CompressionRequirement['choices'], 'quantities' | 'toleranceGrade' | 'finish'> }) {
+  const c = r.choices;
+  return {
+    ...(r.serviceTemperature ? { serviceTemperature: r.serviceTemperature } : {}),
+    ...(c.quantities ? { quantities: c.quantities } : {}),
+    ...(c.toleranceGrade !== undefined ? { toleranceGrade: c.toleranceGrade } : {}),
+    ...(c.finish !== undefined ? { finish: c.finish } : {}),
+    ...(r.reference ? { notes: `Designed from the requirement ${r.reference}` } : {}),
+  };
+}
+
 /** The spec of a design point, in the requirement's units, with the requirement's loads, duty and order choices. */
 export function pointSpec(r: CompressionRequirement, p: DesignPoint): CompressionSpec {
   const f = r.function;
   const loads = f.type === 'two-loads' ? f.loads : [f.load];
   const duty: CompressionSpec['duty'] = r.duty.type === 'static' ? { type: 'static' }
     : { type: 'cyclic', between: r.duty.between, cycles: r.duty.cycles, peened: p.peened, ...(r.duty.frequency !== undefined ? { frequency: r.duty.frequency } : {}) };
-  const c = r.choices;
   const places = lengthDecimals[r.units];
   return {
     kind: 'compression', version: 1, units: r.units, material: p.grade,
@@ -142,10 +153,6 @@ export function pointSpec(r: CompressionRequirement, p: DesignPoint): Compressio
     seating: r.seating, duty,
     freeParameters: loads.length >= 2 ? ['freeLength', 'coils', 'wireDiameter'] : ['freeLength'],
     ...(p.peened ? { shotPeen: true } : {}),
-    ...(r.serviceTemperature ? { serviceTemperature: r.serviceTemperature } : {}),
-    ...(c.quantities ? { quantities: c.quantities } : {}),
-    ...(c.toleranceGrade !== undefined ? { toleranceGrade: c.toleranceGrade } : {}),
-    ...(c.finish !== undefined ? { finish: c.finish } : {}),
-    ...(r.reference ? { notes: `Designed from the requirement ${r.reference}` } : {}),
+    ...orderFieldsOf(r),
   };
 }

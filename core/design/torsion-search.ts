@@ -17,7 +17,7 @@ import { Closest } from './closest';
 import type { Miss } from './misses';
 import { overMax, underMin } from './misses';
 import { gradeMisses } from './screen';
-import { isEmptyGrid, meanDiameterGrid, toPlaces } from './space';
+import { isEmptyGrid, meanDiameterGrid, orderFieldsOf, toPlaces } from './space';
 import type { DesignSteps } from './space';
 import type { WireAsk, WireChoice } from './wire-sizes';
 import { wireChoices } from './wire-sizes';
@@ -93,7 +93,6 @@ export function torsionPoint(req: TorsionRequirementInternal, wire: WireProperti
 }
 
 export function torsionPointSpec(r: TorsionRequirement, p: TorsionPoint): TorsionSpec {
-  const c = r.choices;
   const [t1, t2] = r.function.torques;
   const tol = (t: typeof t1) => (t.tolerancePercent !== undefined ? { tolerancePercent: t.tolerancePercent } : {});
   return {
@@ -105,11 +104,7 @@ export function torsionPointSpec(r: TorsionRequirement, p: TorsionPoint): Torsio
     duty: r.duty.type === 'static' ? { type: 'static' }
       : { type: 'cyclic', between: [p.firstAngle, toPlaces(p.firstAngle + r.function.stroke, 1)], cycles: r.duty.cycles, peened: p.peened },
     ...(p.peened ? { shotPeen: true } : {}),
-    ...(r.serviceTemperature ? { serviceTemperature: r.serviceTemperature } : {}),
-    ...(c.quantities ? { quantities: c.quantities } : {}),
-    ...(c.toleranceGrade !== undefined ? { toleranceGrade: c.toleranceGrade } : {}),
-    ...(c.finish !== undefined ? { finish: c.finish } : {}),
-    ...(r.reference ? { notes: `Designed from the requirement ${r.reference}` } : {}),
+    ...orderFieldsOf(r),
   };
 }
 

@@ -1,6 +1,6 @@
 import type { FieldError } from '../result';
 import { fieldError } from '../result';
-import { findGrade } from '../materials';
+import { choiceErrors } from './rules';
 import type { ExtensionRequirement } from './extension';
 
 /** Contradictions of an extension requirement the schema cannot express, each naming its field. */
@@ -25,13 +25,6 @@ export function extensionRequirementErrors(r: ExtensionRequirement): FieldError[
   if (r.duty.type === 'cyclic' && r.duty.between[0] === r.duty.between[1]) {
     errors.push(fieldError('no-stroke', 'duty.between[1]', 'the two working lengths are equal: no stroke to cycle'));
   }
-  (r.choices.grades ?? []).forEach((g, i) => {
-    if (!findGrade(g)) errors.push(fieldError('unknown-grade', `choices.grades[${i}]`, `unknown wire grade "${g}"`));
-  });
-  const c = r.choices;
-  if (c.mainQuantity !== undefined && c.quantities !== undefined && !c.quantities.includes(c.mainQuantity)) {
-    errors.push(fieldError('main-quantity-not-a-break', 'choices.mainQuantity',
-      `the main quantity ${c.mainQuantity} is not one of the quantity breaks ${c.quantities.join(', ')}`));
-  }
+  errors.push(...choiceErrors(r.choices));
   return errors;
 }

@@ -54,8 +54,8 @@ function dutyErrors(r: CompressionRequirement): FieldError[] {
   return [];
 }
 
-function choiceErrors(r: CompressionRequirement): FieldError[] {
-  const c = r.choices;
+/** The choices every kind's requirement shares: known grades, and a main quantity among the breaks. */
+export function choiceErrors(c: Pick<CompressionRequirement['choices'], 'grades' | 'mainQuantity' | 'quantities'>): FieldError[] {
   const errors: FieldError[] = [];
   (c.grades ?? []).forEach((g, i) => {
     if (!findGrade(g)) errors.push(fieldError('unknown-grade', `choices.grades[${i}]`, `unknown wire grade "${g}"`));
@@ -69,5 +69,5 @@ function choiceErrors(r: CompressionRequirement): FieldError[] {
 
 /** Contradictions the schema cannot express, each naming its field. */
 export function compressionRequirementErrors(r: CompressionRequirement): FieldError[] {
-  return [...functionErrors(r), ...envelopeErrors(r), ...dutyErrors(r), ...choiceErrors(r)];
+  return [...functionErrors(r), ...envelopeErrors(r), ...dutyErrors(r), ...choiceErrors(r.choices)];
 }

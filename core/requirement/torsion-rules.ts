@@ -1,6 +1,6 @@
 import type { FieldError } from '../result';
 import { fieldError } from '../result';
-import { findGrade } from '../materials';
+import { choiceErrors } from './rules';
 import type { TorsionRequirement } from './torsion';
 
 /** Contradictions of a torsion requirement the schema cannot express, each naming its field. */
@@ -15,13 +15,6 @@ export function torsionRequirementErrors(r: TorsionRequirement): FieldError[] {
   if (e.arbor !== undefined && e.maxOuterDiameter !== undefined && e.arbor >= e.maxOuterDiameter) {
     errors.push(fieldError('envelope-closed', 'envelope.arbor', `the arbor ${e.arbor} is not smaller than the maximum outside diameter ${e.maxOuterDiameter}`));
   }
-  (r.choices.grades ?? []).forEach((g, i) => {
-    if (!findGrade(g)) errors.push(fieldError('unknown-grade', `choices.grades[${i}]`, `unknown wire grade "${g}"`));
-  });
-  const c = r.choices;
-  if (c.mainQuantity !== undefined && c.quantities !== undefined && !c.quantities.includes(c.mainQuantity)) {
-    errors.push(fieldError('main-quantity-not-a-break', 'choices.mainQuantity',
-      `the main quantity ${c.mainQuantity} is not one of the quantity breaks ${c.quantities.join(', ')}`));
-  }
+  errors.push(...choiceErrors(r.choices));
   return errors;
 }
