@@ -1,10 +1,11 @@
-import { closeSync, mkdtempSync, openSync, readdirSync, rmSync, writeSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { backupStore, createJob, listJobs, openStore, tryOpenStore } from '../../db';
 import { offerRestoreOfDamagedStore } from '../../electron/shell/damaged-store';
 import { electron } from './electron-mock';
+import { damageIndexPage } from '../support/damage';
 
 vi.mock('electron', async () => (await import('./electron-mock')).electron);
 
@@ -22,12 +23,7 @@ async function damagedStore(): Promise<{ file: string; backup: string; problem: 
   const backup = path.join(dir, 'backup.db');
   const made = await backupStore(store, backup);
   if (!made.ok) throw new Error(made.error.message);
-  const { rootpage } = store.db.prepare("SELECT rootpage FROM sqlite_schema WHERE name = 'jobs_by_material'").get() as { rootpage: number };
-  const pageSize = store.db.pragma('page_size', { simple: true }) as number;
-  store.close();
-  const fd = openSync(file, 'r+');
-  writeSync(fd, Buffer.alloc(pageSize - 8, 0xa5), 0, pageSize - 8, (rootpage - 1) * pageSize + 8);
-  closeSync(fd);
+  damageIndexPage(store);
   const opened = tryOpenStore(file);
   if (opened.ok) throw new Error('the damaged store opened');
   return { file, backup, problem: opened.error.message };

@@ -1,10 +1,11 @@
 import { spawn } from 'node:child_process';
-import { closeSync, existsSync, openSync, readdirSync, writeSync } from 'node:fs';
+import { existsSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { backupStore, createJob, recordQuote, getJob, listJobs, openStore } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { job, tempDir, track, value } from './helpers';
+import { damageIndexPage } from '../../support/damage';
 
 /** The job's current revision: a quote is recorded against the revision it was priced from. */
 const revisionOf = (store: Parameters<typeof getJob>[0], id: number): number => {
@@ -90,10 +91,5 @@ describe('a restore killed part way', () => {
 /** Overwrites one index page of the jobs table with junk. */
 async function damage(file: string): Promise<void> {
   const store = openStore(file);
-  const { rootpage } = store.db.prepare("SELECT rootpage FROM sqlite_schema WHERE name = 'jobs_by_material'").get() as { rootpage: number };
-  const pageSize = store.db.pragma('page_size', { simple: true }) as number;
-  store.close();
-  const fd = openSync(file, 'r+');
-  writeSync(fd, Buffer.alloc(pageSize - 8, 0xa5), 0, pageSize - 8, (rootpage - 1) * pageSize + 8);
-  closeSync(fd);
+  damageIndexPage(store);
 }

@@ -1,9 +1,10 @@
 import { spawnSync } from 'node:child_process';
-import { closeSync, openSync, readdirSync, writeSync } from 'node:fs';
+import { readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { backupStore, createJob, inTransaction, listJobs, openStore } from '../../../db';
 import { job, sha256, tempDir, track, value } from './helpers';
+import { damageIndexPage } from '../../support/damage';
 
 const root = resolve(__dirname, '../../..');
 const cli = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
@@ -18,12 +19,7 @@ async function damagedStore(): Promise<{ dir: string; file: string; backup: stri
   });
   const backup = join(dir, 'friday.db');
   value(await backupStore(store, backup));
-  const { rootpage } = store.db.prepare("SELECT rootpage FROM sqlite_schema WHERE name = 'jobs_by_material'").get() as { rootpage: number };
-  const pageSize = store.db.pragma('page_size', { simple: true }) as number;
-  store.close();
-  const fd = openSync(file, 'r+');
-  writeSync(fd, Buffer.alloc(pageSize - 8, 0xa5), 0, pageSize - 8, (rootpage - 1) * pageSize + 8);
-  closeSync(fd);
+  damageIndexPage(store);
   return { dir, file, backup };
 }
 
