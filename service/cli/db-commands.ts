@@ -1,4 +1,5 @@
 import type { Command } from './commands';
+import { subcommandOf } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, requireOption, toJson } from './io';
 import type { ApiResult } from '../../core/api';
@@ -47,8 +48,7 @@ export const dbCommand: Command = {
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];
-    const sub = name === undefined ? undefined : subcommands[name];
-    if (!sub) throw new InputError([{ code: 'unknown-command', path: 'db', message: `db needs one of: ${Object.keys(subcommands).join(', ')}` }]);
+    const sub = subcommandOf('db', args, subcommands);
     try {
       await withStore(args, (call, service) => sub(args, service.files, out, call));
     } catch (e) {

@@ -5,6 +5,7 @@ import type { SetRemovalGoverning } from '../../core/springs/compression/set-rem
 import { findGrade } from '../../core/materials';
 import type { Spec } from '../../core/spec';
 import type { Command } from './commands';
+import { subcommandOf } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
 import type { Caller } from './store-session';
@@ -43,11 +44,7 @@ export const firstOffCommand: Command = {
     '  first-off list ID|NUMBER --db DB, first-off calibrate SPECFILE --db DB   the coiled free length calibrated by past records',
   ].join('\n'),
   async run(args, out) {
-    const name = args.positional[0];
-    const sub = name === undefined ? undefined : subcommands[name];
-    if (!sub) {
-      throw new InputError([{ code: 'unknown-command', path: 'first-off', message: `first-off needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    }
+    const sub = subcommandOf('first-off', args, subcommands);
     out(toJson(await withStore(args, (call) => sub(args, call))));
   },
 };

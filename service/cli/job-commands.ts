@@ -1,5 +1,6 @@
 import type { JobStatus } from '../../core/api/store';
 import type { Command } from './commands';
+import { subcommandOf } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
 import type { Caller } from './store-session';
@@ -69,11 +70,7 @@ export const jobsCommand: Command = {
     '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB',
   ].join('\n'),
   async run(args, out) {
-    const name = args.positional[0];
-    const sub = name === undefined ? undefined : subcommands[name];
-    if (!sub) {
-      throw new InputError([{ code: 'unknown-command', path: 'jobs', message: `jobs needs one of: ${Object.keys(subcommands).join(', ')}` }]);
-    }
+    const sub = subcommandOf('jobs', args, subcommands);
     out(toJson(await withStore(args, (call) => sub(args, call))));
   },
 };

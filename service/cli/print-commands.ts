@@ -4,6 +4,7 @@ import { StoreError, writeFileReplacing } from '../../db';
 import { renderQuote, renderTraveller } from '../pdf';
 import { draftQuote, travellerFor } from '../pdf/printing';
 import type { Command } from './commands';
+import { subcommandOf } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, requireOption, toJson } from './io';
 import type { Caller } from './store-session';
@@ -90,9 +91,7 @@ export const printCommand: Command = {
     '  print traveller FILE|--job ID [--quantity N] --db DB --out x.pdf   shop traveller PDF',
   ].join('\n'),
   async run(args, out) {
-    const name = args.positional[0];
-    const sub = name === undefined ? undefined : subcommands[name];
-    if (!sub) throw new InputError([{ code: 'unknown-command', path: 'print', message: `print needs one of: ${Object.keys(subcommands).join(', ')}` }]);
+    const sub = subcommandOf('print', args, subcommands);
     out(toJson(await withStore(args, (call) => sub(args, call))));
   },
 };
