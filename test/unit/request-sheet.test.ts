@@ -1,0 +1,104 @@
+import { describe, expect, it } from 'vitest';
+import { cellRef, columnLetter, findHeaderRow, guessColumns, parseCellRef, previewRequestSheet } from '../../core/request-sheet';
+import type { RequestSheet } from '../../core/request-sheet';
+
+const sheet = (rows: string[][]): RequestSheet => ({ name: 'demo.csv', rows });
+
+// Demo data: an invented customer's request sheet (Fernbrook Pumps is not a real company).
+const HEADERS = ['Part No', 'Kind', 'Material', 'Wire dia (mm)', 'OD', 'L0', 'Total coils', 'Ends', 'Load @ length', 'Qty', 'Rate'];
+const GOOD = ['FP-100', 'compression', 'EN 10270-1 SH', '1,6', '12', '40', '8,5', 'closed & ground', '20 N @ 30 mm', '2 000', '2,5'];
+
+describe('request-sheet cell references', () => {
+  it('names columns as a spreadsheet does', () => {
+    expect([0, 25, 26, 51, 52, 701, 702].map(columnLetter)).toEqual(['A', 'Z', 'AA', 'AZ', 'BA', 'ZZ', 'AAA']);
+    expect(cellRef(2, 7)).toBe('C7');
+    expect(parseCellRef('ab12')).toEqual({ column: 27, row: 12 });
+    expect(parseCellRef('7C')).toBeNull();
+  });
+});
+
+describe('guessing columns from headers', () => {
+  it('reads the trade words and abbreviations of both unit systems', () => {
+    expect(guessColumns(['Wire dia', 'd', 'OD', 'L0', 'free length', 'rate', 'load @ length', 'coils', 'quantity', 'grade', 'ends', 'drawing', 'kind']))
+      .toEqual(['wireDiameter', 'ignore', 'outerDiameter', 'freeLength', 'ignore', 'rate', 'loadAtLength', 'totalCoils', 'quantity', 'material', 'ends', 'drawingNumber', 'kind']);
+  });
+  it('tells d (wire) from D (mean coil diameter), the EN 13906-1 symbols', () => {
+    expect(guessColumns(['d (in)', 'D (in)', 'n', 'Free Length (in)', 'Spring Rate (lbf/in)', 'P/N'])).toEqual(
+      ['wireDiameter', 'meanDiameter', 'activeCoils', 'freeLength', 'rate', 'partNumber']);
+  });
+  it('finds the header row below a title block', () => {
+    expect(findHeaderRow([['Enquiry 4471'], ['', ''], HEADERS, GOOD])).toBe(2);
+  });
+});
+
+describe('previewing a request sheet', () => {
+  it('turns a good row into a draft job in the chosen units, with what it read', () => {
+    const preview = previewRequestSheet(sheet([HEADERS, GOOD]), { decimalMark: ',' });
+    const [row] = preview.rows;
+    expect(row?.status).toBe('ready');
+    expect(row?.errors).toEqual([]);
+    expect(row?.job?.spec).toMatchObject({
+      kind: 'compression', units: 'metric', material: 'en10270-1-sh', wireDiameter: 1.6, outerDiameter: 12, freeLength: 40,
+      totalCoils: 8.5, ends: 'closed-ground', loads: [{ force: 20, length: 30 }], quantities: [2000],
+    });
+    expect(row?.job?.orderQuantity).toBe(2000);
+    expect(row?.job?.notes).toMatch(/Rate asked on the request sheet: 2,5 N\/mm/);
+    expect(row?.understood.map((u) => u.path)).toContain('J2');
+  });
+
+  it('converts a value written in the other unit system into the job\'s (1 in = 25.4 mm exactly, NIST SP 811 B.8)', () => {
+    const inch = previewRequestSheet(sheet([HEADERS, [...GOOD.slice(0, 4), '12.7 mm', ...GOOD.slice(5)].map((c) => c.replace('1,6', '0.063').replace('8,5', '8.5').replace('2,5', '14'))]),
+      { units: 'inch', decimalMark: '.' });
+    const spec = inch.rows[0]?.job?.spec as { outerDiameter: number; wireDiameter: number } | undefined;
+    expect(spec?.outerDiameter).toBeCloseTo(0.5, 12);
+    expect(spec?.wireDiameter).toBe(0.063);
+  });
+
+  it('marks each cell that does not read with its reference and the reason', () => {
+    const bad = [...GOOD];
+    bad[3] = 'l,6';
+    bad[7] = 'squashed';
+    const preview = previewRequestSheet(sheet([HEADERS, GOOD, bad]), { decimalMark: ',' });
+    const row = preview.rows[1]!;
+    expect(row.status).toBe('error');
+    expect(row.errors.map((e) => [e.path, e.code])).toEqual([['D3', 'not-a-number'], ['H3', 'unknown-ends']]);
+    expect(row.errors[0]?.message).toMatch(/^Wire diameter:/);
+    expect(preview.counts).toEqual({ ready: 1, error: 1, skipped: 0, blank: 0 });
+  });
+
+  it('puts a spec error on the cell it came from', () => {
+    const solid = [...GOOD];
+    solid[5] = '10'; // 8.5 coils of 1.6 mm wire are 13.6 mm solid (EN 13906-1 eq. for closed and ground ends, n_t·d): not below 10
+    const preview = previewRequestSheet(sheet([HEADERS, solid]), { decimalMark: ',' });
+    expect(preview.rows[0]?.errors.map((e) => e.path)).toContain('F2');
+  });
+
+  it('reads a fixed cell and leaves a skipped row out', () => {
+    const bad = [...GOOD];
+    bad[3] = 'abc';
+    const fixed = previewRequestSheet(sheet([HEADERS, bad, bad]), { decimalMark: ',', fixes: { D2: '1,6' }, skip: [3] });
+    expect(fixed.rows.map((r) => r.status)).toEqual(['ready', 'skipped']);
+    expect(fixed.rows[0]?.fixed).toEqual(['D2']);
+  });
+
+  it('keeps a saved mapping over the guess, and says where each field came from', () => {
+    const saved = { columns: [{ header: 'Rate', field: 'ignore' as const }], units: 'metric' as const, decimalMark: ',' as const };
+    const preview = previewRequestSheet(sheet([HEADERS, GOOD]), { saved });
+    const rate = preview.mapping.columns.find((c) => c.header === 'Rate');
+    expect(rate).toMatchObject({ field: 'ignore', origin: 'saved' });
+    expect(preview.mapping.decimalMark).toBe(',');
+    expect(preview.rows[0]?.job?.notes).toBe('');
+  });
+
+  it('says when a needed column is not mapped', () => {
+    const preview = previewRequestSheet(sheet([HEADERS.slice(0, 5), GOOD.slice(0, 5)]), { decimalMark: ',' });
+    expect(preview.rows[0]?.errors.map((e) => e.code)).toContain('column-missing');
+    expect(preview.rows[0]?.errors[0]?.path).toBe('A2:E2');
+  });
+
+  it('refuses a field mapped to two columns at the header cell', () => {
+    const given = { columns: [{ header: 'OD', field: 'freeLength' as const }], units: 'metric' as const, decimalMark: ',' as const };
+    const preview = previewRequestSheet(sheet([HEADERS, GOOD]), { given });
+    expect(preview.mappingErrors).toEqual([expect.objectContaining({ code: 'field-mapped-twice', path: 'F1' })]);
+  });
+});
