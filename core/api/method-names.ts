@@ -14,6 +14,7 @@ export const apiMethodNames = [
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
   'designSprings', 'adoptDesign', 'jobRequirement',
+  'readRequestSheet', 'previewRequestSheet', 'importRequestSheet', 'listEnquiries', 'enquiryJobs',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];

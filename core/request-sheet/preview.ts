@@ -6,16 +6,23 @@ import type { FieldError } from '../result';
 import type { JobInput } from '../api/store-schemas';
 import type { UnitSystem } from '../units';
 import type { DecimalMark } from '../typed-number';
+import { typedText } from '../typed-number';
 import { cellRef, parseCellRef } from './cells';
 import { findHeaderRow } from './guess';
 import type { ColumnMap, RequestMapping } from './mapping';
 import { mapColumns, mappingErrors } from './mapping';
 import { readRequestRow } from './row';
 
-/** A sheet as read from its file: every cell as text, rows as they stand in the file. */
+/**
+ * A cell as read from its file: text, or a number where a spreadsheet stored one (its decimal mark is then
+ * no question; it is shown with the sheet's mark).
+ */
+export type SheetCell = string | number;
+
+/** A sheet as read from its file, rows as they stand in it (row 1 first). */
 export interface RequestSheet {
   name: string;
-  rows: string[][];
+  rows: SheetCell[][];
 }
 
 export interface PreviewOptions {
@@ -37,6 +44,7 @@ export interface PreviewRow {
   status: PreviewRowStatus;
   /** The cells' text, fixes applied. */
   cells: string[];
+  /** What does not read; a skipped row keeps its errors so the import can say what was left out. */
   errors: FieldError[];
   understood: { path: string; message: string }[];
   /** Cells whose text was replaced in the preview. */
@@ -82,10 +90,14 @@ function fixesByRow(fixes: Readonly<Record<string, string>>): Map<number, Record
 
 const blank = (cells: readonly string[]): boolean => cells.every((c) => c.trim() === '');
 
+/** A stored number as the estimator would type it with the sheet's mark, so it reads back exactly. */
+const cellText = (cell: SheetCell, decimalMark: DecimalMark): string =>
+  typeof cell === 'number' ? typedText(cell, { decimalMark, grouping: 'none' }) : cell;
+
 export function previewRequestSheet(sheet: RequestSheet, options: PreviewOptions = {}): RequestPreview {
-  const headerIndex = findHeaderRow(sheet.rows);
+  const headerIndex = findHeaderRow(sheet.rows.slice(0, 12).map((r) => r.map(String)));
   const headerRow = headerIndex + 1;
-  const headers = headerIndex < 0 ? [] : sheet.rows[headerIndex]!.map((h) => h.trim());
+  const headers = headerIndex < 0 ? [] : sheet.rows[headerIndex]!.map((h) => String(h).trim());
   const fallback = { units: options.units ?? 'metric', decimalMark: options.decimalMark ?? '.' } as const;
   const mapping = mapColumns(headers, headerRow, options.given, options.saved, fallback);
   if (options.units) mapping.units = options.units;
@@ -96,17 +108,13 @@ export function previewRequestSheet(sheet: RequestSheet, options: PreviewOptions
   const counts = { ready: 0, error: 0, skipped: 0, blank: 0 };
   for (let i = headerIndex + 1; i < sheet.rows.length && headerIndex >= 0; i++) {
     const row = i + 1;
-    const { cells, fixed } = fixedCells(sheet.rows[i]!, row, fixes.get(row) ?? {});
+    const texts = sheet.rows[i]!.map((c) => cellText(c, mapping.decimalMark));
+    const { cells, fixed } = fixedCells(texts, row, fixes.get(row) ?? {});
     if (blank(cells)) { counts.blank++; continue; }
-    if (skip.has(row)) {
-      counts.skipped++;
-      rows.push({ row, status: 'skipped', cells, errors: [], understood: [], fixed, job: null });
-      continue;
-    }
     const read = readRequestRow(cells, { row, columns: mapping.columns, units: mapping.units, decimalMark: mapping.decimalMark });
-    const status: PreviewRowStatus = read.job ? 'ready' : 'error';
+    const status: PreviewRowStatus = skip.has(row) ? 'skipped' : read.job ? 'ready' : 'error';
     counts[status]++;
-    rows.push({ row, status, cells, errors: read.errors, understood: read.understood, fixed, job: read.job });
+    rows.push({ row, status, cells, errors: read.errors, understood: read.understood, fixed, job: status === 'ready' ? read.job : null });
   }
   return { sheet: sheet.name, headerRow: Math.max(headerRow, 0), mapping, mappingErrors: mappingErrors(mapping, headerRow), rows, counts };
 }
