@@ -34,6 +34,8 @@ export const previewRequestSheetSchema = z.object({
   /** The customer whose saved mapping applies (none yet: the headers are guessed). */
   customer: z.string().trim().max(120).optional(),
   mapping: requestMappingSchema.optional(),
+  /** Apply the customer's saved mapping under the one given; false guesses every column left from the headers. */
+  useSavedMapping: z.boolean().default(true),
   units: unitSystemSchema.optional(),
   decimalMark: z.enum(['.', ',']).optional(),
   fixes: z.record(cellRefKey, z.string().max(4000)).optional(),

@@ -127,6 +127,12 @@ const MISSING_WORDS: Record<string, string> = {
   bodyCoils: 'the coils', kind: 'the kind',
 };
 
+/** Spec rules whose words name spec fields, said in the sheet's terms. */
+const SHEET_WORDS: Record<string, string> = {
+  'diameter-count': 'give one coil diameter per row: the OD, the ID or the mean diameter',
+  'coil-count': 'give the total coils or the active coils, not both and not neither',
+};
+
 /** Schema errors rewritten for a sheet: the cell, and "no value" said as the customer's sheet would need it. */
 function sheetError(e: FieldError, options: RowOptions): FieldError {
   const head = e.path.replace(/^spec\./, '');
@@ -137,7 +143,7 @@ function sheetError(e: FieldError, options: RowOptions): FieldError {
   if (missing && !mapped) return { code: 'column-missing', path: ref, message: `no column holds ${missing}: map one, or enter it in the job after the import` };
   if (missing) return { code: 'value-missing', path: ref, message: `${missing} is empty` };
   const label = fields[0] ? `${requestFieldTable[fields[0]].label}: ` : '';
-  return { ...e, path: ref, message: `${label}${e.message}` };
+  return { ...e, path: ref, message: `${label}${SHEET_WORDS[e.code] ?? e.message}` };
 }
 
 function notesOf(draft: RowDraft, units: UnitSystem, decimalMark: DecimalMark): string {

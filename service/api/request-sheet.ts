@@ -11,7 +11,7 @@ type PreviewInput = z.output<typeof previewRequestSheetSchema>;
 
 /** The preview with the customer's saved mapping (if any) under the one given. */
 export function previewFor(store: Store, input: PreviewInput): RequestPreviewResult {
-  const saved = input.customer ? savedRequestMapping(store, input.customer) : undefined;
+  const saved = input.customer && input.useSavedMapping ? savedRequestMapping(store, input.customer) : undefined;
   const preview = previewRequestSheet(input.sheet, {
     given: input.mapping, saved, units: input.units, decimalMark: input.decimalMark, fixes: input.fixes, skip: input.skip,
   });
