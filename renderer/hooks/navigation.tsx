@@ -6,7 +6,8 @@ export type Route =
   | { screen: 'job'; id: number | null; key: string }
   | { screen: 'settings' }
   | { screen: 'data' }
-  | { screen: 'design' };
+  | { screen: 'design' }
+  | { screen: 'requests' };
 
 /** Decides whether the screen may be left now; false keeps the estimator where they are. */
 export type LeaveGuard = () => Promise<boolean>;

@@ -11,6 +11,7 @@ import { Workspace } from './workspace/Workspace';
 import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
 import { DesignScreen } from './design/DesignScreen';
+import { RequestSheetScreen } from './requests/RequestSheetScreen';
 
 export function App() {
   return (
@@ -92,6 +93,7 @@ function Shell() {
           {route.screen === 'settings' ? <SettingsScreen /> : null}
           {route.screen === 'data' ? <DataScreen /> : null}
           {route.screen === 'design' ? <DesignScreen /> : null}
+          {route.screen === 'requests' ? <RequestSheetScreen /> : null}
         </main>
       </div>
       <ShortcutsDialog open={help} onClose={() => setHelp(false)} />
