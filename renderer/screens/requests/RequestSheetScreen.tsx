@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import type { RequestImportResult, RequestMapping, RequestPreviewResult, RequestSheet } from '../../../core/api';
+import type { ApiResult, RequestImportResult, RequestMapping, RequestPreviewResult, RequestSheet } from '../../../core/api';
 import type { ColumnField } from '../../../core/request-sheet';
 import { useApi, usePlatform } from '../../api';
 import { PlainInput, PlainSelect } from '../../components/Plain';
@@ -28,19 +28,33 @@ function SheetPicker({ onRead }: { onRead(sheet: RequestSheet): void }) {
   const api = useApi();
   const platform = usePlatform();
   const fileId = useId();
-  const { call, run } = useLongCall<RequestSheet>();
+  const { call, run } = useLongCall<RequestSheet | null>();
   const pick = async (file: File | undefined) => {
     if (!file) return;
     const dataBase64 = base64OfDataUrl(await platform.readDataUrl(file));
     const sheet = await run(`Reading ${file.name}…`, () => api.readRequestSheet({ fileName: file.name, dataBase64 }));
     if (sheet) onRead(sheet);
   };
+  const choose = async (open: () => Promise<ApiResult<RequestSheet | null>>) => {
+    const sheet = await run('Reading the request sheet…', open);
+    if (sheet) onRead(sheet);
+  };
+  const outcome = <CallOutcome call={call} done={(s) => (s ? `${s.name}: ${s.rows.length} rows read.` : 'No file chosen.')} />;
+  const { openRequestSheet } = platform;
+  if (openRequestSheet) {
+    return (
+      <div className="field">
+        <button type="button" className="button" onClick={() => void choose(openRequestSheet)}>Choose a request sheet (CSV or XLSX)…</button>
+        {outcome}
+      </div>
+    );
+  }
   return (
     <div className="field">
       <label htmlFor={fileId} className="field__label">Request sheet (CSV or XLSX, one spring per row)</label>
       <input id={fileId} type="file" accept=".csv,.xlsx,.txt,text/csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
         onChange={(e) => void pick(e.target.files?.[0])} />
-      <CallOutcome call={call} done={(s) => `${s.name}: ${s.rows.length} rows read.`} />
+      {outcome}
     </div>
   );
 }
