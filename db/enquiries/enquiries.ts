@@ -67,11 +67,17 @@ export function createEnquiry(store: Store, input: NewEnquiry): StoreResult<{ en
   });
 }
 
+/** A customer's enquiries newest first, through enquiries_by_customer. */
+export const CUSTOMER_ENQUIRIES_SQL = `${ENQUIRY_SQL} WHERE e.customer_id = ? ORDER BY e.received_at DESC, e.id DESC LIMIT ?`;
+/** An enquiry's jobs in sheet order, through enquiry_jobs' key. */
+export const ENQUIRY_JOBS_SQL = `SELECT ${SUMMARY_COLUMNS}, x.sheet_row FROM ${JOB_FROM} JOIN enquiry_jobs x ON x.job_id = j.id
+  WHERE x.enquiry_id = ? ORDER BY x.sheet_row`;
+
 /** Enquiries newest first, of one customer or of all. */
 export function listEnquiries(store: Store, input: { customerId?: number | undefined; limit: number }): StoreResult<Enquiry[]> {
   const rows = input.customerId === undefined
     ? store.sql(`${ENQUIRY_SQL} ORDER BY e.received_at DESC, e.id DESC LIMIT ?`).all(input.limit)
-    : store.sql(`${ENQUIRY_SQL} WHERE e.customer_id = ? ORDER BY e.received_at DESC, e.id DESC LIMIT ?`).all(input.customerId, input.limit);
+    : store.sql(CUSTOMER_ENQUIRIES_SQL).all(input.customerId, input.limit);
   return success((rows as EnquiryRow[]).map(toEnquiry));
 }
 
@@ -79,7 +85,6 @@ export function listEnquiries(store: Store, input: { customerId?: number | undef
 export function enquiryJobs(store: Store, id: number): StoreResult<EnquiryJobs> {
   const row = enquiryRow(store, id);
   if (!row) return failure('not-found', `no enquiry with id ${id}`, 'id');
-  const jobs = store.sql(`SELECT ${SUMMARY_COLUMNS}, x.sheet_row FROM ${JOB_FROM} JOIN enquiry_jobs x ON x.job_id = j.id
-                          WHERE x.enquiry_id = ? ORDER BY x.sheet_row`).all(id) as (JobRow & { sheet_row: number })[];
+  const jobs = store.sql(ENQUIRY_JOBS_SQL).all(id) as (JobRow & { sheet_row: number })[];
   return success({ enquiry: toEnquiry(row), jobs: jobs.map((j) => ({ ...toSummary(j), sheetRow: j.sheet_row })) });
 }

@@ -102,3 +102,43 @@ describe('previewing a request sheet', () => {
     expect(preview.mappingErrors).toEqual([expect.objectContaining({ code: 'field-mapped-twice', path: 'F1' })]);
   });
 });
+
+describe('reading the words of a request sheet', () => {
+  // Grade designations as the standards print them (EN 10270-1:2011 Table 1 grades SL…DH; ASTM A228, A313);
+  // the trade names "music wire" and "chrome silicon" are common trade practice for A228 and A401.
+  it.each([
+    ['EN 10270-1 SH', 'en10270-1-sh'], ['SH', 'en10270-1-sh'], ['dh en 10270-1', 'en10270-1-dh'], ['ASTM A228', 'astm-a228'],
+    ['Music Wire', 'astm-a228'], ['A313 302', 'astm-a313-302'], ['1.4310', 'en10270-3-1.4310'], ['Chrome silicon', 'astm-a401'],
+  ])('reads the grade "%s" as %s', (text, id) => {
+    const row = [...GOOD];
+    row[2] = text;
+    expect(previewRequestSheet(sheet([HEADERS, row]), { decimalMark: ',' }).rows[0]?.job?.spec).toMatchObject({ material: id });
+  });
+
+  it('names the cell of a grade it does not know and of an A313 without its type (two grades share the standard)', () => {
+    const rows = [[...GOOD], [...GOOD]];
+    rows[0]![2] = 'unobtainium';
+    rows[1]![2] = 'ASTM A313';
+    const preview = previewRequestSheet(sheet([HEADERS, ...rows]), { decimalMark: ',' });
+    expect(preview.rows.map((r) => r.errors[0]?.path)).toEqual(['C2', 'C3']);
+    expect(preview.rows[0]?.errors[0]?.code).toBe('unknown-material');
+  });
+
+  it('reads an extension spring with its loops, and refuses a torsion spring row with the reason', () => {
+    const ext = [...GOOD];
+    ext[1] = 'tension';
+    ext[7] = 'machine loops';
+    ext[8] = '20 N @ 50 mm';
+    const tor = [...GOOD];
+    tor[1] = 'torsion';
+    const preview = previewRequestSheet(sheet([HEADERS, ext, tor]), { decimalMark: ',' });
+    expect(preview.rows[0]?.job?.spec).toMatchObject({ kind: 'extension', ends: ['machine-loop', 'machine-loop'], bodyCoils: 8.5 });
+    expect(preview.rows[1]?.errors[0]).toMatchObject({ code: 'kind-not-in-sheets', path: 'B3' });
+  });
+
+  it('reads inch fractions in an inch sheet (3/8 in = 0.375 in, exact arithmetic)', () => {
+    const inch = ['IN-1', 'compression', 'A228', '0.045', '3/8', '1-1/4', '10', 'closed and ground', '', '500', ''];
+    const spec = previewRequestSheet(sheet([HEADERS, inch]), { units: 'inch' }).rows[0]?.job?.spec;
+    expect(spec).toMatchObject({ units: 'inch', outerDiameter: 0.375, freeLength: 1.25, wireDiameter: 0.045 });
+  });
+});

@@ -5,7 +5,8 @@ import { openStore } from '../../../db';
 import { createService, dispatch } from '../../../service/api';
 import type { Service } from '../../../service/api';
 import { DEMO_CUSTOMER, requestCsv, requestRows, requestXlsx } from '../../support/request-sheets';
-import { tempDir } from './helpers';
+import { CUSTOMER_ENQUIRIES_SQL, ENQUIRY_JOBS_SQL } from '../../../db/enquiries/enquiries';
+import { tempDir, tempStore } from './helpers';
 
 const call = async <T>(service: Service, method: string, input: unknown): Promise<ApiResult<T>> =>
   (await dispatch(service.handlers, method, input)) as ApiResult<T>;
@@ -74,5 +75,16 @@ describe('request sheets through the service', () => {
     const broken = await call(service, 'readRequestSheet', { fileName: 'x.xlsx', dataBase64: Buffer.from('PK not a zip').toString('base64') });
     expect(broken).toMatchObject({ ok: false, error: { code: 'xlsx-unreadable' } });
     service.close();
+  });
+});
+
+describe('enquiry queries', () => {
+  it('find a customer\'s enquiries and an enquiry\'s jobs through their indexes, not a scan', () => {
+    const store = tempStore();
+    const plan = (sql: string, params: unknown[]) =>
+      (store.db.prepare(`EXPLAIN QUERY PLAN ${sql}`).all(...params) as { detail: string }[]).map((r) => r.detail).join('\n');
+    expect(plan(CUSTOMER_ENQUIRIES_SQL, [1, 50])).toMatch(/SEARCH e USING INDEX enquiries_by_customer \(customer_id=\?\)/);
+    expect(plan(ENQUIRY_JOBS_SQL, [1])).toMatch(/SEARCH x USING PRIMARY KEY \(enquiry_id=\?\)/);
+    expect(plan(ENQUIRY_JOBS_SQL, [1])).not.toMatch(/SCAN j\b/);
   });
 });
