@@ -20,12 +20,18 @@ const labelled = (ctx: CellContext, message: string): string => `${requestFieldT
 export const cellError = (ctx: CellContext, code: string, message: string): { ok: false; error: FieldError } =>
   ({ ok: false, error: { code, path: ctx.ref, message: labelled(ctx, message) } });
 
+/** What typed-number says it understood, unless it only repeats the text ("read "20 N" as 20 N"). */
+function news(understood: string | null): string | null {
+  const m = understood === null ? null : /^read "(.*)" as (.*)$/.exec(understood);
+  return m && m[1] === m[2] ? null : understood;
+}
+
 /** A number in the field's measure, in the sheet's unit system; a blank cell is `undefined`. */
 export function readNumberCell(text: string, ctx: CellContext, measure?: FieldMeasure): CellReading<number | undefined> {
   const read = readTypedNumber(text, { decimalMark: ctx.decimalMark, units: ctx.units, ...(measure ? { measure } : {}) });
   if (!read.ok) return cellError(ctx, read.code, read.message);
   if (read.value !== undefined && !(read.value > 0)) return cellError(ctx, 'not-positive', `"${text.trim()}" must be above zero`);
-  return { ok: true, value: read.value, understood: read.understood };
+  return { ok: true, value: read.value, understood: news(read.understood) };
 }
 
 /** Order quantities: one or several breaks ("500", "100 / 500 / 1 000"), whole pieces. */
@@ -34,7 +40,8 @@ export function readQuantityCell(text: string, ctx: CellContext): CellReading<nu
   if (!read.ok) return cellError(ctx, read.code, read.message);
   const bad = read.value.find((q) => !Number.isInteger(q) || q <= 0);
   if (bad !== undefined) return cellError(ctx, 'not-whole-pieces', `${bad} is not a whole number of pieces`);
-  return { ok: true, value: read.value, understood: read.understood.length > 0 ? read.understood.join('; ') : null };
+  const told = read.understood.map(news).filter((u) => u !== null);
+  return { ok: true, value: read.value, understood: told.length > 0 ? told.join('; ') : null };
 }
 
 /** "50 N @ 30 mm", "50 @ 30" or "50 at 30": the force first, then the length it is asked at. */

@@ -60,7 +60,14 @@ describe('importing a customer\'s request sheet', { timeout: UI_TEST_TIMEOUT * 2
       'RFQ-119', 'request-sheet-xlsx', false);
     // The columns came from the mapping kept with the first sheet.
     await expect(page.locator('.request-origin--saved').count()).resolves.toBe(12);
-    await page.getByRole('button', { name: /^Open job / }).first().click();
+    // Both enquiries are listed; the first one's jobs open from the list, as a quotation of them would pick them.
+    await page.getByRole('button', { name: 'Jobs of RFQ-118' }).click();
+    const earlier = page.getByRole('table', { name: 'Jobs of enquiry RFQ-118' });
+    await earlier.waitFor();
+    await expect(earlier.locator('tbody tr').count()).resolves.toBe(10);
+    await earlier.scrollIntoViewIfNeeded();
+    await screenshot(page, 'request-sheet-enquiries');
+    await page.getByRole('table', { name: 'Jobs of enquiry RFQ-119' }).getByRole('button', { name: /^Open job / }).first().click();
     await page.getByRole('textbox', { name: /Wire diameter d \(mm\)/ }).waitFor();
     await expect(page.getByRole('textbox', { name: /Wire diameter d \(mm\)/ }).inputValue()).resolves.toBe('1');
     expect(errors).toEqual([]);

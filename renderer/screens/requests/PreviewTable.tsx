@@ -7,9 +7,9 @@ import { errorsByCell, refOf } from '../../model/request-sheet';
 
 const statusWords = { ready: 'ready', error: 'to fix', skipped: 'skipped' } as const;
 
-function PreviewCell({ row, column, text, marked }: { row: number; column: number; text: string; marked: string[] | undefined }) {
+function PreviewCell({ row, column, text, marked, understood }: { row: number; column: number; text: string; marked: string[] | undefined; understood: string | undefined }) {
   const ref = refOf(column, row);
-  if (!marked) return <td>{text}</td>;
+  if (!marked) return understood ? <td className="request-cell--read" title={understood}>{text}</td> : <td>{text}</td>;
   return (
     <td className="request-cell--error" title={marked.join('\n')} data-ref={ref}>
       {text === '' ? <span className="muted">(empty)</span> : text} <span className="request-cell__ref">{ref}</span>
@@ -38,7 +38,8 @@ export function PreviewTable({ preview, onMap }: { preview: RequestPreview; onMa
               <td><span className={`status request-status--${r.status}`}>{statusWords[r.status]}</span></td>
               {Array.from({ length: width }, (_, i) => (
                 <PreviewCell key={i} row={r.row} column={i} text={r.cells[i] ?? ''}
-                  marked={r.status === 'error' ? marked.get(refOf(i, r.row))?.map((e) => e.message) : undefined} />
+                  marked={r.status === 'error' ? marked.get(refOf(i, r.row))?.map((e) => e.message) : undefined}
+                  understood={r.understood.find((u) => u.path === refOf(i, r.row))?.message} />
               ))}
             </tr>
           ))}

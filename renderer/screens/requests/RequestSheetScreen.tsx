@@ -10,7 +10,7 @@ import { useQuery } from '../../hooks/useQuery';
 import { base64OfDataUrl, mappingWith, referenceOfFile } from '../../model/request-sheet';
 import { CallOutcome } from '../data/BackupPanels';
 import { useLongCall } from '../data/useLongCall';
-import { EnquiryOutcome } from './EnquiryOutcome';
+import { EnquiryOutcome, RecentEnquiries } from './EnquiryOutcome';
 import { PreviewTable, ProblemList } from './PreviewTable';
 
 /** The estimator's corrections on top of the sheet: they go with every preview and with the import. */
@@ -145,6 +145,7 @@ export function RequestSheetScreen() {
         </>
       ) : null}
       {imported ? <EnquiryOutcome result={imported} /> : null}
+      <RecentEnquiries refreshKey={imported?.enquiry.id ?? 0} />
       <p className="muted">Imported springs are drafts: the results support, and do not replace, review by a qualified engineer, the customer's approval and local codes.</p>
     </section>
   );
