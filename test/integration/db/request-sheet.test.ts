@@ -88,3 +88,21 @@ describe('enquiry queries', () => {
     expect(plan(ENQUIRY_JOBS_SQL, [1])).not.toMatch(/SCAN j\b/);
   });
 });
+
+describe('writing an enquiry', () => {
+  it('writes all the accepted rows or none: a row the store refuses leaves no enquiry, job, customer or mapping', async () => {
+    const { createEnquiry, listJobs, listCustomers } = await import('../../../db');
+    const store = tempStore();
+    const good = { spec: { kind: 'compression', units: 'metric', material: 'en10270-1-sh', wireDiameter: 1.6, outerDiameter: 12, totalCoils: 8, ends: 'closed-ground', freeLength: 40 } };
+    const bad = { spec: { ...good.spec, freeLength: -1 } };
+    const r = createEnquiry(store, {
+      customer: DEMO_CUSTOMER, reference: 'RFQ-1', source: 'x.csv', mapping: { columns: [], units: 'metric', decimalMark: '.' },
+      rows: [{ row: 2, ref: 'A2', job: good }, { row: 3, ref: 'A3', job: bad }],
+    });
+    expect(r).toMatchObject({ ok: false, error: { path: 'A3', message: expect.stringMatching(/^row 3: /) } });
+    expect((listJobs(store, {}) as { ok: true; value: { total: number } }).value.total).toBe(0);
+    expect(listCustomers(store)).toEqual([]);
+    expect(store.db.prepare('SELECT count(*) AS n FROM enquiries').get()).toEqual({ n: 0 });
+    expect(store.db.prepare('SELECT count(*) AS n FROM request_mappings').get()).toEqual({ n: 0 });
+  });
+});
