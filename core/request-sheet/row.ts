@@ -49,7 +49,7 @@ function readCell(draft: RowDraft, text: string, ctx: CellContext): RowReading['
     return null;
   }
   if (field === 'kind') {
-    if (text.trim() === '') return null;
+    if (text.trim() === '') return { understood: 'blank: read as a compression spring' };
     const kind = readKind(text);
     if (kind === null) return cellError(ctx, 'unknown-kind', `"${text.trim()}" is not a spring kind; write compression, extension or torsion`).error;
     draft.kind = kind;
@@ -164,6 +164,15 @@ function endsError(draft: RowDraft, options: RowOptions): FieldError | null {
   return cellError(ctx, 'unknown-ends', `"${text}" is not an end form of a ${draft.kind ?? 'compression'} spring; write ${words}`).error;
 }
 
+/** A load given with no length to ask it at would be lost: it is an error on the load's cell. */
+function loadWithoutLength(draft: RowDraft, options: RowOptions): FieldError | null {
+  if (draft.numbers.load === undefined || draft.numbers.loadLength !== undefined) return null;
+  const column = options.columns.find((c) => c.field === 'load')!;
+  const lengthColumn = options.columns.find((c) => c.field === 'loadLength');
+  return { code: 'load-without-length', path: cellRef(column.index, options.row),
+    message: `Load: a load needs the length it is asked at; ${lengthColumn ? `fill ${cellRef(lengthColumn.index, options.row)}` : 'map the column that holds it (Length at load)'}` };
+}
+
 /** Reads a row; `cells` are its texts with any fixes already applied. */
 export function readRequestRow(cells: readonly string[], options: RowOptions): RowReading {
   const draft: RowDraft = { text: {}, numbers: {} };
@@ -179,6 +188,8 @@ export function readRequestRow(cells: readonly string[], options: RowOptions): R
   }
   const endsProblem = endsError(draft, options);
   if (endsProblem) errors.push(endsProblem);
+  const loadProblem = loadWithoutLength(draft, options);
+  if (loadProblem) errors.push(loadProblem);
   if (errors.length > 0) return { job: null, errors, understood };
   if (draft.kind === 'torsion') {
     const column = options.columns.find((c) => c.field === 'kind');

@@ -142,3 +142,13 @@ describe('reading the words of a request sheet', () => {
     expect(spec).toMatchObject({ units: 'inch', outerDiameter: 0.375, freeLength: 1.25, wireDiameter: 0.045 });
   });
 });
+
+describe('loads on separate columns', () => {
+  const headers = ['Part', 'Grade', 'd', 'OD', 'Free length', 'Coils', 'Ends', 'Load (N)', 'L1 (mm)'];
+  it('pairs the load with its length, and refuses a load with no length rather than drop it', () => {
+    const rows = [['P-1', 'SH', '1.6', '12', '40', '8', 'closed', '20', '30'], ['P-2', 'SH', '1.6', '12', '40', '8', 'closed', '20', '']];
+    const preview = previewRequestSheet(sheet([headers, ...rows]));
+    expect(preview.rows[0]?.job?.spec).toMatchObject({ loads: [{ force: 20, length: 30 }] });
+    expect(preview.rows[1]?.errors).toEqual([expect.objectContaining({ code: 'load-without-length', path: 'H3', message: expect.stringMatching(/fill I3/) })]);
+  });
+});
