@@ -152,3 +152,12 @@ describe('loads on separate columns', () => {
     expect(preview.rows[1]?.errors).toEqual([expect.objectContaining({ code: 'load-without-length', path: 'H3', message: expect.stringMatching(/fill I3/) })]);
   });
 });
+
+describe('numbers a spreadsheet stored as numbers', () => {
+  it('read back exactly whatever decimal mark the sheet\'s text uses, and show with that mark', () => {
+    const row: (string | number)[] = ['FP-1', 'compression', 'SH', 1.6, 12.25, 40, 8.5, 'closed', '', 1000, ''];
+    const preview = previewRequestSheet({ name: 'x.xlsx', rows: [HEADERS, row] }, { decimalMark: ',' });
+    expect(preview.rows[0]?.job?.spec).toMatchObject({ wireDiameter: 1.6, outerDiameter: 12.25, totalCoils: 8.5, quantities: [1000] });
+    expect(preview.rows[0]?.cells.slice(3, 5)).toEqual(['1,6', '12,25']);
+  });
+});
