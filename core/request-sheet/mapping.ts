@@ -8,6 +8,7 @@ import type { RequestField } from './fields';
 import { normaliseHeader, requestFieldTable, requestFields } from './fields';
 import type { ColumnField } from './guess';
 import { guessColumns } from './guess';
+import { headerUnit, unitsOfHeaders } from './header-units';
 
 export const columnFieldSchema = z.enum([...requestFields, 'ignore']);
 
@@ -27,6 +28,8 @@ export interface MappedColumn {
   header: string;
   field: ColumnField;
   origin: ColumnOrigin;
+  /** The unit the header names for its numbers ("OD (in)" → "in"); null when it names none the field takes. */
+  unit: string | null;
 }
 
 export interface ColumnMap {
@@ -57,10 +60,11 @@ export function mapColumns(
     const fromSaved = fromGiven === undefined ? fieldOfHeader(saved, header) : undefined;
     const field = fromGiven ?? fromSaved ?? guessed[index] ?? 'ignore';
     const origin: ColumnOrigin = fromGiven !== undefined ? 'given' : fromSaved !== undefined ? 'saved' : 'guessed';
-    return { index, letter: cellRef(index, headerRow).replace(/\d+$/, ''), header, field, origin };
+    return { index, letter: cellRef(index, headerRow).replace(/\d+$/, ''), header, field, origin, unit: headerUnit(header, field) };
   });
   const source = given ?? saved;
-  return { columns, units: source?.units ?? fallback.units, decimalMark: source?.decimalMark ?? fallback.decimalMark };
+  const units = source?.units ?? unitsOfHeaders(headers) ?? fallback.units;
+  return { columns, units, decimalMark: source?.decimalMark ?? fallback.decimalMark };
 }
 
 /** Mapping problems: a field held by two columns. Paths are the header cells. */

@@ -98,7 +98,7 @@ export function previewRequestSheet(sheet: RequestSheet, options: PreviewOptions
   const headerIndex = findHeaderRow(sheet.rows.slice(0, 12).map((r) => r.map(String)));
   const headerRow = headerIndex + 1;
   const headers = headerIndex < 0 ? [] : sheet.rows[headerIndex]!.map((h) => String(h).trim());
-  const fallback = { units: options.units ?? 'metric', decimalMark: options.decimalMark ?? '.' } as const;
+  const fallback = { units: 'metric', decimalMark: options.decimalMark ?? '.' } as const;
   const mapping = mapColumns(headers, headerRow, options.given, options.saved, fallback);
   if (options.units) mapping.units = options.units;
   if (options.decimalMark) mapping.decimalMark = options.decimalMark;

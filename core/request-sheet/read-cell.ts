@@ -4,6 +4,7 @@ import type { DecimalMark, FieldMeasure } from '../typed-number';
 import { readTypedList, readTypedNumber } from '../typed-number';
 import type { UnitSystem } from '../units';
 import type { RequestField } from './fields';
+import { withHeaderUnit } from './header-units';
 import { requestFieldTable } from './fields';
 
 export interface CellContext {
@@ -11,6 +12,8 @@ export interface CellContext {
   field: RequestField;
   units: UnitSystem;
   decimalMark: DecimalMark;
+  /** The unit the column's header names, for numbers written bare. */
+  unit?: string | null;
 }
 
 export type CellReading<T> = { ok: true; value: T; understood: string | null } | { ok: false; error: FieldError };
@@ -28,7 +31,7 @@ function news(understood: string | null): string | null {
 
 /** A number in the field's measure, in the sheet's unit system; a blank cell is `undefined`. */
 export function readNumberCell(text: string, ctx: CellContext, measure?: FieldMeasure): CellReading<number | undefined> {
-  const read = readTypedNumber(text, { decimalMark: ctx.decimalMark, units: ctx.units, ...(measure ? { measure } : {}) });
+  const read = readTypedNumber(measure ? withHeaderUnit(text, ctx.unit) : text, { decimalMark: ctx.decimalMark, units: ctx.units, ...(measure ? { measure } : {}) });
   if (!read.ok) return cellError(ctx, read.code, read.message);
   if (read.value !== undefined && !(read.value > 0)) return cellError(ctx, 'not-positive', `"${text.trim()}" must be above zero`);
   return { ok: true, value: read.value, understood: news(read.understood) };

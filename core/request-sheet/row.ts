@@ -180,7 +180,7 @@ export function readRequestRow(cells: readonly string[], options: RowOptions): R
   const understood: RowReading['understood'] = [];
   for (const column of options.columns) {
     if (column.field === 'ignore') continue;
-    const ctx: CellContext = { ref: cellRef(column.index, options.row), field: column.field, units: options.units, decimalMark: options.decimalMark };
+    const ctx: CellContext = { ref: cellRef(column.index, options.row), field: column.field, units: options.units, decimalMark: options.decimalMark, unit: column.unit };
     const out = readCell(draft, cells[column.index] ?? '', ctx);
     if (out === null) continue;
     if ('understood' in out) understood.push({ path: ctx.ref, message: out.understood });

@@ -6,6 +6,8 @@ const sheet = (rows: string[][]): RequestSheet => ({ name: 'demo.csv', rows });
 
 // Demo data: an invented customer's request sheet (Fernbrook Pumps is not a real company).
 const HEADERS = ['Part No', 'Kind', 'Material', 'Wire dia (mm)', 'OD', 'L0', 'Total coils', 'Ends', 'Load @ length', 'Qty', 'Rate'];
+/** The same headers without units, for sheets whose numbers are in the job's own units. */
+const BARE = HEADERS.map((h) => h.replace(' (mm)', ''));
 const GOOD = ['FP-100', 'compression', 'EN 10270-1 SH', '1,6', '12', '40', '8,5', 'closed & ground', '20 N @ 30 mm', '2 000', '2,5'];
 
 describe('request-sheet cell references', () => {
@@ -47,7 +49,7 @@ describe('previewing a request sheet', () => {
   });
 
   it('converts a value written in the other unit system into the job\'s (1 in = 25.4 mm exactly, NIST SP 811 B.8)', () => {
-    const inch = previewRequestSheet(sheet([HEADERS, [...GOOD.slice(0, 4), '12.7 mm', ...GOOD.slice(5)].map((c) => c.replace('1,6', '0.063').replace('8,5', '8.5').replace('2,5', '14'))]),
+    const inch = previewRequestSheet(sheet([BARE, [...GOOD.slice(0, 4), '12.7 mm', ...GOOD.slice(5)].map((c) => c.replace('1,6', '0.063').replace('8,5', '8.5').replace('2,5', '14'))]),
       { units: 'inch', decimalMark: '.' });
     const spec = inch.rows[0]?.job?.spec as { outerDiameter: number; wireDiameter: number } | undefined;
     expect(spec?.outerDiameter).toBeCloseTo(0.5, 12);
@@ -138,7 +140,7 @@ describe('reading the words of a request sheet', () => {
 
   it('reads inch fractions in an inch sheet (3/8 in = 0.375 in, exact arithmetic)', () => {
     const inch = ['IN-1', 'compression', 'A228', '0.045', '3/8', '1-1/4', '10', 'closed and ground', '', '500', ''];
-    const spec = previewRequestSheet(sheet([HEADERS, inch]), { units: 'inch' }).rows[0]?.job?.spec;
+    const spec = previewRequestSheet(sheet([BARE, inch]), { units: 'inch' }).rows[0]?.job?.spec;
     expect(spec).toMatchObject({ units: 'inch', outerDiameter: 0.375, freeLength: 1.25, wireDiameter: 0.045 });
   });
 });
@@ -159,5 +161,19 @@ describe('numbers a spreadsheet stored as numbers', () => {
     const preview = previewRequestSheet({ name: 'x.xlsx', rows: [HEADERS, row] }, { decimalMark: ',' });
     expect(preview.rows[0]?.job?.spec).toMatchObject({ wireDiameter: 1.6, outerDiameter: 12.25, totalCoils: 8.5, quantities: [1000] });
     expect(preview.rows[0]?.cells.slice(3, 5)).toEqual(['1,6', '12,25']);
+  });
+});
+
+describe('units named in the headers', () => {
+  it('reads bare numbers in the header\'s unit and proposes the system most headers use (1 in = 25.4 mm exactly, NIST SP 811 B.8, from memory)', () => {
+    const headers = ['Part', 'Grade', 'Wire (in)', 'OD (in)', 'Free length (mm)', 'Total coils', 'Ends'];
+    const preview = previewRequestSheet(sheet([headers, ['P-1', 'A228', '0.05', '0.5', '25.4', '8', 'closed']]));
+    expect(preview.mapping.units).toBe('inch');
+    expect(preview.mapping.columns.map((c) => c.unit)).toEqual([null, null, 'in', 'in', 'mm', null, null]);
+    const spec = preview.rows[0]?.job?.spec as { wireDiameter: number; outerDiameter: number; freeLength: number };
+    expect(spec.wireDiameter).toBe(0.05);
+    expect(spec.freeLength).toBeCloseTo(1, 12);
+    const metric = previewRequestSheet(sheet([headers, ['P-1', 'A228', '0.05', '0.5', '25.4', '8', 'closed']]), { units: 'metric' });
+    expect((metric.rows[0]?.job?.spec as { outerDiameter: number }).outerDiameter).toBeCloseTo(12.7, 12);
   });
 });

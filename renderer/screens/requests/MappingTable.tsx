@@ -19,7 +19,7 @@ export function ColumnChoice({ column, onMap }: { column: MappedColumn; onMap(in
         onChange={(e) => onMap(column.index, e.target.value as ColumnField)}>
         {choices.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
       </select>
-      <span className={`request-origin request-origin--${column.origin}`}>{originWords[column.origin]}</span>
+      <span className={`request-origin request-origin--${column.origin}`}>{originWords[column.origin]}{column.unit ? `; bare numbers in ${column.unit}` : ''}</span>
     </div>
   );
 }
