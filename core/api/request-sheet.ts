@@ -40,6 +40,8 @@ export const previewRequestSheetSchema = z.object({
   decimalMark: z.enum(['.', ',']).optional(),
   fixes: z.record(cellRefKey, z.string().max(4000)).optional(),
   skip: z.array(z.number().int().min(1)).max(20_000).optional(),
+  /** Each ready row's draft job (its spec) in the answer; left out by default, as a screen needs only the cells. */
+  includeJobs: z.boolean().default(false),
 }).strict();
 export type PreviewRequestSheetInput = z.input<typeof previewRequestSheetSchema>;
 

@@ -49,6 +49,7 @@ export interface PreviewRow {
   understood: { path: string; message: string }[];
   /** Cells whose text was replaced in the preview. */
   fixed: string[];
+  /** The draft job a ready row becomes (null otherwise, and in an answer that did not ask for jobs). */
   job: JobInput | null;
 }
 

@@ -55,7 +55,10 @@ export function requestSheetHandlers(ctx: StoreContext): TypedHandlers<keyof typ
       const { readRequestFile } = await import('../request-sheet/read');
       return readRequestFile(input.fileName, Buffer.from(input.dataBase64, 'base64'));
     },
-    previewRequestSheet: (input) => ({ ok: true, value: previewFor(ctx.store, input) }),
+    previewRequestSheet: (input) => {
+      const preview = previewFor(ctx.store, input);
+      return { ok: true, value: input.includeJobs ? preview : { ...preview, rows: preview.rows.map((r) => ({ ...r, job: null })) } };
+    },
     importRequestSheet: (input) => importRequest(ctx.store, input),
     listEnquiries: (input) => listEnquiries(ctx.store, input),
     enquiryJobs: (input) => enquiryJobs(ctx.store, input.id),

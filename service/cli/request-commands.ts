@@ -93,7 +93,7 @@ export const importRequestCommand: Command = {
       return;
     }
     await withStore(args, async (call) => {
-      const preview = await call('previewRequestSheet', { sheet, ...options });
+      const preview = await call('previewRequestSheet', { sheet, ...options, includeJobs: args.options.has('jobs') });
       if (!options.mapping && options.useSavedMapping && !preview.savedMapping) {
         throw bad('--mapping', `no mapping is kept for ${options.customer} yet: give --mapping FILE or --guess`, 'no-saved-mapping');
       }
