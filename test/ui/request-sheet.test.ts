@@ -1,14 +1,14 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { DEMO_CUSTOMER, requestCsv, requestRows, requestXlsx } from '../support/request-sheets';
-import { UI_TEST_TIMEOUT, screenshot, shopSession, unnamedControls } from './support';
+import { UI_TEST_TIMEOUT, field, screenshot, shopSession, unnamedControls } from './support';
 
 /** Uploads a sheet, names the customer, fixes the one marked cell, imports, and checks the enquiry's jobs. */
 async function importSheet(page: Page, file: { name: string; mimeType: string; buffer: Buffer }, reference: string, shot: string, decimalComma: boolean) {
   await page.getByRole('button', { name: 'Request sheets' }).click();
   await page.getByRole('heading', { name: 'Import a request sheet', level: 1 }).waitFor();
   await page.getByLabel('Request sheet (CSV or XLSX, one spring per row)').setInputFiles(file);
-  await page.getByRole('textbox', { name: 'Customer', exact: true }).fill(DEMO_CUSTOMER);
+  await field(page, 'Customer').fill(DEMO_CUSTOMER);
   await page.getByRole('textbox', { name: 'Enquiry reference', exact: true }).fill(reference);
   const counts = page.getByRole('status').filter({ hasText: /rows? ready/ });
   await counts.waitFor();

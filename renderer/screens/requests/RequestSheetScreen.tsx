@@ -114,7 +114,8 @@ export function RequestSheetScreen() {
         <h2 id="source-title" className="panel__title">Sheet and customer</h2>
         <SheetPicker onRead={read} />
         <div className="grid grid--4">
-          <PlainInput label="Customer" value={customer} onChange={setCustomer} hint="Their column mapping is kept and used next time." />
+          <PlainInput label="Customer" value={customer} onChange={setCustomer} hint="Their column mapping is kept and used next time."
+            suggestions={shop.customers.map((cu) => cu.name)} />
           <PlainInput label="Enquiry reference" value={reference} onChange={setReference} hint="The customer's own reference." />
           <PlainSelect label="Units of the sheet" value={p?.mapping.units ?? c.units ?? 'metric'}
             onChange={(v) => setCorrections({ ...c, units: v === 'inch' ? 'inch' : 'metric' })}
