@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { PreviewRow, RequestPreview } from '../../../core/api';
 import type { ColumnField } from '../../../core/request-sheet';
-import { ColumnChoice } from './MappingTable';
+import { ColumnChoice } from './ColumnChoice';
 import { parseCellRef } from '../../../core/request-sheet';
 import { errorsByCell, refOf } from '../../model/request-sheet';
 
