@@ -198,7 +198,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const serverErrors: FormError[] = useMemo(() => {
     if (!saveError) return [];
     const list = saveError.details && saveError.details.length > 0 ? saveError.details : [saveError];
-    return list.filter((e) => e.path !== '').map(friendlyError);
+    return list.filter((e) => e.path !== '').map((e) => friendlyError(e));
   }, [saveError]);
 
   return {
