@@ -6,6 +6,9 @@ import {
 } from '../../../db';
 import { job, spec, tempDir, track, value } from './helpers';
 
+/** The free length of a stored compression spec. */
+const freeLength = (s: unknown) => (s as { freeLength?: number } | null)?.freeLength;
+
 const revisionCount = (db: Database.Database) => (db.prepare('SELECT count(*) AS n FROM job_revisions').get() as { n: number }).n;
 
 describe('migration 0013 (working revisions)', () => {
@@ -38,14 +41,14 @@ describe('migration 0013 (working revisions)', () => {
     expect(revisionCount(store.db)).toBe(1);
     const open = value(getJob(store, created.id));
     expect(open.revision).toBe(1);
-    expect(open.spec.freeLength).toBe(53);
+    expect(freeLength(open.spec)).toBe(53);
     expect(open.working?.saves).toBe(3);
 
     const kept = value(keepWorkingRevision(store, { id: created.id, reason: 'left the job' }));
     expect(kept.revision).toBe(2);
     expect(kept.working).toBeUndefined();
     const history = value(jobRevisions(store, created.id));
-    expect(history.map((r) => [r.revision, r.reason, r.spec?.freeLength])).toEqual([[2, 'left the job', 53], [1, 'created', 50]]);
+    expect(history.map((r) => [r.revision, r.reason, freeLength(r.spec)])).toEqual([[2, 'left the job', 53], [1, 'created', 50]]);
     // Closing again writes nothing.
     expect(value(keepWorkingRevision(store, { id: created.id })).revision).toBe(2);
   });
@@ -56,7 +59,7 @@ describe('migration 0013 (working revisions)', () => {
     value(updateJob(store, { id: created.id, spec: spec({ freeLength: 60 }), working: true }));
     const restored = value(restoreRevision(store, { id: created.id, revision: 1 }));
     expect(restored.revision).toBe(3);
-    expect(value(jobRevisions(store, created.id)).map((r) => [r.reason, r.spec?.freeLength]))
+    expect(value(jobRevisions(store, created.id)).map((r) => [r.reason, freeLength(r.spec)]))
       .toEqual([['restored revision 1', 50], ['saved', 60], ['created', 50]]);
     value(updateJob(store, { id: created.id, spec: spec({ freeLength: 61 }), working: true }));
     const saved = value(updateJob(store, { id: created.id, spec: spec({ freeLength: 62 }) }));

@@ -5,7 +5,8 @@ import { captions, kindTerms } from '../../../../core/vocabulary';
 import { loadRows, readouts, stressBars } from './readout-data';
 
 /** The figures an estimator checks first, in the job's units. `r` in internal units. */
-export function KeyFigures({ r }: { r: SpringReport }) {
+export function KeyFigures({ r, probe, waitingFor }: { r: SpringReport; probe?: SpringReport | null; waitingFor?: string }) {
+  const moved = new Set(probe ? readouts(probe).filter((p, i) => p.value !== readouts(r)[i]?.value).map((p) => p.symbol) : []);
   return (
     <section className="panel" aria-labelledby="figures-title">
       <h3 id="figures-title" className="panel__title">Key figures</h3>
@@ -13,7 +14,7 @@ export function KeyFigures({ r }: { r: SpringReport }) {
         {readouts(r).map((f) => (
           <div key={f.name} className="figures__item" data-figure={f.symbol}>
             <dt>{f.name} <span className="figures__symbol">{f.symbol}</span></dt>
-            <dd>{f.value}</dd>
+            {moved.has(f.symbol) ? <dd className="figures__waiting">— <span className="muted">waits for {waitingFor}</span></dd> : <dd>{f.value}</dd>}
           </div>
         ))}
       </dl>
