@@ -133,7 +133,7 @@ function readBare(text: string, mark: DecimalMark): { value: number } | TypedNum
       : `"${text}": thousands are grouped in threes, e.g. 2 000`);
   }
   if (decimal === null || !Number.isFinite(Number(decimal))) {
-    return fail('not-a-number', `"${text}" is not a number; e.g. 2${mark}5, 2 000, 3/8 or 1-1/4`);
+    return fail('not-a-number', `"${text}" is not a number; e.g. 2${mark}5 or 2 000 or 3/8 or 1-1/4`);
   }
   return { value: Number(decimal) };
 }

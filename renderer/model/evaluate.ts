@@ -23,11 +23,11 @@ export interface Evaluation {
   understood: Understood[];
   /**
    * Fields whose text does not read but whose saved value stands in, so the rest still computes; empty when
-   * everything typed reads. A figure that moves when they move (`probe`) waits for them.
+   * everything typed reads. A figure that moves when they move (`probes`) waits for them.
    */
   waitingOn: string[];
-  /** The report with every standing-in value moved by a tenth, internal units; null when nothing stands in. */
-  probe: SpringReport | null;
+  /** Reports with every standing-in value moved (halved, a tenth up, doubled), internal units; empty when nothing stands in. */
+  probes: SpringReport[];
 }
 
 type Raw = Record<string, unknown>;
@@ -48,13 +48,16 @@ function standIn(raw: Raw, paths: readonly string[], saved: Spec | null): Raw {
   return out;
 }
 
-const moved = (raw: Raw, paths: readonly string[]): Raw =>
-  paths.reduce((r, p) => { const v = getAt(r, p); return typeof v === 'number' ? setAt(r, p, v * 1.1) : r; }, raw);
+const moved = (raw: Raw, paths: readonly string[], factor: number): Raw =>
+  paths.reduce((r, p) => { const v = getAt(r, p); return typeof v === 'number' ? setAt(r, p, v * factor) : r; }, raw);
+
+/** How far the probes move a standing-in value: a figure that stays put under all three does not depend on it. */
+const PROBE_FACTORS = [0.5, 1.1, 2];
 
 /**
  * Validates and analyses the draft in the renderer (core/ is platform-free, so no round trip is needed). A field
  * whose text does not read, or that the schema refuses, does not hide the rest: its saved value (`saved`) stands
- * in, or an optional one is left out, and the figures that depend on it are told apart by `probe`.
+ * in, or an optional one is left out, and the figures that depend on it are told apart by `probes`.
  */
 export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluation {
   const { raw, errors: local, formPath, understood } = draftToRaw(d);
@@ -68,7 +71,7 @@ export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluati
   };
   // In the order of the form, so the list of what is missing reads like the form.
   const errors = [...local, ...schema].map((e) => friendlyError(e, (path) => getAt(raw, path))).sort((a, b) => rank(a.path) - rank(b.path));
-  const none = { understood, waitingOn: [], probe: null };
+  const none = { understood, waitingOn: [], probes: [] };
   if (first.parsed.ok && local.length === 0) {
     const internal = analyseSpec(first.parsed.value);
     return { spec: first.parsed.value, internal, report: reportInSpecUnits(internal), errors: [], ...none };
@@ -82,7 +85,9 @@ export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluati
   const second = check(filled, formPath);
   if (!second.parsed.ok) return { spec: null, internal: null, report: null, errors, ...none };
   const internal = analyseSpec(second.parsed.value);
-  const probed = parseSpec(moved(filled, waitingOn));
-  const probe = probed.ok ? analyseSpec(probed.value) : null;
-  return { spec: second.parsed.value, internal, report: reportInSpecUnits(internal), errors, understood, waitingOn, probe };
+  const probes = PROBE_FACTORS.flatMap((f) => {
+    const probed = parseSpec(moved(filled, waitingOn, f));
+    return probed.ok ? [analyseSpec(probed.value)] : [];
+  });
+  return { spec: second.parsed.value, internal, report: reportInSpecUnits(internal), errors, understood, waitingOn, probes };
 }

@@ -47,6 +47,9 @@ function plainText(value: number): string {
   return String(Number(value.toPrecision(7)));
 }
 
+/** A shown figure ("0.375 in / 0.305 in") with the shop's decimal mark; only a point between digits changes. */
+export const inShopMark = (text: string): string => (shopDecimalMark === ',' ? text.replace(/(\d)\.(\d)/g, '$1,$2') : text);
+
 export type ParsedList =
   | { ok: true; value: number[]; understood: string[] }
   | { ok: false; code: string; message: string; item: number };

@@ -9,7 +9,7 @@ import { drawbarExtension, lidTorsion, valveSpringMetric } from '../fixtures/spe
 import { resolveField } from '../../renderer/model/errors';
 import { evaluateDraft } from '../../renderer/model/evaluate';
 import { jobDraftOf, jobFieldsOf, sameAsStored } from '../../renderer/model/job-draft';
-import { numberText, parseList, parseNumber } from '../../renderer/model/numbers';
+import { numberText, parseList, parseNumber, takeDecimalMark } from '../../renderer/model/numbers';
 import { getAt, setAt } from '../../renderer/model/paths';
 import { convertDraft, draftFromSpec, draftToRaw, emptySpecDraft } from '../../renderer/model/spec-draft';
 import { redoTarget, timelineOf, undoTarget } from '../../renderer/model/timeline';
@@ -21,14 +21,30 @@ const parsed = (raw: unknown): Spec => {
 };
 
 describe('numbers as typed', () => {
-  it('reads plain decimals and says why anything else is not one', () => {
-    expect(parseNumber(' 2.5 ')).toEqual({ ok: true, value: 2.5 });
-    expect(parseNumber('')).toEqual({ ok: true, value: undefined });
-    expect(parseNumber('.5')).toEqual({ ok: true, value: 0.5 });
-    expect(parseNumber('2,5')).toEqual({ ok: false, message: 'use a point for decimals, e.g. 2.5' });
-    expect(parseNumber('2 mm')).toEqual({ ok: false, message: 'a number, e.g. 2.5' });
-    expect(parseList('100, 1000 5000')).toEqual({ ok: true, value: [100, 1000, 5000] });
-    expect(parseList('100, 1.5')).toEqual({ ok: false, message: '"1.5" is not a whole number of pieces' });
+  it('reads numbers as people type them and says why anything else is not one', () => {
+    expect(parseNumber(' 2.5 ')).toEqual({ ok: true, value: 2.5, understood: null });
+    expect(parseNumber('2.5')).toEqual({ ok: true, value: 2.5, understood: null });
+    expect(parseNumber('')).toEqual({ ok: true, value: undefined, understood: null });
+    expect(parseNumber('.5')).toMatchObject({ ok: true, value: 0.5 });
+    expect(parseNumber('2,5')).toMatchObject({ ok: false, code: 'bad-grouping', message: expect.stringContaining('did you mean 2.5?') });
+    expect(parseNumber('2 mm')).toMatchObject({ ok: false, code: 'wrong-unit' });
+    expect(parseNumber('12 mm', 'length', 'inch')).toMatchObject({ ok: true, understood: 'read "12 mm" as 0.4724409 in' });
+    // Split on ";", "/", a line break (and ", " where the comma is not the decimal mark), never inside "2 000".
+    expect(parseList('100; 2 000/5 000')).toMatchObject({ ok: true, value: [100, 2000, 5000] });
+    expect(parseList('100, 1000')).toMatchObject({ ok: true, value: [100, 1000] });
+    expect(parseList('100; 1.5')).toEqual({ ok: false, code: 'not-whole', message: '1.5 is not a whole number of pieces', item: 1 });
+  });
+
+  it('reads and writes with a decimal comma when the shop sets one', () => {
+    takeDecimalMark(',');
+    try {
+      expect(parseNumber('1,6')).toEqual({ ok: true, value: 1.6, understood: null });
+      expect(parseNumber('2.000,5')).toMatchObject({ ok: true, value: 2000.5 });
+      expect(numberText(1.6)).toBe('1,6');
+      expect(parseList('1 000; 2 500')).toMatchObject({ ok: true, value: [1000, 2500] });
+    } finally {
+      takeDecimalMark('.');
+    }
   });
 
   it('shows converted values without float noise and with enough digits to come back', () => {
@@ -78,7 +94,7 @@ describe('spec drafts', () => {
     const d = draftFromSpec(parsed(valveSpringMetric));
     const blank = { length: '', force: '', tolerancePercent: '' };
     const typed = evaluateDraft({ ...d, compression: { ...d.compression, loads: [blank, { ...blank, length: '40', force: 'x' }] } });
-    expect(typed.errors.map((x) => [x.path, x.message])).toEqual([['loads[1].force', 'a number, e.g. 2.5']]);
+    expect(typed.errors.map((x) => [x.path, x.message])).toEqual([['loads[1].force', '"x" is not a number; e.g. 2.5 or 2 000 or 3/8 or 1-1/4']]);
     // The schema sees one load (index 0); its error belongs to the second row of the form.
     const schema = evaluateDraft({ ...d, compression: { ...d.compression, loads: [blank, { ...blank, length: '75' }] } });
     expect(schema.errors.map((x) => x.path)).toEqual(['loads[1].length']);

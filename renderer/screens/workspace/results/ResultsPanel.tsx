@@ -19,12 +19,13 @@ interface ResultsProps {
 
 /** Live results of the form: figures, stresses, findings, cautions and drawings, or what stands in the way. */
 export function ResultsPanel({ evaluation, version, title, onGo }: ResultsProps) {
-  const { internal: r, spec, errors, waitingOn, probe } = evaluation;
+  const { internal: r, spec, errors, waitingOn, probes } = evaluation;
   const deferred = useDeferredValue(r);
   const partial = waitingOn.length > 0;
   const waitingFor = waitingOn.map(fieldName).join(', ');
   // With a field standing in at its saved value, a table or the findings show only when they do not move with it.
-  const steady = (pick: (x: SpringReport) => unknown) => !partial || (probe !== null && r !== null && JSON.stringify(pick(r)) === JSON.stringify(pick(probe)));
+  const steady = (pick: (x: SpringReport) => unknown) =>
+    !partial || (r !== null && probes.length > 0 && probes.every((p) => JSON.stringify(pick(r)) === JSON.stringify(pick(p))));
   return (
     <aside className="results" aria-label="Results" data-calc={version} data-state={r ? (partial ? 'partial' : 'ok') : 'incomplete'} aria-busy={deferred !== r}>
       {r && spec ? (
@@ -40,7 +41,7 @@ export function ResultsPanel({ evaluation, version, title, onGo }: ResultsProps)
               <p className="muted">Its saved value stands in until it reads; the figures below do not depend on it, and the rest of the edits are saved.</p>
             </section>
           ) : null}
-          <KeyFigures r={r} probe={partial ? probe ?? r : null} waitingFor={waitingFor} />
+          <KeyFigures r={r} probes={probes} waitingFor={waitingFor} />
           {steady(loadRows) ? <LoadTable r={r} /> : null}
           {steady(stressBars) ? <StressBars r={r} /> : null}
           {steady((x) => x.findings) ? <Findings findings={r.findings} onGo={onGo} /> : null}
