@@ -54,7 +54,7 @@ export function StressBars({ r }: { r: SpringReport }) {
       <ul className="bars">
         {stressBars(r).map((b) => {
           const ratio = b.value / b.allowable;
-          const text = `${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`;
+          const text = inShopMark(`${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`);
           return (
             <li key={b.label} className={`bar bar--${allowableBand(b.value, b.allowable)}`}>
               <span className="bar__label">{b.label}</span>
