@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ApiError, Job, JobRevision } from '../../core/api';
 import type { JobChange } from '../../core/api/store';
 import type { JobJudgementInput } from '../../core/quoting/judgement';
+import type { Settings } from '../../core/settings/schema';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
 import type { FormError } from '../model/errors';
@@ -31,6 +32,8 @@ const draftsOf = (job: Job): Drafts => ({ job: jobDraftOf(job), spec: draftFromS
 export interface EditorDefaults {
   units: UnitSystem;
   toleranceGrade: 1 | 2 | 3 | null;
+  /** The shop's settings: the results route set removal the way the plan does. */
+  settings?: Settings;
 }
 
 /** The job being edited: drafts, live evaluation, autosave into revisions, undo and redo over them. */
@@ -46,7 +49,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const [saving, setSaving] = useState(false);
   const [saveError, setSaveError] = useState<ApiError | null>(null);
 
-  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec, job?.spec ?? null), [drafts.spec, job?.spec]);
+  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec, job?.spec ?? null, defaults.settings), [drafts.spec, job?.spec, defaults.settings]);
   const jobCheck = useMemo(() => jobFieldsOf(drafts.job), [drafts.job]);
   // A field that does not read keeps its saved value, so the other edits still save.
   const valid = evaluation.spec !== null && (jobCheck.errors.length === 0 || job !== null);
@@ -108,7 +111,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const saveOnce = useCallback(async (working: boolean): Promise<boolean> => {
     const s = { ...live.current };
     if (s.version === s.savedVersion) return true;
-    const spec = evaluateDraft(s.drafts.spec, s.job?.spec ?? null);
+    const spec = evaluateDraft(s.drafts.spec, s.job?.spec ?? null, defaults.settings);
     const fields = jobFieldsOf(s.drafts.job);
     if (!spec.spec || (fields.errors.length > 0 && !s.job)) return false;
     const whole = spec.errors.length === 0 && fields.errors.length === 0;
@@ -137,7 +140,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     if (created) onCreated(r.value);
     await loadRevisions(r.value.id);
     return whole;
-  }, [api, adopt, loadRevisions, onCreated]);
+  }, [api, adopt, loadRevisions, onCreated, defaults.settings]);
 
   /** Saves now if there is anything to save; saves never overlap. */
   const queue = useCallback(async <T,>(work: () => Promise<T>): Promise<T> => {

@@ -1,5 +1,6 @@
 import type { SpringReport } from '../../core/calculate';
 import { analyseSpec, reportInSpecUnits } from '../../core/calculate';
+import type { Settings } from '../../core/settings/schema';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 import type { Understood } from './convert';
@@ -55,11 +56,12 @@ const moved = (raw: Raw, paths: readonly string[], factor: number): Raw =>
 const PROBE_FACTORS = [0.5, 1.1, 2];
 
 /**
- * Validates and analyses the draft in the renderer (core/ is platform-free, so no round trip is needed). A field
+ * Validates and analyses the draft in the renderer (core/ is platform-free, so no round trip is needed). The shop's
+ * settings route set removal the way the plan does; until they are read, the defaults hold. A field
  * whose text does not read, or that the schema refuses, does not hide the rest: its saved value (`saved`) stands
  * in, or an optional one is left out, and the figures that depend on it are told apart by `probes`.
  */
-export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluation {
+export function evaluateDraft(d: SpecDraft, saved: Spec | null = null, settings?: Settings): Evaluation {
   const { raw, errors: local, formPath, understood } = draftToRaw(d);
   const taken = new Set(local.map((e) => e.path));
   const first = check(raw, formPath);
@@ -73,7 +75,7 @@ export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluati
   const errors = [...local, ...schema].map((e) => friendlyError(e, (path) => getAt(raw, path))).sort((a, b) => rank(a.path) - rank(b.path));
   const none = { understood, waitingOn: [], probes: [] };
   if (first.parsed.ok && local.length === 0) {
-    const internal = analyseSpec(first.parsed.value);
+    const internal = analyseSpec(first.parsed.value, settings);
     return { spec: first.parsed.value, internal, report: reportInSpecUnits(internal), errors: [], ...none };
   }
   // A field left empty is missing, not wrong: only fields with something typed in them stand in.
@@ -84,10 +86,10 @@ export function evaluateDraft(d: SpecDraft, saved: Spec | null = null): Evaluati
   const filled = standIn(raw, waitingOn, saved);
   const second = check(filled, formPath);
   if (!second.parsed.ok) return { spec: null, internal: null, report: null, errors, ...none };
-  const internal = analyseSpec(second.parsed.value);
+  const internal = analyseSpec(second.parsed.value, settings);
   const probes = PROBE_FACTORS.flatMap((f) => {
     const probed = parseSpec(moved(filled, waitingOn, f));
-    return probed.ok ? [analyseSpec(probed.value)] : [];
+    return probed.ok ? [analyseSpec(probed.value, settings)] : [];
   });
   return { spec: second.parsed.value, internal, report: reportInSpecUnits(internal), errors, understood, waitingOn, probes };
 }
