@@ -2,7 +2,8 @@
 import { menuCommands } from '../../core/api/method-names';
 import { commandOfMenu } from '../../renderer/hooks/commands';
 import { describe, expect, it } from 'vitest';
-import type { Job } from '../../core/api';
+import type { Job, RevisionFields } from '../../core/api';
+import { noJudgement } from '../../core/quoting/judgement';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 import { drawbarExtension, lidTorsion, valveSpringMetric } from '../fixtures/specs';
@@ -13,6 +14,7 @@ import { numberText, parseList, parseNumber, takeDecimalMark } from '../../rende
 import { getAt, setAt } from '../../renderer/model/paths';
 import { convertDraft, draftFromSpec, draftToRaw, emptySpecDraft } from '../../renderer/model/spec-draft';
 import { redoTarget, timelineOf, undoTarget } from '../../renderer/model/timeline';
+import { revisionChanges } from '../../renderer/model/revision-diff';
 
 const parsed = (raw: unknown): Spec => {
   const r = parseSpec(raw);
@@ -164,5 +166,40 @@ describe('the application menu\'s commands', () => {
     expect(commandOfMenu('undo')).toBe('undo');
     expect(commandOfMenu('redo')).toBe('redo');
     expect(commandOfMenu('format-disk')).toBeNull();
+  });
+});
+
+describe('a field that does not read, and what changed between revisions', () => {
+  const saved = parsed(valveSpringMetric);
+
+  it('lets the saved value stand in, keeps the edits that read, and probes which figures wait', () => {
+    const d = draftFromSpec(saved);
+    const e = evaluateDraft({ ...d, wireDiameter: 'abc', compression: { ...d.compression, freeLength: '52' } }, saved);
+    expect(e.waitingOn).toEqual(['wireDiameter']);
+    expect(e.errors.map((x) => [x.path, x.code])).toEqual([['wireDiameter', 'not-a-number']]);
+    expect(e.spec?.wireDiameter).toBe(saved.wireDiameter);
+    expect(e.spec && 'freeLength' in e.spec ? e.spec.freeLength : null).toBe(52);
+    expect(e.probes).toHaveLength(3);
+    // The rate moves with d (G d⁴ / 8 D³ n, EN 13906-1 eq. 9); the probes see it move.
+    expect(e.probes.every((p) => p.kind === 'compression' && e.internal?.kind === 'compression' && p.rate !== e.internal.rate)).toBe(true);
+    // With no saved spec a required field cannot stand in: nothing computes.
+    expect(evaluateDraft({ ...d, wireDiameter: 'abc' }).spec).toBeNull();
+  });
+
+  it('lists each change by its label, in the units of the later revision', () => {
+    const fields: RevisionFields = {
+      customerId: null, customerName: null, partNumber: 'QG-7731', drawingNumber: '', drawingRevision: '', status: 'draft', notes: '',
+      dueDate: null, orderQuantity: null, leadTimeDays: null, judgement: noJudgement(),
+    };
+    const inch = convertDraft(draftFromSpec(saved), 'inch');
+    const after = evaluateDraft({ ...inch, compression: { ...inch.compression, freeLength: '2' } }).spec!;
+    const changes = revisionChanges({ fields, spec: saved }, { fields: { ...fields, partNumber: 'QG-9' }, spec: after });
+    expect(changes).toContainEqual({ field: 'Part number', before: 'QG-7731', after: 'QG-9' });
+    expect(changes).toContainEqual({ field: 'Units', before: 'metric', after: 'inch' });
+    // The free length before, in inches at the trade's 0.001 in (1 in = 25.4 mm, NIST SP 811).
+    const l0 = ('freeLength' in saved ? saved.freeLength : undefined) ?? 0;
+    expect(changes).toContainEqual({ field: 'Free length', before: `${(l0 / 25.4).toFixed(3)} in`, after: '2.000 in' });
+    // Converted values that read the same in inches are not changes.
+    expect(changes.map((c) => c.field)).not.toContain('Wire diameter');
   });
 });
