@@ -5,7 +5,12 @@ import type { RequestField } from './fields';
 import { requestFieldTable } from './fields';
 import type { MappedColumn } from './mapping';
 
-interface ErrorPlace { row: number; columns: readonly MappedColumn[] }
+interface ErrorPlace {
+  row: number;
+  columns: readonly MappedColumn[];
+  /** The spec as the row gave it: a field absent from it is missing, whatever words the schema used. */
+  given?: Readonly<Record<string, unknown>>;
+}
 
 /** The sheet's field a spec or job path came from ("loads[0].force" → the load column). */
 function fieldsOfPath(path: string): RequestField[] {
@@ -42,7 +47,8 @@ export function sheetError(e: FieldError, options: ErrorPlace): FieldError {
   const ref = refOfPath(e.path, options);
   const fields = fieldsOfPath(e.path);
   const mapped = options.columns.some((c) => fields.includes(c.field as RequestField));
-  const missing = /required|undefined/i.test(e.message) ? MISSING_WORDS[head.split(/[.[]/)[0]!] : undefined;
+  const key = head.split(/[.[]/)[0]!;
+  const missing = options.given !== undefined && options.given[key] === undefined ? MISSING_WORDS[key] : undefined;
   if (missing && !mapped) return { code: 'column-missing', path: ref, message: `no column holds ${missing}: map one, or enter it in the job after the import` };
   if (missing) return { code: 'value-missing', path: ref, message: `${missing} is empty` };
   const label = fields[0] ? `${requestFieldTable[fields[0]].label}: ` : '';

@@ -156,7 +156,7 @@ export function readRequestRow(cells: readonly string[], options: RowOptions): R
   }
   const spec = specOf(draft, options.units);
   const parsed = parseSpec(spec);
-  if (!parsed.ok) return { job: null, errors: parsed.errors.map((e) => sheetError(e, options)), understood };
+  if (!parsed.ok) return { job: null, errors: parsed.errors.map((e) => sheetError(e, { ...options, given: spec })), understood };
   const quantities = draft.quantities ?? [];
   const job = {
     partNumber: draft.text.partNumber ?? '', drawingNumber: draft.text.drawingNumber ?? '',
