@@ -20,6 +20,8 @@ interface JobTableProps {
   onSelectAll(on: boolean): void;
   onOpen(id: number): void;
   onSimilar(job: JobSummary): void;
+  onArchive(job: JobSummary, archived: boolean): void;
+  onDelete(job: JobSummary): void;
 }
 
 function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sort: Sort | null; onSort(k: SortKey): void }) {
@@ -42,7 +44,7 @@ const day = (iso: string) => iso.slice(0, 10);
 const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
   [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
 
-export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar }: JobTableProps) {
+export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
     <table className="table jobs" aria-label="Jobs">
@@ -77,7 +79,8 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td><button type="button" className="link" onClick={() => onOpen(j.id)} aria-label={`Open job ${j.number}`}>{j.number}</button></td>
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
-              <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
+              <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span>
+                {j.archivedAt ? <><br /><span className="muted">archived {day(j.archivedAt)}</span></> : null}</td>
               <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span>
                 {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
@@ -85,7 +88,14 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
               <td className="nowrap">{day(j.updatedAt)}</td>
-              <td><button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button></td>
+              <td className="row-actions">
+                <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>
+                <button type="button" className="button button--small button--quiet" onClick={() => onArchive(j, j.archivedAt === null)}
+                  aria-label={`${j.archivedAt === null ? 'Archive' : 'Put back'} job ${j.number}`}>{j.archivedAt === null ? 'Archive' : 'Put back'}</button>
+                {j.status === 'draft' ? (
+                  <button type="button" className="button button--small button--quiet" onClick={() => onDelete(j)} aria-label={`Delete draft ${j.number}`}>Delete</button>
+                ) : null}
+              </td>
             </tr>
           );
         })}
