@@ -33,7 +33,7 @@ export function FilterBar({ text, onText, filters, onFilters, searchRef }: Filte
       <div className="filterbar__search">
         <PlainInput
           label="Search" type="search" value={text} onChange={onText} inputRef={searchRef}
-          placeholder="customer, part or drawing number, grade, size (1.6), notes…" hint="Ctrl+F or / to come back here"
+          placeholder="customer, part, drawing, grade, size (1.6)…" hint="Ctrl+F or / to come back here"
         />
       </div>
       <PlainSelect label="Status" value={filters.status} onChange={set('status')}

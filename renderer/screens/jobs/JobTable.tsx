@@ -22,6 +22,8 @@ interface JobTableProps {
   onSimilar(job: JobSummary): void;
   onArchive(job: JobSummary, archived: boolean): void;
   onDelete(job: JobSummary): void;
+  /** The archived list: its newest-first sort is by the date each job was archived. */
+  archived?: boolean;
 }
 
 function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sort: Sort | null; onSort(k: SortKey): void }) {
@@ -44,7 +46,7 @@ const day = (iso: string) => iso.slice(0, 10);
 const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
   [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
 
-export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete }: JobTableProps) {
+export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete, archived = false }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
     <table className="table jobs" aria-label="Jobs">
@@ -62,7 +64,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           <th scope="col" className="num">OD</th>
           <th scope="col" className="num">L0</th>
           <th scope="col" className="num">Rate</th>
-          <SortHeader label="Updated" k="updated" sort={sort} onSort={onSort} />
+          <SortHeader label={archived ? 'Archived' : 'Updated'} k="updated" sort={sort} onSort={onSort} />
           <th scope="col"><span className="sr-only">Actions</span></th>
         </tr>
       </thead>
@@ -87,7 +89,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
-              <td className="nowrap">{day(j.updatedAt)}</td>
+              <td className="nowrap">{day(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
               <td className="row-actions">
                 <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>
                 <button type="button" className="button button--small button--quiet" onClick={() => onArchive(j, j.archivedAt === null)}

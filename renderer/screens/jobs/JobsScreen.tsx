@@ -108,7 +108,7 @@ export function JobsScreen() {
         <JobTable
           jobs={rows.jobs} sort={rows.searching ? null : sort} onSort={onSort} selected={selected} onSelect={select}
           onSelectAll={(on) => rows.jobs.forEach((j) => select(j.id, on))} onOpen={(id) => nav.openJob(id)} onSimilar={(j) => void openSimilar(j)}
-          onArchive={(j, on) => void shelf.archive(j, on)} onDelete={(j) => void shelf.remove(j)}
+          onArchive={(j, on) => void shelf.archive(j, on)} onDelete={(j) => void shelf.remove(j)} archived={!rows.searching && filters.shelf === 'archived'}
         />
         {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
       </div>
