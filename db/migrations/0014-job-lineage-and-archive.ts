@@ -18,6 +18,11 @@ const TEXT_VALUES = `new.id, new.number, coalesce((SELECT name FROM customers WH
  */
 export function updateToVersion0014(db: Database.Database): void {
   db.exec(`
+    DROP TRIGGER jobs_text_insert;
+    DROP TRIGGER jobs_text_update;
+    DROP TRIGGER jobs_text_delete;
+    DROP TRIGGER customers_text_rename;
+    DROP TABLE job_text;
     ALTER TABLE jobs ADD COLUMN archived_at TEXT;
     ALTER TABLE jobs ADD COLUMN search_words TEXT NOT NULL DEFAULT '';
     CREATE INDEX jobs_archived ON jobs (archived_at, id) WHERE archived_at IS NOT NULL;
@@ -67,11 +72,10 @@ export function updateToVersion0014(db: Database.Database): void {
         ON CONFLICT (archived, status, kind, material) DO UPDATE SET n = n + 1;
     END;
 
-    DROP TRIGGER jobs_text_insert;
-    DROP TRIGGER jobs_text_update;
-    DROP TRIGGER jobs_text_delete;
-    DROP TRIGGER customers_text_rename;
-    DROP TABLE job_text;
+  `);
+  // The words first, then the text index filled in one pass: no trigger rewrites each job row by row.
+  fillSearchWords(db);
+  db.exec(`
     CREATE VIRTUAL TABLE job_text USING fts5(
       number, customer, part_number, drawing_number, notes, spring,
       tokenize = 'unicode61 remove_diacritics 2', prefix = '2 3'
@@ -90,11 +94,14 @@ export function updateToVersion0014(db: Database.Database): void {
     CREATE TRIGGER customers_text_rename AFTER UPDATE OF name ON customers BEGIN
       UPDATE job_text SET customer = new.name WHERE rowid IN (SELECT id FROM jobs WHERE customer_id = new.id);
     END;
+    INSERT INTO job_text (rowid, number, customer, part_number, drawing_number, notes, spring)
+      SELECT j.id, j.number, coalesce(c.name, ''), j.part_number, j.drawing_number,
+             j.notes || ' ' || coalesce(json_extract(j.spec, '$.notes'), ''), j.search_words
+      FROM jobs j LEFT JOIN customers c ON c.id = j.customer_id;
   `);
-  fillSearchWords(db);
 }
 
-/** Words for the jobs already in the store, from their stored specs (the text index follows by trigger). */
+/** Words for the jobs already in the store, from their stored specs. */
 function fillSearchWords(db: Database.Database): void {
   db.function('coilwright_search_words', { deterministic: true }, (spec: unknown, units: unknown, od: unknown) => {
     const system = units === 'inch' ? 'inch' : 'metric';
