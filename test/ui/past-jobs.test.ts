@@ -124,6 +124,11 @@ describe('jobs from past jobs and the archive', { timeout: UI_TEST_TIMEOUT }, ()
 
   it('edits the shop\'s free-length table in settings and the plan uses it', async () => {
     await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: /^Shop settings/ }).click();
+    await page.getByRole('heading', { name: 'Tolerances', level: 2 }).scrollIntoViewIfNeeded();
+    // The published tables sit beside the shop's own, read-only, each with its source.
+    await page.getByText('EN 15800 coil diameter A_D (± mm)').click();
+    await expect(page.getByRole('table', { name: 'EN 15800 coil diameter A_D (± mm)' }).getByRole('textbox').count()).resolves.toBe(0);
+    await screenshot(page, 'settings-tolerances');
     const table = page.getByRole('group', { name: 'The shop\'s free length table' });
     await table.scrollIntoViewIfNeeded();
     const band = table.getByRole('group', { name: 'Grade 2, w over 8 up to 15' });
