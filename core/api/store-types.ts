@@ -75,6 +75,8 @@ export interface JobLink {
 
 export interface Job extends JobSummary {
   spec: Spec;
+  /** Present while a working session is open: its autosaves are in the job, and become one revision when it closes. */
+  working?: { baseRevision: number; openedAt: string; savedAt: string; saves: number };
   /** The past job this one was made from, and the jobs made from this one. */
   lineage: { copiedFrom: JobLink | null; copiedTo: JobLink[] };
 }

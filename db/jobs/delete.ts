@@ -17,6 +17,7 @@ const OWN_ROWS = [
   { table: 'job_requirements', where: 'job_id = ?' },
   { table: 'job_cost_acceptance', where: 'job_id = ?' },
   { table: 'job_copies', where: 'copy_id = ? OR source_id = ?' },
+  { table: 'job_working_revisions', where: 'job_id = ?' },
 ] as const;
 type OwnTable = (typeof OWN_ROWS)[number]['table'];
 
