@@ -35,7 +35,8 @@ export interface KindParts<S, X extends CoilBody, R> {
   design(spec: S): X | undefined;
   /** The shop's settings choose between methods where the kind has a choice (compression: set removal). */
   analyse(design: X, settings?: Settings): R;
-  review(design: X, report: R): Finding[];
+  /** The maker's review; the shop's settings supply the shop's own tables where a rule reads one. */
+  review(design: X, report: R, settings?: Settings): Finding[];
   /** What each number of the report measures; reports convert out to the job's units with it. */
   reportQuantities: QuantityMap;
   routing(settings: Settings, design: X, report: R, choices: RoutingChoices): Operation[];

@@ -88,7 +88,7 @@ function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   const r = kind.analyse(x, settings);
   const lengths = kind.freeLengths(r);
   return {
-    body: x, findings: kind.review(x, r), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
+    body: x, findings: kind.review(x, r, settings), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
     wireLength: r.wireLength, mass: r.mass,
     route: (c) => kind.routing(settings, x, r, c),
     inspect: (lot, aql, grade, f) => kind.inspection(x, r, lot, aql, grade, f, shopTablesOf(settings.toleranceTables)),
