@@ -106,3 +106,20 @@ describe('writing an enquiry', () => {
     expect(store.db.prepare('SELECT count(*) AS n FROM request_mappings').get()).toEqual({ n: 0 });
   });
 });
+
+describe('deleting an imported draft', () => {
+  it('takes the job out of its enquiry, and undoing the deletion puts it back in its sheet row', async () => {
+    const { createEnquiry, deleteJob, undoDeleteJob, enquiryJobs: jobsOf } = await import('../../../db');
+    const store = tempStore();
+    const spec = { kind: 'compression', units: 'metric', material: 'en10270-1-sh', wireDiameter: 1.6, outerDiameter: 12, totalCoils: 8, ends: 'closed-ground', freeLength: 40 };
+    const made = createEnquiry(store, { customer: DEMO_CUSTOMER, reference: 'RFQ-2', source: 'x.csv', rows: [{ row: 2, ref: 'A2', job: { spec } }, { row: 3, ref: 'A3', job: { spec } }] });
+    if (!made.ok) throw new Error(JSON.stringify(made.error));
+    const [first] = made.value.jobs;
+    expect(deleteJob(store, first!.id)).toMatchObject({ ok: true });
+    const after = jobsOf(store, made.value.enquiry.id);
+    expect(after.ok && after.value.jobs.map((j) => j.sheetRow)).toEqual([3]);
+    expect(undoDeleteJob(store, first!.id)).toMatchObject({ ok: true });
+    const back = jobsOf(store, made.value.enquiry.id);
+    expect(back.ok && back.value.jobs.map((j) => j.sheetRow)).toEqual([2, 3]);
+  });
+});
