@@ -1,4 +1,5 @@
 /** The shop traveller: what to make, from which wire, in which operations, what to check, and who signed. */
+import { kindTerms } from '../vocabulary';
 import type { JobJudgement } from '../quoting/judgement';
 import type { Finding } from '../result';
 import { planManufacture } from '../process/plan';
@@ -47,7 +48,7 @@ function jobFields(job: TravellerJob, plan: ManufacturingPlan, printedAt: string
     { label: 'Quantity ordered', value: `${piecesText(job.orderQuantity)} pcs` },
     { label: 'Quantity to start', value: `${piecesText(plan.lotWire.startQuantity)} pcs (with scrap allowance)` },
     { label: 'Due date', value: job.dueDate ?? 'not set' },
-    { label: 'Tolerance grade', value: String(plan.toleranceGrade) },
+    { label: kindTerms[plan.kind].toleranceGrade, value: String(plan.toleranceGrade) },
     { label: 'Printed', value: dayOf(printedAt) },
   ]);
 }

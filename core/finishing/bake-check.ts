@@ -1,16 +1,15 @@
 /** Findings for the bake specification named on an order, for one strength and (optionally) the planned bake. */
 import type { Finding, Severity } from '../result';
 import type { BakeStatement } from './bake-rules';
-import type { BakeOptions } from './bake-guidance';
-import { bakeGuidance, parseBakeSpecification } from './bake-guidance';
-import { bakeSpecifications } from './bake-specs';
+import type { BakeOptions, PlannedBake } from './bake-guidance';
+import { bakeGuidance, parseBakeCondition, parseBakeSpecification } from './bake-guidance';
+import { bakeSpecNames } from './bake-specs';
 
-export interface PlannedBake {
-  hours: number;
-  temperatureC: number;
-  /** Hours from leaving the plating line to the start of the bake. */
-  startWithinHours?: number;
-}
+export type { PlannedBake } from './bake-guidance';
+
+/** The specifications the check knows, as a drawing or an order writes them. */
+const KNOWN = Object.values(bakeSpecNames).join(', ');
+
 
 export interface CheckOptions extends BakeOptions {
   planned?: PlannedBake;
@@ -35,7 +34,7 @@ function checkMissing(all: readonly BakeStatement[], tensile: number, path: stri
   add(out, severity, 'bake-spec-missing', path,
     `electroplated steel of ${tensile.toFixed(0)} MPa and no hydrogen-relief bake specification named` +
     (requiring.length > 0 ? `; ${requiring.map((s) => s.title).join(', ')} call for a bake at this strength` : ''),
-    `${NAMED} (one of ${bakeSpecifications.join(', ')})`);
+    `${NAMED} (one of ${KNOWN})`);
 }
 
 function checkStatus(s: BakeStatement, path: string, out: Sink): void {
@@ -52,31 +51,32 @@ function checkStatus(s: BakeStatement, path: string, out: Sink): void {
   }
 }
 
-function checkPlan(s: BakeStatement, plan: PlannedBake, path: string, out: Sink): void {
+/** `at` names the field of each planned figure; a bake written in the specification's text is that one field. */
+function checkPlan(s: BakeStatement, plan: PlannedBake, at: (figure: string) => string, out: Sink): void {
   if (s.status !== 'bake') return;
   if (s.hours && plan.hours < s.hours.min) {
-    add(out, 'error', 'bake-too-short', `${path}.hours`,
+    add(out, 'error', 'bake-too-short', at('hours'),
       `${plan.hours} h planned; ${s.title} requires at least ${s.hours.min} h here`, `bake for ${s.hours.min} h or more`);
   }
   const range = s.temperatureC;
   if (range && plan.temperatureC < range.min) {
-    add(out, 'error', 'bake-temperature-low', `${path}.temperatureC`,
+    add(out, 'error', 'bake-temperature-low', at('temperatureC'),
       `${plan.temperatureC} °C planned; ${s.title} names ${range.min.toFixed(0)}–${range.max.toFixed(0)} °C`, 'raise the oven setting');
   } else if (range && plan.temperatureC > range.max) {
-    add(out, 'warning', 'bake-temperature-high', `${path}.temperatureC`,
+    add(out, 'warning', 'bake-temperature-high', at('temperatureC'),
       `${plan.temperatureC} °C planned; ${s.title} names ${range.min.toFixed(0)}–${range.max.toFixed(0)} °C`,
       'lower the oven setting, or confirm the coating and the spring temper tolerate it');
   }
   const late = s.startWithinHours !== null && plan.startWithinHours !== undefined && plan.startWithinHours > s.startWithinHours;
   if (late) {
-    add(out, 'error', 'bake-start-late', `${path}.startWithinHours`,
+    add(out, 'error', 'bake-start-late', at('startWithinHours'),
       `bake starts ${plan.startWithinHours} h after plating; ${s.title} requires within ${s.startWithinHours} h`,
       'schedule the oven with the plater');
   }
 }
 
 /**
- * Findings for the specification named (free text such as "ASTM B850" or an id) on electroplated steel of
+ * Findings for the specification named (free text such as "ASTM B850", "ISO 4042, 4 h at 200 °C" or an id) on electroplated steel of
  * `tensileStrength` MPa: missing, unknown, not covering this strength, or a planned bake that falls short.
  */
 export function checkBakeSpecification(named: string | null | undefined, tensileStrength: number, options: CheckOptions = {}): Finding[] {
@@ -95,10 +95,13 @@ export function checkBakeSpecification(named: string | null | undefined, tensile
   const s = guidance.value.find((x) => x.spec === id);
   if (!s) {
     add(out, 'error', 'bake-spec-unknown', path, `"${named}" is not a bake specification the tool knows`,
-      `name one of ${bakeSpecifications.join(', ')}, or check the plater's specification by hand`);
+      `name one of ${KNOWN}, or check the plater's specification by hand`);
     return out;
   }
   checkStatus(s, path, out);
-  if (options.planned) checkPlan(s, options.planned, options.planPath ?? 'bake', out);
+  const written = parseBakeCondition(named);
+  const planPath = options.planPath ?? 'bake';
+  if (options.planned) checkPlan(s, options.planned, (f) => `${planPath}.${f}`, out);
+  else if (written) checkPlan(s, written, () => path, out);
   return out;
 }

@@ -3,7 +3,7 @@ import type { Finish, Machine, MachineOperation, Settings } from '../settings/sc
 import type { Operation, OperationSetting } from './types';
 import type { WorkCentreOffer } from './work-centre';
 import { capableMachines, machinePiecesPerHour } from './work-centre';
-import { bakeGuidance } from '../finishing/bake';
+import { bakeGuidance, parseBakeCondition, parseBakeSpecification } from '../finishing/bake';
 import { formatQuantity } from '../format';
 
 /** Operations every kind of spring shares: stress relief, peening, finishing and bake, inspection, packing. */
@@ -63,28 +63,41 @@ export function peen(settings: Settings, x: CoilBody): Draft {
   return op;
 }
 
+/**
+ * The finish, and after electroplating the hydrogen-relief bake: one instruction, the named specification's bake.
+ * What the other specifications say stays on the screen; the plater's paper carries only the one that governs.
+ */
 export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   const f = c.finish;
   if (!f) return [];
   const finish: Draft = {
-    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, choice: null, offers: [], outside: true,
-    settings: [{ label: 'Vendor', value: f.vendor || '(to be chosen)' }],
+    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, choice: null, offers: [], outside: !f.inHouse,
+    settings: f.inHouse ? [] : [{ label: 'Vendor', value: f.vendor || '(to be chosen)' }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0, notes: [],
   };
   if (!f.electroplated) return [finish];
   finish.notes.push('stress relieve before plating; hydrogen embrittlement risk on high-strength wire');
-  const guidance = bakeGuidance(x.wire.tensileStrength);
   const bake: Draft = {
-    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: true,
+    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: !f.inHouse,
     settings: [
       { label: 'Bake specification', value: c.bakeSpecification ?? 'NOT NAMED: ask the customer' },
-      ...(guidance.ok ? guidance.value.map((g) => ({ label: `${g.title} says`, value: g.says })) : []),
+      { label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification) },
     ],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0,
-    notes: ['the tool lists what each specification says and never picks one: the named specification governs',
-      'start the bake within the specification\'s window after plating'],
+    notes: ['start the bake within the specification\'s window after plating'],
   };
   return [finish, bake];
+}
+
+/** The bake as the order writes it, else what the named specification says for this wire's strength. */
+export function bakeInstruction(tensileStrength: number, named: string | null): string {
+  if (named === null) return 'hold the lot: no specification named';
+  const written = parseBakeCondition(named);
+  if (written) return named.trim();
+  const id = parseBakeSpecification(named);
+  const guidance = bakeGuidance(tensileStrength);
+  const says = id && guidance.ok ? guidance.value.find((g) => g.spec === id)?.says : undefined;
+  return says ?? `as ${named.trim()} requires`;
 }
 
 export function inspect(settings: Settings, x: CoilBody, title = 'Inspect: loads and dimensions', first = 'compress once to solid'): Draft {

@@ -96,6 +96,8 @@ export const finishSchema = z.object({
   pricePerPiece: money.optional(),
   lotMinimum: money.default(0),
   electroplated: z.boolean().default(false),
+  /** Done in the shop (light oil, for one): no vendor, not routed as outside processing. */
+  inHouse: z.boolean().default(false),
   bakeSpecification: text(120).optional(),
 }).strict();
 

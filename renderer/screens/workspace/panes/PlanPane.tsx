@@ -1,3 +1,4 @@
+import { kindTerms } from '../../../../core/vocabulary';
 import { useState } from 'react';
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Spec } from '../../../../core/spec';
@@ -68,7 +69,7 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
         <div><dt>Wire per piece</dt><dd>{len(plan.wireLengthPerPiece)}</dd></div>
         <div><dt>Start quantity</dt><dd>{plan.lotWire.startQuantity} pcs for {plan.orderQuantity} good</dd></div>
         <div><dt>Wire for the lot</dt><dd>{plan.lotWire.metres.toFixed(1)} m, {plan.lotWire.kg.toFixed(2)} kg</dd></div>
-        <div><dt>Tolerance grade</dt><dd>{plan.toleranceGrade}</dd></div>
+        <div><dt>{kindTerms[plan.kind].toleranceGrade}</dt><dd>{plan.toleranceGrade}</dd></div>
       </dl>
       <div className="cautions cautions--grid">
         {notes.map((n) => <Caution key={n} title={floorTitle(n)}>{n}</Caution>)}
