@@ -10,7 +10,7 @@ export { inspectStoreFile } from './inspect';
 export { migrate, migrations, LATEST_VERSION, APPLICATION_ID, schemaVersion } from './migrations';
 export { createJob, updateJob, setJobStatus, restoreRevision } from './jobs/write';
 export { getJob, jobRevisions } from './jobs/read';
-export { listCustomers } from './jobs/customers';
+export { getCustomer, listCustomers, saveCustomer } from './jobs/customers';
 export { listJobs } from './search/list';
 export { findJobs } from './search/text';
 export { similarJobs } from './search/similar';

@@ -24,6 +24,7 @@ export const storeMethods = {
   restoreRevision: method<typeof s.restoreRevisionSchema, t.Job>(s.restoreRevisionSchema),
   setJobStatus: method<typeof s.setJobStatusSchema, t.Job>(s.setJobStatusSchema),
   listCustomers: method<typeof none, t.Customer[]>(none),
+  saveCustomer: method<typeof s.customerInputSchema, t.Customer>(s.customerInputSchema),
   getSettings: method<typeof none, Settings>(none),
   saveSettings: method<typeof s.saveSettingsSchema, Settings>(s.saveSettingsSchema),
   issueQuote: method<typeof s.issueQuoteSchema, t.Quote>(s.issueQuoteSchema),

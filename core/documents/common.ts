@@ -37,3 +37,11 @@ export function orderFields(spec: Spec, settings: Settings): Field[] {
   fields.push({ label: kindTerms[spec.kind].toleranceGrade, value: String(spec.toleranceGrade ?? settings.defaults.toleranceGrade) });
   return fields;
 }
+
+/**
+ * The drawing's free length; with a force specified it is a reference dimension (EN 15800 / DIN 2095: the
+ * maker adjusts it to hold the force), and the document says so.
+ */
+export function freeLengthText(length: string, forceSpecified: boolean): string {
+  return forceSpecified ? `${length} (reference)` : length;
+}

@@ -66,7 +66,7 @@ export function travellerDocument(input: TravellerInput): TravellerDocument {
   return {
     version: DOCUMENT_VERSION, type: 'traveller', paperSize: settings.defaults.paperSize, createdAt: input.printedAt,
     title: 'Shop traveller', reference: `Traveller, job ${job.number ?? '(not stored)'}`,
-    letterhead: letterhead(settings), caution: cautionNotice(),
+    letterhead: letterhead(settings), caution: cautionNotice('shop'),
     job: { number: job.number, fields: jobFields(job, plan, input.printedAt) },
     qr: job.number,
     material: { fields: materialFields(plan), fillIn: MATERIAL_FILL_IN },

@@ -5,7 +5,7 @@ import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
-  saveSettings, setJobStatus, similarJobs, updateJob,
+  saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
 /** Issuing a quote prices the job: the document handlers answer it. */
@@ -34,6 +34,7 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     restoreRevision: (input) => restoreRevision(ctx.store, input),
     setJobStatus: (input) => setJobStatus(ctx.store, input),
     listCustomers: () => ({ ok: true, value: listCustomers(ctx.store) }),
+    saveCustomer: (input) => saveCustomer(ctx.store, input),
     getSettings: () => getSettings(ctx.store),
     saveSettings: (input) => saveSettings(ctx.store, input.settings),
     listQuotes: (input) => listQuotes(ctx.store, input),
