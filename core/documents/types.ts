@@ -116,8 +116,11 @@ export interface TravellerDocument extends DocumentCommon {
   /** The text of the QR code (the job number), or null for a job not in the store. */
   qr: string | null;
   material: { fields: Field[]; fillIn: string[] };
+  /** First-article approval and engineering release, signed before the run goes on. */
+  release: string[];
   operations: OperationModel[];
-  inspection: { summary: string[]; table: TableModel; signOff: string[] };
+  /** `finish`: what the inspector records of the finish (none when no finish is applied). */
+  inspection: { summary: string[]; table: TableModel; finish: string[]; signOff: string[] };
   figures: FigureModel[];
   safety: string[];
   /** Review findings still open (errors and warnings), printed so nobody misses them on the floor. */

@@ -79,10 +79,7 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   finish.notes.push('stress relieve before plating; hydrogen embrittlement risk on high-strength wire');
   const bake: Draft = {
     kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: !f.inHouse,
-    settings: [
-      { label: 'Bake specification', value: c.bakeSpecification ?? 'NOT NAMED: ask the customer' },
-      { label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification) },
-    ],
+    settings: [{ label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification) }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0,
     notes: ['start the bake within the specification\'s window after plating'],
   };
@@ -91,13 +88,13 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
 
 /** The bake as the order writes it, else what the named specification says for this wire's strength. */
 export function bakeInstruction(tensileStrength: number, named: string | null): string {
-  if (named === null) return 'hold the lot: no specification named';
-  const written = parseBakeCondition(named);
-  if (written) return named.trim();
-  const id = parseBakeSpecification(named);
+  if (named === null) return 'NOT NAMED: hold the lot until the customer names the specification';
+  const text = named.trim();
+  if (parseBakeCondition(text)) return text;
+  const id = parseBakeSpecification(text);
   const guidance = bakeGuidance(tensileStrength);
   const says = id && guidance.ok ? guidance.value.find((g) => g.spec === id)?.says : undefined;
-  return says ?? `as ${named.trim()} requires`;
+  return says ? `${text}: ${says}` : `as ${text} requires`;
 }
 
 export function inspect(settings: Settings, x: CoilBody, title = 'Inspect: loads and dimensions', first = 'compress once to solid'): Draft {

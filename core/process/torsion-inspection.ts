@@ -1,4 +1,5 @@
 import type { ToleranceGrade } from '../tolerances';
+import { legLengthTolerance } from '../tolerances';
 import type { TorsionDesign } from '../springs/torsion/design';
 import type { TorsionReport } from '../springs/torsion/report';
 import { realisticFreeAngleTolerance } from '../review/torsion';
@@ -21,6 +22,13 @@ function torqueCharacteristic(x: TorsionDesign, r: TorsionReport, grade: Toleran
     grade === 1 || percent < HUNDRED_PERCENT_LOAD_TOLERANCE);
 }
 
+function legCharacteristic(i: number, length: number, grade: ToleranceGrade): Characteristic {
+  const name = `Leg ${i + 1} length`;
+  const tol = legLengthTolerance({ length, grade });
+  return tol.ok ? limited(name, 'length', length, tol.value, 'calliper', tol.source)
+    : reference(`${name} (tolerance by agreement)`, 'length', length, 'calliper', tol.message);
+}
+
 /** What to measure on a torsion spring: torque at angle, free angle, diameters, legs. */
 export function torsionInspection(
   x: TorsionDesign, r: TorsionReport, lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[],
@@ -32,6 +40,6 @@ export function torsionInspection(
       x.freeAngleTolerance === null ? `${TORSION_TOLERANCE_SOURCE}; ±(2° + 1.5° per coil), from memory` : 'drawing'));
   }
   characteristics.push(diameterCharacteristic(x, r.springIndex, grade));
-  r.legLengths.forEach((length, i) => characteristics.push(reference(`Leg ${i + 1} length`, 'length', length, 'calliper', TORSION_TOLERANCE_SOURCE)));
+  r.legLengths.forEach((length, i) => characteristics.push(legCharacteristic(i, length, grade)));
   return sampledInspection(characteristics, lotSize, aql, findings);
 }

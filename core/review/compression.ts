@@ -175,7 +175,7 @@ function reviewDetermination(x: CompressionDesign, out: Sink): void {
 function reviewManufacture(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   if (endForms[x.ends].ground && x.d < lim.minimumGroundWire) {
     add(out, 'warning', 'grinding-fine-wire', 'ends',
-      `wire under ${lim.minimumGroundWire} mm is normally not ground`, 'specify closed ends, not ground');
+      `wire under ${formatQuantity(lim.minimumGroundWire, 'length', x.units)} is normally not ground`, 'specify closed ends, not ground');
   }
   if (r.activeCoils < lim.minimumActiveCoils) {
     add(out, 'note', 'few-active-coils', x.coilsGiven === 'active' ? 'activeCoils' : 'totalCoils',

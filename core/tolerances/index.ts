@@ -14,3 +14,4 @@ export { extensionLoadTable, extensionLoadTolerance } from './extension-load';
 export {
   extensionFreeLengthTable, extensionFreeLengthTolerance, loopPositionTable, loopPositionTolerance,
 } from './extension-trade';
+export { legLengthTable, legLengthTolerance } from './torsion-legs';
