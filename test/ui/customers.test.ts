@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { field, screenshot, shopSession, UI_TEST_TIMEOUT, unnamedControls } from './support';
+import { field, fillSpring, savedJobNumber, screenshot, shopSession, UI_TEST_TIMEOUT, unnamedControls } from './support';
 
 /** The customer screen: add a customer with contact, address and terms, correct a bad e-mail, edit, refuse a twin. */
 describe('customers', { timeout: UI_TEST_TIMEOUT }, () => {
@@ -45,6 +45,29 @@ describe('customers', { timeout: UI_TEST_TIMEOUT }, () => {
     await expect(page.locator('#customer-name-error').textContent()).resolves.toContain('already on file');
     const { unnamed } = await unnamedControls(page);
     expect(unnamed).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+});
+
+/** A plated job: the plan compares what each bake specification says, and marks the one the order names. */
+describe('bake specifications compared on the plan', { timeout: UI_TEST_TIMEOUT }, () => {
+  const session = shopSession();
+
+  it('marks the named specification, written with its bake, among the others', async () => {
+    const { page, errors } = session;
+    await page.keyboard.press('Alt+N');
+    await page.getByLabel('Metric').check();
+    await fillSpring(page, { grade: 'en10270-1-dh', d: '1.5', od: '12', coils: '10', l0: '40', l1: '30' });
+    await field(page, 'Finish').selectOption('zinc-yellow');
+    await field(page, 'Bake specification').fill('ISO 4042, 4 h at 200 °C');
+    await savedJobNumber(page);
+    await page.getByRole('tab', { name: 'Manufacturing plan' }).click();
+    const table = page.getByRole('region', { name: 'Hydrogen-relief bake: what each specification says' });
+    await table.waitFor();
+    await expect(table.locator('tr.is-selected').textContent()).resolves.toContain('ISO 4042 (named)');
+    await expect(table.getByRole('row').count()).resolves.toBe(7);
+    await table.scrollIntoViewIfNeeded();
+    await screenshot(page, 'plan-bake-comparison');
     expect(errors).toEqual([]);
   });
 });

@@ -1,4 +1,5 @@
 import { kindTerms } from '../../../../core/vocabulary';
+import { BakeComparison } from './BakeComparison';
 import { useState } from 'react';
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Spec } from '../../../../core/spec';
@@ -75,6 +76,7 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
         {notes.map((n) => <Caution key={n} title={floorTitle(n)}>{n}</Caution>)}
       </div>
       <Operations plan={plan} />
+      <BakeComparison plan={plan} spec={spec} finishes={settings?.finishes ?? []} />
       <SetCalibrationPanel spec={spec} />
       <Inspection plan={plan} />
       {plan.findings.length > 0 ? <Findings findings={plan.findings} onGo={onGo} title="Planning findings" /> : null}
