@@ -1,5 +1,7 @@
 /** Findings for the bake specification named on an order, for one strength and (optionally) the planned bake. */
 import type { Finding, Severity } from '../result';
+import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 import type { BakeStatement } from './bake-rules';
 import type { BakeOptions, PlannedBake } from './bake-guidance';
 import { bakeGuidance, parseBakeCondition, parseBakeSpecification } from './bake-guidance';
@@ -27,12 +29,12 @@ const add = (out: Sink, severity: Severity, code: string, path: string, message:
 const NAMED = 'name the specification on the order so it prints on the traveller and the plating purchase order';
 
 /** An error once ASTM B850 calls the strength high enough to matter; below that, a note. */
-function checkMissing(all: readonly BakeStatement[], tensile: number, path: string, out: Sink): void {
+function checkMissing(all: readonly BakeStatement[], strength: string, path: string, out: Sink): void {
   const b850 = all.find((s) => s.spec === 'astm-b850');
   const requiring = all.filter((s) => s.spec !== 'spring-maker-practice' && s.status === 'bake');
   const severity: Severity = b850?.status === 'no-bake' ? 'note' : 'error';
   add(out, severity, 'bake-spec-missing', path,
-    `electroplated steel of ${tensile.toFixed(0)} MPa and no hydrogen-relief bake specification named` +
+    `electroplated steel of ${strength} and no hydrogen-relief bake specification named` +
     (requiring.length > 0 ? `; ${requiring.map((s) => s.title).join(', ')} call for a bake at this strength` : ''),
     `${NAMED} (one of ${KNOWN})`);
 }
@@ -52,8 +54,9 @@ function checkStatus(s: BakeStatement, path: string, out: Sink): void {
 }
 
 /** `at` names the field of each planned figure; a bake written in the specification's text is that one field. */
-function checkPlan(s: BakeStatement, plan: PlannedBake, at: (figure: string) => string, out: Sink): void {
+function checkPlan(s: BakeStatement, plan: PlannedBake, at: (figure: string) => string, units: UnitSystem, out: Sink): void {
   if (s.status !== 'bake') return;
+  const temp = (c: number) => (units === 'metric' ? `${Math.round(c)} °C` : formatQuantity(c, 'temperature', units));
   if (s.hours && plan.hours < s.hours.min) {
     add(out, 'error', 'bake-too-short', at('hours'),
       `${plan.hours} h planned; ${s.title} requires at least ${s.hours.min} h here`, `bake for ${s.hours.min} h or more`);
@@ -61,10 +64,10 @@ function checkPlan(s: BakeStatement, plan: PlannedBake, at: (figure: string) => 
   const range = s.temperatureC;
   if (range && plan.temperatureC < range.min) {
     add(out, 'error', 'bake-temperature-low', at('temperatureC'),
-      `${plan.temperatureC} °C planned; ${s.title} names ${range.min.toFixed(0)}–${range.max.toFixed(0)} °C`, 'raise the oven setting');
+      `${temp(plan.temperatureC)} planned; ${s.title} names ${temp(range.min)}–${temp(range.max)}`, 'raise the oven setting');
   } else if (range && plan.temperatureC > range.max) {
     add(out, 'warning', 'bake-temperature-high', at('temperatureC'),
-      `${plan.temperatureC} °C planned; ${s.title} names ${range.min.toFixed(0)}–${range.max.toFixed(0)} °C`,
+      `${temp(plan.temperatureC)} planned; ${s.title} names ${temp(range.min)}–${temp(range.max)}`,
       'lower the oven setting, or confirm the coating and the spring temper tolerate it');
   }
   const late = s.startWithinHours !== null && plan.startWithinHours !== undefined && plan.startWithinHours > s.startWithinHours;
@@ -88,7 +91,8 @@ export function checkBakeSpecification(named: string | null | undefined, tensile
     return out;
   }
   if (named === null || named === undefined || named.trim() === '') {
-    checkMissing(guidance.value, tensileStrength, path, out);
+    const units = options.units ?? 'metric';
+    checkMissing(guidance.value, units === 'metric' ? `${tensileStrength.toFixed(0)} MPa` : formatQuantity(tensileStrength, 'stress', units), path, out);
     return out;
   }
   const id = parseBakeSpecification(named);
@@ -101,7 +105,8 @@ export function checkBakeSpecification(named: string | null | undefined, tensile
   checkStatus(s, path, out);
   const written = parseBakeCondition(named);
   const planPath = options.planPath ?? 'bake';
-  if (options.planned) checkPlan(s, options.planned, (f) => `${planPath}.${f}`, out);
-  else if (written) checkPlan(s, written, () => path, out);
+  const units = options.units ?? 'metric';
+  if (options.planned) checkPlan(s, options.planned, (f) => `${planPath}.${f}`, units, out);
+  else if (written) checkPlan(s, written, () => path, units, out);
   return out;
 }

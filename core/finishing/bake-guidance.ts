@@ -6,6 +6,7 @@ import type { BakeStatement } from './bake-rules';
 import { ams2759_9, b850, f1941, iso4042Rule, makerPractice, uscar5 } from './bake-rules';
 import type { BakeSpecId } from './bake-specs';
 import { toInternal } from '../units';
+import type { UnitSystem } from '../units';
 
 /** A bake as planned or written on the order. */
 export interface PlannedBake {
@@ -18,6 +19,8 @@ export interface PlannedBake {
 export interface BakeOptions {
   /** A measured or specified maximum hardness; used instead of the approximate conversion. */
   hardnessHv?: number;
+  /** The job's unit system: strengths in the texts are written in it (MPa or psi). */
+  units?: UnitSystem;
 }
 
 function checkInputs(tensileStrength: number, options: BakeOptions): FieldError[] {
@@ -37,7 +40,7 @@ export function bakeGuidance(tensileStrength: number, options: BakeOptions = {})
   const errors = checkInputs(tensileStrength, options);
   if (errors.length > 0) return fail(errors);
   const h = options.hardnessHv === undefined ? hardnessFromTensile(tensileStrength) : hardnessFromHv(options.hardnessHv);
-  const specs = [b850(tensileStrength), iso4042Rule(h), uscar5(h), f1941(h), ams2759_9()];
+  const specs = [b850(tensileStrength, options.units), iso4042Rule(h), uscar5(h), f1941(h), ams2759_9()];
   return ok([...specs, makerPractice(specs)]);
 }
 

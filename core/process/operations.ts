@@ -5,6 +5,7 @@ import type { WorkCentreOffer } from './work-centre';
 import { capableMachines, machinePiecesPerHour } from './work-centre';
 import { bakeGuidance, parseBakeCondition, parseBakeSpecification } from '../finishing/bake';
 import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 
 /** Operations every kind of spring shares: stress relief, peening, finishing and bake, inspection, packing. */
 /** Job-level choices the routing depends on (from the spec's order fields). */
@@ -79,7 +80,7 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   finish.notes.push('stress relieve before plating; hydrogen embrittlement risk on high-strength wire');
   const bake: Draft = {
     kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: !f.inHouse,
-    settings: [{ label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification) }],
+    settings: [{ label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification, x.units) }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0,
     notes: ['start the bake within the specification\'s window after plating'],
   };
@@ -87,12 +88,12 @@ export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
 }
 
 /** The bake as the order writes it, else what the named specification says for this wire's strength. */
-export function bakeInstruction(tensileStrength: number, named: string | null): string {
+export function bakeInstruction(tensileStrength: number, named: string | null, units: UnitSystem = 'metric'): string {
   if (named === null) return 'NOT NAMED: hold the lot until the customer names the specification';
   const text = named.trim();
   if (parseBakeCondition(text)) return text;
   const id = parseBakeSpecification(text);
-  const guidance = bakeGuidance(tensileStrength);
+  const guidance = bakeGuidance(tensileStrength, { units });
   const says = id && guidance.ok ? guidance.value.find((g) => g.spec === id)?.says : undefined;
   return says ? `${text}: ${says}` : `as ${text} requires`;
 }

@@ -35,6 +35,11 @@ describe('an inch job shows no millimetres', () => {
     const metric = planInSpecUnits(planManufacture(specOf({ ...valveSpec, finish: 'zinc' }), settings, 2000));
     expect(metricWords(texts(metric.operations)).length).toBeGreaterThan(0);
     expect(metricWords([...texts(shown.operations), ...texts(shown.findings), ...texts(shown.inspection.characteristics)])).toEqual([]);
+    // The B850 chart is in MPa; an inch job reads the wire's strength and the chart's edge in psi:
+    // 1800 MPa / 6.894757 kPa per psi (NIST SP 811 B.8) = 261,068 psi.
+    const bake = shown.findings.find((f) => f.code === 'bake-spec-not-covered');
+    expect(bake?.message).toMatch(/\d psi is beyond the partial table \(up to 261068 psi\)/);
+    expect(texts(shown.findings).filter((t) => /MPa/.test(t))).toEqual([]);
   });
 
   it('in the cost: every line\'s basis and every gap', () => {

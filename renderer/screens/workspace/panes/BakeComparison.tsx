@@ -12,7 +12,7 @@ import { toInternal } from '../../../../core/units';
 export function BakeComparison({ plan, spec, finishes }: { plan: ManufacturingPlan; spec: Spec; finishes: readonly Finish[] }) {
   const { finish, bakeSpecification } = effectiveFinish(spec, finishes);
   if (!finish?.electroplated) return null;
-  const guidance = bakeGuidance(toInternal(plan.material.tensileStrength, 'stress', plan.units));
+  const guidance = bakeGuidance(toInternal(plan.material.tensileStrength, 'stress', plan.units), { units: plan.units });
   if (!guidance.ok) return null;
   const named = bakeSpecification === null ? null : parseBakeSpecification(bakeSpecification);
   return (
