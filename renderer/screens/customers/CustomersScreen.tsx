@@ -80,9 +80,9 @@ function CustomerForm({ initial, onSaved, onClose }: { initial: Draft; onSaved(s
   const form = useRef<FormHandle | null>(null);
   const local = useMemo(() => {
     const r = parseWith(customerInputSchema, inputOf(draft));
-    return r.ok ? [] : r.errors.map(friendlyError);
+    return r.ok ? [] : r.errors.map((e) => friendlyError(e));
   }, [draft]);
-  const errors = useMemo(() => [...local, ...(serverError ? (serverError.details ?? [serverError]).map(friendlyError) : [])], [local, serverError]);
+  const errors = useMemo(() => [...local, ...(serverError ? (serverError.details ?? [serverError]).map((e) => friendlyError(e)) : [])], [local, serverError]);
   const set = (patch: Partial<Draft>) => { setDraft((d) => ({ ...d, ...patch })); setServerError(null); setStatus(''); };
   const save = async () => {
     if (local.length > 0) { form.current?.revealAll(); form.current?.focus(local[0]!.path); return; }
