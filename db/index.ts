@@ -12,7 +12,7 @@ export { createJob, updateJob, setJobStatus, restoreRevision, keepWorkingRevisio
 export { getJob, jobRevisions } from './jobs/read';
 export { copyJob, archiveJob } from './jobs/lineage';
 export { deleteJob, undoDeleteJob } from './jobs/delete';
-export { listCustomers } from './jobs/customers';
+export { getCustomer, listCustomers, saveCustomer } from './jobs/customers';
 export { listJobs } from './search/list';
 export { findJobs } from './search/text';
 export { similarJobs } from './search/similar';

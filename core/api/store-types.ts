@@ -8,8 +8,14 @@ import type { JobJudgement } from '../quoting/judgement';
 export interface Customer {
   id: number;
   name: string;
+  /** The person quotes are addressed to. */
+  contact: string;
   email: string;
   phone: string;
+  /** Postal address, one printed line each. */
+  addressLines: string[];
+  /** Payment terms agreed with this customer; '' prints the shop's default. */
+  paymentTerms: string;
 }
 
 export interface JobShape {

@@ -29,6 +29,7 @@ export const storeMethods = {
   deleteJob: method<typeof s.jobIdSchema, t.DeletedJob>(s.jobIdSchema),
   undoDeleteJob: method<typeof s.jobIdSchema, t.Job>(s.jobIdSchema),
   listCustomers: method<typeof none, t.Customer[]>(none),
+  saveCustomer: method<typeof s.customerInputSchema, t.Customer>(s.customerInputSchema),
   getSettings: method<typeof none, Settings>(none),
   saveSettings: method<typeof s.saveSettingsSchema, Settings>(s.saveSettingsSchema),
   issueQuote: method<typeof s.issueQuoteSchema, t.Quote>(s.issueQuoteSchema),

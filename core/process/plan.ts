@@ -57,7 +57,7 @@ function routingChoices(spec: Spec, settings: Settings, findings: Finding[], ten
     findings.push({ code: 'unknown-finish', severity: 'error', path: 'finish',
       message: `finish "${finishId}" is not in the shop's finishes`, fix: 'choose one from Settings → Finishes, or "none"' });
   }
-  if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength));
+  if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength, { units: spec.units }));
   const peened = spec.duty.type === 'cyclic' && spec.duty.peened;
   return {
     directionOfWind: spec.kind === 'torsion' ? spec.windDirection : spec.directionOfWind ?? 'either',

@@ -156,6 +156,12 @@ const freeParameterWords: Record<FreeParameter, string> = {
   wireDiameter: 'wire diameter', diameter: 'coil diameter', coils: 'coils', freeLength: 'free length',
 };
 
+/** What the drawing holds fixed: every parameter not left to the maker, in the trade's order. */
+function fixedWords(free: ReadonlySet<FreeParameter>): string {
+  const fixed = (Object.keys(freeParameterWords) as FreeParameter[]).filter((p) => !free.has(p)).map((p) => freeParameterWords[p]);
+  return fixed.length <= 1 ? fixed.join('') : `${fixed.slice(0, -1).join(', ')} and ${fixed.at(-1)}`;
+}
+
 function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
   if (forced.length === 0) return;
@@ -166,14 +172,14 @@ function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const missing = needed.filter((p) => !free.has(p));
   if (missing.length === 0) return;
   add(out, 'warning', 'over-determined', `loads[${forced[0]!.i}].force`,
-    `the drawing fixes wire, coil diameter, coils and free length and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
+    `the drawing fixes ${fixedWords(free)} and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
     `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m]).join(' and ')} (free parameters), or accept a wider load tolerance`);
 }
 
 function reviewManufacture(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   if (endForms[x.ends].ground && x.d < lim.minimumGroundWire) {
     add(out, 'warning', 'grinding-fine-wire', 'ends',
-      `wire under ${lim.minimumGroundWire} mm is normally not ground`, 'specify closed ends, not ground');
+      `wire under ${formatQuantity(lim.minimumGroundWire, 'length', x.units)} is normally not ground`, 'specify closed ends, not ground');
   }
   if (r.activeCoils < lim.minimumActiveCoils) {
     add(out, 'note', 'few-active-coils', x.coilsGiven === 'active' ? 'activeCoils' : 'totalCoils',

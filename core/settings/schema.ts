@@ -100,6 +100,8 @@ export const finishSchema = z.object({
   pricePerPiece: money.optional(),
   lotMinimum: money.default(0),
   electroplated: z.boolean().default(false),
+  /** Done in the shop (light oil, for one): no vendor, not routed as outside processing. */
+  inHouse: z.boolean().default(false),
   bakeSpecification: text(120).optional(),
 }).strict();
 
@@ -180,6 +182,22 @@ export const costingSchema = z.object({
   breakFactors: z.array(z.number().finite().positive().max(1000)).min(1).max(8).default([0.5, 1, 2, 5]),
 }).strict();
 
+/**
+ * What a quotation states besides prices, as the shop usually offers it (demo defaults); the estimator may
+ * change each one on a quote, and a customer's own payment terms replace the shop's.
+ */
+export const quoteTermsSchema = z.object({
+  paymentTerms: text(200).default('30 days net from the date of invoice'),
+  deliveryTerms: text(200).default('Ex works (EXW), Incoterms 2020; freight charged at cost'),
+  packaging: text(200).default('Bulk in cardboard cartons, parts counted by weight'),
+  certificates: z.array(text(200)).max(6).default(['Certificate of conformance with each delivery']),
+  /** The estimator who signs quotes unless a quote names another. */
+  estimator: text(120).default(''),
+  /** Prints the unit price against quantity under the price table (it is always on the cost screen). */
+  priceCurveOnQuote: z.boolean().default(false),
+}).strict();
+export type QuoteTerms = z.infer<typeof quoteTermsSchema>;
+
 /** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
 export const designStepsSchema = z.object({
   coilStep: z.number().finite().min(0.05).max(1).default(0.25),
@@ -212,6 +230,7 @@ export const settingsSchemas = {
   }),
   design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
   toleranceTables: toleranceTablesSchema.default(demoStoredShopTables() as StoredShopTables & ToleranceTablesSetting),
+  quoteTerms: quoteTermsSchema.default(quoteTermsSchema.parse({})),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();

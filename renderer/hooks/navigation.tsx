@@ -6,6 +6,7 @@ export type Route =
   | { screen: 'job'; id: number | null; key: string }
   | { screen: 'settings' }
   | { screen: 'data' }
+  | { screen: 'customers' }
   | { screen: 'design' }
   | { screen: 'requests' };
 

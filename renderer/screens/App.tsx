@@ -10,6 +10,7 @@ import { JobsScreen } from './jobs/JobsScreen';
 import { Workspace } from './workspace/Workspace';
 import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
+import { CustomersScreen } from './customers/CustomersScreen';
 import { DesignScreen } from './design/DesignScreen';
 import { RequestSheetScreen } from './requests/RequestSheetScreen';
 
@@ -92,6 +93,7 @@ function Shell() {
           {route.screen === 'job' ? <Workspace key={route.key} jobId={route.id} /> : null}
           {route.screen === 'settings' ? <SettingsScreen /> : null}
           {route.screen === 'data' ? <DataScreen /> : null}
+          {route.screen === 'customers' ? <CustomersScreen /> : null}
           {route.screen === 'design' ? <DesignScreen /> : null}
           {route.screen === 'requests' ? <RequestSheetScreen /> : null}
         </main>

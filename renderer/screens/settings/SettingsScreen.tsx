@@ -19,11 +19,13 @@ import { FinishesSection, MachinesSection } from './MachinesSection';
 import { DefaultsSection, NumberingSection, ProfileSection } from './ProfileSection';
 import { MaterialPricesSection, WireStockSection } from './StockSection';
 import { TolerancesSection } from './TolerancesSection';
+import { QuoteTermsSection } from './QuoteTermsSection';
 
 const sections = [
   ['settings-profile', 'Shop profile'], ['settings-defaults', 'Defaults'], ['settings-machines', 'Machines & rates'],
   ['settings-prices', 'Material prices'], ['settings-finishes', 'Finishes'], ['settings-stock', 'Wire stock'],
-  ['settings-tolerances', 'Tolerances'], ['settings-costing', 'Costing'], ['settings-design', 'Design search'], ['settings-numbering', 'Numbering'],
+  ['settings-tolerances', 'Tolerances'], ['settings-costing', 'Costing'], ['settings-quote-terms', 'Quote terms'], ['settings-design', 'Design search'],
+  ['settings-numbering', 'Numbering'],
 ] as const;
 
 /** Every path in the draft, so each error finds the field it belongs to. */
@@ -118,6 +120,7 @@ function SettingsEditor({ saved }: { saved: Settings }) {
                 <WireStockSection />
                 <TolerancesSection />
                 <CostingSection />
+                <QuoteTermsSection />
                 <DesignStepsSection />
                 <NumberingSection />
               </form>

@@ -1,3 +1,5 @@
+import { kindTerms } from '../../../../core/vocabulary';
+import { BakeComparison } from './BakeComparison';
 import { useState } from 'react';
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Spec } from '../../../../core/spec';
@@ -71,12 +73,13 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
         <div><dt>Start quantity</dt><dd>{plan.lotWire.startQuantity} pcs for {plan.orderQuantity} good</dd></div>
         <div><dt>Wire for the lot</dt><dd>{lot.length}, {lot.mass}</dd></div>
         <div><dt>Wire stock</dt><dd className={`stock stock--${plan.lotWire.stock.status}`} data-stock={plan.lotWire.stock.status}>{plan.lotWire.stock.text}</dd></div>
-        <div><dt>Tolerance grade</dt><dd>{plan.toleranceGrade}</dd></div>
+        <div><dt>{kindTerms[plan.kind].toleranceGrade}</dt><dd>{plan.toleranceGrade}</dd></div>
       </dl>
       <div className="cautions cautions--grid">
         {notes.map((n) => <Caution key={n} title={floorTitle(n)}>{n}</Caution>)}
       </div>
       <Operations plan={plan} />
+      <BakeComparison plan={plan} spec={spec} finishes={settings?.finishes ?? []} />
       <SetCalibrationPanel spec={spec} />
       <Inspection plan={plan} />
       {plan.findings.length > 0 ? <Findings findings={plan.findings} onGo={onGo} title="Planning findings" /> : null}
