@@ -10,8 +10,9 @@ import { cliSuite } from './suites/cli';
 import { crashSuite } from './suites/crash';
 import { designSuite } from './suites/design';
 import { fuzzSuite } from './suites/fuzz';
+import { requestSheetSuite } from './suites/request-sheet';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite, quotingSuite, requestSheetSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];

@@ -34,3 +34,6 @@ export { recordFirstOff, listFirstOff } from './first-off/records';
 export { setCalibration } from './first-off/calibration';
 export { adoptDesign, jobRequirement } from './jobs/requirements';
 export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';
+export { createEnquiry, listEnquiries, enquiryJobs } from './enquiries/enquiries';
+export type { NewEnquiry } from './enquiries/enquiries';
+export { savedRequestMapping } from './enquiries/mappings';

@@ -4,14 +4,16 @@
  */
 import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session, shell } from 'electron';
 import { existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
 import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
-import { createService } from '../service/api';
+import { createService, dispatch } from '../service/api';
 import type { Service } from '../service/api';
 import { createDataActions } from './shell/data-actions';
 import { registerDataActionIpc } from './shell/data-ipc';
+import { registerRequestSheetIpc } from './shell/request-sheet-ipc';
 import { offerRestoreOfDamagedStore } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
@@ -98,6 +100,11 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   registerDataActionIpc(ipcMain, data, { onUnexpected: (context, e) => faults.report(context, e) });
+  registerRequestSheetIpc(ipcMain, {
+    openFile: electronDialogs(liveMainWindow).openFile,
+    readFile: (file) => readFile(file),
+    read: (input) => dispatch(service.handlers, 'readRequestSheet', input),
+  }, { onUnexpected: (context, e) => faults.report(context, e) });
 }
 
 /** The PDF writer's fonts: shipped as resources when packaged, assets/fonts of the project otherwise. */

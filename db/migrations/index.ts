@@ -10,6 +10,7 @@ import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 import { updateToVersion0011 } from './0011-customer-details';
+import { updateToVersion0012 } from './0012-enquiries';
 import { updateToVersion0013 } from './0013-working-revisions';
 import { updateToVersion0014 } from './0014-job-lineage-and-archive';
 
@@ -31,6 +32,7 @@ export const migrations: readonly Migration[] = [
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
   { version: 11, name: 'customer details', update: updateToVersion0011 },
+  { version: 12, name: 'enquiries', update: updateToVersion0012 },
   { version: 13, name: 'working revisions', update: updateToVersion0013 },
   { version: 14, name: 'job lineage, archive and spring words', update: updateToVersion0014 },
 ];

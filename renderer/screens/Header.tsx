@@ -35,6 +35,9 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
         <button type="button" className="topbar__link" aria-current={current('design')} onClick={() => nav.go({ screen: 'design' })}>
           Design from requirement
         </button>
+        <button type="button" className="topbar__link" aria-current={current('requests')} onClick={() => nav.go({ screen: 'requests' })}>
+          Request sheets
+        </button>
         <button type="button" className="topbar__link" aria-current={current('data')} onClick={() => nav.go({ screen: 'data' })}>
           Data &amp; backups <kbd>Alt+4</kbd>
         </button>

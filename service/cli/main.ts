@@ -17,6 +17,7 @@ const commands: Record<string, () => Promise<Command>> = {
   print: async () => (await import('./print-commands')).printCommand,
   design: async () => (await import('./design-commands')).designCommand,
   'first-off': async () => (await import('./first-off-commands')).firstOffCommand,
+  'import-request': async () => (await import('./request-commands')).importRequestCommand,
 };
 
 async function usage(): Promise<string> {

@@ -31,6 +31,8 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the renderer reaching db/', 'renderer/model/fence-probe.ts', "import { openStore } from '../../db'; export const x = openStore;"],
   ['the renderer reaching the service', 'renderer/model/fence-probe.ts', "import { dispatch } from '../../service/api'; export const x = dispatch;"],
   ['the renderer importing Node', 'renderer/model/fence-probe.ts', "import os from 'node:os'; export const x = os;"],
+  ['core/ importing the spreadsheet reader', 'core/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; export const x = ExcelJS;"],
+  ['the renderer importing the CSV reader', 'renderer/model/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
   ['the renderer importing Electron', 'renderer/api/fence-probe.ts', "import { ipcRenderer } from 'electron'; export const x = ipcRenderer;"],
 ];
 
@@ -39,6 +41,7 @@ const allowed: Array<[room: string, file: string, code: string]> = [
   ['db/ importing better-sqlite3 and core', 'db/jobs/fence-probe.ts', "import Database from 'better-sqlite3'; import { parseSpec } from '../../core/spec'; export const x = [Database, parseSpec];"],
   ['the PDF writers importing pdfkit', 'service/pdf/fence-probe.ts', "import PDFDocument from 'pdfkit'; export const x = PDFDocument;"],
   ['the CLI importing db/ and the PDF writers', 'service/cli/fence-probe.ts', "import { openStore } from '../../db'; import { renderQuote } from '../pdf'; export const x = [openStore, renderQuote];"],
+  ['the request-sheet reader importing exceljs and csv-parse', 'service/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; import { parse } from 'csv-parse/sync'; export const x = [ExcelJS, parse];"],
   ['the shell importing Electron and the service', 'electron/shell/fence-probe.ts', "import { app } from 'electron'; import { dispatch } from '../../service/api'; export const x = [app, dispatch];"],
   ['the binding shim importing better-sqlite3', 'electron/shell/sqlite-electron.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the renderer importing React, core and its own files', 'renderer/model/fence-probe.ts', "import { useState } from 'react'; import { parseSpec } from '../../core/spec'; import { x as http } from '../api/http'; export const x = [useState, parseSpec, http];"],
