@@ -22,10 +22,12 @@ export interface RequestFieldEntry {
   headers: readonly string[];
   /** Exact single-letter headers, case kept (d ≠ D). */
   symbols?: readonly string[];
+  /** Header words that name the field only when no column names it better ("Item" is often a line number). */
+  weak?: readonly string[];
 }
 
 export const requestFieldTable: Record<RequestField, RequestFieldEntry> = {
-  partNumber: { label: 'Part number', headers: ['part number', 'part no', 'part', 'pn', 'p n', 'item', 'item no', 'customer part', 'part ref', 'part id'] },
+  partNumber: { label: 'Part number', headers: ['part number', 'part no', 'part', 'pn', 'p n', 'item', 'item no', 'customer part', 'part ref', 'part id'], weak: ['item', 'item no'] },
   drawingNumber: { label: 'Drawing number', headers: ['drawing', 'drawing number', 'drawing no', 'dwg', 'dwg no', 'drg', 'drg no'] },
   drawingRevision: { label: 'Drawing revision', headers: ['rev', 'revision', 'drawing rev', 'dwg rev', 'issue'] },
   kind: { label: 'Kind', headers: ['kind', 'type', 'spring type', 'spring kind', 'style'] },

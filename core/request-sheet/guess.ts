@@ -1,47 +1,67 @@
 /** Proposes which column of a request sheet holds which field, from its header, and finds the header row. */
 import type { RequestField } from './fields';
 import { normaliseHeader, requestFieldTable, requestFields } from './fields';
+import type { DecimalMark } from '../typed-number';
 
 export type ColumnField = RequestField | 'ignore';
 
 /** The bare header with bracketed units gone, case kept: "D (mm)" → "D". */
 const bareSymbol = (header: string): string => header.replace(/\([^)]*\)|\[[^\]]*\]/g, '').replace(/[.:]/g, '').trim();
 
-function exactField(header: string): RequestField | null {
-  const symbol = bareSymbol(header);
-  for (const field of requestFields) {
-    if (requestFieldTable[field].symbols?.includes(symbol)) return field;
-  }
+/** How well a header names a field: lower is better; null when it does not name it. */
+function headerScore(header: string, field: RequestField): number | null {
+  const entry = requestFieldTable[field];
+  if (entry.symbols?.includes(bareSymbol(header))) return 1;
   const key = normaliseHeader(header);
   if (key === '') return null;
-  for (const field of requestFields) {
-    if (requestFieldTable[field].headers.includes(key)) return field;
-  }
-  return null;
+  if (entry.headers.includes(key)) return entry.weak?.includes(key) ? 2 : 1;
+  const padded = ` ${key} `;
+  const contained = entry.headers.filter((p) => p.length >= 3 && padded.includes(` ${p} `)).map((p) => p.length);
+  return contained.length > 0 ? 1000 - Math.max(...contained) : null;
 }
 
-/** The field whose longest header phrase appears as whole words in the header ("spring free length" → freeLength). */
-function containedField(header: string): RequestField | null {
-  const key = ` ${normaliseHeader(header)} `;
-  let best: { field: RequestField; length: number } | null = null;
-  for (const field of requestFields) {
-    for (const phrase of requestFieldTable[field].headers) {
-      if (phrase.length < 3 || !key.includes(` ${phrase} `)) continue;
-      if (!best || phrase.length > best.length) best = { field, length: phrase.length };
+/**
+ * One field per header, each field to the column that names it best: a symbol or a whole header word over a
+ * weak word ("Part No." over "Item" for the part number) over a phrase inside a longer header. Equal names go
+ * to the earlier column; a column whose field went elsewhere is ignored.
+ */
+export function guessColumns(headers: readonly string[]): ColumnField[] {
+  const claims: { column: number; field: RequestField; score: number }[] = [];
+  headers.forEach((header, column) => {
+    for (const field of requestFields) {
+      const score = headerScore(header, field);
+      if (score !== null) claims.push({ column, field, score });
+    }
+  });
+  claims.sort((a, b) => a.score - b.score || a.column - b.column);
+  const out: ColumnField[] = headers.map(() => 'ignore');
+  const taken = new Set<RequestField>();
+  for (const c of claims) {
+    if (out[c.column] !== 'ignore' || taken.has(c.field)) continue;
+    out[c.column] = c.field;
+    taken.add(c.field);
+  }
+  return out;
+}
+
+/**
+ * The sheet's decimal mark, from the cells that can only be read one way: "1,6" or "8,25" (a comma before one,
+ * two or four or more digits) are decimal commas; "1.6" likewise decimal points. "1,600" says nothing. The
+ * more frequent wins; null when no cell tells.
+ */
+export function guessDecimalMark(rows: readonly (readonly unknown[])[]): DecimalMark | null {
+  let comma = 0;
+  let point = 0;
+  for (const row of rows) {
+    for (const cell of row) {
+      if (typeof cell !== 'string') continue;
+      const m = /^\s*-?\d+([.,])(\d+)(?!\d)/.exec(cell);
+      if (!m || m[2]!.length === 3) continue;
+      if (m[1] === ',') comma++;
+      else point++;
     }
   }
-  return best?.field ?? null;
-}
-
-/** One field per header; a field claimed by an earlier column leaves later ones ignored. */
-export function guessColumns(headers: readonly string[]): ColumnField[] {
-  const taken = new Set<RequestField>();
-  return headers.map((header) => {
-    const field = exactField(header) ?? containedField(header);
-    if (field === null || taken.has(field)) return 'ignore';
-    taken.add(field);
-    return field;
-  });
+  return comma === point ? null : comma > point ? ',' : '.';
 }
 
 const recognised = (row: readonly string[]): number => guessColumns(row).filter((f) => f !== 'ignore').length;

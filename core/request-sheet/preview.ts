@@ -8,7 +8,7 @@ import type { UnitSystem } from '../units';
 import type { DecimalMark } from '../typed-number';
 import { typedText } from '../typed-number';
 import { cellRef, parseCellRef } from './cells';
-import { findHeaderRow } from './guess';
+import { findHeaderRow, guessDecimalMark } from './guess';
 import type { ColumnMap, RequestMapping } from './mapping';
 import { mapColumns, mappingErrors } from './mapping';
 import { readRequestRow } from './row';
@@ -99,7 +99,8 @@ export function previewRequestSheet(sheet: RequestSheet, options: PreviewOptions
   const headerIndex = findHeaderRow(sheet.rows.slice(0, 12).map((r) => r.map(String)));
   const headerRow = headerIndex + 1;
   const headers = headerIndex < 0 ? [] : sheet.rows[headerIndex]!.map((h) => String(h).trim());
-  const fallback = { units: 'metric', decimalMark: options.decimalMark ?? '.' } as const;
+  const body = headerIndex < 0 ? [] : sheet.rows.slice(headerIndex + 1);
+  const fallback = { units: 'metric' as const, decimalMark: options.decimalMark ?? guessDecimalMark(body) ?? '.' };
   const mapping = mapColumns(headers, headerRow, options.given, options.saved, fallback);
   if (options.units) mapping.units = options.units;
   if (options.decimalMark) mapping.decimalMark = options.decimalMark;

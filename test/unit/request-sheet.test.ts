@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cellRef, columnLetter, findHeaderRow, guessColumns, parseCellRef, previewRequestSheet } from '../../core/request-sheet';
+import { cellRef, columnLetter, findHeaderRow, guessColumns, guessDecimalMark, parseCellRef, previewRequestSheet } from '../../core/request-sheet';
 import type { RequestSheet } from '../../core/request-sheet';
 
 const sheet = (rows: string[][]): RequestSheet => ({ name: 'demo.csv', rows });
@@ -27,6 +27,19 @@ describe('guessing columns from headers', () => {
   it('tells d (wire) from D (mean coil diameter), the EN 13906-1 symbols', () => {
     expect(guessColumns(['d (in)', 'D (in)', 'n', 'Free Length (in)', 'Spring Rate (lbf/in)', 'P/N'])).toEqual(
       ['wireDiameter', 'meanDiameter', 'activeCoils', 'freeLength', 'rate', 'partNumber']);
+  });
+  it('gives a field to the column that names it best, not the first that mentions it', () => {
+    expect(guessColumns(['Item', 'Part No.', 'Wire Ø (mm)', 'O.D.', 'Free len.'])).toEqual(
+      ['ignore', 'partNumber', 'wireDiameter', 'outerDiameter', 'freeLength']);
+    expect(guessColumns(['Item', 'Wire dia'])).toEqual(['partNumber', 'wireDiameter']);
+  });
+  it('reads the decimal mark from the cells that can only be read one way', () => {
+    expect(guessDecimalMark([['1,6', '12,5', '2 000'], ['2.0', '45,5', '500']])).toBe(',');
+    expect(guessDecimalMark([['1.6', '1,600'], ['0.375', 12]])).toBe('.');
+    expect(guessDecimalMark([['1,600', '2 000', 3]])).toBeNull();
+    const preview = previewRequestSheet(sheet([['d', 'OD', 'L0'], ['1,6', '12,5', '38']]));
+    expect(preview.mapping.decimalMark).toBe(',');
+    expect(preview.rows[0]?.errors.filter((e) => e.code === 'bad-grouping')).toEqual([]);
   });
   it('finds the header row below a title block', () => {
     expect(findHeaderRow([['Enquiry 4471'], ['', ''], HEADERS, GOOD])).toBe(2);
