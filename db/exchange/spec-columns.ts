@@ -1,0 +1,105 @@
+import type { z } from 'zod';
+import { lengthDecimals, significant } from '../../core/format';
+import { kindEntryOf } from '../../core/kinds/registry';
+import { springKinds } from '../../core/spec';
+import type { SpringKind } from '../../core/spec';
+import type { Quantity, QuantityMap, UnitSystem } from '../../core/units';
+import { quantityAt, unitSymbol } from '../../core/units';
+
+/**
+ * The spec's fields as spreadsheet columns, one per field, named by the field's path as the app names it
+ * ("loads[0].length", "duty.between[1]"). The columns are the union of the three kinds' fields, from their
+ * schemas; list items get one column each up to the schema's limit. A list of words (free parameters) is
+ * one cell, its words separated by "; ".
+ */
+export interface SpecColumn {
+  path: string;
+  /** The quantity the field measures, from the kind's quantity map; undefined for words and flags. */
+  quantity: Quantity | undefined;
+}
+
+type Schema = z.ZodType & { _zod: { def: Record<string, unknown> } };
+
+/** The most items a list schema allows (its .max()), or undefined. */
+const maximumOf = (s: Schema): number | undefined => ((s._zod.def as { checks?: { _zod: { def: { check: string; maximum?: number } } }[] }).checks ?? [])
+  .map((c) => c._zod.def).find((d) => d.check === 'max_length')?.maximum;
+
+const unwrap = (s: Schema): Schema => {
+  const def = s._zod.def as { type: string; innerType?: Schema; in?: Schema };
+  if (def.innerType && ['optional', 'nullable', 'default', 'prefault', 'readonly', 'catch'].includes(def.type)) return unwrap(def.innerType);
+  if (def.type === 'pipe' && def.in) return unwrap(def.in);
+  return s;
+};
+
+/** The dotted paths of one schema's leaves, with list indices; `mapPath` is the path without indices. */
+function leaves(schema: Schema, path: string, mapPath: string, out: { path: string; mapPath: string }[]): void {
+  const s = unwrap(schema);
+  const def = s._zod.def as { type: string; shape?: Record<string, Schema>; element?: Schema; items?: Schema[]; options?: Schema[] };
+  const join = (a: string, b: string) => (a === '' ? b : `${a}.${b}`);
+  if (def.type === 'object' && def.shape) {
+    for (const [key, inner] of Object.entries(def.shape)) leaves(inner, join(path, key), join(mapPath, key), out);
+  } else if (def.type === 'union' && def.options) {
+    for (const option of def.options) leaves(option, path, mapPath, out);
+  } else if (def.type === 'tuple' && def.items) {
+    def.items.forEach((item, i) => leaves(item, `${path}[${i}]`, mapPath, out));
+  } else if (def.type === 'array' && def.element) {
+    const element = unwrap(def.element);
+    const limit = maximumOf(s);
+    if ((element._zod.def as { type: string }).type === 'object' && typeof limit === 'number') {
+      for (let i = 0; i < limit; i++) leaves(element, `${path}[${i}]`, mapPath, out);
+    } else out.push({ path, mapPath });
+  } else out.push({ path, mapPath });
+}
+
+function columnsOfKind(kind: SpringKind): SpecColumn[] {
+  const schema = kindEntryOf(kind).schema as unknown as Schema;
+  const found: { path: string; mapPath: string }[] = [];
+  leaves(schema, '', '', found);
+  const map: QuantityMap = kindEntryOf(kind).specQuantities;
+  return found.filter((f) => !['kind', 'units', 'version', 'material'].includes(f.path))
+    .map((f) => ({ path: f.path, quantity: quantityAt(map, f.mapPath) }));
+}
+
+/** The union of every kind's spec columns, in the order they first appear. */
+export const specColumns: readonly SpecColumn[] = (() => {
+  const seen = new Map<string, SpecColumn>();
+  for (const kind of springKinds) {
+    for (const column of columnsOfKind(kind)) if (!seen.has(column.path)) seen.set(column.path, column);
+  }
+  return [...seen.values()];
+})();
+
+/** The header of a spec column: its path and the unit in each system ("freeLength (mm | in)"). */
+export function specColumnHeader(column: SpecColumn): string {
+  if (column.quantity === undefined) return column.path;
+  const [metric, inch] = (['metric', 'inch'] as const).map((u) => unitSymbol(column.quantity!, u));
+  if (metric === '' && inch === '') return column.path;
+  return metric === inch ? `${column.path} (${metric})` : `${column.path} (${metric} | ${inch})`;
+}
+
+/** A number in the job's own units as the trade reads it: lengths to 0.01 mm / 0.001 in, counts as typed, others to 3 digits. */
+export function tradeNumber(value: number, quantity: Quantity | undefined, units: UnitSystem): string {
+  if (quantity === 'length') return value.toFixed(lengthDecimals[units]);
+  if (quantity === undefined || quantity === 'count' || quantity === 'ordinal') return String(value);
+  return significant(value);
+}
+
+function valueAt(spec: unknown, path: string): unknown {
+  let at: unknown = spec;
+  for (const key of path.split(/\.|\[(\d+)\]/).filter((k) => k !== undefined && k !== '')) {
+    if (at === null || typeof at !== 'object') return undefined;
+    at = (at as Record<string, unknown>)[key];
+  }
+  return at;
+}
+
+/** The cells of a spec (as stored, in its own units) under the spec columns. */
+export function specCells(spec: unknown, units: UnitSystem): unknown[] {
+  return specColumns.map((column) => {
+    const v = valueAt(spec, column.path);
+    if (typeof v === 'number') return tradeNumber(v, column.quantity, units);
+    if (Array.isArray(v)) return v.map((item) => (typeof item === 'number' ? tradeNumber(item, column.quantity, units) : String(item))).join('; ');
+    if (v === undefined || v === null) return '';
+    return typeof v === 'object' ? JSON.stringify(v) : v;
+  });
+}
