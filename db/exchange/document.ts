@@ -8,7 +8,7 @@ import type { Quantity } from '../../core/units';
 import { unitSymbol } from '../../core/units';
 import type { FirstOffExport } from './first-off';
 import { importedFirstOffSchema } from './first-off';
-import { specColumnHeader, specColumns } from './spec-columns';
+import { specColumnHeader, specColumns } from '../../core/spec/columns';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
 export const EXCHANGE_VERSION = 1;

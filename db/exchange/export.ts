@@ -22,7 +22,7 @@ import type { FirstOffExport } from './first-off';
 import { firstOffByJob } from './first-off';
 import type { LongRun, TextSink } from '../long-run';
 import { cancelled, fileSink, yieldToEvents } from '../long-run';
-import { specCells, tradeNumber } from './spec-columns';
+import { specCells, tradeNumber } from '../../core/spec/columns';
 
 type ExportRow = JobRow & { customer_email: string | null; customer_phone: string | null };
 

@@ -31,12 +31,16 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the renderer reaching db/', 'renderer/model/fence-probe.ts', "import { openStore } from '../../db'; export const x = openStore;"],
   ['the renderer reaching the service', 'renderer/model/fence-probe.ts', "import { dispatch } from '../../service/api'; export const x = dispatch;"],
   ['the renderer importing Node', 'renderer/model/fence-probe.ts', "import os from 'node:os'; export const x = os;"],
+  ['the web transport importing csv-parse', 'service/web/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
+  ['the renderer importing csv-stringify', 'renderer/model/fence-probe.ts', "import { stringify } from 'csv-stringify/sync'; export const x = stringify;"],
   ['the renderer importing Electron', 'renderer/api/fence-probe.ts', "import { ipcRenderer } from 'electron'; export const x = ipcRenderer;"],
 ];
 
 const allowed: Array<[room: string, file: string, code: string]> = [
   ['core/ importing zod and itself', 'core/spec/fence-probe.ts', "import { z } from 'zod'; import { calculate } from '../calculate'; export const x = [z, calculate];"],
   ['db/ importing better-sqlite3 and core', 'db/jobs/fence-probe.ts', "import Database from 'better-sqlite3'; import { parseSpec } from '../../core/spec'; export const x = [Database, parseSpec];"],
+  ['db/ importing csv-parse and csv-stringify', 'db/exchange/fence-probe.ts', "import { parse } from 'csv-parse'; import { stringify } from 'csv-stringify/sync'; export const x = [parse, stringify];"],
+  ['the CLI importing csv-parse', 'service/cli/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
   ['the PDF writers importing pdfkit', 'service/pdf/fence-probe.ts', "import PDFDocument from 'pdfkit'; export const x = PDFDocument;"],
   ['the CLI importing db/ and the PDF writers', 'service/cli/fence-probe.ts', "import { openStore } from '../../db'; import { renderQuote } from '../pdf'; export const x = [openStore, renderQuote];"],
   ['the shell importing Electron and the service', 'electron/shell/fence-probe.ts', "import { app } from 'electron'; import { dispatch } from '../../service/api'; export const x = [app, dispatch];"],

@@ -43,7 +43,9 @@ describe('the CSV job list for people', () => {
     expect(cells.partNumber).toBe("'=SUM(A1:A9)");
     expect(cells.notes).toBe("'+1 from the customer (demo)");
     // The rate in lbf/in to three significant digits, as the engine's own report gives it in the job's units.
-    const report = value(calculate(inchJob.spec));
+    const calculated = calculate(inchJob.spec);
+    if (!calculated.ok) throw new Error(JSON.stringify(calculated.errors));
+    const report = calculated.value as { rate: number };
     const rate = cells[Object.keys(cells).find((k) => k.startsWith('rate ('))!]!;
     expect(rate).toMatch(/^\d+(\.\d+)?$/);
     expect(rate.replace('.', '').replace(/^0+/, '').length).toBeLessThanOrEqual(3);

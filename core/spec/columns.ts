@@ -1,10 +1,10 @@
 import type { z } from 'zod';
-import { lengthDecimals, significant } from '../../core/format';
-import { kindEntryOf } from '../../core/kinds/registry';
-import { springKinds } from '../../core/spec';
-import type { SpringKind } from '../../core/spec';
-import type { Quantity, QuantityMap, UnitSystem } from '../../core/units';
-import { quantityAt, unitSymbol } from '../../core/units';
+import { lengthDecimals, significant } from '../format';
+import { kindEntryOf } from '../kinds/registry';
+import { springKinds } from './index';
+import type { SpringKind } from './index';
+import type { Quantity, QuantityMap, UnitSystem } from '../units';
+import { quantityAt, unitSymbol } from '../units';
 
 /**
  * The spec's fields as spreadsheet columns, one per field, named by the field's path as the app names it
@@ -16,6 +16,8 @@ export interface SpecColumn {
   path: string;
   /** The quantity the field measures, from the kind's quantity map; undefined for words and flags. */
   quantity: Quantity | undefined;
+  /** A list of plain values in one cell ("100; 500; 1000"). */
+  list: boolean;
 }
 
 type Schema = z.ZodType & { _zod: { def: Record<string, unknown> } };
@@ -32,7 +34,9 @@ const unwrap = (s: Schema): Schema => {
 };
 
 /** The dotted paths of one schema's leaves, with list indices; `mapPath` is the path without indices. */
-function leaves(schema: Schema, path: string, mapPath: string, out: { path: string; mapPath: string }[]): void {
+interface Leaf { path: string; mapPath: string; list: boolean }
+
+function leaves(schema: Schema, path: string, mapPath: string, out: Leaf[]): void {
   const s = unwrap(schema);
   const def = s._zod.def as { type: string; shape?: Record<string, Schema>; element?: Schema; items?: Schema[]; options?: Schema[] };
   const join = (a: string, b: string) => (a === '' ? b : `${a}.${b}`);
@@ -47,17 +51,17 @@ function leaves(schema: Schema, path: string, mapPath: string, out: { path: stri
     const limit = maximumOf(s);
     if ((element._zod.def as { type: string }).type === 'object' && typeof limit === 'number') {
       for (let i = 0; i < limit; i++) leaves(element, `${path}[${i}]`, mapPath, out);
-    } else out.push({ path, mapPath });
-  } else out.push({ path, mapPath });
+    } else out.push({ path, mapPath, list: true });
+  } else out.push({ path, mapPath, list: false });
 }
 
 function columnsOfKind(kind: SpringKind): SpecColumn[] {
   const schema = kindEntryOf(kind).schema as unknown as Schema;
-  const found: { path: string; mapPath: string }[] = [];
+  const found: Leaf[] = [];
   leaves(schema, '', '', found);
   const map: QuantityMap = kindEntryOf(kind).specQuantities;
   return found.filter((f) => !['kind', 'units', 'version', 'material'].includes(f.path))
-    .map((f) => ({ path: f.path, quantity: quantityAt(map, f.mapPath) }));
+    .map((f) => ({ path: f.path, quantity: quantityAt(map, f.mapPath), list: f.list }));
 }
 
 /** The union of every kind's spec columns, in the order they first appear. */
@@ -102,4 +106,50 @@ export function specCells(spec: unknown, units: UnitSystem): unknown[] {
     if (v === undefined || v === null) return '';
     return typeof v === 'object' ? JSON.stringify(v) : v;
   });
+}
+
+/** "spec.loads[0].length (mm | in)" or "loads[0].length": the field path a column header names. */
+export const pathOfHeader = (header: string): string => header.trim().replace(/^spec\./, '').replace(/\s*\(.*\)$/, '');
+
+const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+
+/** A cell as the value it stands for: numbers and true/false as such, other text as it is. */
+function cellValue(text: string): unknown {
+  const t = text.trim();
+  if (NUMBER.test(t)) return Number(t);
+  if (t === 'true' || t === 'false') return t === 'true';
+  return text;
+}
+
+function setAt(target: Record<string, unknown>, path: string, value: unknown): void {
+  const keys = path.split(/\.|\[(\d+)\]/).filter((k) => k !== undefined && k !== '');
+  let at: Record<string, unknown> = target;
+  keys.forEach((key, i) => {
+    if (i === keys.length - 1) {
+      at[key] = value;
+      return;
+    }
+    const nextIsIndex = /^\d+$/.test(keys[i + 1]!);
+    at[key] ??= nextIsIndex ? [] : {};
+    at = at[key] as Record<string, unknown>;
+  });
+}
+
+const listPaths = new Set(specColumns.filter((c) => c.list).map((c) => c.path));
+
+/**
+ * A spec from a row of cells under field-path headers (the headers of the CSV job list are accepted,
+ * units in brackets and all). Blank cells are left out; list fields split at ";". The spec's schema then
+ * names anything that does not read, by the same path.
+ */
+export function specOfCells(headers: readonly string[], cells: readonly string[]): Record<string, unknown> {
+  const spec: Record<string, unknown> = {};
+  headers.forEach((header, i) => {
+    const text = cells[i] ?? '';
+    if (text.trim() === '') return;
+    const path = pathOfHeader(header);
+    const value = listPaths.has(path) ? text.split(';').map((part) => cellValue(part.trim())) : cellValue(text);
+    setAt(spec, path, value);
+  });
+  return spec;
 }
