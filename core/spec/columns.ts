@@ -8,9 +8,10 @@ import { quantityAt, unitSymbol } from '../units';
 
 /**
  * The spec's fields as spreadsheet columns, one per field, named by the field's path as the app names it
- * ("loads[0].length", "duty.between[1]"). The columns are the union of the three kinds' fields, from their
- * schemas; list items get one column each up to the schema's limit. A list of words (free parameters) is
- * one cell, its words separated by "; ".
+ * ("freeLength", "duty.between[1]", "legs[0].length"). The columns are the union of the three kinds' fields,
+ * from their schemas. A list is one cell, its items separated by "; ": a list of values (quantities, free
+ * parameters) as it is, a list of objects (loads) one column per field of its items ("loads.length" holds
+ * every load's length, in order).
  */
 export interface SpecColumn {
   path: string;
@@ -18,13 +19,15 @@ export interface SpecColumn {
   quantity: Quantity | undefined;
   /** A list of plain values in one cell ("100; 500; 1000"). */
   list: boolean;
+  /** The path split into its keys and list indices, once. */
+  keys: readonly string[];
+  /** For a field of a list's items: the list's keys and the field's keys within an item. */
+  items?: { list: readonly string[]; field: readonly string[] };
 }
 
-type Schema = z.ZodType & { _zod: { def: Record<string, unknown> } };
+const keysOf = (path: string): string[] => path.split(/\.|\[(\d+)\]/).filter((k) => k !== undefined && k !== '');
 
-/** The most items a list schema allows (its .max()), or undefined. */
-const maximumOf = (s: Schema): number | undefined => ((s._zod.def as { checks?: { _zod: { def: { check: string; maximum?: number } } }[] }).checks ?? [])
-  .map((c) => c._zod.def).find((d) => d.check === 'max_length')?.maximum;
+type Schema = z.ZodType & { _zod: { def: Record<string, unknown> } };
 
 const unwrap = (s: Schema): Schema => {
   const def = s._zod.def as { type: string; innerType?: Schema; in?: Schema };
@@ -34,7 +37,7 @@ const unwrap = (s: Schema): Schema => {
 };
 
 /** The dotted paths of one schema's leaves, with list indices; `mapPath` is the path without indices. */
-interface Leaf { path: string; mapPath: string; list: boolean }
+interface Leaf { path: string; mapPath: string; list: boolean; items?: { list: string; field: string } }
 
 function leaves(schema: Schema, path: string, mapPath: string, out: Leaf[]): void {
   const s = unwrap(schema);
@@ -48,9 +51,10 @@ function leaves(schema: Schema, path: string, mapPath: string, out: Leaf[]): voi
     def.items.forEach((item, i) => leaves(item, `${path}[${i}]`, mapPath, out));
   } else if (def.type === 'array' && def.element) {
     const element = unwrap(def.element);
-    const limit = maximumOf(s);
-    if ((element._zod.def as { type: string }).type === 'object' && typeof limit === 'number') {
-      for (let i = 0; i < limit; i++) leaves(element, `${path}[${i}]`, mapPath, out);
+    if ((element._zod.def as { type: string }).type === 'object') {
+      const fields: Leaf[] = [];
+      leaves(element, '', '', fields);
+      for (const f of fields) out.push({ path: join(path, f.path), mapPath: join(mapPath, f.mapPath), list: false, items: { list: path, field: f.path } });
     } else out.push({ path, mapPath, list: true });
   } else out.push({ path, mapPath, list: false });
 }
@@ -61,7 +65,10 @@ function columnsOfKind(kind: SpringKind): SpecColumn[] {
   leaves(schema, '', '', found);
   const map: QuantityMap = kindEntryOf(kind).specQuantities;
   return found.filter((f) => !['kind', 'units', 'version', 'material'].includes(f.path))
-    .map((f) => ({ path: f.path, quantity: quantityAt(map, f.mapPath), list: f.list }));
+    .map((f) => ({
+      path: f.path, quantity: quantityAt(map, f.mapPath), list: f.list, keys: keysOf(f.path),
+      ...(f.items ? { items: { list: keysOf(f.items.list), field: keysOf(f.items.field) } } : {}),
+    }));
 }
 
 /** The union of every kind's spec columns, in the order they first appear. */
@@ -88,19 +95,26 @@ export function tradeNumber(value: number, quantity: Quantity | undefined, units
   return significant(value);
 }
 
-function valueAt(spec: unknown, path: string): unknown {
+function valueAt(spec: unknown, keys: readonly string[]): unknown {
   let at: unknown = spec;
-  for (const key of path.split(/\.|\[(\d+)\]/).filter((k) => k !== undefined && k !== '')) {
+  for (let i = 0; i < keys.length; i++) {
     if (at === null || typeof at !== 'object') return undefined;
-    at = (at as Record<string, unknown>)[key];
+    at = (at as Record<string, unknown>)[keys[i]!];
   }
   return at;
+}
+
+/** One field of every item of a list, or undefined when the spec has no such list. */
+function itemValues(spec: unknown, items: NonNullable<SpecColumn['items']>): unknown[] | undefined {
+  const list = valueAt(spec, items.list);
+  if (!Array.isArray(list) || list.length === 0) return undefined;
+  return list.map((item) => valueAt(item, items.field) ?? '');
 }
 
 /** The cells of a spec (as stored, in its own units) under the spec columns. */
 export function specCells(spec: unknown, units: UnitSystem): unknown[] {
   return specColumns.map((column) => {
-    const v = valueAt(spec, column.path);
+    const v = column.items ? itemValues(spec, column.items) : valueAt(spec, column.keys);
     if (typeof v === 'number') return tradeNumber(v, column.quantity, units);
     if (Array.isArray(v)) return v.map((item) => (typeof item === 'number' ? tradeNumber(item, column.quantity, units) : String(item))).join('; ');
     if (v === undefined || v === null) return '';
@@ -122,7 +136,7 @@ function cellValue(text: string): unknown {
 }
 
 function setAt(target: Record<string, unknown>, path: string, value: unknown): void {
-  const keys = path.split(/\.|\[(\d+)\]/).filter((k) => k !== undefined && k !== '');
+  const keys = keysOf(path);
   let at: Record<string, unknown> = target;
   keys.forEach((key, i) => {
     if (i === keys.length - 1) {
@@ -135,11 +149,12 @@ function setAt(target: Record<string, unknown>, path: string, value: unknown): v
   });
 }
 
-const listPaths = new Set(specColumns.filter((c) => c.list).map((c) => c.path));
+const byPath = new Map(specColumns.map((c) => [c.path, c]));
 
 /**
  * A spec from a row of cells under field-path headers (the headers of the CSV job list are accepted,
- * units in brackets and all). Blank cells are left out; list fields split at ";". The spec's schema then
+ * units in brackets and all). Blank cells are left out; list fields split at ";", and a field of a
+ * list's items ("loads.length") gives each item its value in order. The spec's schema then
  * names anything that does not read, by the same path.
  */
 export function specOfCells(headers: readonly string[], cells: readonly string[]): Record<string, unknown> {
@@ -148,8 +163,13 @@ export function specOfCells(headers: readonly string[], cells: readonly string[]
     const text = cells[i] ?? '';
     if (text.trim() === '') return;
     const path = pathOfHeader(header);
-    const value = listPaths.has(path) ? text.split(';').map((part) => cellValue(part.trim())) : cellValue(text);
-    setAt(spec, path, value);
+    const column = byPath.get(path);
+    const parts = () => text.split(';').map((part) => part.trim());
+    if (column?.items) {
+      parts().forEach((part, i) => {
+        if (part !== '') setAt(spec, `${column.items!.list.join('.')}[${i}].${column.items!.field.join('.')}`, cellValue(part));
+      });
+    } else setAt(spec, path, column?.list ? parts().map(cellValue) : cellValue(text));
   });
   return spec;
 }

@@ -18,7 +18,7 @@ const jobCount = (store: Store) => (store.db.prepare('SELECT count(*) AS n FROM 
 /** A DEMO inch job as a US shop would enter it (invented part). */
 const inchJob = job({ partNumber: '=SUM(A1:A9)', notes: '+1 from the customer (demo)' }, {
   units: 'inch', material: 'astm-a228', wireDiameter: 0.0625, outerDiameter: 0.75, totalCoils: 12, freeLength: 2.25,
-  loads: [{ length: 1.5, force: 10 }],
+  loads: [{ length: 1.5, force: 10 }, { length: 1.25 }],
 });
 
 function csvCells(store: Store): Record<string, string> {
@@ -36,8 +36,9 @@ describe('the CSV job list for people', () => {
     expect(cells['spec.wireDiameter (mm | in)']).toBe('0.063');
     expect(cells['spec.outerDiameter (mm | in)']).toBe('0.750');
     expect(cells['spec.freeLength (mm | in)']).toBe('2.250');
-    expect(cells['spec.loads[0].length (mm | in)']).toBe('1.500');
-    expect(cells['spec.loads[0].force (N | lbf)']).toBe('10.0');
+    // Each load's field in one cell, in load order; the second load asks no force.
+    expect(cells['spec.loads.length (mm | in)']).toBe('1.500; 1.250');
+    expect(cells['spec.loads.force (N | lbf)']).toBe('10.0; ');
     expect(cells.material).toBe('astm-a228');
     expect(cells.materialName).toBe(findGrade('astm-a228')!.name);
     expect(cells.partNumber).toBe("'=SUM(A1:A9)");
