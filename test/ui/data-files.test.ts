@@ -24,4 +24,17 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     await page.getByRole('status').filter({ hasText: /^Restored from coilwright-backup-/ }).waitFor();
     expect(errors).toEqual([]);
   });
+
+  it('exports jobs as a streamed download, saying how many went out', async () => {
+    const { page, errors } = session;
+    await page.keyboard.press('Alt+4');
+    await page.getByRole('heading', { name: 'Export jobs' }).waitFor();
+    await page.getByLabel('Format').selectOption('csv');
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export', exact: true }).click()]);
+    expect(download.suggestedFilename()).toMatch(/^coilwright-jobs-\d{4}-\d{2}-\d{2}\.csv$/);
+    const text = readFileSync(await download.path(), 'utf8');
+    expect(text.split('\r\n')[0]).toMatch(/^number,customer,customerEmail,.*,units,material,materialName,spec\.wireDiameter \(mm \| in\),/);
+    await page.getByRole('status').filter({ hasText: /jobs? exported, downloaded as coilwright-jobs-/ }).waitFor();
+    expect(errors).toEqual([]);
+  });
 });

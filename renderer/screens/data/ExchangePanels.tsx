@@ -22,8 +22,14 @@ export function ExportPanel() {
   const [format, setFormat] = useState<'json' | 'csv'>('json');
   const [status, setStatus] = useState('');
   const { call, run, running } = useLongCall<ExportResult>();
+  const streamed = useLongCall<{ message: string }>();
+  const download = platform.storeFiles.exportJobs;
   const go = async () => {
     const input = { format, status: (status || undefined) as JobStatus | undefined };
+    if (download) {
+      await streamed.run('Exporting…', (control) => download(input, control), true);
+      return;
+    }
     const r = await run('Exporting…', () => api.exportJobs(input));
     if (r?.text !== undefined) {
       platform.saveFile({ fileName: `coilwright-jobs.${format}`, mimeType: format === 'csv' ? 'text/csv' : 'application/json', text: r.text });
@@ -37,8 +43,9 @@ export function ExportPanel() {
         <PlainSelect label="Jobs" value={status} onChange={setStatus}
           choices={[{ value: '', label: 'every job' }, ...jobStatuses.map((s) => ({ value: s, label: `${statusLabels[s]} only` }))]} />
       </div>
-      <button type="button" className="button button--primary" disabled={running} onClick={() => void go()}>Export</button>
+      <button type="button" className="button button--primary" disabled={running || streamed.running} onClick={() => void go()}>Export</button>
       <CallOutcome call={call} done={exportedText} />
+      <CallOutcome call={streamed.call} done={(v) => v.message} cancel={streamed.cancel} />
     </section>
   );
 }
