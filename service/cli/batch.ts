@@ -4,6 +4,7 @@ import type { Readable } from 'node:stream';
 import { specOfCells } from '../../core/spec/columns';
 import { EXIT, InputError } from './io';
 import type { ParsedArgs } from './io';
+import { terminalProgress } from './progress';
 
 /** Where a spec sits in the batch: its place (from 0) and, for JSON lines and CSV, the line it starts on. */
 interface Place {
@@ -114,13 +115,26 @@ export async function runBatch(args: ParsedArgs, out: (text: string) => void, ea
   if (typeof file !== 'string') throw new InputError([{ code: 'missing-file', path: '--batch', message: '--batch needs a file of specs, or - for standard input' }]);
   let count = 0;
   let failed = 0;
-  for await (const item of batchItems(file)) {
-    count++;
+  const progress = terminalProgress('Batch', (done) => `${done} specs done`);
+  try {
+    for await (const item of batchItems(file)) {
+      if (progress.signal?.aborted) break;
+      count++;
+      await one(item);
+      progress.onProgress?.(count, 0);
+    }
+  } finally {
+    progress.done();
+  }
+  if (failed > 0) process.stderr.write(`${failed} of ${count} specs have errors (ok: false lines)\n`);
+  return failed > 0 ? EXIT.badInput : EXIT.ok;
+
+  async function one(item: BatchItem): Promise<void> {
     const place: Place = item.line === undefined ? { spec: item.spec } : { spec: item.spec, line: item.line };
     if ('errors' in item) {
       failed++;
       out(jsonLine({ ...place, ok: false, errors: item.errors }));
-      continue;
+      return;
     }
     try {
       out(jsonLine({ ...place, ok: true, result: await each(item.raw) }));
@@ -130,6 +144,4 @@ export async function runBatch(args: ParsedArgs, out: (text: string) => void, ea
       out(jsonLine({ ...place, ok: false, errors: e.errors }));
     }
   }
-  if (failed > 0) process.stderr.write(`${failed} of ${count} specs have errors (ok: false lines)\n`);
-  return failed > 0 ? EXIT.badInput : EXIT.ok;
 }

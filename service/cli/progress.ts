@@ -29,7 +29,8 @@ export function terminalProgress(label: string, describe: (done: number, total: 
       if (!tty || (now - last < REDRAW_MS && done < total)) return;
       last = now;
       shown = true;
-      process.stderr.write(`\r\x1b[K${label} ${percent(done, total)}% (${describe(done, total)})${controller.signal.aborted ? ', cancelling…' : ''}`);
+      const share = total > 0 ? `${percent(done, total)}% (${describe(done, total)})` : describe(done, total);
+      process.stderr.write(`\r\x1b[K${label} ${share}${controller.signal.aborted ? ', cancelling…' : ''}`);
     },
     done() {
       process.off('SIGINT', onInterrupt);
