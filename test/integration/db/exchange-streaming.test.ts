@@ -7,6 +7,7 @@ import { findGrade } from '../../../core/materials/catalog';
 import { createJob, exportJobs, exportJobsToFile, importJobs, importJobsFromFile, openStore } from '../../../db';
 import type { Store } from '../../../db';
 import { parseCsv } from '../../../db/exchange/csv';
+import { JsonListSplitter } from '../../../db/exchange/json-list';
 import { job, tempDir, tempStore, value } from './helpers';
 
 /** Every row of the tables an import writes to. */
@@ -64,6 +65,20 @@ describe('the CSV job list for people', () => {
     value(importJobs(target, { text: value(exportJobs(source, { format: 'csv' })).text!, format: 'csv' }));
     const jobsOf = (s: Store) => JSON.parse(value(exportJobs(s, {})).text!).jobs;
     expect(jobsOf(target)).toEqual(jobsOf(source));
+  });
+});
+
+describe('reading a JSON document a piece at a time', () => {
+  it('hands out the items of the jobs list whatever the layout and wherever the pieces break', () => {
+    const doc = JSON.stringify({ format: 'coilwright-jobs', jobs: [{ notes: 'a } ] " \\ [ {', loads: [{ length: 1 }] }, 5, 's,]', [1, 2], null], tail: { jobs: [9] }, version: 1 }, null, 1);
+    const expected = JSON.parse(doc);
+    for (const size of [1, 2, 3, 7, 64, doc.length]) {
+      const splitter = new JsonListSplitter('jobs');
+      const items: unknown[] = [];
+      for (let i = 0; i < doc.length; i += size) items.push(...splitter.feed(doc.slice(i, i + size)).map((t) => JSON.parse(t)));
+      expect(items, `pieces of ${size}`).toEqual(expected.jobs);
+      expect(JSON.parse(splitter.rest())).toEqual({ ...expected, jobs: [] });
+    }
   });
 });
 
