@@ -1,4 +1,4 @@
-import type { ApiResult, RestoreResult } from '../../core/api';
+import type { ApiResult, ImportResult, RestoreResult } from '../../core/api';
 import type { ShellBridge } from './bridge';
 import { isApiResult, transportFailure } from './result';
 
@@ -26,6 +26,11 @@ export interface StoreFiles {
    * received of the whole; undefined in the app, whose shell exports through its own save dialog.
    */
   exportJobs?: (input: { format: 'json' | 'csv'; status?: string | undefined }, long?: LongAction) => Promise<StoreFileOutcome>;
+  /**
+   * A browser uploads the picked file and the service imports it streamed, all or nothing, reporting bytes
+   * imported of the file's size; undefined in the app, which sends the file's text through the API.
+   */
+  importJobs?: (file: File, options: { renumber: boolean }, long?: LongAction) => Promise<ApiResult<ImportResult>>;
   /** `file` is the backup picked in the page (browser only); the app's shell asks with its own dialog. */
   restore(file: File | null): Promise<StoreFileOutcome>;
   /** Whether the shell shows the dialogs (so the page shows no file picker or confirmation of its own). */
@@ -65,9 +70,44 @@ function lineBreaks(piece: Uint8Array): number {
 
 const fileNameOf = (response: Response, fallback: string) => /filename="([^"]+)"/.exec(response.headers.get('content-disposition') ?? '')?.[1] ?? fallback;
 
+/** The JSON lines of an import's answer: progress as they come, then the result. */
+async function importAnswer(response: Response, long: LongAction): Promise<ApiResult<ImportResult>> {
+  const reader = response.body!.pipeThrough(new TextDecoderStream()).getReader();
+  let pending = '';
+  let result: ApiResult<ImportResult> | undefined;
+  for (;;) {
+    const { value, done } = await reader.read();
+    if (done) break;
+    pending += value;
+    const lines = pending.split('\n');
+    pending = lines.pop()!;
+    for (const line of lines) {
+      const message = JSON.parse(line) as { progress?: [number, number] } | ApiResult<ImportResult>;
+      if ('progress' in message && message.progress) long.onProgress?.(message.progress[0], message.progress[1]);
+      else if (isApiResult(message)) result = message as ApiResult<ImportResult>;
+    }
+  }
+  return result ?? transportFailure('The service ended the import without a result.');
+}
+
 function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles {
   return {
     shellDialogs: false,
+    async importJobs(file, options, long = {}) {
+      try {
+        long.onProgress?.(0, 0);
+        const format = file.name.toLowerCase().endsWith('.csv') ? 'csv' : 'json';
+        const response = await fetch(`/files/import?format=${format}${options.renumber ? '&renumber=1' : ''}`, {
+          method: 'POST', body: file, credentials: 'same-origin', signal: long.signal ?? null,
+          headers: { 'content-type': 'application/octet-stream', 'x-file-name': encodeURIComponent(file.name) },
+        });
+        if (!response.ok) return resultOf(response);
+        return await importAnswer(response, long);
+      } catch (e) {
+        if (long.signal?.aborted) return { ok: false, error: { code: 'cancelled', message: 'Import cancelled: nothing was imported.', path: '' } };
+        return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
+      }
+    },
     async backup(long = {}) {
       try {
         long.onProgress?.(0, 0);

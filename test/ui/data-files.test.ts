@@ -35,6 +35,11 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     const text = readFileSync(await download.path(), 'utf8');
     expect(text.split('\r\n')[0]).toMatch(/^number,customer,customerEmail,.*,units,material,materialName,spec\.wireDiameter \(mm \| in\),/);
     await page.getByRole('status').filter({ hasText: /jobs? exported, downloaded as coilwright-jobs-/ }).waitFor();
+    // The CSV goes back in through the upload, every job with a new number.
+    await page.getByLabel('File to import (JSON or CSV)').setInputFiles({ name: 'jobs.csv', mimeType: 'text/csv', buffer: Buffer.from(text) });
+    await page.getByRole('button', { name: 'Import', exact: true }).click();
+    const rows = text.trimEnd().split('\r\n').length - 1;
+    await page.getByRole('status').filter({ hasText: new RegExp(`^${rows} jobs imported: `) }).waitFor();
     expect(errors).toEqual([]);
   });
 });
