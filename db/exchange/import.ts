@@ -121,7 +121,8 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
   const parsed = parseWith(importFileSchema, input);
   if (!parsed.ok) return invalid(parsed.errors);
   const { file, renumber } = parsed.value;
-  if (file === undefined) return importJobs(store, parsed.value);
+  // A store without a file of its own (in memory) cannot be opened twice: it imports on its own connection.
+  if (file === undefined || store.file === ':memory:' || store.file === '') return importJobs(store, parsed.value);
   if (store.readOnly) return { ok: false, error: readOnlyError(store, store.readOnly).toApiError() };
   let total: number;
   let start: string;
