@@ -1,6 +1,7 @@
 import { ChangeKind } from './ChangeKind';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Job } from '../../../core/api';
+import type { Settings } from '../../../core/settings/schema';
 import { usePlatform } from '../../api';
 import type { FormHandle } from '../../components/form/scope';
 import { ScreenHeading } from '../../components/ScreenHeading';
@@ -32,14 +33,14 @@ export function Workspace({ jobId }: { jobId: number | null }) {
   if (!shop.settings) {
     return <p className="screen" role="status">{shop.error ? `The shop settings could not be read: ${shop.error.message}` : 'Opening…'}</p>;
   }
-  return <JobWorkspace jobId={jobId} units={shop.settings.defaults.units} />;
+  return <JobWorkspace jobId={jobId} settings={shop.settings} />;
 }
 
-function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' | 'inch' }) {
+function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Settings }) {
   const nav = useNavigation();
   const platform = usePlatform();
   const onCreated = useCallback((job: Job) => nav.setJobLabel(job.number, job.id), [nav]);
-  const editor = useJobEditor(jobId, { units, toleranceGrade: null }, onCreated);
+  const editor = useJobEditor(jobId, { units: settings.defaults.units, toleranceGrade: null, settings }, onCreated);
   const [tab, setTab] = useState<Tab>('spec');
   const [similar, setSimilar] = useState(false);
   const form = useRef<FormHandle | null>(null);
@@ -61,6 +62,14 @@ function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' 
     ...editor.evaluation.errors.map((e) => ({ ...e, path: `spec.${e.path}` })),
     ...editor.serverErrors,
   ], [editor.jobCheck.errors, editor.evaluation.errors, editor.serverErrors]));
+
+  const understood = useStable(useMemo(() => [
+    ...editor.jobCheck.understood,
+    ...editor.evaluation.understood.map((u) => ({ ...u, path: `spec.${u.path}` })),
+  ], [editor.jobCheck.understood, editor.evaluation.understood]));
+  // A new job starts in its first field, so a drawing's figures can be typed at once.
+  const fresh = jobId === null && !editor.loading;
+  useEffect(() => { if (fresh) form.current?.focus('spec.kind'); }, [fresh]);
 
   const goTo = (path: string) => {
     setTab('spec');
@@ -89,7 +98,7 @@ function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' 
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
         <TabPanel idPrefix="job" id="spec">
           <div className="bench">
-            <SpecForm drafts={editor.drafts} edit={editor.edit} errors={errors} handle={(h) => { form.current = h; }} />
+            <SpecForm drafts={editor.drafts} edit={editor.edit} errors={errors} understood={understood} handle={(h) => { form.current = h; }} />
             <ResultsPanel evaluation={editor.evaluation} version={editor.version} title={title}
               onGo={(p) => goTo(`spec.${p}`)} />
           </div>
