@@ -10,6 +10,8 @@ export { inspectStoreFile } from './inspect';
 export { migrate, migrations, LATEST_VERSION, APPLICATION_ID, schemaVersion } from './migrations';
 export { createJob, updateJob, setJobStatus, restoreRevision, keepWorkingRevision } from './jobs/write';
 export { getJob, jobRevisions } from './jobs/read';
+export { copyJob, archiveJob } from './jobs/lineage';
+export { deleteJob, undoDeleteJob } from './jobs/delete';
 export { listCustomers } from './jobs/customers';
 export { listJobs } from './search/list';
 export { findJobs } from './search/text';

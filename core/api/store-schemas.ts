@@ -88,6 +88,8 @@ export const listJobsSchema = z.object({
   customerId: id.optional(),
   kind: z.string().min(1).optional(),
   material: z.string().min(1).optional(),
+  /** true lists the archived jobs instead (newest archived first unless sorted otherwise); search finds both. */
+  archived: z.boolean().default(false),
   dates: z.object({
     field: z.enum(['created', 'updated', 'due']).default('updated'),
     from: isoDateSchema.optional(),
@@ -114,9 +116,12 @@ export const similarJobsSchema = z.object({
   spec: z.unknown(),
   limit: z.number().int().min(1).max(100).default(10),
   excludeJobId: id.optional(),
+  /** The quantity asked about: each hit's last quoted price is read at the break nearest it. */
+  quantity: z.number().int().positive().optional(),
 }).strict();
 
 export const jobIdSchema = z.object({ id }).strict();
+export const archiveJobSchema = z.object({ id, archived: z.boolean() }).strict();
 /** A job by its id or by the shop's job number. */
 export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().trim().min(1) }).strict()]);
 /** Ends a job's working session as one permanent revision; `reason` says what closed it. */

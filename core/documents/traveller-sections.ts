@@ -41,6 +41,7 @@ export function materialFields(plan: ManufacturingPlan): Field[] {
     { label: 'Mass per piece', value: formatQuantity(plan.massPerPiece, 'mass', u) },
     { label: `Wire for ${piecesText(plan.lotWire.startQuantity)} pcs + setup`, value: lot.length },
     { label: 'Wire mass for the lot', value: lot.mass },
+    { label: 'Wire stock', value: plan.lotWire.stock.text },
   ];
 }
 

@@ -14,6 +14,9 @@ import type { CoiledBound, SetRemovalMethod } from '../springs/compression/set-r
 import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
 import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
+import type { Settings } from '../settings/schema';
+import type { ShopToleranceTable } from '../tolerances/shop-tables';
+import { shopTablesOf } from '../tolerances/shop-settings';
 
 const methodNames: Record<SetRemovalMethod, string> = { handbook: 'handbook method', en13906: 'EN 13906-1 static method' };
 
@@ -48,19 +51,20 @@ const boundWords: Record<CoiledBound, { message: string; fix: string }> = {
  */
 export function setControlTolerance(
   s: { freeLength: number; toleranceGrade: 1 | 2 | 3 | undefined; springIndex: number; activeCoils: number },
+  table?: ShopToleranceTable,
 ): { plusMinus: number; source: string } | null {
   const t = freeLengthTolerance({
     L0: s.freeLength, grade: s.toleranceGrade ?? 2, index: s.springIndex, activeCoils: s.activeCoils, loadSpecified: false,
-  });
+  }, table);
   return t.ok && !t.value.reference ? { plusMinus: t.value.plusMinus, source: t.source } : null;
 }
 
-function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): void {
+function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink, settings: Settings | undefined): void {
   const s = r.setRemoval;
   const u = x.units;
   const tolerance = setControlTolerance({
     freeLength: r.freeLength, toleranceGrade: x.toleranceGrade, springIndex: r.springIndex, activeCoils: r.activeCoils,
-  });
+  }, settings && shopTablesOf(settings.toleranceTables).freeLength);
   if (tolerance && (s.expectedSet ?? 0) < tolerance.plusMinus) {
     add(out, 'warning', 'set-below-length-tolerance', 'freeLength',
       `the expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)} is under the free-length tolerance ` +
@@ -70,7 +74,7 @@ function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): v
   }
 }
 
-function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink): void {
+function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink, settings: Settings | undefined): void {
   const s = r.setRemoval;
   const u = x.units;
   if (!s.achievable) {
@@ -88,7 +92,7 @@ function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink
     add(out, 'note', 'set-removal-required', 'freeLength',
       `coil to ${formatQuantity(s.coiledFreeLength ?? r.freeLength, 'length', u)} and press to solid ` +
       `(expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)}): ${both}`);
-    reviewSetSize(x, r, out);
+    reviewSetSize(x, r, out, settings);
   }
   if (s.ratio > lim.maximumSetRatio) {
     add(out, 'warning', 'set-ratio-high', 'freeLength',
@@ -214,10 +218,10 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
 }
 
 /** The maker's review of a compression spring: every finding names the field it concerns. */
-export function reviewCompression(x: CompressionDesign, r: CompressionReport): Finding[] {
+export function reviewCompression(x: CompressionDesign, r: CompressionReport, settings?: Settings): Finding[] {
   const out: Finding[] = [...x.wireFindings];
   reviewIndex(x, r.springIndex, out);
-  reviewSolidStress(x, r, out);
+  reviewSolidStress(x, r, out, settings);
   reviewWorkingLengths(x, r, out);
   reviewLoads(x, r, out);
   reviewDetermination(x, out);

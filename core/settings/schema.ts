@@ -3,6 +3,8 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
 import { bounded } from './bounds';
+import { checkPlusMinusTable, checkShopToleranceTable, demoShopTables, demoStoredShopTables } from '../tolerances';
+import type { StoredShopTables } from '../tolerances';
 
 /**
  * Shop settings: one validated JSON document per key, stored one row per key. Every number given as a
@@ -108,6 +110,42 @@ export const wireStockSchema = z.object({
   heatNumber: text(60).optional(),
 }).strict();
 
+const band = {
+  over: z.number().finite().min(0).max(1e6),
+  /** null: the band has no upper end ("and over"). */
+  upTo: z.number().finite().positive().max(1e6).nullable(),
+};
+const gradeRowSchema = z.object({
+  grade: z.union([z.literal(1), z.literal(2), z.literal(3)]), ...band,
+  percent: z.number().finite().min(0).max(100),
+  /** The floor in the quantity's internal unit: N for load, mm for free length. */
+  minimum: z.number().finite().min(0).max(1e6),
+}).strict();
+const plusMinusRowSchema = z.object({ ...band, plusMinus: z.number().finite().min(0).max(1000) }).strict();
+const gradeTableSchema = z.object({ bandedBy: z.enum(['activeCoils', 'index']), rows: z.array(gradeRowSchema).max(60) }).strict();
+const plusMinusTableSchema = z.object({ rows: z.array(plusMinusRowSchema).max(30) }).strict();
+const open = <T extends { upTo: number | null }>(rows: T[]) => rows.map((r) => ({ ...r, upTo: r.upTo ?? Infinity }));
+
+/**
+ * The shop's own tolerance tables, read by the plan: load and free length by grade (compression), torsion
+ * leg length and free angle. Demo defaults until the shop sets its own; the sourced tables stay in core.
+ */
+export const toleranceTablesSchema = z.object({
+  load: gradeTableSchema,
+  freeLength: gradeTableSchema,
+  legLength: plusMinusTableSchema,
+  freeAngle: plusMinusTableSchema,
+}).strict().superRefine((t, ctx) => {
+  const report = (key: string, errors: FieldError[]) => errors.forEach((e) => ctx.addIssue({
+    code: 'custom', message: e.message, path: [key, ...e.path.split(/[.[\]]+/).filter(Boolean).map((p) => (/^\d+$/.test(p) ? Number(p) : p))],
+  }));
+  for (const key of ['load', 'freeLength'] as const) {
+    report(key, checkShopToleranceTable({ ...demoShopTables[key], bandedBy: t[key].bandedBy, rows: open(t[key].rows) }));
+  }
+  for (const key of ['legLength', 'freeAngle'] as const) report(key, checkPlusMinusTable({ rows: open(t[key].rows) }));
+});
+export type ToleranceTablesSetting = z.infer<typeof toleranceTablesSchema>;
+
 /** How unit prices are rounded, the same on the screen and every document. */
 export const unitPriceRoundingSchema = z.discriminatedUnion('rule', [
   z.object({ rule: z.literal('none') }).strict(),
@@ -173,6 +211,7 @@ export const settingsSchemas = {
     minimumOrderValue: 150, unitPriceRounding: { rule: 'none' }, breakFactors: [0.5, 1, 2, 5],
   }),
   design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
+  toleranceTables: toleranceTablesSchema.default(demoStoredShopTables() as StoredShopTables & ToleranceTablesSetting),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();
