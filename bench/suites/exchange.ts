@@ -20,19 +20,19 @@ function runChild(args: string[]): ChildReport {
 async function firstJobs(source: string, target: string, count: number): Promise<void> {
   const fd = openSync(target, 'w');
   try {
-    let jobs = 0;
-    let pending: string | undefined;
+    let kept = 0;
+    let last: string | undefined;
     for await (const line of createInterface({ input: createReadStream(source), crlfDelay: Infinity })) {
-      const isJob = line.startsWith('    {');
-      if (!isJob) {
-        if (jobs === 0) writeSync(fd, `${line}\n`);
+      if (!line.startsWith('    {')) {
+        if (kept === 0) writeSync(fd, `${line}\n`);
         continue;
       }
-      if (pending !== undefined) writeSync(fd, `${pending}\n`);
-      if (++jobs > count) break;
-      pending = line;
+      if (kept === count) break;
+      if (last !== undefined) writeSync(fd, `${last}\n`);
+      last = line;
+      kept++;
     }
-    if (pending !== undefined && jobs <= count + 1) writeSync(fd, `${pending.replace(/,$/, '')}\n`);
+    if (last !== undefined) writeSync(fd, `${last.replace(/,$/, '')}\n`);
     writeSync(fd, '  ]\n}\n');
   } finally {
     closeSync(fd);
