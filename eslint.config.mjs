@@ -14,7 +14,7 @@ const electron = ['electron', 'electron/*'];
 const pdfWriters = ['pdfkit', 'pdfkit/*', 'svg-to-pdfkit', 'fontkit', 'qrcode'];
 const sqlite = ['better-sqlite3'];
 const react = ['react', 'react/*', 'react-dom', 'react-dom/*'];
-const sheetReaders = ['exceljs', 'exceljs/*', 'csv-parse', 'csv-parse/*'];
+const fileFormats = ['exceljs', 'exceljs/*', 'csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'];
 
 /** Relative paths into a sibling room, e.g. '../../db' or '../service/api'. */
 const into = (...rooms) => rooms.flatMap((room) => [`../${room}`, `../${room}/*`, `**/../${room}`, `**/../${room}/*`]);
@@ -35,7 +35,7 @@ const noElectron = fence('Only electron/ imports Electron; the Node side runs wi
 const noPdf = fence('pdfkit, svg-to-pdfkit, fontkit and qrcode belong to the PDF writers in service/pdf.', pdfWriters);
 const noSqlite = fence('better-sqlite3 belongs to db/ (and the Electron binding shim).', sqlite);
 const noReact = fence('React belongs to renderer/.', react);
-const noSheetReaders = fence('Spreadsheet and CSV readers run on the Node side (service/request-sheet); the screens send the file\'s bytes.', sheetReaders);
+const noFileFormats = fence('Spreadsheet and CSV libraries belong to the store\'s exchange (db/), the request-sheet reader (service/request-sheet) and the command line (service/cli); the screens send the file\'s bytes.', fileFormats);
 
 export default tseslint.config(
   { ignores: ['node_modules/**', 'dist/**', 'bench/results/**', 'test-artifacts/**', 'native/**', 'release/**'] },
@@ -47,7 +47,7 @@ export default tseslint.config(
   },
   room(['core/**/*.ts'], [
     fence('core/ is platform-free: no Electron, Node, SQLite, PDF or React imports.',
-      [...electron, ...sqlite, ...pdfWriters, ...react, ...sheetReaders]),
+      [...electron, ...sqlite, ...pdfWriters, ...react, ...fileFormats]),
     fenceBuiltins('core/ is platform-free: no Node built-ins.'),
     fence('core/ reaches no sibling folder: the other rooms depend on core, never the reverse.',
       into('db', 'service', 'electron', 'renderer', 'test', 'bench', 'scripts', 'assets')),
@@ -67,14 +67,16 @@ export default tseslint.config(
       into('service', 'electron', 'renderer'))]),
   room(['service/**/*.ts'], [noElectron, noSqlite, noReact,
     fence('The Node side does not reach into the desktop shell or the screens.', into('electron', 'renderer'))]),
-  room(['service/pdf/**/*.ts'], [noElectron, noSqlite, noReact,
+  room(['service/pdf/**/*.ts'], [noElectron, noSqlite, noReact, noFileFormats,
     fence('The PDF writers print the document model; they do not reach into the shell or the screens.',
       into('electron', 'renderer'))]),
-  room(['service/!(pdf)/**/*.ts'], [noElectron, noSqlite, noPdf, noReact,
+  room(['service/!(pdf|cli|request-sheet)/**/*.ts'], [noElectron, noSqlite, noPdf, noReact, noFileFormats,
     fence('The Node side does not reach into the desktop shell or the screens.', into('electron', 'renderer'))]),
-  room(['electron/**/*.ts'], [noPdf, noReact, noSqlite, fence('The shell does not reach into the screens.', into('renderer'))]),
+  room(['service/cli/**/*.ts', 'service/request-sheet/**/*.ts'], [noElectron, noSqlite, noPdf, noReact,
+    fence('The Node side does not reach into the desktop shell or the screens.', into('electron', 'renderer'))]),
+  room(['electron/**/*.ts'], [noPdf, noReact, noSqlite, noFileFormats, fence('The shell does not reach into the screens.', into('renderer'))]),
   room(['electron/shell/sqlite-electron.ts'], [noPdf, noReact]),
-  room(['renderer/**/*.ts', 'renderer/**/*.tsx'], [noElectron, noPdf, noSqlite, noSheetReaders,
+  room(['renderer/**/*.ts', 'renderer/**/*.tsx'], [noElectron, noPdf, noSqlite, noFileFormats,
     fence('renderer/ talks to the service through its injected Api; it imports only core/ and its own packages.',
       into('db', 'service', 'electron', 'test', 'bench', 'scripts')),
     fenceBuiltins('renderer/ runs in the browser: no Node built-ins.')]),

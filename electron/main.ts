@@ -85,7 +85,8 @@ function sendCommand(previews: PdfPreviews, command: MenuCommand, windowId: numb
 function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): void {
   const data = createDataActions({
     dialogs: electronDialogs(liveMainWindow),
-    call: (name, input) => service.files.run(name, input as never),
+    call: (name, input, long) => service.files.run(name, input as never, long),
+    progress: (fraction) => liveMainWindow()?.setProgressBar(fraction ?? -1),
     notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
     documentsDir: app.getPath('documents'),
     today: () => new Date().toISOString().slice(0, 10),

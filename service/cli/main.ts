@@ -38,8 +38,8 @@ export async function runCli(
     return name === undefined || name === 'help' || name === '--help' ? EXIT.ok : EXIT.badInput;
   }
   try {
-    await (await load()).run(parseArgs(rest), out);
-    return EXIT.ok;
+    const code = await (await load()).run(parseArgs(rest), out);
+    return typeof code === 'number' ? code : EXIT.ok;
   } catch (e) {
     if (e instanceof InputError) {
       err(toJson({ errors: e.errors }));

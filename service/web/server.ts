@@ -9,6 +9,8 @@ import { openShopStore } from '../host/first-run';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
 import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
+import { EXPORT_ROUTE, sendExport } from './export-download';
+import { IMPORT_ROUTE, receiveImport } from './import-upload';
 import { sendFile, sendJson, sendText } from './respond';
 
 export const WEB_HOST = '127.0.0.1';
@@ -112,6 +114,12 @@ async function route(ctx: Context, req: IncomingMessage, res: ServerResponse): P
   }
   if (isApi) return routeApi(ctx, req, res, pathname);
   if (pathname === BACKUP_ROUTE && req.method === 'GET') return sendBackup(ctx.service, res, new Date().toISOString().slice(0, 10));
+  if (pathname === IMPORT_ROUTE) {
+    if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'an import is sent with POST'));
+    if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
+    return receiveImport(ctx.service, req, res, ctx.maxUploadBytes);
+  }
+  if (pathname === EXPORT_ROUTE && req.method === 'GET') return sendExport(ctx.service, req, res, new Date().toISOString().slice(0, 10));
   if (pathname === RESTORE_ROUTE) {
     if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'a restore is sent with POST'));
     if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));

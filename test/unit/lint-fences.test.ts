@@ -33,12 +33,16 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the renderer importing Node', 'renderer/model/fence-probe.ts', "import os from 'node:os'; export const x = os;"],
   ['core/ importing the spreadsheet reader', 'core/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; export const x = ExcelJS;"],
   ['the renderer importing the CSV reader', 'renderer/model/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
+  ['the web transport importing csv-parse', 'service/web/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
+  ['the renderer importing csv-stringify', 'renderer/model/fence-probe.ts', "import { stringify } from 'csv-stringify/sync'; export const x = stringify;"],
   ['the renderer importing Electron', 'renderer/api/fence-probe.ts', "import { ipcRenderer } from 'electron'; export const x = ipcRenderer;"],
 ];
 
 const allowed: Array<[room: string, file: string, code: string]> = [
   ['core/ importing zod and itself', 'core/spec/fence-probe.ts', "import { z } from 'zod'; import { calculate } from '../calculate'; export const x = [z, calculate];"],
   ['db/ importing better-sqlite3 and core', 'db/jobs/fence-probe.ts', "import Database from 'better-sqlite3'; import { parseSpec } from '../../core/spec'; export const x = [Database, parseSpec];"],
+  ['db/ importing csv-parse and csv-stringify', 'db/exchange/fence-probe.ts', "import { parse } from 'csv-parse'; import { stringify } from 'csv-stringify/sync'; export const x = [parse, stringify];"],
+  ['the CLI importing csv-parse', 'service/cli/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
   ['the PDF writers importing pdfkit', 'service/pdf/fence-probe.ts', "import PDFDocument from 'pdfkit'; export const x = PDFDocument;"],
   ['the CLI importing db/ and the PDF writers', 'service/cli/fence-probe.ts', "import { openStore } from '../../db'; import { renderQuote } from '../pdf'; export const x = [openStore, renderQuote];"],
   ['the request-sheet reader importing exceljs and csv-parse', 'service/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; import { parse } from 'csv-parse/sync'; export const x = [ExcelJS, parse];"],
