@@ -89,6 +89,8 @@ export interface JobRevision {
   savedAt: string;
   /** "created", "saved", "status", "restored revision 3", "imported". */
   reason: string;
+  /** Who saved it: the signed-in name or the database user; '' for revisions saved before this was kept. */
+  madeBy: string;
   fields: RevisionFields;
   /** Null when this revision's stored spec no longer reads; `problem` then says why. */
   spec: Spec | null;
@@ -137,6 +139,8 @@ export interface Quote extends QuoteSummary {
   document: unknown;
   /** The estimator's decision on open problems at issue (reason and each problem); null when there were none. */
   decision: IssueDecision | null;
+  /** Who issued it; '' for quotes issued before this was kept. */
+  madeBy: string;
 }
 
 export interface Attachment {

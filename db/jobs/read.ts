@@ -21,12 +21,12 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
   return row ? toJob(row) : failure('not-found', `no job with id ${id}`, 'id');
 }
 
-interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string }
+interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string; made_by: string }
 
 function toRevision(row: RevisionRow): JobRevision {
   const stored = readStoredSpec(row.spec, `revision ${row.revision} of job ${row.number}`);
   return {
-    jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason,
+    jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason, madeBy: row.made_by,
     fields: JSON.parse(row.fields) as RevisionFields,
     ...(stored.ok ? { spec: stored.spec } : { spec: null, problem: stored.problem }),
   };

@@ -18,8 +18,8 @@ import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } 
 import { judgementOf } from './rows';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
-  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
-    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec));
+  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec, made_by) VALUES (?, ?, ?, ?, ?, ?, ?)')
+    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec), store.author);
 }
 
 export interface NewJobOptions {

@@ -2,10 +2,10 @@ import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { ApiError } from '../../core/api';
 import { createDemoShop, readOnlyNotice, tryOpenStore } from '../../db';
-import type { OpenOptions, Store } from '../../db';
+import type { OpenOptions, SqliteStore, Store } from '../../db';
 
 export interface ShopStore {
-  store: Store;
+  store: SqliteStore;
   /** Jobs put in by the demo shop on this open; 0 when the store already had a life of its own. */
   demoJobs: number;
   /** Something the user should read on start (the store is open read-only), or undefined. */
@@ -18,7 +18,7 @@ function isPristine(store: Store): boolean {
   return count('jobs') === 0 && count('settings') === 0;
 }
 
-function openQuietly(file: string, options: OpenOptions): { ok: true; value: Store } | { ok: false; error: ApiError } {
+function openQuietly(file: string, options: OpenOptions): { ok: true; value: SqliteStore } | { ok: false; error: ApiError } {
   try {
     return tryOpenStore(file, options);
   } catch (e) {
