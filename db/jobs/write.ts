@@ -16,6 +16,7 @@ import { storedSpecOf } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
 import { judgementOf } from './rows';
+import { staleSave } from './conflict';
 
 function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
   store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec, made_by) VALUES (?, ?, ?, ?, ?, ?, ?)')
@@ -75,13 +76,10 @@ function saveState(store: Store, id: number, current: number, next: JobState, re
   addRevision(store, id, current + 1, reason, next, now);
 }
 
-function loadForSave(store: Store, id: number, expectedRevision: number | undefined) {
+function loadForSave(store: Store, id: number, expectedRevision: number | undefined, patch: Record<string, unknown> = {}) {
   const row = jobRow(store, id);
   if (!row) throw new StoreError('not-found', `no job with id ${id}`, 'id');
-  if (expectedRevision !== undefined && expectedRevision !== row.revision) {
-    throw new StoreError('stale-revision',
-      `job ${row.number} was saved again since revision ${expectedRevision} (now ${row.revision}): reload it before saving`, 'expectedRevision');
-  }
+  if (expectedRevision !== undefined && expectedRevision !== row.revision) throw staleSave(store, row, expectedRevision, patch);
   return row;
 }
 
@@ -137,7 +135,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
   }
   return attempt(() => {
     inTransaction(store, () => {
-      const row = loadForSave(store, id, expectedRevision);
+      const row = loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec });
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
       if (checked === undefined) refuseUnreadable(row);
