@@ -22,7 +22,7 @@ export interface Store {
   /** Why nothing can be saved (the file or its folder is read-only); undefined when the store is writable. */
   readonly readOnly: string | undefined;
   /** Who the revisions, quotes and records saved through this store are by (migration 0015). */
-  readonly author: string;
+  author: string;
   /** A prepared statement, cached by its SQL text. */
   sql(text: string): Statement;
   /** Runs fn as one write transaction (a savepoint inside one); writers take turns, as with BEGIN IMMEDIATE. */

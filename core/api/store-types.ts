@@ -194,3 +194,14 @@ export interface RestoreResult {
   previousKeptAs: string | null;
   version: number;
 }
+
+/** The store the program works in, as the title bar and the Data screen show it. */
+export interface StoreInfo {
+  backend: 'sqlite' | 'postgres';
+  /** The file, or host:port/database of a server: never a user name or password of the connection. */
+  name: string;
+  /** Who saves are recorded as by: the signed-in name, else the database user or the computer's account. */
+  author: string;
+  /** Why nothing can be saved, or null. */
+  readOnly: string | null;
+}
