@@ -32,6 +32,10 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the renderer reaching the service', 'renderer/model/fence-probe.ts', "import { dispatch } from '../../service/api'; export const x = dispatch;"],
   ['the renderer importing Node', 'renderer/model/fence-probe.ts', "import os from 'node:os'; export const x = os;"],
   ['the renderer importing Electron', 'renderer/api/fence-probe.ts', "import { ipcRenderer } from 'electron'; export const x = ipcRenderer;"],
+  ['core/ importing pg', 'core/spec/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
+  ['the SQLite store importing pg', 'db/jobs/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
+  ['the service importing pg', 'service/api/fence-probe.ts', "import { Client } from 'pg'; export const x = Client;"],
+  ['the CLI importing pg', 'service/cli/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
 ];
 
 const allowed: Array<[room: string, file: string, code: string]> = [
@@ -40,6 +44,7 @@ const allowed: Array<[room: string, file: string, code: string]> = [
   ['the PDF writers importing pdfkit', 'service/pdf/fence-probe.ts', "import PDFDocument from 'pdfkit'; export const x = PDFDocument;"],
   ['the CLI importing db/ and the PDF writers', 'service/cli/fence-probe.ts', "import { openStore } from '../../db'; import { renderQuote } from '../pdf'; export const x = [openStore, renderQuote];"],
   ['the shell importing Electron and the service', 'electron/shell/fence-probe.ts', "import { app } from 'electron'; import { dispatch } from '../../service/api'; export const x = [app, dispatch];"],
+  ['db/pg importing pg and the store', 'db/pg/fence-probe.ts', "import pg from 'pg'; import { StoreError } from '../errors'; export const x = [pg, StoreError];"],
   ['the binding shim importing better-sqlite3', 'electron/shell/sqlite-electron.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the renderer importing React, core and its own files', 'renderer/model/fence-probe.ts', "import { useState } from 'react'; import { parseSpec } from '../../core/spec'; import { x as http } from '../api/http'; export const x = [useState, parseSpec, http];"],
 ];
