@@ -35,3 +35,5 @@ export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';
 export { openStoreAt, STORE_VARIABLE } from './open-location';
 export { openPgStore, isPostgresLocation, storeName } from './pg';
 export type { PgStore } from './pg';
+export { copyStore } from './copy';
+export type { TableCopy } from './copy';

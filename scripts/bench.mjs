@@ -11,7 +11,7 @@ await build({
   target: 'node20',
   format: 'cjs',
   outfile,
-  external: ['better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'fontkit', 'qrcode', 'pdf-parse', 'playwright-core', 'electron'],
+  external: ['better-sqlite3', 'pg', 'pdfkit', 'svg-to-pdfkit', 'fontkit', 'qrcode', 'pdf-parse', 'playwright-core', 'electron'],
   logLevel: 'warning',
 });
 const run = spawnSync(process.execPath, ['--expose-gc', outfile, ...process.argv.slice(2)], { stdio: 'inherit' });

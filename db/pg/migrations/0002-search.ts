@@ -2,7 +2,9 @@
  * PostgreSQL twin of 0002: the text index and the shape search.
  * - job_text: one row per job (number, customer, part and drawing numbers, notes), kept by triggers, with a
  *   weighted tsvector (the identifying columns above free notes, as SQLite's bm25 weights) and a GIN index.
- *   The 'simple' configuration: part numbers and names are not stemmed, as FTS5's unicode61 does not stem.
+ *   The 'simple' configuration: part numbers and names are not stemmed, as FTS5's unicode61 does not stem;
+ *   everything but letters and digits is a separator first (as unicode61 reads text), so "J-26-0033" is the
+ *   words j, 26, 0033 in a row and not PostgreSQL's signed integers "-26" and "-0033".
  * - job_shape: a view over jobs. Its box filter is a range on the (kind, d) B-tree index and the exact
  *   values are the columns themselves, so no copy of the numbers needs keeping (SQLite's R*Tree needs one).
  */
@@ -15,9 +17,11 @@ export const version0002 = `
     drawing_number text NOT NULL,
     notes text NOT NULL,
     document tsvector GENERATED ALWAYS AS (
-      setweight(to_tsvector('simple', number), 'A') || setweight(to_tsvector('simple', part_number), 'A')
-      || setweight(to_tsvector('simple', drawing_number), 'B') || setweight(to_tsvector('simple', customer), 'C')
-      || setweight(to_tsvector('simple', notes), 'D')) STORED
+      setweight(to_tsvector('simple', regexp_replace(number, '[^[:alnum:]]+', ' ', 'g')), 'A')
+      || setweight(to_tsvector('simple', regexp_replace(part_number, '[^[:alnum:]]+', ' ', 'g')), 'A')
+      || setweight(to_tsvector('simple', regexp_replace(drawing_number, '[^[:alnum:]]+', ' ', 'g')), 'B')
+      || setweight(to_tsvector('simple', regexp_replace(customer, '[^[:alnum:]]+', ' ', 'g')), 'C')
+      || setweight(to_tsvector('simple', regexp_replace(notes, '[^[:alnum:]]+', ' ', 'g')), 'D')) STORED
   );
   CREATE INDEX job_text_search ON job_text USING gin (document);
 
