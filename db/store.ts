@@ -28,6 +28,12 @@ export interface Store {
   /** Runs fn as one write transaction (a savepoint inside one); writers take turns, as with BEGIN IMMEDIATE. */
   transaction<T>(fn: () => T): T;
   now(): Date;
+  /**
+   * A mark that moves when another connection commits a change, so an open job list knows to read again
+   * without querying the jobs: SQLite's PRAGMA data_version; on PostgreSQL, the count of change notices
+   * (LISTEN coilwright_jobs, migration 0015) received so far.
+   */
+  changeMark(): string;
   close(): void;
 }
 
@@ -60,6 +66,7 @@ export function makeStore(db: Database.Database, file: string, clock: () => Date
     readOnly,
     author,
     transaction: (fn) => db.transaction(fn).immediate(),
+    changeMark: () => `sqlite:${String(db.pragma('data_version', { simple: true }))}`,
     sql(text) {
       let statement = cache.get(text);
       if (!statement) {

@@ -204,4 +204,6 @@ export interface StoreInfo {
   author: string;
   /** Why nothing can be saved, or null. */
   readOnly: string | null;
+  /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
+  changeMark: string;
 }

@@ -10,8 +10,6 @@ import { pgStatement } from './statements';
 export interface PgStore extends Store {
   readonly dialect: 'postgres';
   readonly connection: SyncConnection;
-  /** Ids of jobs changed by any desk (this one included) since the last call: LISTEN/NOTIFY, see migration 0015. */
-  changedJobs(): number[];
 }
 
 export interface PgOpenOptions {
@@ -132,6 +130,7 @@ export function openPgStore(url: string, options: PgOpenOptions = {}): PgStore {
   const author = options.author ?? (process.env.COILWRIGHT_USER?.trim()
     || String(connection.query('SELECT current_user AS u', []).rows[0]?.u ?? defaultAuthor()));
   const cache = new Map<string, Statement>();
+  let notices = 0;
   return {
     dialect: 'postgres',
     connection,
@@ -148,7 +147,10 @@ export function openPgStore(url: string, options: PgOpenOptions = {}): PgStore {
     },
     transaction: transactions(connection),
     now: options.clock ?? (() => new Date()),
-    changedJobs: () => [...new Set(connection.takeNotifications().map((n) => Number(n.payload)))],
+    changeMark: () => {
+      notices += connection.takeNotifications().length;
+      return `postgres:${notices}`;
+    },
     close: () => connection.close(),
   };
 }

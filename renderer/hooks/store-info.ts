@@ -25,3 +25,26 @@ export function useStoreInfo(): StoreInfo | null {
   }, [api, tick]);
   return info;
 }
+
+/** How often an open job list asks whether another desk changed the store (a cheap call: no query of the jobs). */
+const CHANGE_POLL_MS = 3000;
+
+/** Calls `onChange` when another desk commits a change to the store while this screen is open. */
+export function useStoreChanges(onChange: () => void): void {
+  const api = useApi();
+  useEffect(() => {
+    let mark: string | null = null;
+    let live = true;
+    const look = () => void api.storeInfo({}).then((r) => {
+      if (!live || !r.ok) return;
+      if (mark !== null && r.value.changeMark !== mark) onChange();
+      mark = r.value.changeMark;
+    });
+    look();
+    const timer = setInterval(look, CHANGE_POLL_MS);
+    return () => {
+      live = false;
+      clearInterval(timer);
+    };
+  }, [api, onChange]);
+}

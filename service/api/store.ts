@@ -25,7 +25,7 @@ export interface StoreContext {
 const success = <T>(value: T): ApiResult<T> => ({ ok: true, value });
 
 export function storeInfo(store: Store): StoreInfo {
-  return { backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null };
+  return { backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark() };
 }
 
 export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName> {

@@ -81,6 +81,16 @@ describe.each(backends)('the job store on $name', (backend) => {
     expect((anna.sql('SELECT currency FROM quotes').get() as { currency: string }).currency).not.toBe('XXX');
   });
 
+  it('a change committed on another desk moves the change mark an open job list watches', async () => {
+    const [anna, ben] = backend.desks('Anna (estimator)', 'Ben (planner)');
+    const before = ben.changeMark();
+    expect(ben.changeMark()).toBe(before);
+    value(createJob(anna, job({ partNumber: 'FROM-ANNA' })));
+    // The notice travels over the server's connection: give it a moment to arrive.
+    for (let i = 0; i < 50 && ben.changeMark() === before; i++) await new Promise((r) => setTimeout(r, 20));
+    expect(ben.changeMark()).not.toBe(before);
+  });
+
   it('refuses rows that break a status, unit, JSON or range check', () => {
     const [store] = backend.desks('Anna (estimator)', 'unused');
     const created = value(createJob(store, job()));
