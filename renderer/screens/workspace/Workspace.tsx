@@ -1,4 +1,5 @@
 import { ChangeKind } from './ChangeKind';
+import { SavedElsewhere } from './SavedElsewhere';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Job } from '../../../core/api';
 import { usePlatform } from '../../api';
@@ -85,6 +86,7 @@ function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' 
       <ScreenHeading id="job-title" visuallyHidden>{editor.job ? `Job ${editor.job.number}` : 'New job'}</ScreenHeading>
       <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={() => setSimilar(true)} />
       <ChangeKind editor={editor} />
+      <SavedElsewhere editor={editor} />
       <TabList<Tab> label="Job views" idPrefix="job" tabs={tabs} active={tab} onSelect={setTab} />
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
         <TabPanel idPrefix="job" id="spec">
