@@ -64,7 +64,8 @@ export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
 export function createJob(store: Store, raw: unknown, options: NewJobOptions = {}): StoreResult<Job> {
   const checked = checkNewJob(raw);
   if (!checked.ok) return invalid(checked.errors);
-  return attempt(() => getJob(store, inTransaction(store, () => writeNewJob(store, checked.value, options))));
+  // Read back inside the transaction: the answer is this save, not a later one from another desk.
+  return attempt(() => inTransaction(store, () => getJob(store, writeNewJob(store, checked.value, options))));
 }
 
 /** Replaces the job's current state with `next` and adds it as a new revision. Inside a transaction. */
@@ -134,7 +135,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
     return failure('customer-twice', 'give the customer by name or by id, not both', 'customerId');
   }
   return attempt(() => {
-    inTransaction(store, () => {
+    return inTransaction(store, () => {
       const row = loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec });
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
@@ -145,8 +146,8 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       const resolved = resolveCustomer(store, { customer, customerId });
       if (resolved !== undefined) next.customerId = resolved;
       saveState(store, id, row.revision, next, why);
+      return getJob(store, id);
     });
-    return getJob(store, id);
   });
 }
 
@@ -164,7 +165,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   const checked = checkSpec(old.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   return attempt(() => {
-    inTransaction(store, () => {
+    return inTransaction(store, () => {
       const row = loadForSave(store, input.id, undefined);
       if (row.status === 'done') {
         throw new StoreError('job-done', `job ${row.number} is done and is not edited in place: copy it to a new job for a repeat or a change`, 'status');
@@ -173,7 +174,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
       const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
+      return getJob(store, input.id);
     });
-    return getJob(store, input.id);
   });
 }
