@@ -10,9 +10,9 @@ import { resolveCustomer } from './customers';
 import type { CheckedJob } from './input';
 import { checkNewJob, checkSpec } from './input';
 import { takeNumber } from './numbering';
-import { getJob, jobRow, revisionRow } from './read';
+import { jobRow, revisionRow } from './read';
 import type { JobRow } from './rows';
-import { storedSpecOf } from './rows';
+import { storedSpecOf, toJob } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
 import { judgementOf } from './rows';
@@ -51,6 +51,15 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   return id;
 }
 
+/**
+ * The job as the save left it: its row is read inside the save's transaction (so another desk's later save
+ * cannot answer for this one) and turned into a Job after the commit, keeping the write lock short.
+ */
+function savedJob(row: JobRow | undefined): StoreResult<Job> {
+  if (!row) throw new StoreError('not-found', 'the saved job could not be read back');
+  return toJob(row);
+}
+
 /** Runs a write; a StoreError thrown inside (after its transaction rolled back) becomes a value. */
 export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
   try {
@@ -64,8 +73,7 @@ export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
 export function createJob(store: Store, raw: unknown, options: NewJobOptions = {}): StoreResult<Job> {
   const checked = checkNewJob(raw);
   if (!checked.ok) return invalid(checked.errors);
-  // Read back inside the transaction: the answer is this save, not a later one from another desk.
-  return attempt(() => inTransaction(store, () => getJob(store, writeNewJob(store, checked.value, options))));
+  return attempt(() => savedJob(inTransaction(store, () => jobRow(store, writeNewJob(store, checked.value, options)))));
 }
 
 /** Replaces the job's current state with `next` and adds it as a new revision. Inside a transaction. */
@@ -135,7 +143,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
     return failure('customer-twice', 'give the customer by name or by id, not both', 'customerId');
   }
   return attempt(() => {
-    return inTransaction(store, () => {
+    return savedJob(inTransaction(store, () => {
       const row = loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec });
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
@@ -146,8 +154,8 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       const resolved = resolveCustomer(store, { customer, customerId });
       if (resolved !== undefined) next.customerId = resolved;
       saveState(store, id, row.revision, next, why);
-      return getJob(store, id);
-    });
+      return jobRow(store, id);
+    }));
   });
 }
 
@@ -165,7 +173,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   const checked = checkSpec(old.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   return attempt(() => {
-    return inTransaction(store, () => {
+    return savedJob(inTransaction(store, () => {
       const row = loadForSave(store, input.id, undefined);
       if (row.status === 'done') {
         throw new StoreError('job-done', `job ${row.number} is done and is not edited in place: copy it to a new job for a repeat or a change`, 'status');
@@ -174,7 +182,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
       const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
-      return getJob(store, input.id);
-    });
+      return jobRow(store, input.id);
+    }));
   });
 }
