@@ -72,6 +72,6 @@ export const version0009 = `
 
   DROP VIEW job_shape;
   DROP INDEX jobs_by_kind_d;
-  CREATE INDEX jobs_by_kind_d ON jobs (kind, d) INCLUDE (mean_diameter, free_length, active_coils, rate, material, material_family);
+  CREATE INDEX jobs_by_kind_d ON jobs (kind, d) INCLUDE (mean_diameter, free_length, active_coils, rate, material, material_family, id);
   ${shapeViews()}
 `;
