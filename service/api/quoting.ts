@@ -5,7 +5,7 @@ import type { QuoteDocument } from '../../core/documents';
 import { planManufacture } from '../../core/process/plan';
 import type { IssueDecision, IssueProblem } from '../../core/quoting/problems';
 import { issueProblems, problemSummary } from '../../core/quoting/problems';
-import { getJob, getSettings, listCustomers, recordQuote } from '../../db';
+import { getJob, getSettings, keepWorkingRevision, listCustomers, recordQuote } from '../../db';
 import type { Store } from '../../db';
 import { draftQuote, issuedQuoteDocument, jobPricing, storedPrintJob } from '../pdf/printing';
 
@@ -31,6 +31,9 @@ function needsDecision(problems: IssueProblem[]): ApiResult<never> {
  * open error findings or gaps in the price need the estimator's reason, which the snapshot keeps.
  */
 export function issueJobQuote(store: Store, request: IssueRequest, now: Date): ApiResult<{ quote: Quote; model: QuoteDocument }> {
+  // An issue ends the job's working session: the quote is priced from a permanent revision.
+  const kept = keepWorkingRevision(store, { id: request.jobId, reason: 'issued' });
+  if (!kept.ok) return { ok: false, error: { ...kept.error, path: 'jobId' } };
   const job = getJob(store, request.jobId);
   if (!job.ok) return { ok: false, error: { ...job.error, path: 'jobId' } };
   const settings = getSettings(store);

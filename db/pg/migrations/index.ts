@@ -7,6 +7,7 @@ import { version0006 } from './0006-keep-issued-rows';
 import { version0007 } from './0007-estimating';
 import { version0008 } from './0008-job-requirements';
 import { version0009 } from './0009-list-and-shape-indexes';
+import { version0013 } from './0013-working-revisions';
 import { version0015 } from './0015-who-made-it';
 
 /**
@@ -23,5 +24,6 @@ export const pgMigrations: readonly { version: number; sql: string }[] = [
   { version: 7, sql: version0007 },
   { version: 8, sql: version0008 },
   { version: 9, sql: version0009 },
+  { version: 13, sql: version0013 },
   { version: 15, sql: version0015 },
 ];

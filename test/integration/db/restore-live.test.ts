@@ -3,7 +3,6 @@ import { existsSync, renameSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { backupStore, createJob, findJobs, getSettings, recordQuote, getJob, listJobs, openStore, restoreStore, similarJobs } from '../../../db';
-import type { SqliteStore } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { startWebServer } from '../../../service/web/server';
 import { job, tempDir, track, value } from './helpers';

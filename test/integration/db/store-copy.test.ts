@@ -2,7 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import {
-  addAttachment, copyStore, createDemoShop, createJob, findJobs, getAttachment, listJobs, openPgStore, openStore, similarJobs, getJob,
+  addAttachment, copyStore, createDemoShop, createJob, findJobs, getAttachment, listJobs, openStore, similarJobs, getJob,
 } from '../../../db';
 import { createService, dispatch } from '../../../service/api';
 import { usePgCluster } from '../../support/pg-stores';
