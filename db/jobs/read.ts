@@ -18,10 +18,21 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
     ref = found.id;
   }
   const id = typeof ref === 'number' ? ref : ref.id;
+  const read = jobRead(store, id);
+  return read ? jobOfRead(read) : failure('not-found', `no job with id ${id}`, 'id');
+}
+
+/** A job's row and its open working session, read together (a save reads them inside its transaction). */
+export interface JobRead { row: JobRow; open: ReturnType<typeof workingRow> }
+
+export function jobRead(store: Store, id: number): JobRead | undefined {
   const row = jobRow(store, id);
-  if (!row) return failure('not-found', `no job with id ${id}`, 'id');
+  return row ? { row, open: workingRow(store, id) } : undefined;
+}
+
+/** The Job of a read: the spec parsed and checked, the working session attached. */
+export function jobOfRead({ row, open }: JobRead): StoreResult<Job> {
   const job = toJob(row);
-  const open = job.ok ? workingRow(store, id) : undefined;
   if (!job.ok || !open) return job;
   return success({ ...job.value, working: { baseRevision: open.base_revision, openedAt: open.opened_at, savedAt: open.saved_at, saves: open.saves } });
 }

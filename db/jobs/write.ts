@@ -10,9 +10,10 @@ import { resolveCustomer } from './customers';
 import type { CheckedJob } from './input';
 import { checkNewJob, checkSpec } from './input';
 import { takeNumber } from './numbering';
-import { jobRow, revisionRow } from './read';
+import { jobOfRead, jobRead, jobRow, revisionRow } from './read';
+import type { JobRead } from './read';
 import type { JobRow } from './rows';
-import { storedSpecOf, toJob } from './rows';
+import { storedSpecOf } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, rowValues, stateOfRow } from './state';
 import { addRevision, closeWorking, dropWorking, markWorkingSave } from './working';
@@ -51,9 +52,9 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
  * The job as the save left it: its row is read inside the save's transaction (so another desk's later save
  * cannot answer for this one) and turned into a Job after the commit, keeping the write lock short.
  */
-function savedJob(row: JobRow | undefined): StoreResult<Job> {
-  if (!row) throw new StoreError('not-found', 'the saved job could not be read back');
-  return toJob(row);
+function savedJob(read: JobRead | undefined): StoreResult<Job> {
+  if (!read) throw new StoreError('not-found', 'the saved job could not be read back');
+  return jobOfRead(read);
 }
 
 /** Runs a write; a StoreError thrown inside (after its transaction rolled back) becomes a value. */
@@ -69,7 +70,7 @@ export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
 export function createJob(store: Store, raw: unknown, options: NewJobOptions = {}): StoreResult<Job> {
   const checked = checkNewJob(raw);
   if (!checked.ok) return invalid(checked.errors);
-  return attempt(() => savedJob(inTransaction(store, () => jobRow(store, writeNewJob(store, checked.value, options)))));
+  return attempt(() => savedJob(inTransaction(store, () => jobRead(store, writeNewJob(store, checked.value, options)))));
 }
 
 const SETTERS = ROW_COLUMNS.split(',').map((c) => `${c.trim()} = ?`).join(', ');
@@ -108,7 +109,7 @@ export function keepWorkingRevision(store: Store, input: { id: number; reason?: 
   return attempt(() => savedJob(inTransaction(store, () => {
     if (!jobRow(store, input.id)) throw new StoreError('not-found', `no job with id ${input.id}`, 'id');
     closeSession(store, input.id, input.reason ?? 'saved');
-    return jobRow(store, input.id);
+    return jobRead(store, input.id);
   })));
 }
 
@@ -183,7 +184,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       // A correction or a drawing revision is never folded into a working session: it is its own revision.
       if (working === true && why === reason) saveWorking(store, id, row.revision, next);
       else saveState(store, id, row.revision, next, why);
-      return jobRow(store, id);
+      return jobRead(store, id);
     }));
   });
 }
@@ -213,7 +214,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
       const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
-      return jobRow(store, input.id);
+      return jobRead(store, input.id);
     }));
   });
 }
