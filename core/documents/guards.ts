@@ -36,7 +36,10 @@ const quoteSchema: z.ZodType<QuoteDocument, unknown> = z.object({
   prices: z.object({ currency: z.string(), table, notes: z.array(z.string()) }),
   exceptions: z.array(z.string()).default([]),
   leadTime: z.string(),
+  commercial: z.array(field).default([]),
   terms: z.array(z.string()),
+  priceCurve: figure.nullable().default(null),
+  signature: z.object({ preparedBy: z.string(), boxes: z.array(z.string()) }).nullable().default(null),
 });
 
 export function parseQuoteDocument(raw: unknown): Result<QuoteDocument> {

@@ -5,8 +5,11 @@ import type { Spec } from '../spec';
 import { cautionNotice } from './cautions';
 import { drawingText, kindTitle, letterhead, present } from './common';
 import { springContent } from './spring';
+import { commercialFields, signatureBlock, statedTerms } from './quote-terms';
+import type { QuoteTermsInput } from './quote-terms';
+import { priceCurve } from '../drawing';
 import { addDays, dayOf, moneyText, piecesText, unitPriceText } from './text';
-import type { Field, QuoteDocument, QuoteIssue, TableModel } from './types';
+import type { Field, FigureModel, QuoteDocument, QuoteIssue, TableModel } from './types';
 import { DOCUMENT_VERSION } from './types';
 
 export interface QuoteJob {
@@ -19,6 +22,8 @@ export interface QuoteJob {
   drawingNumber: string;
   drawingRevision: string;
   leadTimeDays: number | null;
+  /** Payment terms agreed with this customer; empty or absent for the shop's. */
+  customerPaymentTerms?: string;
 }
 
 export interface QuoteInput {
@@ -34,6 +39,8 @@ export interface QuoteInput {
   validityDays?: number;
   /** Engineering exceptions accepted at issue, already in the customer's words. */
   exceptions?: string[];
+  /** The enquiry reference and the terms the estimator set on this quote. */
+  terms?: QuoteTermsInput;
 }
 
 export const OVER_UNDER_PERCENT = 10;
@@ -51,6 +58,13 @@ function priceTable(estimate: CostEstimate): TableModel {
       ...(estimate.charges ?? []).map((ch) => [`${ch.item}, once per order`, '', moneyText(ch.amount)]),
     ],
   };
+}
+
+const PRICE_CURVE = { width: 480, height: 240 };
+
+function priceCurveFigure(estimate: CostEstimate): FigureModel {
+  const points = estimate.breaks.map((b) => ({ quantity: b.quantity, unitPrice: b.unitPrice }));
+  return { caption: `Unit price (${estimate.currency}) against quantity`, svg: priceCurve(points, estimate.currency, PRICE_CURVE), ...PRICE_CURVE };
 }
 
 function priceNotes(estimate: CostEstimate): string[] {
@@ -72,8 +86,9 @@ function leadTimeText(days: number | null): string {
   return days === null ? 'to be confirmed with the order' : `${days} days from order and drawing approval`;
 }
 
-function partFields(job: QuoteJob): Field[] {
+function partFields(job: QuoteJob, enquiryReference: string): Field[] {
   return present([
+    { label: 'Your enquiry', value: enquiryReference },
     { label: 'Part number', value: job.partNumber },
     { label: 'Drawing', value: drawingText(job.drawingNumber, job.drawingRevision) },
     { label: 'Our job', value: job.number ?? '' },
@@ -89,18 +104,22 @@ export function quoteDocument(input: QuoteInput): QuoteDocument {
   const validityDays = input.validityDays ?? settings.defaults.quoteValidityDays;
   const issue = quoteIssue(input.number ?? 'DRAFT', input.issuedAt, validityDays);
   const spring = springContent(spec, settings, job.partNumber || kindTitle(spec.kind));
+  const stated = statedTerms(settings.quoteTerms, job.customerPaymentTerms, input.terms);
   return {
     version: DOCUMENT_VERSION, type: 'quote', paperSize: settings.defaults.paperSize, createdAt: input.issuedAt,
-    title: 'Quotation', reference: `Quotation ${issue.number}`, letterhead: letterhead(settings), caution: cautionNotice(),
+    title: 'Quotation', reference: `Quotation ${issue.number}`, letterhead: letterhead(settings), caution: cautionNotice('customer'),
     issue,
     customer: { name: job.customerName ?? 'Customer not named', lines: [...(job.customerLines ?? [])] },
-    part: partFields(job),
+    part: partFields(job, stated.enquiryReference),
     specification: { heading: spring.heading, fields: spring.fields },
     drawing: spring.drawing,
     prices: { currency: estimate.currency, table: priceTable(estimate), notes: priceNotes(estimate) },
     exceptions: [...(input.exceptions ?? [])],
     leadTime: leadTimeText(job.leadTimeDays),
+    commercial: commercialFields(stated),
     terms: terms(estimate.currency, validityDays),
+    priceCurve: settings.quoteTerms.priceCurveOnQuote ? priceCurveFigure(estimate) : null,
+    signature: signatureBlock(stated),
   };
 }
 

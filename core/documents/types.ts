@@ -71,6 +71,13 @@ export interface QuoteIssue {
   validityDays: number;
 }
 
+/** Who signs a document, and the boxes left for the signature. */
+export interface SignatureBlock {
+  /** "J. Demo, estimator". */
+  preparedBy: string;
+  boxes: string[];
+}
+
 export interface QuoteDocument extends DocumentCommon {
   type: 'quote';
   issue: QuoteIssue;
@@ -82,7 +89,12 @@ export interface QuoteDocument extends DocumentCommon {
   /** Engineering exceptions the shop accepted, in the customer's words. */
   exceptions: string[];
   leadTime: string;
+  /** Payment, delivery, packaging and certificates as offered on this quote. */
+  commercial: Field[];
   terms: string[];
+  /** Unit price against quantity, when the shop prints it on quotes. */
+  priceCurve: FigureModel | null;
+  signature: SignatureBlock | null;
 }
 
 /** One operation of the routing as the shop floor reads it, with the boxes the operator fills in. */
@@ -104,8 +116,11 @@ export interface TravellerDocument extends DocumentCommon {
   /** The text of the QR code (the job number), or null for a job not in the store. */
   qr: string | null;
   material: { fields: Field[]; fillIn: string[] };
+  /** First-article approval and engineering release, signed before the run goes on. */
+  release: string[];
   operations: OperationModel[];
-  inspection: { summary: string[]; table: TableModel; signOff: string[] };
+  /** `finish`: what the inspector records of the finish (none when no finish is applied). */
+  inspection: { summary: string[]; table: TableModel; finish: string[]; signOff: string[] };
   figures: FigureModel[];
   safety: string[];
   /** Review findings still open (errors and warnings), printed so nobody misses them on the floor. */
@@ -125,6 +140,7 @@ export const documentQuantities: QuantityMap = {
   version: 'ordinal',
   issue: { validityDays: 'days' },
   drawing: figureQuantities,
+  priceCurve: figureQuantities,
   figures: figureQuantities,
   prices: { table: tableQuantities },
   inspection: { table: tableQuantities },

@@ -9,7 +9,9 @@ import { updateToVersion0006 } from './0006-keep-issued-rows';
 import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
+import { updateToVersion0011 } from './0011-customer-details';
 import { updateToVersion0013 } from './0013-working-revisions';
+import { updateToVersion0014 } from './0014-job-lineage-and-archive';
 import { updateToVersion0015 } from './0015-who-made-it';
 
 export interface Migration {
@@ -29,7 +31,9 @@ export const migrations: readonly Migration[] = [
   { version: 7, name: 'estimating', update: updateToVersion0007 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
+  { version: 11, name: 'customer details', update: updateToVersion0011 },
   { version: 13, name: 'working revisions', update: updateToVersion0013 },
+  { version: 14, name: 'job lineage, archive and spring words', update: updateToVersion0014 },
   { version: 15, name: 'who made it', update: updateToVersion0015 },
 ];
 

@@ -69,7 +69,9 @@ export function migratePg(connection: SyncConnection, name: string, target = LAT
       connection.query(`INSERT INTO ${MARK_TABLE} VALUES ($1, 0)`, [APPLICATION_ID]);
     }
     for (const m of pgMigrations) {
-      if (m.version > from && m.version <= target && m.sql.trim() !== '') connection.query(m.sql, []);
+      if (m.version <= from || m.version > target) continue;
+      if (m.sql.trim() !== '') connection.query(m.sql, []);
+      m.after?.(connection);
     }
     const to = Math.max(from, target);
     connection.query(`UPDATE ${MARK_TABLE} SET schema_version = $1`, [to]);

@@ -1,7 +1,7 @@
 import type { ApiResult } from '../../core/api';
 import type { Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
-import type { QuoteDocument } from '../../core/documents';
+import type { QuoteDocument, QuoteTermsInput } from '../../core/documents';
 import { planManufacture } from '../../core/process/plan';
 import type { IssueDecision, IssueProblem } from '../../core/quoting/problems';
 import { issueProblems, problemSummary } from '../../core/quoting/problems';
@@ -14,6 +14,7 @@ export interface IssueRequest {
   validityDays?: number | undefined;
   /** The estimator's reason for issuing despite the problems named; required when there are any. */
   accept?: string | undefined;
+  terms?: QuoteTermsInput | undefined;
 }
 
 /** Refused: the quote has problems and no decision was given. Every problem is in `details`. */
@@ -46,7 +47,7 @@ export function issueJobQuote(store: Store, request: IssueRequest, now: Date): A
   const decision: IssueDecision | null = problems.length > 0 ? { reason: request.accept!, problems } : null;
   const exceptions = problems.flatMap((p) => (p.customerText === null ? [] : [p.customerText]));
   const validityDays = request.validityDays ?? settings.value.defaults.quoteValidityDays;
-  const { model } = draftQuote(print, settings.value, now, { estimate, exceptions, validityDays });
+  const { model } = draftQuote(print, settings.value, now, { estimate, exceptions, validityDays, ...(request.terms ? { terms: request.terms } : {}) });
   const quote = recordQuote(store, {
     jobId: job.value.id, jobRevision: job.value.revision, validityDays, prices: JSON.parse(JSON.stringify(estimate)),
     quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(model)), decision,

@@ -1,4 +1,5 @@
 import { parsePrintFile } from '../../core/documents';
+import type { QuoteTermsInput } from '../../core/documents';
 import type { Result } from '../../core/result';
 import { StoreError, writeFileReplacing } from '../../db';
 import { renderQuote, renderTraveller } from '../pdf';
@@ -43,6 +44,28 @@ function acceptOption(args: ParsedArgs): { accept?: string } {
   return { accept: reason };
 }
 
+/** A text option given once, or nothing; a flag without its text is an error naming the option. */
+function textOption(args: ParsedArgs, name: string): string | undefined {
+  const v = args.options.get(name);
+  if (v === undefined) return undefined;
+  if (typeof v !== 'string') throw new InputError([{ code: 'invalid-option', path: `--${name}`, message: `--${name} needs its text, e.g. --${name} "…"` }]);
+  return v;
+}
+
+/** The quote's own terms: --enquiry, --payment, --delivery, --packaging, --certificates "a; b", --estimator. */
+function termsOption(args: ParsedArgs): { terms?: QuoteTermsInput } {
+  const terms: QuoteTermsInput = {};
+  const pairs = [['enquiry', 'enquiryReference'], ['payment', 'paymentTerms'], ['delivery', 'deliveryTerms'],
+    ['packaging', 'packaging'], ['estimator', 'estimator']] as const;
+  for (const [option, key] of pairs) {
+    const v = textOption(args, option);
+    if (v !== undefined) terms[key] = v;
+  }
+  const certificates = textOption(args, 'certificates');
+  if (certificates !== undefined) terms.certificates = certificates.split(';').map((c) => c.trim()).filter(Boolean);
+  return Object.keys(terms).length > 0 ? { terms } : {};
+}
+
 /** A stored job (--job ID|NUMBER) goes through the API, which issues its quote; a file prints as a draft. */
 async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string, unknown>> {
   const out = requireOption(args, 'out');
@@ -51,12 +74,12 @@ async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string
   if (typeof number === 'string' || typeof ref === 'string') {
     const printed = typeof number === 'string'
       ? await call('reprintQuote', { number })
-      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id, ...acceptOption(args) });
+      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id, ...acceptOption(args), ...termsOption(args) });
     write(out, Buffer.from(printed.base64, 'base64'));
     return { file: out, quote: printed.reference, issued: typeof number !== 'string', reprint: typeof number === 'string' };
   }
   const print = printFile(args, 'print quote');
-  const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date());
+  const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date(), termsOption(args));
   write(out, await renderQuote(model));
   return { file: out, quote: model.issue.number, issued: false, missing: estimate.missing };
 }
@@ -67,11 +90,13 @@ async function printTraveller(args: ParsedArgs, call: Caller): Promise<Record<st
   const ref = args.options.get('job');
   if (typeof ref === 'string') {
     const jobId = (await call('getJob', jobRef(ref))).id;
-    const printed = await call('printTraveller', { jobId, ...(quantity === undefined ? {} : { quantity }) });
+    const customerOrder = textOption(args, 'order');
+    const printed = await call('printTraveller', { jobId, ...(quantity === undefined ? {} : { quantity }), ...(customerOrder ? { customerOrder } : {}) });
     write(out, Buffer.from(printed.base64, 'base64'));
     return { file: out, job: printed.reference, findings: printed.findings };
   }
-  const print = printFile(args, 'print traveller');
+  const order = textOption(args, 'order');
+  const print = { ...printFile(args, 'print traveller'), ...(order ? { purchaseOrder: order } : {}) };
   const model = must(travellerFor(print, await call('getSettings', {}), quantity, new Date()));
   write(out, await renderTraveller(model));
   return { file: out, job: print.number, quantity: quantity ?? print.orderQuantity ?? print.spec.quantities?.[0], findings: model.findings };
@@ -87,8 +112,10 @@ export const printCommand: Command = {
   usage: [
     'print quote FILE|--job ID [--accept "reason"] --db DB --out x.pdf   quotation PDF; for a stored job the quote is issued',
     '  and kept; open errors or an incomplete price refuse the issue unless --accept gives the reason for accepting them',
+    '  [--enquiry REF] [--payment TEXT] [--delivery TEXT] [--packaging TEXT] [--certificates "a; b"] [--estimator NAME]',
+    '  state this quote\'s enquiry reference and terms (else the customer\'s and the shop\'s)',
     '  print quote --quote NUMBER --db DB --out x.pdf reprint an issued quote from its snapshot',
-    '  print traveller FILE|--job ID [--quantity N] --db DB --out x.pdf   shop traveller PDF',
+    '  print traveller FILE|--job ID [--quantity N] [--order NO] --db DB --out x.pdf   shop traveller PDF; --order: the customer\'s order number',
   ].join('\n'),
   async run(args, out) {
     const sub = subcommandOf('print', args, subcommands);

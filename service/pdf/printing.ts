@@ -2,7 +2,7 @@ import type { Customer, Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
 import { parseQuoteDocument, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
-import type { PrintJob, QuoteDocument, TravellerDocument } from '../../core/documents';
+import type { PrintJob, QuoteDocument, QuoteTermsInput, TravellerDocument } from '../../core/documents';
 import type { Result } from '../../core/result';
 import type { Settings } from '../../core/settings/schema';
 
@@ -14,10 +14,16 @@ export function storedPrintJob(job: Job, customers: readonly Customer[]): PrintJ
   const customer = job.customer && customers.find((c) => c.id === job.customer!.id);
   return {
     number: job.number, customerName: job.customer?.name ?? null,
-    customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
+    customerLines: customer ? customerLines(customer) : [],
+    ...(customer && customer.paymentTerms !== '' ? { customerPaymentTerms: customer.paymentTerms } : {}),
     partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
     orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec, judgement: job.judgement,
   };
+}
+
+/** The customer under its name on a quote: who it is for, the address, then how to reach them. */
+export function customerLines(c: Customer): string[] {
+  return [c.contact && `Attn. ${c.contact}`, ...c.addressLines, c.email, c.phone && `Tel. ${c.phone}`].filter(Boolean);
 }
 
 /** What a job's price depends on besides its spec and the shop: its order quantity and the estimator's overrides. */
@@ -29,6 +35,7 @@ export interface DraftOptions {
   estimate?: CostEstimate;
   exceptions?: string[];
   validityDays?: number;
+  terms?: QuoteTermsInput;
 }
 
 export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
@@ -36,6 +43,7 @@ export function draftQuote(print: PrintJob, settings: Settings, now: Date, optio
   const model = quoteDocument({
     spec: print.spec, settings, estimate, issuedAt: now.toISOString(),
     validityDays: options.validityDays ?? settings.defaults.quoteValidityDays, job: print, exceptions: options.exceptions ?? [],
+    ...(options.terms ? { terms: options.terms } : {}),
   });
   return { model, estimate };
 }
