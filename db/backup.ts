@@ -10,7 +10,7 @@ import type { OpenOptions } from './open';
 import { INCOMING } from './recover';
 import { prepareIncoming, removeStoreFiles } from './restore-copy';
 import { replaceRows } from './restore-into';
-import type { Store } from './store';
+import type { SqliteStore as Store } from './store';
 import { readOnlyError, writeFailure } from './store';
 
 function asFailure(e: unknown): { ok: false; error: { code: string; message: string; path: string } } {

@@ -1,8 +1,8 @@
 /** The job store: better-sqlite3 underneath, values (`{ ok, value } | { ok: false, error }`) on top. */
 export { openStore, tryOpenStore } from './open';
 export type { OpenOptions } from './open';
-export type { Store } from './store';
-export { inTransaction } from './store';
+export type { Store, SqliteStore, Statement } from './store';
+export { inTransaction, isSqliteStore } from './store';
 export { StoreError } from './errors';
 export { writeFileReplacing } from './files';
 export type { StoreResult } from './errors';
@@ -38,3 +38,8 @@ export type { AdoptDesignInput, StoredRequirement } from './jobs/requirements';
 export { createEnquiry, listEnquiries, enquiryJobs } from './enquiries/enquiries';
 export type { NewEnquiry } from './enquiries/enquiries';
 export { savedRequestMapping } from './enquiries/mappings';
+export { openStoreAt, STORE_VARIABLE } from './open-location';
+export { openPgStore, isPostgresLocation, storeName } from './pg';
+export type { PgStore } from './pg';
+export { copyStore } from './copy';
+export type { TableCopy } from './copy';

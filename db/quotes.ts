@@ -18,7 +18,7 @@ import { parseWith } from '../core/validation';
 interface QuoteRow {
   id: number; number: string; job_id: number; job_revision: number; issued_at: string; validity_days: number;
   currency: string; job?: string; spec?: string; settings?: string; prices?: string; quantity_breaks?: string; document?: string;
-  decision?: string | null;
+  decision?: string | null; made_by?: string;
 }
 
 const DAY_MS = 86_400_000;
@@ -44,6 +44,7 @@ function toQuote(row: QuoteRow): StoreResult<Quote> {
     quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
     document: JSON.parse(row.document!),
     decision: row.decision ? JSON.parse(row.decision) as IssueDecision : null,
+    madeBy: row.made_by ?? '',
   });
 }
 
@@ -80,11 +81,11 @@ export function recordQuote(store: Store, snapshot: QuoteSnapshot): StoreResult<
       const number = takeNumber(store, 'quotes');
       const job = { number: row.number, ...revisionFields(store, stateOfRow(row)) };
       const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
-                                  settings, prices, quantity_breaks, document, decision) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+                                  settings, prices, quantity_breaks, document, decision, made_by) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
         .run(number, row.id, row.revision, store.now().toISOString(), snapshot.validityDays, settings.defaults.currency,
           JSON.stringify(job), JSON.stringify(stored.spec), JSON.stringify(settings), JSON.stringify(snapshot.prices),
           JSON.stringify(snapshot.quantityBreaks), JSON.stringify(snapshot.document),
-          snapshot.decision === null ? null : JSON.stringify(snapshot.decision));
+          snapshot.decision === null ? null : JSON.stringify(snapshot.decision), store.author);
       if (MOVES_TO_QUOTED.has(row.status) && row.status !== 'quoted') {
         const moved = updateJob(store, { id: row.id, status: 'quoted' }, `quoted (${number})`);
         if (!moved.ok) throw new StoreError(moved.error.code, moved.error.message, moved.error.path);

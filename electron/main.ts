@@ -18,7 +18,7 @@ import { offerRestoreOfDamagedStore } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
-import { openShopStore } from '../service/host/first-run';
+import { chosenStore, openShopStoreAt } from '../service/host/first-run';
 import { createLog } from './shell/logging';
 import type { Log } from './shell/logging';
 import { applicationMenu } from './shell/menu';
@@ -57,7 +57,8 @@ function openService(log: Log): Service | { code: string; message: string } {
     electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
   });
   if (!binding.ok) return binding.error;
-  const opened = openShopStore(userFile('coilwright.db'));
+  // COILWRIGHT_STORE (a file or a postgres:// connection string) names another store than the user's own file.
+  const opened = openShopStoreAt(chosenStore({}) ?? userFile('coilwright.db'));
   if (!opened.ok) return opened.error;
   if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
   const { notice } = opened.value;

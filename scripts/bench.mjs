@@ -9,7 +9,8 @@ const common = {
   platform: 'node',
   target: 'node20',
   format: 'cjs',
-  external: ['better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'fontkit', 'qrcode', 'pdf-parse', 'playwright-core', 'electron'],
+  outfile,
+  external: ['better-sqlite3', 'pg', 'pdfkit', 'svg-to-pdfkit', 'fontkit', 'qrcode', 'pdf-parse', 'playwright-core', 'electron'],
   logLevel: 'warning',
 };
 await build({ ...common, entryPoints: ['bench/run.ts'], outfile });

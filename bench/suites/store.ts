@@ -3,7 +3,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { JobShape, ListJobsInput } from '../../core/api/store';
-import type { Store } from '../../db';
+import type { SqliteStore, Store } from '../../db';
+import { isSqliteStore } from '../../db';
 import { findJobs, listJobs, openStore } from '../../db';
 import { checkSpec } from '../../db/jobs/input';
 import { nearestJobs, scanSql } from '../../db/search/similar';
@@ -38,7 +39,9 @@ const SHAPE_KEYS = ['id', 'wireDiameter', 'meanDiameter', 'freeLength', 'activeC
  * array (no row objects), scored into one reused point, the best `limit` kept in a small sorted list as
  * the scan goes (no sort of every job).
  */
-function plainScan(store: Store, asked: JobShape, limit: number): { id: number; distance: number }[] {
+function plainScan(given: Store, asked: JobShape, limit: number): { id: number; distance: number }[] {
+  if (!isSqliteStore(given)) throw new Error('the plain scan reads a SQLite store');
+  const store: SqliteStore = given;
   const best: { id: number; distance: number }[] = [];
   const point: Record<string, unknown> = {};
   for (const values of store.sql(scanSql(asked.kind as 'compression')).raw(true).iterate() as Iterable<unknown[]>) {

@@ -9,13 +9,13 @@ import type { StoreResult } from '../errors';
 import type { LongRun } from '../long-run';
 import { cancelled } from '../long-run';
 import { openStore } from '../open';
-import type { Store } from '../store';
-import { inTransaction, readOnlyError, writeFailure } from '../store';
+import type { SqliteStore, Store } from '../store';
+import { inTransaction, isSqliteStore, readOnlyError, writeFailure } from '../store';
 import { CsvSyntaxError, csvRecords, parseCsv } from './csv';
 import { WholeFileError, csvTaker, detectFormat, headerError, jsonTaker } from './import-formats';
 import { ImportRun } from './import-run';
 
-const rollback = (store: Store) => {
+const rollback = (store: SqliteStore) => {
   if (store.db.inTransaction) store.db.exec('ROLLBACK');
 };
 
@@ -122,7 +122,8 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
   if (!parsed.ok) return invalid(parsed.errors);
   const { file, renumber } = parsed.value;
   // A store without a file of its own (in memory) cannot be opened twice: it imports on its own connection.
-  if (file === undefined || store.file === ':memory:' || store.file === '') return importJobs(store, parsed.value);
+  // A server store imports in one transaction of its own connection, the server keeping others' reads consistent.
+  if (file === undefined || !isSqliteStore(store) || store.file === ':memory:' || store.file === '') return importJobs(store, parsed.value);
   if (store.readOnly) return { ok: false, error: readOnlyError(store, store.readOnly).toApiError() };
   let total: number;
   let start: string;
@@ -133,6 +134,7 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
     return invalid([fieldError('unreadable-file', 'file', `${file}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`)]);
   }
   const writer = openStore(store.file, { check: 'none', clock: () => store.now() });
+  writer.author = store.author;
   const run = new ImportRun(writer, renumber);
   try {
     writer.db.exec('BEGIN IMMEDIATE');

@@ -4,7 +4,7 @@ import type { ApiResult } from '../../core/api';
 import { backupSchema, exportFileSchema, importFileSchema, restoreSchema } from '../../core/api/store';
 import type { BackupResult, ExportResult, ImportResult, RestoreResult } from '../../core/api/store';
 import { zodErrors } from '../../core/validation';
-import { backupStore, exportJobsToFile, importJobsFromFile, restoreStore } from '../../db';
+import { backupStore, exportJobsToFile, importJobsFromFile, isSqliteStore, restoreStore } from '../../db';
 import type { LongRun } from '../../db';
 import type { StoreContext } from './store';
 
@@ -26,10 +26,17 @@ export interface FileActions {
 
 export type { LongRun };
 
+/** A server's store is copied with the server's own tools, which keep it consistent while others work in it. */
+function serverCopyRefused(name: string, what: string): { ok: false; error: { code: string; message: string; path: string } } {
+  return { ok: false, error: { code: 'server-store', path: 'file',
+    message: `${name} is a PostgreSQL store: it is ${what} with pg_dump and pg_restore (see the README), or copied to a file with "db copy"` } };
+}
+
 export function fileActions(ctx: StoreContext): FileActions {
   const handlers: { [K in FileActionName]: (input: z.output<(typeof schemas)[K]>, long: LongRun) => Promise<ApiResult<Outputs[K]>> | ApiResult<Outputs[K]> } = {
-    backup: (input, long) => backupStore(ctx.store, input.file, long),
+    backup: (input, long) => (isSqliteStore(ctx.store) ? backupStore(ctx.store, input.file, long) : serverCopyRefused(ctx.store.file, 'backed up')),
     restore: async (input) => {
+      if (!isSqliteStore(ctx.store)) return serverCopyRefused(ctx.store.file, 'restored');
       const outcome = await restoreStore(ctx.store, input.file, ctx.openOptions);
       ctx.store = outcome.store;
       return outcome.result;

@@ -6,7 +6,7 @@ import type { ApiResult } from '../../core/api';
 import type { FileActions } from '../api';
 import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
-import { createDemoShop, restoreDamagedStore, writeExport } from '../../db';
+import { StoreError, copyStore, createDemoShop, openStoreAt, restoreDamagedStore, writeExport } from '../../db';
 import type { Store } from '../../db';
 import { bytesRead, withProgress } from './progress';
 
@@ -62,9 +62,12 @@ export const dbCommand: Command = {
     '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
     '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
+    '  db copy --from STORE --to STORE every job, revision, quote, attachment, setting and record into an empty store, in one',
+    '                                  transaction, counts and checksums verified; STORE is a file or a postgres:// connection string',
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];
+    if (name === 'copy') return copyBetween(args, out);
     const sub = subcommandOf('db', args, subcommands);
     try {
       await withStore(args, (call, service) => sub(args, service.files, out, call, service.store()));
@@ -74,6 +77,32 @@ export const dbCommand: Command = {
     }
   },
 };
+
+function openNamed(args: ParsedArgs, option: 'from' | 'to'): Store {
+  try {
+    return openStoreAt(requireOption(args, option));
+  } catch (e) {
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: `--${option}` }]);
+    throw e;
+  }
+}
+
+/** `db copy`: both stores are named by file or host/database in the output, never by their connection strings. */
+async function copyBetween(args: ParsedArgs, out: (text: string) => void): Promise<void> {
+  const source = openNamed(args, 'from');
+  try {
+    const target = openNamed(args, 'to');
+    try {
+      const result = copyStore(source, target);
+      if (!result.ok) raise(result.error);
+      out(toJson({ from: source.file, to: target.file, tables: result.value.tables }));
+    } finally {
+      target.close();
+    }
+  } finally {
+    source.close();
+  }
+}
 
 /** A damaged store cannot be opened, so its restore puts the backup in its place and keeps it beside. */
 async function restoreOverDamaged(args: ParsedArgs, out: (text: string) => void): Promise<void> {
@@ -86,8 +115,8 @@ export const demoCommand: Command = {
   name: 'demo',
   usage: 'demo --db FILE            create the DEMO shop (settings, customers, about 30 jobs) in a new store',
   async run(args, out) {
-    const result = await withStore(args, async (_call, service) => createDemoShop(service.store()));
+    const { file, result } = await withStore(args, async (_call, service) => ({ file: service.store().file, result: createDemoShop(service.store()) }));
     if (!result.ok) raise(result.error);
-    out(toJson({ file: requireOption(args, 'db'), ...result.value }));
+    out(toJson({ file, ...result.value }));
   },
 };

@@ -5,7 +5,7 @@ import type { ApiError } from '../../core/api';
 import { dispatch } from '../api/dispatch';
 import { createService } from '../api';
 import type { Service } from '../api';
-import { openShopStore } from '../host/first-run';
+import { openShopStoreAt } from '../host/first-run';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
 import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
@@ -35,6 +35,8 @@ export interface WebServer {
   url: string;
   token: string;
   port: number;
+  /** The store open: its file, or host/database of a server (never a password). */
+  storeName: string;
   server: Server;
   close(): Promise<void>;
 }
@@ -140,7 +142,7 @@ function listen(server: Server, port: number): Promise<number> {
 }
 
 function openService(dbFile: string, onNotice: (text: string) => void): Service {
-  const opened = openShopStore(dbFile);
+  const opened = openShopStoreAt(dbFile);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
   return createService(opened.value.store);
@@ -177,6 +179,7 @@ export async function startWebServer(options: WebServerOptions): Promise<WebServ
   }
   return {
     url: `http://${WEB_HOST}:${port}/?token=${ctx.token}`,
+    storeName: service.store().file,
     token: ctx.token,
     port,
     server,

@@ -36,6 +36,10 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the web transport importing csv-parse', 'service/web/fence-probe.ts', "import { parse } from 'csv-parse/sync'; export const x = parse;"],
   ['the renderer importing csv-stringify', 'renderer/model/fence-probe.ts', "import { stringify } from 'csv-stringify/sync'; export const x = stringify;"],
   ['the renderer importing Electron', 'renderer/api/fence-probe.ts', "import { ipcRenderer } from 'electron'; export const x = ipcRenderer;"],
+  ['core/ importing pg', 'core/spec/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
+  ['the SQLite store importing pg', 'db/jobs/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
+  ['the service importing pg', 'service/api/fence-probe.ts', "import { Client } from 'pg'; export const x = Client;"],
+  ['the CLI importing pg', 'service/cli/fence-probe.ts', "import pg from 'pg'; export const x = pg;"],
 ];
 
 const allowed: Array<[room: string, file: string, code: string]> = [
@@ -47,6 +51,7 @@ const allowed: Array<[room: string, file: string, code: string]> = [
   ['the CLI importing db/ and the PDF writers', 'service/cli/fence-probe.ts', "import { openStore } from '../../db'; import { renderQuote } from '../pdf'; export const x = [openStore, renderQuote];"],
   ['the request-sheet reader importing exceljs and csv-parse', 'service/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; import { parse } from 'csv-parse/sync'; export const x = [ExcelJS, parse];"],
   ['the shell importing Electron and the service', 'electron/shell/fence-probe.ts', "import { app } from 'electron'; import { dispatch } from '../../service/api'; export const x = [app, dispatch];"],
+  ['db/pg importing pg and the store', 'db/pg/fence-probe.ts', "import pg from 'pg'; import { StoreError } from '../errors'; export const x = [pg, StoreError];"],
   ['the binding shim importing better-sqlite3', 'electron/shell/sqlite-electron.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the renderer importing React, core and its own files', 'renderer/model/fence-probe.ts', "import { useState } from 'react'; import { parseSpec } from '../../core/spec'; import { x as http } from '../api/http'; export const x = [useState, parseSpec, http];"],
 ];

@@ -12,9 +12,9 @@ import { job, tempDir, tempStore, value } from './helpers';
 
 /** Every row of the tables an import writes to. */
 const contents = (store: Store) => ['jobs', 'job_revisions', 'customers', 'first_off_records', 'settings']
-  .map((table) => store.db.prepare(`SELECT * FROM ${table} ORDER BY 1`).all());
+  .map((table) => store.sql(`SELECT * FROM ${table} ORDER BY 1`).all());
 
-const jobCount = (store: Store) => (store.db.prepare('SELECT count(*) AS n FROM jobs').get() as { n: number }).n;
+const jobCount = (store: Store) => (store.sql('SELECT count(*) AS n FROM jobs').get() as { n: number }).n;
 
 /** A DEMO inch job as a US shop would enter it (invented part). */
 const inchJob = job({ partNumber: '=SUM(A1:A9)', notes: '+1 from the customer (demo)' }, {
