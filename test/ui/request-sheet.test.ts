@@ -17,7 +17,7 @@ async function importSheet(page: Page, file: { name: string; mimeType: string; b
 
   // The bad wire diameter of the seventh spring is marked with its cell reference and the reason.
   const marked = page.locator('td.request-cell--error');
-  await expect(marked.count()).resolves.toBe(1);
+  await expect.poll(() => marked.count(), { timeout: 10_000 }).toBe(1);
   const ref = await marked.getAttribute('data-ref');
   expect(ref).toMatch(/^E\d+$/);
   await expect(page.getByText(/Wire diameter: "1,6\.0x"/).first().isVisible()).resolves.toBe(true);
@@ -29,12 +29,12 @@ async function importSheet(page: Page, file: { name: string; mimeType: string; b
   await page.getByLabel(`New value for ${ref}`).fill(decimalComma ? '1,5' : '1.5');
   await page.getByRole('button', { name: 'Use' }).click();
   await counts.filter({ hasText: '10 rows ready, 0 to fix' }).waitFor();
-  await expect(marked.count()).resolves.toBe(0);
+  await expect.poll(() => marked.count(), { timeout: 10_000 }).toBe(0);
   await page.getByRole('button', { name: 'Import 10 jobs as one enquiry' }).click();
 
   const jobs = page.getByRole('table', { name: `Jobs of enquiry ${reference}` });
   await jobs.waitFor();
-  await expect(jobs.locator('tbody tr').count()).resolves.toBe(10);
+  await expect.poll(() => jobs.locator('tbody tr').count(), { timeout: 10_000 }).toBe(10);
   await expect(jobs.locator('tbody tr').nth(6).textContent()).resolves.toMatch(/HV-1006.*Compression.*draft/);
   await jobs.scrollIntoViewIfNeeded();
   await screenshot(page, `${shot}-imported`);
@@ -59,12 +59,12 @@ describe('importing a customer\'s request sheet', { timeout: UI_TEST_TIMEOUT * 2
     await importSheet(page, { name: 'halden-rfq-119.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: xlsx },
       'RFQ-119', 'request-sheet-xlsx', false);
     // The columns came from the mapping kept with the first sheet.
-    await expect(page.locator('.request-origin--saved').count()).resolves.toBe(12);
+    await expect.poll(() => page.locator('.request-origin--saved').count(), { timeout: 10_000 }).toBe(12);
     // Both enquiries are listed; the first one's jobs open from the list, as a quotation of them would pick them.
     await page.getByRole('button', { name: 'Jobs of RFQ-118' }).click();
     const earlier = page.getByRole('table', { name: 'Jobs of enquiry RFQ-118' });
     await earlier.waitFor();
-    await expect(earlier.locator('tbody tr').count()).resolves.toBe(10);
+    await expect.poll(() => earlier.locator('tbody tr').count(), { timeout: 10_000 }).toBe(10);
     await earlier.scrollIntoViewIfNeeded();
     await screenshot(page, 'request-sheet-enquiries');
     await page.getByRole('table', { name: 'Jobs of enquiry RFQ-119' }).getByRole('button', { name: /^Open job / }).first().click();
