@@ -21,8 +21,10 @@ type Row = Omit<FirstOffRow, 'id' | 'job_number' | 'job_revision'>;
 
 /** The first-off records of the given jobs for export, by job id, oldest measurement first. */
 export function firstOffByJob(store: Store, jobIds: readonly number[]): Map<number, FirstOffExport[]> {
-  const rows = store.sql(`SELECT * FROM first_off_records WHERE job_id IN (SELECT value FROM json_each(?))
-                          ORDER BY job_id, measured_on, id`).all(JSON.stringify(jobIds)) as Row[];
+  if (jobIds.length === 0) return new Map();
+  // One placeholder per id: portable to both backends (an export chunk holds at most a few hundred jobs).
+  const rows = store.sql(`SELECT * FROM first_off_records WHERE job_id IN (${jobIds.map(() => '?').join(', ')})
+                          ORDER BY job_id, measured_on, id`).all(...jobIds) as Row[];
   const byJob = new Map<number, FirstOffExport[]>();
   for (const r of rows) {
     const list = byJob.get(r.job_id) ?? [];

@@ -38,8 +38,15 @@ describe('choosing the store', () => {
       // The demo shop went into the empty database, as into a new file.
       expect(((await call('listJobs', {})).value as { total: number }).total).toBeGreaterThan(3);
       expect((await call('signIn', { name: 'Evan (inspector)' })).value).toMatchObject({ author: 'Evan (inspector)' });
-      const exported = JSON.stringify(await call('exportJobs', { format: 'json' }));
+      const exportAnswer = await call('exportJobs', { format: 'json' });
+      expect(exportAnswer.ok).toBe(true);
+      expect(exportAnswer.value.count).toBeGreaterThan(3);
+      const exported = JSON.stringify(exportAnswer);
       expect(exported).not.toContain('hunter2');
+      // The export is a server store's portable copy: it goes back in, all of it, with new numbers.
+      const reimported = await call('importJobs', { text: exportAnswer.value.text, renumber: true });
+      expect(reimported.ok).toBe(true);
+      expect((reimported.value as unknown as { imported: unknown[] }).imported).toHaveLength(exportAnswer.value.count as number);
       const refused = await call('openServerStore', { connection: '/etc/passwd' });
       expect(refused).toMatchObject({ ok: false, error: { path: 'connection' } });
     } finally {

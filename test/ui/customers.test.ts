@@ -37,8 +37,7 @@ describe('customers', { timeout: UI_TEST_TIMEOUT }, () => {
     await page.getByRole('button', { name: 'Demo Harrow Gates' }).click();
     await field(page, 'Phone').fill('555 0199');
     await page.getByRole('button', { name: 'Save customer' }).click();
-    await page.getByRole('status').filter({ hasText: 'Demo Harrow Gates saved.' }).waitFor();
-    await expect(page.getByRole('row').filter({ hasText: 'Demo Harrow Gates' }).textContent()).resolves.toContain('555 0199');
+    await page.getByRole('row').filter({ hasText: 'Demo Harrow Gates' }).filter({ hasText: '555 0199' }).waitFor();
     await page.getByRole('button', { name: 'Add customer' }).first().click();
     await field(page, 'Name').fill('demo harrow gates');
     await page.getByRole('form', { name: 'New customer' }).getByRole('button', { name: 'Add customer' }).click();
