@@ -106,7 +106,7 @@ export interface ListSql {
 }
 
 /** The page query: filters, then (for a following page) the keyset bound, in the sort's index order. */
-export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null): ListSql {
+export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, dialect: Store['dialect'] = 'sqlite'): ListSql {
   const where = jobFilter(q);
   where.clauses.push(q.archived ? ARCHIVED_CLAUSE.archived : ARCHIVED_CLAUSE.listed);
   const columns = sortColumns(q);
@@ -118,9 +118,10 @@ export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null): L
   }
   const clause = where.clauses.length > 0 ? `WHERE ${where.clauses.join(' AND ')}` : '';
   const order = columns.map((c) => `j.${c} ${desc ? 'DESC' : 'ASC'}`).join(', ');
-  // Without statistics the planner would rather sort the archived jobs a status index finds; the partial
-  // index is already in the order asked for.
-  const from = columns === SORT_KEYS.archived ? JOB_FROM.replace('jobs j', 'jobs j INDEXED BY jobs_archived') : JOB_FROM;
+  // Without statistics SQLite's planner would rather sort the archived jobs a status index finds; the partial
+  // index is already in the order asked for. (PostgreSQL has no index hints; its statistics choose.)
+  const pinned = columns === SORT_KEYS.archived && dialect === 'sqlite';
+  const from = pinned ? JOB_FROM.replace('jobs j', 'jobs j INDEXED BY jobs_archived') : JOB_FROM;
   return {
     sql: `SELECT ${SUMMARY_COLUMNS}, j.customer_key FROM ${from} ${clause} ORDER BY ${order} LIMIT ? OFFSET ?`,
     params: where.params,
@@ -156,7 +157,7 @@ export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
   if (q.after !== undefined && after === null) {
     return invalid([fieldError('bad-cursor', 'after', 'this page key is not from this list and sort: start again from the first page')]);
   }
-  const { sql, params, columns } = listJobsSql(q, after);
+  const { sql, params, columns } = listJobsSql(q, after, store.dialect);
   const rows = store.sql(sql).all(...params, q.limit + 1, q.offset) as (JobRow & { customer_key: string })[];
   const more = rows.length > q.limit;
   const page = more ? rows.slice(0, q.limit) : rows;
