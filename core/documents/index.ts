@@ -1,8 +1,8 @@
 /** Printed documents as data: pure builders, no PDF library; service/pdf draws them. */
 export type * from './types';
 export { DOCUMENT_VERSION } from './types';
-export { quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
-export type { QuoteInput, QuoteJob } from './quote';
+export { quotationDocument, quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
+export type { QuotationInput, QuoteInput, QuoteJob, QuoteLineInput } from './quote';
 export { travellerDocument } from './traveller';
 export type { TravellerInput, TravellerJob } from './traveller';
 export { cautionNotice, safetyNotes, STORED_ENERGY_CAUTION, REVIEW_CAUTION } from './cautions';

@@ -9,6 +9,7 @@ import { updateToVersion0006 } from './0006-keep-issued-rows';
 import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
+import { updateToVersion0010 } from './0010-quotation-lines';
 
 export interface Migration {
   version: number;
@@ -27,6 +28,7 @@ export const migrations: readonly Migration[] = [
   { version: 7, name: 'estimating', update: updateToVersion0007 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
+  { version: 10, name: 'quotation lines', update: updateToVersion0010 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */
