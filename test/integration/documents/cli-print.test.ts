@@ -79,7 +79,7 @@ describe('command line: print quote and print traveller', () => {
       expect(list.ok && list.value.map((x) => x.number)).toEqual([out.quote]);
       const stored = getQuote(store, { number: out.quote });
       if (!stored.ok) throw new Error(JSON.stringify(stored.error));
-      expect(stored.value.document).toMatchObject({ type: 'quote', prices: { currency: 'EUR' } });
+      expect(stored.value.document).toMatchObject({ type: 'quote', lines: [{ prices: { currency: 'EUR' } }] });
     } finally {
       store.close();
     }
