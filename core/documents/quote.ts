@@ -130,7 +130,7 @@ function itemsTable(lines: readonly QuoteLineInput[]): TableModel {
 
 function overview(lines: readonly QuoteLineInput[]): Field[] {
   if (lines.length === 1) return partFields(lines[0]!.job);
-  return [{ label: 'Items', value: `${lines.length} parts, each priced on its own below` }];
+  return [{ label: 'Items', value: `${lines.length} parts, listed below` }];
 }
 
 export function quotationDocument(input: QuotationInput): QuoteDocument {
