@@ -178,6 +178,10 @@ function lineSummaries(store: Store, quoteIds: readonly number[]): Map<number, L
   return byQuote;
 }
 
+/** A job's quote history: every quotation it is a line of, newest first, read through `quote_lines_by_job`. */
+export const quoteHistorySql = `SELECT ${SUMMARY} FROM quote_lines l JOIN quotes q ON q.id = l.quote_id WHERE l.job_id = ?
+                 ORDER BY q.issued_at DESC, q.id DESC LIMIT ? OFFSET ?`;
+
 /** Issued quotes, newest first, for the whole shop or for one job: every quotation the job is a line of. */
 export function listQuotes(store: Store, raw: unknown): StoreResult<QuoteSummary[]> {
   const parsed = parseWith(listQuotesSchema, raw ?? {});
@@ -185,8 +189,7 @@ export function listQuotes(store: Store, raw: unknown): StoreResult<QuoteSummary
   const { jobId, limit, offset } = parsed.value;
   const rows = (jobId === undefined
     ? store.sql(`SELECT ${SUMMARY} FROM quotes q ORDER BY q.issued_at DESC, q.id DESC LIMIT ? OFFSET ?`).all(limit, offset)
-    : store.sql(`SELECT ${SUMMARY} FROM quote_lines l JOIN quotes q ON q.id = l.quote_id WHERE l.job_id = ?
-                 ORDER BY q.issued_at DESC, q.id DESC LIMIT ? OFFSET ?`).all(jobId, limit, offset)
+    : store.sql(quoteHistorySql).all(jobId, limit, offset)
   ) as QuoteRow[];
   const lines = lineSummaries(store, rows.map((r) => r.id));
   return success(rows.map((r) => toSummary(r, lines.get(r.id)!)));

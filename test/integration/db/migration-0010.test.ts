@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { PrintedPdf, Quote, QuoteSummary } from '../../../core/api';
 import { LATEST_VERSION, migrate, openStore, schemaVersion } from '../../../db';
+import { quoteHistorySql } from '../../../db/quotes';
 import { createService, dispatch } from '../../../service/api';
 import { tempDir, track } from './helpers';
 
@@ -77,5 +78,12 @@ describe('migration 0010 (quotation lines)', () => {
     expect((await call<QuoteSummary[]>('listQuotes', { jobId })).map((q) => q.number)).toEqual([number]);
     const printed = await call<PrintedPdf>('reprintQuote', { number });
     expect(createHash('sha256').update(Buffer.from(printed.base64, 'base64')).digest('hex')).toBe(fixture.pdfSha256);
+  });
+
+  it('a job\'s quote history reads its lines through the index by job, not by scanning', () => {
+    const store = track(openStore(join(tempDir(), 'plan.db')));
+    const plan = (store.db.prepare(`EXPLAIN QUERY PLAN ${quoteHistorySql}`).all(1, 50, 0) as { detail: string }[]).map((r) => r.detail).join('\n');
+    expect(plan).toMatch(/SEARCH l USING (COVERING )?INDEX quote_lines_by_job \(job_id=\?\)/);
+    expect(plan).not.toMatch(/SCAN (l|q)\b/);
   });
 });

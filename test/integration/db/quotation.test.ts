@@ -132,6 +132,23 @@ describe('a quotation of several jobs of one customer', () => {
   });
 });
 
+describe('every line in its own job\'s units', () => {
+  it('prints an inch job\'s line in inches and a metric job\'s line in millimetres on the same quotation', async () => {
+    const { service, must } = await shop();
+    const metric = await must<Job>('createJob', job({ customer, partNumber: 'FG-100' }));
+    const inch = await must<Job>('createJob', job({ customer, partNumber: 'FG-100-IN' }, {
+      units: 'inch', wireDiameter: 0.08, outerDiameter: 0.8, freeLength: 2, loads: [{ length: 1.5 }] }));
+    const quote = await must<Quote>('issueQuote', { jobIds: [metric.id, inch.id], accept: 'inch line checked by the engineer' });
+    const [first, second] = (quote.document as QuoteDocument).lines;
+    const values = (l: typeof first) => l!.specification.fields.map((f) => `${f.label} ${f.value}`).join('; ');
+    expect(values(first)).toContain('Free length L0 50.00 mm');
+    expect(values(second)).toContain('Free length L0 2.000 in');
+    expect(values(second)).not.toMatch(/\bmm\b/);
+    expect(values(first)).not.toMatch(/\bin\b/);
+    service.close();
+  });
+});
+
 describe('a job\'s quote history', () => {
   it('lists every quotation the job is a line of, newest first, with the other lines named', async () => {
     const { service, must } = await shop();
