@@ -113,6 +113,32 @@ describe('quoting a job: machine choice, a price override, an accepted exception
     await screenshot(page, 'workspace-documents-issued');
   });
 
+  it('quotes jobs selected in the job list as one quotation, refusing jobs of two customers by name', async () => {
+    await page.keyboard.press('Alt+1');
+    const search = page.getByRole('searchbox', { name: 'Search' });
+    const tick = async (part: string, on = true) => {
+      await search.fill(part);
+      const box = page.locator('table.jobs tbody tr').filter({ hasText: part }).getByRole('checkbox');
+      await box.waitFor();
+      await box.setChecked(on);
+    };
+    await tick('KPS-2211');
+    await tick('LFM-77-119');
+    await page.getByRole('button', { name: 'Quote selected (2)' }).click();
+    const refusal = page.getByRole('alert').filter({ hasText: 'a quotation is for one customer' });
+    await refusal.waitFor();
+    await expect(refusal.textContent()).resolves.toMatch(/Kestrel Pump Systems \(demo\).*Larkfield Farm Machinery \(demo\)/);
+    await tick('LFM-77-119', false);
+    await tick('KPS-3300');
+    const download = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Quote selected (2)' }).click();
+    const quote = await pdfText(await download);
+    expect(quote.indexOf('Item 1: KPS-2211')).toBeGreaterThan(0);
+    expect(quote.indexOf('Item 2: KPS-3300')).toBeGreaterThan(quote.indexOf('Item 1: KPS-2211'));
+    await page.getByRole('status').filter({ hasText: '2 lines' }).waitFor();
+    await screenshot(page, 'jobs-quote-selected');
+  });
+
   it('logged no console or page error', () => {
     expect(errors).toEqual([]);
   });
