@@ -7,6 +7,7 @@ import type { SpringReport } from './kinds/types';
 import type { CompressionReport } from './springs/compression/report';
 import type { ExtensionReport } from './springs/extension/report';
 import type { TorsionReport } from './springs/torsion/report';
+import type { Settings } from './settings/schema';
 
 export type { SpringReport } from './kinds/types';
 
@@ -19,15 +20,18 @@ function withFindings<R extends { findings: Finding[] }>(report: R, findings: Fi
   return report;
 }
 
-/** Analysis and review of a validated spec, in internal units (mm, N, MPa). */
-export function analyseSpec(spec: CompressionSpec): CompressionReport;
-export function analyseSpec(spec: ExtensionSpec): ExtensionReport;
-export function analyseSpec(spec: TorsionSpec): TorsionReport;
-export function analyseSpec(spec: Spec): SpringReport;
-export function analyseSpec(spec: Spec): SpringReport {
+/**
+ * Analysis and review of a validated spec, in internal units (mm, N, MPa). The shop's settings decide what
+ * the shop decides (which set-removal verdict routes a compression spring); without them the defaults hold.
+ */
+export function analyseSpec(spec: CompressionSpec, settings?: Settings): CompressionReport;
+export function analyseSpec(spec: ExtensionSpec, settings?: Settings): ExtensionReport;
+export function analyseSpec(spec: TorsionSpec, settings?: Settings): TorsionReport;
+export function analyseSpec(spec: Spec, settings?: Settings): SpringReport;
+export function analyseSpec(spec: Spec, settings?: Settings): SpringReport {
   const kind = kindEntryOf(spec.kind);
   const x = kind.design(spec) ?? unknownGrade(spec);
-  const r = kind.analyse(x);
+  const r = kind.analyse(x, settings);
   return withFindings(r, kind.review(x, r));
 }
 
@@ -37,8 +41,8 @@ export function reportInSpecUnits<R extends SpringReport>(report: R): R {
 }
 
 /** Validates, analyses and reviews raw input; the report comes back in the spec's units. */
-export function calculate(raw: unknown): Result<SpringReport> {
+export function calculate(raw: unknown, settings?: Settings): Result<SpringReport> {
   const parsed = parseSpec(raw);
   if (!parsed.ok) return parsed;
-  return { ok: true, value: reportInSpecUnits(analyseSpec(parsed.value)) };
+  return { ok: true, value: reportInSpecUnits(analyseSpec(parsed.value, settings)) };
 }

@@ -15,7 +15,7 @@ export { listJobs } from './search/list';
 export { findJobs } from './search/text';
 export { similarJobs } from './search/similar';
 export { reindexJobs, staleJobCount } from './search/reindex';
-export { getSettings, saveSettings } from './settings';
+export { getSettings, readSettings, saveSettings } from './settings';
 export { recordQuote, recordQuotation, getQuote, listQuotes } from './quotes';
 export type { QuoteSnapshot, QuotationSnapshot, QuoteLineSnapshot } from './quotes';
 export { addAttachment, listAttachments, getAttachment } from './attachments';

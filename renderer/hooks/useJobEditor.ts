@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ApiError, Job, JobRevision } from '../../core/api';
 import type { JobChange } from '../../core/api/store';
 import type { JobJudgementInput } from '../../core/quoting/judgement';
+import type { Settings } from '../../core/settings/schema';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
 import type { FormError } from '../model/errors';
@@ -27,6 +28,8 @@ const draftsOf = (job: Job): Drafts => ({ job: jobDraftOf(job), spec: draftFromS
 export interface EditorDefaults {
   units: UnitSystem;
   toleranceGrade: 1 | 2 | 3 | null;
+  /** The shop's settings: the results route set removal the way the plan does. */
+  settings?: Settings;
 }
 
 /** The job being edited: drafts, live evaluation, autosave into revisions, undo and redo over them. */
@@ -42,7 +45,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const [saving, setSaving] = useState(false);
   const [saveError, setSaveError] = useState<ApiError | null>(null);
 
-  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec), [drafts.spec]);
+  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec, defaults.settings), [drafts.spec, defaults.settings]);
   const jobCheck = useMemo(() => jobFieldsOf(drafts.job), [drafts.job]);
   const valid = evaluation.spec !== null && jobCheck.errors.length === 0;
 
@@ -98,7 +101,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const saveOnce = useCallback(async (): Promise<boolean> => {
     const s = { ...live.current };
     if (s.version === s.savedVersion) return true;
-    const spec = evaluateDraft(s.drafts.spec).spec;
+    const spec = evaluateDraft(s.drafts.spec, defaults.settings).spec;
     const fields = jobFieldsOf(s.drafts.job);
     if (!spec || fields.errors.length > 0) return false;
     const at = s.version;
@@ -123,7 +126,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     if (created) onCreated(r.value);
     await loadRevisions(r.value.id);
     return true;
-  }, [api, adopt, loadRevisions, onCreated]);
+  }, [api, adopt, loadRevisions, onCreated, defaults.settings]);
 
   /** Saves now if there is anything to save; saves never overlap. */
   const save = useCallback(async (): Promise<boolean> => {

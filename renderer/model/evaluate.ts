@@ -1,5 +1,6 @@
 import type { SpringReport } from '../../core/calculate';
 import { analyseSpec, reportInSpecUnits } from '../../core/calculate';
+import type { Settings } from '../../core/settings/schema';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 import type { FormError } from './errors';
@@ -18,8 +19,11 @@ export interface Evaluation {
   errors: FormError[];
 }
 
-/** Validates and analyses the draft in the renderer: core/ is platform-free, so no round trip is needed. */
-export function evaluateDraft(d: SpecDraft): Evaluation {
+/**
+ * Validates and analyses the draft in the renderer: core/ is platform-free, so no round trip is needed. The
+ * shop's settings route set removal the way the plan does; until they are read, the defaults hold.
+ */
+export function evaluateDraft(d: SpecDraft, settings?: Settings): Evaluation {
   const { raw, errors: local, formPath } = draftToRaw(d);
   const taken = new Set(local.map((e) => e.path));
   const parsed = parseSpec(raw);
@@ -32,6 +36,6 @@ export function evaluateDraft(d: SpecDraft): Evaluation {
   // In the order of the form, so the list of what is missing reads like the form.
   const errors = [...local, ...schema].map(friendlyError).sort((a, b) => rank(a.path) - rank(b.path));
   if (!parsed.ok || local.length > 0) return { spec: null, internal: null, report: null, errors };
-  const internal = analyseSpec(parsed.value);
+  const internal = analyseSpec(parsed.value, settings);
   return { spec: parsed.value, internal, report: reportInSpecUnits(internal), errors: [] };
 }

@@ -1,4 +1,5 @@
 import type { OpenOptions, Store } from '../../db';
+import { readSettings } from '../../db';
 import type { Handlers } from './dispatch';
 import { engineHandlers } from './engine';
 import type { StoreContext, TypedHandlers } from './store';
@@ -25,7 +26,7 @@ export interface Service {
 
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
-  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers, ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
+  const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers(() => readSettings(ctx.store)), ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
     ...firstOffHandlers(ctx), ...designHandlers(ctx) };
   return {
     handlers,

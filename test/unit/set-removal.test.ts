@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { analyseSpec } from '../../core/calculate';
+import { analyseSpec, calculate } from '../../core/calculate';
 import { parseSpec } from '../../core/spec';
 import type { CompressionSpec, CompressionSpecInput } from '../../core/spec';
 import type { CompressionReport } from '../../core/springs/compression/report';
@@ -127,6 +127,22 @@ describe('set removal: one stress basis per method', () => {
     const stricter = planManufacture(spec(input0), defaultSettings(), 100);
     expect(stricter.operations.map((o) => o.kind)).toContain('set');
     expect(stricter.findings.find((f) => f.code === 'set-removal-required')?.message).toMatch(/the stricter, handbook method, governs/);
+  });
+
+  it('the results the estimator sees route set removal by the same shop setting as the plan', () => {
+    const input0 = input(a, at(a, 1.15));
+    const s = defaultSettings();
+    const en = { ...s, defaults: { ...s.defaults, setRemovalMethod: 'en13906' as const } };
+    const shown = calculate(input0, en);
+    expect(shown.ok).toBe(true);
+    if (!shown.ok) return;
+    const r = shown.value as CompressionReport;
+    expect(r.setRemoval.governedBy).toBe('en13906');
+    expect(r.setRemoval.required).toBe(false);
+    const plan = planManufacture(spec(input0), en, 100);
+    expect(r.setRemoval.required).toBe(plan.operations.some((o) => o.kind === 'set'));
+    const byDefault = calculate(input0);
+    expect(byDefault.ok && (byDefault.value as CompressionReport).setRemoval.required).toBe(true);
   });
 });
 

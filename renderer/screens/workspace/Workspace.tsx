@@ -1,6 +1,7 @@
 import { ChangeKind } from './ChangeKind';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Job } from '../../../core/api';
+import type { Settings } from '../../../core/settings/schema';
 import { usePlatform } from '../../api';
 import type { FormHandle } from '../../components/form/scope';
 import { ScreenHeading } from '../../components/ScreenHeading';
@@ -32,14 +33,14 @@ export function Workspace({ jobId }: { jobId: number | null }) {
   if (!shop.settings) {
     return <p className="screen" role="status">{shop.error ? `The shop settings could not be read: ${shop.error.message}` : 'Opening…'}</p>;
   }
-  return <JobWorkspace jobId={jobId} units={shop.settings.defaults.units} />;
+  return <JobWorkspace jobId={jobId} settings={shop.settings} />;
 }
 
-function JobWorkspace({ jobId, units }: { jobId: number | null; units: 'metric' | 'inch' }) {
+function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Settings }) {
   const nav = useNavigation();
   const platform = usePlatform();
   const onCreated = useCallback((job: Job) => nav.setJobLabel(job.number, job.id), [nav]);
-  const editor = useJobEditor(jobId, { units, toleranceGrade: null }, onCreated);
+  const editor = useJobEditor(jobId, { units: settings.defaults.units, toleranceGrade: null, settings }, onCreated);
   const [tab, setTab] = useState<Tab>('spec');
   const [similar, setSimilar] = useState(false);
   const form = useRef<FormHandle | null>(null);

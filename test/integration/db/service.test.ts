@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { methodNames } from '../../../core/api';
 import { openStore } from '../../../db';
 import { createService, dispatch } from '../../../service/api';
-import { job, tempDir } from './helpers';
+import { job, spec, tempDir, value } from './helpers';
 
 describe('store service', () => {
   it('answers every method of the contract', () => {
@@ -51,6 +51,17 @@ describe('store service', () => {
     expect(service.store()).toBe(before);
     const page = await dispatch(service.handlers, 'listJobs', {});
     expect(page.ok && (page.value as { jobs: { partNumber: string }[] }).jobs.map((j) => j.partNumber)).toEqual(['KEPT']);
+    service.close();
+  });
+  it('calculates with the open store\'s set-removal routing, the one its plans use', async () => {
+    const service = createService(openStore(join(tempDir(), 'shop.db')));
+    const before = await dispatch(service.handlers, 'calculate', { spec: spec() });
+    expect(before.ok && (before.value as { setRemoval: { governedBy: string } }).setRemoval.governedBy).toBe('stricter');
+    const settings = value(await dispatch(service.handlers, 'getSettings', {})) as { defaults: Record<string, unknown> };
+    const saved = await dispatch(service.handlers, 'saveSettings', { settings: { ...settings, defaults: { ...settings.defaults, setRemovalMethod: 'handbook' } } });
+    expect(saved.ok).toBe(true);
+    const after = await dispatch(service.handlers, 'calculate', { spec: spec() });
+    expect(after.ok && (after.value as { setRemoval: { governedBy: string } }).setRemoval.governedBy).toBe('handbook');
     service.close();
   });
 });
