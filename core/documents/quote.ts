@@ -117,11 +117,11 @@ function quoteLine(line: QuoteLineInput, settings: Settings, index: number): Quo
 function itemsTable(lines: readonly QuoteLineInput[]): TableModel {
   return {
     columns: [
-      { header: 'Item', weight: 0.5, align: 'left' },
-      { header: 'Part number', weight: 1.4, align: 'left' },
-      { header: 'Drawing', weight: 1.4, align: 'left' },
-      { header: 'Our job', weight: 1, align: 'left' },
-      { header: 'Quantities (pcs)', weight: 1.6, align: 'right' },
+      { header: 'Item', weight: 0.4, align: 'left' },
+      { header: 'Part number', weight: 1.2, align: 'left' },
+      { header: 'Drawing', weight: 1.2, align: 'left' },
+      { header: 'Our job', weight: 0.9, align: 'left' },
+      { header: 'Quantities (pcs)', weight: 2.3, align: 'right' },
     ],
     rows: lines.map((l, i) => [String(i + 1), l.job.partNumber, drawingText(l.job.drawingNumber, l.job.drawingRevision), l.job.number ?? '',
       l.estimate.breaks.map((b) => piecesText(b.quantity)).join(' / ')]),

@@ -79,6 +79,7 @@ function lineBody(doc: Doc, line: QuoteLineModel): void {
 }
 
 const ITEM_PART_GRID = { columns: 3, labelShare: 0.4 };
+const ITEMS_KEEP = 120;
 
 /** One line of a quotation of several: its title and part fields kept with the start of its spring. */
 function item(doc: Doc, line: QuoteLineModel): void {
@@ -107,7 +108,8 @@ export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
     lineBody(doc, m.lines[0]!);
   } else {
     if (m.items) {
-      heading(doc, 'Items', tableHeight(doc, m.items));
+      // The heading keeps to the table's first rows; a long table goes on over the page.
+      heading(doc, 'Items', Math.min(tableHeight(doc, m.items), ITEMS_KEEP));
       drawTable(doc, m.items);
       space(doc);
     }
