@@ -53,6 +53,7 @@ const subcommands: Record<string, Sub> = {
     return hits.map(({ job, ...hit }) => ({ ...hit, customer: job.customer?.name ?? null, partNumber: job.partNumber, status: job.status }));
   },
   revisions: async (args, call) => call('jobRevisions', { id: await jobId(call, positional(args, 1, 'ID', 'jobs revisions')) }),
+  quotes: async (args, call) => call('listQuotes', { jobId: await jobId(call, positional(args, 1, 'ID', 'jobs quotes')), limit: intOption(args, 'limit') ?? 50 }),
   status: async (args, call) => call('setJobStatus', {
     id: await jobId(call, positional(args, 1, 'ID', 'jobs status')), status: positional(args, 2, 'STATUS', 'jobs status') as JobStatus,
   }),
@@ -67,7 +68,8 @@ export const jobsCommand: Command = {
     'jobs add FILE --db DB       store a job ({"customer":{"name":…},"partNumber":…,"drawing":…,"revision":…,"notes":…,"spec":{…}})',
     '  jobs show ID|NUMBER --db DB, jobs list [--status S[,S]] [--customer ID] [--kind K] [--sort number|updated|customer]',
     '  [--material ID] [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
-    '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB',
+    '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB,',
+    '  jobs quotes ID|NUMBER [--limit N] --db DB   every quotation the job is a line of, newest first, with its lines',
   ].join('\n'),
   async run(args, out) {
     const sub = subcommandOf('jobs', args, subcommands);

@@ -175,6 +175,9 @@ describe('command line: print quote and print traveller', () => {
     } finally {
       reopened.close();
     }
+    const history = cli(['jobs', 'quotes', numbers[0]!, '--db', db]);
+    expect(history.status, history.stderr).toBe(0);
+    expect(JSON.parse(history.stdout)).toMatchObject([{ number, lines: [{ line: 1, jobNumber }, { line: 2, jobNumber: numbers[0] }, { line: 3 }] }]);
     const text = (await pdfText(readFileSync(join(dir, 'lines.pdf')))).all;
     expect(text).toContain('Item 3: TTD-STOP-4');
     expect(text).toContain('shorter than the spring\'s solid length');
