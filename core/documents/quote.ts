@@ -87,9 +87,10 @@ function leadTimeText(days: number | null): string {
   return days === null ? 'to be confirmed with the order' : `${days} days from order and drawing approval`;
 }
 
-function partFields(job: QuoteJob): Field[] {
+/** The part, drawing and our job; a line of several leaves out the part number its title already gives. */
+function partFields(job: QuoteJob, titled = false): Field[] {
   return present([
-    { label: 'Part number', value: job.partNumber },
+    { label: 'Part number', value: titled ? '' : job.partNumber },
     { label: 'Drawing', value: drawingText(job.drawingNumber, job.drawingRevision) },
     { label: 'Our job', value: job.number ?? '' },
   ]);
@@ -99,13 +100,13 @@ export function quoteIssue(number: string, issuedAt: string, validityDays: numbe
   return { number, date: dayOf(issuedAt), validUntil: addDays(issuedAt, validityDays), validityDays };
 }
 
-function quoteLine(line: QuoteLineInput, settings: Settings, index: number): QuoteLineModel {
+function quoteLine(line: QuoteLineInput, settings: Settings, index: number, count: number): QuoteLineModel {
   const { spec, job, estimate } = line;
   const spring = springContent(spec, settings, job.partNumber || kindTitle(spec.kind));
   return {
     item: String(index + 1),
     title: job.partNumber ? `Item ${index + 1}: ${job.partNumber}` : `Item ${index + 1}`,
-    part: partFields(job),
+    part: partFields(job, count > 1),
     specification: { heading: spring.heading, fields: spring.fields },
     drawing: spring.drawing,
     prices: { currency: estimate.currency, table: priceTable(estimate), notes: priceNotes(estimate) },
@@ -148,7 +149,7 @@ export function quotationDocument(input: QuotationInput): QuoteDocument {
     customer: { name: first.customerName ?? 'Customer not named', lines: [...(first.customerLines ?? [])] },
     overview: overview(lines),
     items: lines.length === 1 ? null : itemsTable(lines),
-    lines: lines.map((l, i) => quoteLine(l, settings, i)),
+    lines: lines.map((l, i) => quoteLine(l, settings, i, lines.length)),
     terms: terms(currency, validityDays, lines.length),
   };
 }
