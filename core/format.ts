@@ -9,7 +9,10 @@ export function significant(value: number, digits = 3): string {
   if (!Number.isFinite(value)) return String(value);
   // Whole numbers at or above the precision are shown whole (12 345 N, not 1.23e+4 N).
   if (Math.abs(value) >= 10 ** digits) return Math.round(value).toString();
-  return value === 0 ? '0' : value.toPrecision(digits);
+  if (value === 0) return '0';
+  // 999.5 rounds up to 1000 at three digits, which toPrecision writes as "1.00e+3".
+  const rounded = Number(value.toPrecision(digits));
+  return Math.abs(rounded) >= 10 ** digits ? rounded.toString() : value.toPrecision(digits);
 }
 
 /** Formats an internal value in the spec's units with the trade's precision and the unit symbol. */

@@ -133,7 +133,7 @@ function readBare(text: string, mark: DecimalMark): { value: number } | TypedNum
       : `"${text}": thousands are grouped in threes, e.g. 2 000`);
   }
   if (decimal === null || !Number.isFinite(Number(decimal))) {
-    return fail('not-a-number', `"${text}" is not a number; e.g. 2${mark}5, 2 000, 3/8 or 1-1/4`);
+    return fail('not-a-number', `"${text}" is not a number; e.g. 2${mark}5 or 2 000 or 3/8 or 1-1/4`);
   }
   return { value: Number(decimal) };
 }
@@ -148,7 +148,8 @@ function converted(value: number, unit: TypedUnit, options: ReadOptions): number
 
 /** What to show after "read … as": the value with the field's unit, to seven significant digits. */
 function shownValue(value: number, options: ReadOptions): string {
-  const text = String(Number(value.toPrecision(7)));
+  const plain = String(Number(value.toPrecision(7)));
+  const text = options.decimalMark === ',' ? plain.replace('.', ',') : plain;
   const measure = options.measure;
   if (measure === 'pieces') return `${text} pcs`;
   if (measure === 'days') return `${text} days`;
@@ -176,8 +177,10 @@ export function readTypedNumber(raw: string, options: ReadOptions): TypedNumber 
     }
     value = converted(value, unit, options);
   }
+  // A number written plainly in the shop's own mark needs no word about how it was read.
   const plain = String(value);
-  return { ok: true, value, understood: plain === text ? null : `read "${text}" as ${shownValue(value, options)}` };
+  const asTyped = options.decimalMark === ',' ? plain.replace('.', ',') : plain;
+  return { ok: true, value, understood: asTyped === text ? null : `read "${text}" as ${shownValue(value, options)}` };
 }
 
 export type TypedList =

@@ -8,7 +8,7 @@ export { writeFileReplacing } from './files';
 export type { StoreResult } from './errors';
 export { inspectStoreFile } from './inspect';
 export { migrate, migrations, LATEST_VERSION, APPLICATION_ID, schemaVersion } from './migrations';
-export { createJob, updateJob, setJobStatus, restoreRevision } from './jobs/write';
+export { createJob, updateJob, setJobStatus, restoreRevision, keepWorkingRevision } from './jobs/write';
 export { getJob, jobRevisions } from './jobs/read';
 export { listCustomers } from './jobs/customers';
 export { listJobs } from './search/list';

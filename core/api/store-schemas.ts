@@ -69,6 +69,11 @@ export const jobPatchSchema = z.object({
   spec: z.unknown().optional(),
   /** Needed to edit a quoted, ordered or in-production job: a new drawing revision (give it) or a correction. */
   change: jobChangeSchema.optional(),
+  /**
+   * An autosave of a working session: the job's state is replaced in place and no permanent revision is written
+   * until the session closes (keepWorkingRevision, a deliberate save, a drawing revision, a restore or an issue).
+   */
+  working: z.boolean().optional(),
 }).strict();
 export type JobPatch = z.input<typeof jobPatchSchema>;
 
@@ -114,6 +119,9 @@ export const similarJobsSchema = z.object({
 export const jobIdSchema = z.object({ id }).strict();
 /** A job by its id or by the shop's job number. */
 export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().trim().min(1) }).strict()]);
+/** Ends a job's working session as one permanent revision; `reason` says what closed it. */
+export const keepWorkingRevisionSchema = z.object({ id, reason: z.enum(['saved', 'left the job', 'issued']).optional() }).strict();
+
 export const restoreRevisionSchema = z.object({ id, revision: z.number().int().positive() }).strict();
 export const setJobStatusSchema = z.object({ id, status: jobStatusSchema, expectedRevision: z.number().int().positive().optional() }).strict();
 

@@ -66,6 +66,8 @@ export interface JobSummary extends JobDetails {
 
 export interface Job extends JobSummary {
   spec: Spec;
+  /** Present while a working session is open: its autosaves are in the job, and become one revision when it closes. */
+  working?: { baseRevision: number; openedAt: string; savedAt: string; saves: number };
 }
 
 export interface JobPage {

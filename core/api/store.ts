@@ -22,6 +22,7 @@ export const storeMethods = {
   similarJobs: method<typeof s.similarJobsSchema, t.SimilarJob[]>(s.similarJobsSchema),
   jobRevisions: method<typeof s.jobIdSchema, t.JobRevision[]>(s.jobIdSchema),
   restoreRevision: method<typeof s.restoreRevisionSchema, t.Job>(s.restoreRevisionSchema),
+  keepWorkingRevision: method<typeof s.keepWorkingRevisionSchema, t.Job>(s.keepWorkingRevisionSchema),
   setJobStatus: method<typeof s.setJobStatusSchema, t.Job>(s.setJobStatusSchema),
   listCustomers: method<typeof none, t.Customer[]>(none),
   getSettings: method<typeof none, Settings>(none),

@@ -31,6 +31,8 @@ export const defaultsSchema = z.object({
   quoteValidityDays: z.number().int().min(1).max(365).default(30),
   /** Which set-removal verdict routes a compression spring: the handbook's, EN 13906-1's, or the stricter. */
   setRemovalMethod: z.enum(['stricter', 'handbook', 'en13906']).default('stricter'),
+  /** The decimal mark typed numbers use; the other of "." and "," then reads as a thousands separator. */
+  decimalMark: z.enum(['.', ',']).default('.'),
 }).strict();
 
 const sequence = {
@@ -157,7 +159,7 @@ function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): 
 /** The schema of each settings key; the store keeps one row per key. */
 export const settingsSchemas = {
   shopProfile: shopProfileSchema.default({ name: '', addressLines: [], phone: '', email: '' }),
-  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30, setRemovalMethod: 'stricter' }),
+  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30, setRemovalMethod: 'stricter', decimalMark: '.' }),
   numbering: numberingSchema.default({ prefix: 'J-{yy}-', width: 4, next: 1, quotes: { prefix: 'Q-{yy}-', width: 4, next: 1 } }),
   machines: z.array(machineSchema).max(200).superRefine(uniqueIds).default([]),
   materialPrices: z.array(materialPriceSchema).max(2000).default([]),

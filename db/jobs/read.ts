@@ -5,6 +5,7 @@ import type { Store } from '../store';
 import type { JobRow } from './rows';
 import { JOB_FROM, SUMMARY_COLUMNS, toJob } from './rows';
 import { readStoredSpec } from './stored-spec';
+import { workingRow } from './working';
 
 export function jobRow(store: Store, id: number): JobRow | undefined {
   return store.sql(`SELECT ${SUMMARY_COLUMNS} FROM ${JOB_FROM} WHERE j.id = ?`).get(id) as JobRow | undefined;
@@ -18,7 +19,11 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
   }
   const id = typeof ref === 'number' ? ref : ref.id;
   const row = jobRow(store, id);
-  return row ? toJob(row) : failure('not-found', `no job with id ${id}`, 'id');
+  if (!row) return failure('not-found', `no job with id ${id}`, 'id');
+  const job = toJob(row);
+  const open = job.ok ? workingRow(store, id) : undefined;
+  if (!job.ok || !open) return job;
+  return success({ ...job.value, working: { baseRevision: open.base_revision, openedAt: open.opened_at, savedAt: open.saved_at, saves: open.saves } });
 }
 
 interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string }

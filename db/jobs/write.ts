@@ -14,13 +14,10 @@ import { getJob, jobRow, revisionRow } from './read';
 import type { JobRow } from './rows';
 import { storedSpecOf } from './rows';
 import type { JobState } from './state';
-import { ROW_COLUMNS, ROW_PLACEHOLDERS, revisionFields, rowValues, stateOfRow } from './state';
+import { ROW_COLUMNS, ROW_PLACEHOLDERS, rowValues, stateOfRow } from './state';
+import { addRevision, closeWorking, dropWorking, markWorkingSave } from './working';
 import { judgementOf } from './rows';
 
-function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
-  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
-    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec));
-}
 
 export interface NewJobOptions {
   /** Keep this number (import) instead of taking the next from the sequence. */
@@ -66,13 +63,46 @@ export function createJob(store: Store, raw: unknown, options: NewJobOptions = {
   return attempt(() => getJob(store, inTransaction(store, () => writeNewJob(store, checked.value, options))));
 }
 
-/** Replaces the job's current state with `next` and adds it as a new revision. Inside a transaction. */
+const SETTERS = ROW_COLUMNS.split(',').map((c) => `${c.trim()} = ?`).join(', ');
+
+/**
+ * Replaces the job's current state with `next` and adds it as a new revision; an open working session ends in
+ * it (its edits are part of `next`). Inside a transaction.
+ */
 function saveState(store: Store, id: number, current: number, next: JobState, reason: string): void {
   const now = store.now().toISOString();
-  const setters = ROW_COLUMNS.split(',').map((c) => `${c.trim()} = ?`).join(', ');
-  store.sql(`UPDATE jobs SET ${setters}, revision = ?, updated_at = ? WHERE id = ?`)
-    .run(...rowValues(next), current + 1, now, id);
+  store.sql(`UPDATE jobs SET ${SETTERS}, revision = ?, updated_at = ? WHERE id = ?`).run(...rowValues(next), current + 1, now, id);
   addRevision(store, id, current + 1, reason, next, now);
+  dropWorking(store, id);
+}
+
+/** An autosave: the job's current state is replaced in place and the working session notes it; no revision yet. */
+function saveWorking(store: Store, id: number, current: number, next: JobState): void {
+  const now = store.now().toISOString();
+  store.sql(`UPDATE jobs SET ${SETTERS}, updated_at = ? WHERE id = ?`).run(...rowValues(next), now, id);
+  markWorkingSave(store, id, current, now);
+}
+
+/** Closes an open working session as one permanent revision (reason: what closed it). Inside a transaction. */
+function closeSession(store: Store, id: number, reason: string): boolean {
+  return closeWorking(store, id, reason, () => {
+    const row = jobRow(store, id)!;
+    return { revision: row.revision, state: stateOfRow(row) };
+  });
+}
+
+/**
+ * Ends the job's working session: what its autosaves left becomes one permanent revision. Nothing is written
+ * when no session is open. `reason` says what closed it (a deliberate save, leaving the job, an issue).
+ */
+export function keepWorkingRevision(store: Store, input: { id: number; reason?: string }): StoreResult<Job> {
+  return attempt(() => {
+    inTransaction(store, () => {
+      if (!jobRow(store, input.id)) throw new StoreError('not-found', `no job with id ${input.id}`, 'id');
+      closeSession(store, input.id, input.reason ?? 'saved');
+    });
+    return getJob(store, input.id);
+  });
 }
 
 function loadForSave(store: Store, id: number, expectedRevision: number | undefined) {
@@ -90,7 +120,7 @@ const COMMITTED: ReadonlySet<JobStatus> = new Set(['quoted', 'ordered', 'in-prod
 
 /** Whether a save changes what the part is (anything but its status, notes and the estimator's pricing judgement). */
 const editsContent = (patch: Record<string, unknown>): boolean =>
-  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change'].includes(k));
+  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change', 'working'].includes(k));
 
 /**
  * A done job is never edited in place; a quoted, ordered or in-production one only as a new drawing revision
@@ -129,7 +159,7 @@ function refuseUnreadable(row: JobRow): void {
 export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreResult<Job> {
   const patch = parseWith(jobPatchSchema, raw);
   if (!patch.ok) return invalid(patch.errors);
-  const { id, expectedRevision, spec: rawSpec, customer, customerId, change, ...fields } = patch.value;
+  const { id, expectedRevision, spec: rawSpec, customer, customerId, change, working, ...fields } = patch.value;
   const checked = rawSpec === undefined ? undefined : checkSpec(rawSpec, ['spec']);
   if (checked && !checked.ok) return invalid(checked.errors);
   if (customer && customerId !== undefined) {
@@ -146,7 +176,9 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       if (change === 'drawing-revision' && row.status === 'quoted' && fields.status === undefined) next.status = 'draft';
       const resolved = resolveCustomer(store, { customer, customerId });
       if (resolved !== undefined) next.customerId = resolved;
-      saveState(store, id, row.revision, next, why);
+      // A correction or a drawing revision is never folded into a working session: it is its own revision.
+      if (working === true && why === reason) saveWorking(store, id, row.revision, next);
+      else saveState(store, id, row.revision, next, why);
     });
     return getJob(store, id);
   });
@@ -167,6 +199,8 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   if (!checked.ok) return invalid(checked.errors);
   return attempt(() => {
     inTransaction(store, () => {
+      // What the session typed stays in the history before the older state comes back.
+      closeSession(store, input.id, 'saved');
       const row = loadForSave(store, input.id, undefined);
       if (row.status === 'done') {
         throw new StoreError('job-done', `job ${row.number} is done and is not edited in place: copy it to a new job for a repeat or a change`, 'status');

@@ -79,10 +79,16 @@ export const shortcuts: { command: Command; keys: string; what: string }[] = [
   { command: 'find', keys: 'Ctrl+F or /', what: 'Search the job list' },
   { command: 'find-similar', keys: 'Alt+S', what: 'Past jobs like the spring being edited' },
   { command: 'save', keys: 'Ctrl+S', what: 'Save now (the job also saves itself as you type)' },
-  { command: 'undo', keys: 'Ctrl+Z', what: 'Undo: back one saved revision' },
+  { command: 'undo', keys: 'Ctrl+Z', what: 'Undo: in a text field the typing, elsewhere back one saved revision' },
   { command: 'redo', keys: 'Ctrl+Shift+Z or Ctrl+Y', what: 'Redo' },
   { command: 'shortcuts', keys: 'F1', what: 'This list' },
 ];
+
+/** A field whose text the browser's own undo steps back through. */
+const textEntry = (target: EventTarget | null): boolean => {
+  const el = target as HTMLInputElement | null;
+  return !!el && (el.tagName === 'TEXTAREA' || (el.tagName === 'INPUT' && ['text', 'search', 'email', 'tel', 'url', ''].includes(el.type)));
+};
 
 export const typing = (target: EventTarget | null): boolean => {
   const el = target as HTMLElement | null;
@@ -101,6 +107,8 @@ export function commandOfKey(e: KeyboardEvent): Command | null {
   }
   if (ctrl && !e.altKey) {
     if (key === 's') return 'save';
+    // In a text field Ctrl+Z undoes the typing (the browser's own undo), not a saved revision.
+    if ((key === 'z' || key === 'y') && textEntry(e.target)) return null;
     if (key === 'z') return e.shiftKey ? 'redo' : 'undo';
     if (key === 'y') return 'redo';
     if (key === 'f') return 'find';

@@ -4,6 +4,7 @@ import type { ApiError, Customer } from '../../core/api';
 import type { GradeSummary } from '../../core/materials';
 import type { Settings } from '../../core/settings/schema';
 import { useApi } from '../api';
+import { takeDecimalMark } from '../model/numbers';
 import { useCommand } from './commands';
 
 /** What many screens read from the store: the shop's settings, the wire grades and the customers. */
@@ -22,7 +23,11 @@ const ShopDataContext = createContext<ShopData | null>(null);
 
 export function ShopDataProvider({ children }: { children: ReactNode }) {
   const api = useApi();
-  const [settings, setSettings] = useState<Settings | null>(null);
+  const [settings, setShopSettings] = useState<Settings | null>(null);
+  const setSettings = useCallback((s: Settings) => {
+    takeDecimalMark(s.defaults.decimalMark);
+    setShopSettings(s);
+  }, []);
   const [grades, setGrades] = useState<GradeSummary[]>([]);
   const [customers, setCustomers] = useState<Customer[]>([]);
   const [error, setError] = useState<ApiError | null>(null);
@@ -37,10 +42,10 @@ export function ShopDataProvider({ children }: { children: ReactNode }) {
       setError(!s.ok ? s.error : !g.ok ? g.error : !c.ok ? c.error : null);
     });
     return () => { live = false; };
-  }, [api, tick]);
+  }, [api, tick, setSettings]);
   const refresh = useCallback(() => setTick((t) => t + 1), []);
   useCommand('data-changed', refresh);
-  const value = useMemo(() => ({ settings, grades, customers, error, refresh, setSettings }), [settings, grades, customers, error, refresh]);
+  const value = useMemo(() => ({ settings, grades, customers, error, refresh, setSettings }), [settings, grades, customers, error, refresh, setSettings]);
   return <ShopDataContext.Provider value={value}>{children}</ShopDataContext.Provider>;
 }
 

@@ -10,12 +10,16 @@ import { friendlyError } from '../model/errors';
 import type { Evaluation } from '../model/evaluate';
 import { evaluateDraft } from '../model/evaluate';
 import type { JobDraft } from '../model/job-draft';
+import type { JobFieldsInput } from '../model/job-draft';
 import { emptyJobDraft, jobDraftOf, jobFieldsOf, sameAsStored } from '../model/job-draft';
 import type { SpecDraft } from '../model/spec-draft';
 import { draftFromSpec, emptySpecDraft } from '../model/spec-draft';
 import { redoTarget, timelineOf, undoTarget } from '../model/timeline';
 
-/** Quiet time after the last keystroke before a valid form is saved as a new revision. */
+/**
+ * Quiet time after the last keystroke before the form is saved into the job's working session; the session
+ * becomes one permanent revision when it closes (a deliberate save, undo, a restore, an issue, leaving the job).
+ */
 export const AUTOSAVE_MS = 900;
 
 export interface Drafts {
@@ -45,9 +49,11 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const [saving, setSaving] = useState(false);
   const [saveError, setSaveError] = useState<ApiError | null>(null);
 
-  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec, defaults.settings), [drafts.spec, defaults.settings]);
+  const evaluation: Evaluation = useMemo(() => evaluateDraft(drafts.spec, job?.spec ?? null, defaults.settings), [drafts.spec, job?.spec, defaults.settings]);
   const jobCheck = useMemo(() => jobFieldsOf(drafts.job), [drafts.job]);
-  const valid = evaluation.spec !== null && jobCheck.errors.length === 0;
+  // A field that does not read keeps its saved value, so the other edits still save.
+  const valid = evaluation.spec !== null && (jobCheck.errors.length === 0 || job !== null);
+  const complete = valid && evaluation.errors.length === 0 && jobCheck.errors.length === 0;
 
   // The latest state for async work (saves, undo) that outlives the render it started in.
   const live = useRef({ job, drafts, version, savedVersion, change: undefined as JobChange | undefined });
@@ -98,47 +104,81 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     setSaveError(null);
   }, []);
 
-  const saveOnce = useCallback(async (): Promise<boolean> => {
+  /**
+   * Saves what reads of the form: into the working session (`working`), or as a revision of its own. True when
+   * everything typed is stored; false when something could not be (then the form stays unsaved).
+   */
+  const saveOnce = useCallback(async (working: boolean): Promise<boolean> => {
     const s = { ...live.current };
     if (s.version === s.savedVersion) return true;
-    const spec = evaluateDraft(s.drafts.spec, defaults.settings).spec;
+    const spec = evaluateDraft(s.drafts.spec, s.job?.spec ?? null, defaults.settings);
     const fields = jobFieldsOf(s.drafts.job);
-    if (!spec || fields.errors.length > 0) return false;
+    if (!spec.spec || (fields.errors.length > 0 && !s.job)) return false;
+    const whole = spec.errors.length === 0 && fields.errors.length === 0;
     const at = s.version;
-    const input = { ...fields.fields, spec };
-    if (s.job && sameAsStored(s.job, input)) {
-      // Typed back to what is stored: nothing to save, and no empty step in the history.
+    const markSaved = () => {
+      if (!whole) return;
       live.current.savedVersion = at;
       setSavedVersion(at);
-      return true;
+    };
+    const input = { ...standingIn(fields, s.job), spec: spec.spec };
+    if (s.job && sameAsStored(s.job, input)) {
+      // Typed back to what is stored: nothing to save, and no empty step in the history.
+      markSaved();
+      return whole;
     }
     setSaving(true);
     const r = s.job
-      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input, ...(s.change ? { change: s.change } : {}) })
+      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input, ...(s.change ? { change: s.change } : {}), ...(working ? { working } : {}) })
       : await api.createJob(input);
     setSaving(false);
     if (!r.ok) { setSaveError(r.error); return false; }
     const created = s.job === null;
     adopt(r.value, false);
-    live.current.savedVersion = at;
-    setSavedVersion(at);
+    markSaved();
     setSaveError(null);
     if (created) onCreated(r.value);
     await loadRevisions(r.value.id);
-    return true;
+    return whole;
   }, [api, adopt, loadRevisions, onCreated, defaults.settings]);
 
   /** Saves now if there is anything to save; saves never overlap. */
-  const save = useCallback(async (): Promise<boolean> => {
+  const queue = useCallback(async <T,>(work: () => Promise<T>): Promise<T> => {
     while (inFlight.current) await inFlight.current;
-    const p = saveOnce();
-    inFlight.current = p;
+    const p = work();
+    inFlight.current = p.then(() => true, () => false);
     try {
       return await p;
     } finally {
       inFlight.current = null;
     }
-  }, [saveOnce]);
+  }, []);
+
+  const autosave = useCallback(() => queue(() => saveOnce(true)), [queue, saveOnce]);
+
+  /** Closes the job's working session as one permanent revision (nothing happens when none is open). */
+  const closeSession = useCallback(async (reason: 'saved' | 'left the job'): Promise<void> => {
+    const j = live.current.job;
+    if (!j?.working) return;
+    const r = await api.keepWorkingRevision({ id: j.id, reason });
+    if (!r.ok) { setSaveError(r.error); return; }
+    adopt(r.value, false);
+    await loadRevisions(j.id);
+  }, [api, adopt, loadRevisions]);
+
+  /** A deliberate save: what is pending and the open session become one permanent revision. */
+  const save = useCallback((): Promise<boolean> => queue(async () => {
+    const whole = await saveOnce(false);
+    await closeSession('saved');
+    return whole;
+  }), [queue, saveOnce, closeSession]);
+
+  /** Leaving the job: what is pending is saved and the session kept; false when something typed cannot be stored. */
+  const settle = useCallback((): Promise<boolean> => queue(async () => {
+    const whole = await saveOnce(true);
+    await closeSession('left the job');
+    return whole;
+  }), [queue, saveOnce, closeSession]);
 
   /** The estimator says what an edit of a quoted or ordered job is; the pending save goes again with it. */
   const setChange = useCallback(async (kind: JobChange): Promise<boolean> => {
@@ -162,9 +202,9 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const dirty = version !== savedVersion;
   useEffect(() => {
     if (!dirty || !valid) return;
-    const timer = setTimeout(() => void save(), AUTOSAVE_MS);
+    const timer = setTimeout(() => void autosave(), AUTOSAVE_MS);
     return () => clearTimeout(timer);
-  }, [dirty, valid, version, save]);
+  }, [dirty, valid, version, autosave]);
 
   /** Back to the last saved state, dropping what was typed since. */
   const revert = useCallback(() => {
@@ -201,18 +241,29 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   const serverErrors: FormError[] = useMemo(() => {
     if (!saveError) return [];
     const list = saveError.details && saveError.details.length > 0 ? saveError.details : [saveError];
-    return list.filter((e) => e.path !== '').map(friendlyError);
+    return list.filter((e) => e.path !== '').map((e) => friendlyError(e));
   }, [saveError]);
 
   return {
-    job, drafts, edit, version, evaluation, jobCheck, valid, dirty, saving, saveError, serverErrors, loading, loadError,
+    job, drafts, edit, version, evaluation, jobCheck, valid, complete, dirty, saving, saveError, serverErrors, loading, loadError,
     revisions, save, revert, restore, setChange, saveJudgement,
     undo: () => step(undoTarget), redo: () => step(redoTarget),
     canUndo: job !== null && (dirty || undoTarget(timeline) !== null),
     canRedo: job !== null && !dirty && redoTarget(timeline) !== null,
-    /** Saves what is pending; false when the form cannot be saved as it stands (leaving would lose it). */
-    settle: save,
+    /** Saves what is pending and keeps the session; false when the form cannot be saved as it stands (leaving would lose it). */
+    settle,
   };
 }
 
 export type JobEditor = ReturnType<typeof useJobEditor>;
+
+/** The job fields to save: a field that does not read keeps the job's stored value. */
+function standingIn(check: ReturnType<typeof jobFieldsOf>, job: Job | null): JobFieldsInput {
+  if (!job || check.errors.length === 0) return check.fields;
+  const wrong = new Set(check.errors.map((e) => e.path));
+  return {
+    ...check.fields,
+    ...(wrong.has('orderQuantity') ? { orderQuantity: job.orderQuantity } : {}),
+    ...(wrong.has('leadTimeDays') ? { leadTimeDays: job.leadTimeDays } : {}),
+  };
+}

@@ -1,11 +1,12 @@
+import type { FieldMeasure } from '../../core/typed-number';
 import type { Quantity, QuantityMap, UnitSystem } from '../../core/units';
-import { fromInternal, OWN, sameInBothSystems, toInternal } from '../../core/units';
+import { fromInternal, OWN, quantityAt, sameInBothSystems, toInternal } from '../../core/units';
 import { numberText, parseNumber } from './numbers';
 
 /** Converts the text of one field between unit systems; text that is not a number is kept as typed. */
 export function convertText(text: string, quantity: Quantity, from: UnitSystem, to: UnitSystem): string {
   if (from === to) return text;
-  const parsed = parseNumber(text);
+  const parsed = parseNumber(text, quantity, from);
   if (!parsed.ok || parsed.value === undefined) return text;
   return numberText(fromInternal(toInternal(parsed.value, quantity, from), quantity, to));
 }
@@ -32,16 +33,33 @@ export function convertTexts<T>(draft: T, map: QuantityMap, from: UnitSystem, to
   return walk(draft, map) as T;
 }
 
-/** Collects field errors while a draft turns into the raw object the schema checks. */
+/** What the reader understood of one field's text, e.g. `read "12 mm" as 0.4724409 in`. */
+export interface Understood {
+  path: string;
+  message: string;
+}
+
+/** What the field at a spec path measures, by the spec's quantity map ("loads[1].force" → force). */
+export function measureAt(quantities: QuantityMap, path: string): FieldMeasure | undefined {
+  return quantityAt(quantities, path.replace(/\[\d+\]/g, ''));
+}
+
+/** Collects field errors and what was understood while a draft turns into the raw object the schema checks. */
 export class RawBuilder {
   readonly errors: { code: string; path: string; message: string }[] = [];
+  readonly understood: Understood[] = [];
 
-  /** The number in `text`, or undefined when empty or not a number (then an error names `path`). */
-  number(path: string, text: string): number | undefined {
-    const parsed = parseNumber(text);
-    if (parsed.ok) return parsed.value;
-    this.errors.push({ code: 'not-a-number', path, message: parsed.message });
-    return undefined;
+  constructor(private readonly units?: UnitSystem, private readonly quantities: QuantityMap = {}) {}
+
+  /** The number in `text` in the job's units, or undefined when empty or not a number (then an error names `path`). */
+  number(path: string, text: string, measure: FieldMeasure | undefined = measureAt(this.quantities, path)): number | undefined {
+    const parsed = parseNumber(text, measure, this.units);
+    if (!parsed.ok) {
+      this.errors.push({ code: parsed.code, path, message: parsed.message });
+      return undefined;
+    }
+    if (parsed.understood) this.understood.push({ path, message: parsed.understood });
+    return parsed.value;
   }
 
   /** Like `number`, but an empty field is an error too. */

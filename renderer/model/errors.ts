@@ -5,15 +5,16 @@ export interface FormError extends FieldError {
   missing: boolean;
 }
 
-/** Schema messages in the estimator's words. */
-export function friendlyError(e: FieldError): FormError {
+/**
+ * A field error as the form shows it, by its code: a value the schema found absent (`required`, or a wrong
+ * type where nothing was given) waits until the field is visited. Messages are core's own words (core/validation.ts
+ * writes them from each issue's code and limits), so nothing here reads the English of an error.
+ */
+export function friendlyError(e: FieldError, given?: (path: string) => unknown): FormError {
   if (e.code === 'required') return { ...e, missing: true };
-  if (/received undefined/.test(e.message)) return { ...e, code: 'required', message: 'needed', missing: true };
-  const tooSmall = /^Too small: expected number to be >(=?)(-?[\d.e+]+)$/.exec(e.message);
-  if (tooSmall) return { ...e, message: tooSmall[1] === '=' ? `at least ${tooSmall[2]}` : `more than ${tooSmall[2]}`, missing: false };
-  const tooBig = /^Too big: expected number to be <(=?)(-?[\d.e+]+)$/.exec(e.message);
-  if (tooBig) return { ...e, message: tooBig[1] === '=' ? `at most ${tooBig[2]}` : `less than ${tooBig[2]}`, missing: false };
-  if (/expected number, received string/.test(e.message)) return { ...e, message: 'a number, e.g. 2.5', missing: false };
+  if (e.code === 'invalid-invalid-type' && given !== undefined && given(e.path) === undefined) {
+    return { ...e, code: 'required', message: 'needed', missing: true };
+  }
   return { ...e, missing: false };
 }
 

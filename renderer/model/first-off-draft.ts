@@ -37,8 +37,8 @@ export function firstOffInputOf(draft: FirstOffDraft, jobId: number, units: Unit
   { input: FirstOffInput | null; errors: FormError[] } {
   const errors: FormError[] = [];
   const num = (text: string, path: string): number | undefined => {
-    const p = parseNumber(text);
-    if (!p.ok) errors.push({ code: 'not-a-number', path, message: p.message, missing: false });
+    const p = parseNumber(text, path.startsWith('forces') ? 'force' : 'length', units);
+    if (!p.ok) errors.push({ code: p.code, path, message: p.message, missing: false });
     return p.ok ? p.value : undefined;
   };
   const input = {

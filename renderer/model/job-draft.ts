@@ -2,6 +2,7 @@ import type { Job, JobStatus } from '../../core/api';
 import type { Spec } from '../../core/spec';
 import { numberText, parseNumber } from './numbers';
 import type { FormError } from './errors';
+import type { Understood } from './convert';
 
 /** The order and customer fields of a job, as typed. */
 export interface JobDraft {
@@ -45,32 +46,38 @@ export interface JobFieldsInput {
   notes: string;
 }
 
-function whole(path: string, text: string, errors: FormError[]): number | null {
-  const parsed = parseNumber(text);
+function whole(path: string, text: string, measure: 'pieces' | 'days', found: JobFieldCheck): number | null {
+  const parsed = parseNumber(text, measure);
   if (!parsed.ok) {
-    errors.push({ code: 'not-a-number', path, message: 'a whole number', missing: false });
+    found.errors.push({ code: parsed.code, path, message: parsed.message, missing: false });
     return null;
   }
   if (parsed.value !== undefined && !Number.isInteger(parsed.value)) {
-    errors.push({ code: 'not-whole', path, message: 'a whole number', missing: false });
+    found.errors.push({ code: 'not-whole', path, message: `${numberText(parsed.value)} is not a whole number of ${measure}`, missing: false });
     return null;
   }
+  if (parsed.understood) found.understood.push({ path, message: parsed.understood });
   return parsed.value ?? null;
 }
 
+interface JobFieldCheck {
+  errors: FormError[];
+  understood: Understood[];
+}
+
 /** The fields createJob and updateJob take; numbers that are not whole numbers become errors on their paths. */
-export function jobFieldsOf(d: JobDraft): { fields: JobFieldsInput; errors: FormError[] } {
-  const errors: FormError[] = [];
+export function jobFieldsOf(d: JobDraft): { fields: JobFieldsInput } & JobFieldCheck {
+  const found: JobFieldCheck = { errors: [], understood: [] };
   const name = d.customer.trim();
   const fields: JobFieldsInput = {
     customer: name === '' ? null : { name },
     partNumber: d.partNumber.trim(), drawingNumber: d.drawingNumber.trim(), drawingRevision: d.drawingRevision.trim(),
     status: d.status, dueDate: d.dueDate === '' ? null : d.dueDate,
-    orderQuantity: whole('orderQuantity', d.orderQuantity, errors),
-    leadTimeDays: whole('leadTimeDays', d.leadTimeDays, errors),
+    orderQuantity: whole('orderQuantity', d.orderQuantity, 'pieces', found),
+    leadTimeDays: whole('leadTimeDays', d.leadTimeDays, 'days', found),
     notes: d.notes,
   };
-  return { fields, errors };
+  return { fields, ...found };
 }
 
 /** JSON with keys in order, so two equal objects built in a different order compare equal. */

@@ -31,7 +31,7 @@ export const dimensionLabels = {
 const fieldNames: Record<string, string> = {
   material: 'wire grade', wireDiameter: 'wire diameter', outerDiameter: 'outside diameter', innerDiameter: 'inside diameter',
   meanDiameter: 'mean diameter', totalCoils: 'total coils', activeCoils: 'active coils', ends: 'ends', freeLength: 'free length',
-  seating: 'seating', finish: 'finish', bakeSpecification: 'bake specification', aql: 'AQL', quantities: 'quantities',
+  seating: 'seating', finish: 'finish', bakeSpecification: 'bake specification', aql: 'AQL', quantities: 'price-break quantities',
   toleranceGrade: 'tolerance grade', 'duty.cycles': 'cycles', 'duty.frequency': 'frequency', 'duty.between[0]': 'working length L1',
   'duty.between[1]': 'working length L2', 'serviceTemperature.min': 'lowest service temperature',
   'serviceTemperature.max': 'highest service temperature', partNumber: 'part number', 'customer.name': 'customer',
@@ -39,7 +39,8 @@ const fieldNames: Record<string, string> = {
   initialTension: 'initial tension', bodyLength: 'body length', mechanicalStop: 'mechanical stop', loopAngle: 'loop angle',
   loopAngleTolerance: 'loop angle tolerance', arborDiameter: 'arbor diameter', freeAngle: 'free angle',
   freeAngleTolerance: 'free angle tolerance', loadDirection: 'load direction', windDirection: 'direction of wind',
-  directionOfWind: 'direction of wind', duty: 'duty', 'duty.type': 'duty',
+  directionOfWind: 'direction of wind', duty: 'duty', 'duty.type': 'duty', 'duty.peened': 'shot peened (duty)', units: 'units',
+  kind: 'kind of spring', shotPeen: 'shot peen', freeParameters: 'what the maker may adjust', notes: 'spec notes',
 };
 
 /** A spec or job path in words, for "go to" buttons: "loads[1].force" → "force F2". */

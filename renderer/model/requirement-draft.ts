@@ -1,7 +1,8 @@
 import type { FieldError } from '../../core/result';
 import type { CompressionEnds } from '../../core/spec/compression';
 import type { ExtensionLoop } from '../../core/requirement/extension';
-import { parseNumber } from './numbers';
+import type { FieldMeasure } from '../../core/typed-number';
+import { parseList, parseNumber } from './numbers';
 
 /** The requirement form as typed: every number stays text until the requirement is built. */
 export interface RequirementDraft {
@@ -48,12 +49,22 @@ export function emptyRequirementDraft(units: 'metric' | 'inch'): RequirementDraf
   };
 }
 
+/** What a requirement field measures, so a unit typed after its number is read (and converted) by it. */
+function requirementMeasure(path: string): FieldMeasure | undefined {
+  if (/Percent|Ratio|cycles/.test(path)) return undefined;
+  if (/mainQuantity|quantities/.test(path)) return 'pieces';
+  if (/serviceTemperature/.test(path)) return 'temperature';
+  if (/force|initialTension/.test(path)) return 'force';
+  if (/rate$/.test(path)) return 'rate';
+  return 'length';
+}
+
 /** The raw requirement and the typing errors (text that is not a number), each at the requirement's own path. */
 export function requirementOfDraft(d: RequirementDraft): { requirement: Record<string, unknown>; errors: FieldError[] } {
   const errors: FieldError[] = [];
   const num = (text: string, path: string): number | undefined => {
-    const p = parseNumber(text);
-    if (!p.ok) errors.push({ code: 'not-a-number', path, message: p.message });
+    const p = parseNumber(text, requirementMeasure(path), d.units);
+    if (!p.ok) errors.push({ code: p.code, path, message: p.message });
     return p.ok ? p.value : undefined;
   };
   const defined = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
@@ -65,7 +76,9 @@ export function requirementOfDraft(d: RequirementDraft): { requirement: Record<s
     ? { type: 'two-loads', loads: [load(d.length1, d.force1, 'function.loads[0]'), load(d.length2, d.force2, 'function.loads[1]')] }
     : defined({ type: 'load-and-rate', load: load(d.length1, d.force1, 'function.load'), rate: num(d.rate, 'function.rate'),
       rateTolerancePercent: num(d.rateTolerancePercent, 'function.rateTolerancePercent') });
-  const quantities = d.quantities.split(/[\s,;]+/).filter(Boolean).map((q, i) => num(q, `choices.quantities[${i}]`));
+  const list = parseList(d.quantities);
+  if (!list.ok) errors.push({ code: list.code, path: 'choices.quantities', message: `break ${list.item + 1}: ${list.message}` });
+  const quantities = list.ok ? list.value : [];
   const tMin = num(d.temperatureMin, 'serviceTemperature.min');
   const tMax = num(d.temperatureMax, 'serviceTemperature.max');
   const initialTension = defined({ min: num(d.initialTensionMin, 'initialTension.min'), max: num(d.initialTensionMax, 'initialTension.max') });

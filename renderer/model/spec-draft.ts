@@ -3,11 +3,12 @@ import type { Spec, SpringKind } from '../../core/spec';
 import { springKinds } from '../../core/spec';
 import type { QuantityMap, UnitSystem } from '../../core/units';
 import { quantityAt } from '../../core/units';
+import type { Understood } from './convert';
 import { compact, convertTexts, RawBuilder } from './convert';
 import type { KindDraftModel, KindDrafts } from './kind-drafts';
 import { emptyKindDrafts, kindDraftModels } from './kind-drafts';
 import { SPEC_VERSION } from '../../core/spec/versions';
-import { numberText, parseList } from './numbers';
+import { listText, numberText, parseList } from './numbers';
 import type { KindRaw } from './rows';
 
 export type DiameterGiven = 'outerDiameter' | 'innerDiameter' | 'meanDiameter';
@@ -77,7 +78,7 @@ export function draftFromSpec(s: Spec): SpecDraft {
       tensileStrength: numberText(o?.tensileStrength), density: numberText(o?.density),
     },
     order: {
-      quantities: (s.quantities ?? []).join(', '),
+      quantities: listText(s.quantities ?? []),
       toleranceGrade: s.toleranceGrade === undefined ? '' : (String(s.toleranceGrade) as '1'),
       finish: s.finish ?? '', bakeSpecification: s.bakeSpecification ?? '', aql: numberText(s.aql),
       directionOfWind: s.directionOfWind ?? '', shotPeen: s.shotPeen === undefined ? '' : s.shotPeen ? 'yes' : 'no',
@@ -120,7 +121,8 @@ function overridesRaw(o: OverridesDraft, b: RawBuilder): Record<string, unknown>
 
 function orderRaw(o: OrderDraft, b: RawBuilder): Record<string, unknown> {
   const list = parseList(o.quantities);
-  if (!list.ok) b.errors.push({ code: 'not-a-number', path: 'quantities', message: list.message });
+  if (!list.ok) b.errors.push({ code: list.code, path: 'quantities', message: `break ${list.item + 1}: ${list.message}` });
+  else if (list.understood.length > 0) b.understood.push({ path: 'quantities', message: list.understood.join('; ') });
   const min = b.number('serviceTemperature.min', o.temperatureMin);
   const max = b.number('serviceTemperature.max', o.temperatureMax);
   const text = (t: string) => (t.trim() === '' ? undefined : t.trim());
@@ -139,6 +141,8 @@ function orderRaw(o: OrderDraft, b: RawBuilder): Record<string, unknown> {
 export interface DraftRaw extends KindRaw {
   /** Errors found before the schema sees the spec: text where a number belongs, required fields left empty. */
   errors: { code: string; path: string; message: string }[];
+  /** What the reader understood of fields typed other than as plain numbers ("read "2 000" as 2000 pcs"). */
+  understood: Understood[];
 }
 
 function kindRaw(d: SpecDraft, b: RawBuilder): KindRaw {
@@ -146,7 +150,7 @@ function kindRaw(d: SpecDraft, b: RawBuilder): KindRaw {
 }
 
 export function draftToRaw(d: SpecDraft): DraftRaw {
-  const b = new RawBuilder();
+  const b = new RawBuilder(d.units, kindEntryOf(d.kind).specQuantities);
   const kind = kindRaw(d, b);
   const raw = compact({
     version: SPEC_VERSION, kind: d.kind, units: d.units, material: d.material === '' ? undefined : d.material,
@@ -158,7 +162,7 @@ export function draftToRaw(d: SpecDraft): DraftRaw {
     ...orderRaw(d.order, b),
   });
   if (d.material === '') b.errors.push({ code: 'required', path: 'material', message: 'choose a wire grade' });
-  return { raw, formPath: kind.formPath, errors: b.errors };
+  return { raw, formPath: kind.formPath, errors: b.errors, understood: b.understood };
 }
 
 function kindPaths(d: SpecDraft): string[] {

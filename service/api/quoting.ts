@@ -7,7 +7,7 @@ import { planManufacture } from '../../core/process/plan';
 import type { IssueDecision, IssueProblem } from '../../core/quoting/problems';
 import { issueProblems, problemSummary } from '../../core/quoting/problems';
 import type { Settings } from '../../core/settings/schema';
-import { getJob, getSettings, listCustomers, recordQuotation } from '../../db';
+import { getJob, getSettings, keepWorkingRevision, listCustomers, recordQuotation } from '../../db';
 import type { Store } from '../../db';
 import { draftQuotation, issuedQuoteDocument, jobPricing, storedPrintJob } from '../pdf/printing';
 
@@ -70,6 +70,9 @@ function pricedLines(store: Store, request: IssueRequest, settings: Settings): A
   const customers = listCustomers(store);
   const lines: PricedLine[] = [];
   for (const [i, id] of ids.entries()) {
+    // An issue ends each job's working session: every line is priced from a permanent revision.
+    const kept = keepWorkingRevision(store, { id, reason: 'issued' });
+    if (!kept.ok) return { ok: false, error: { ...kept.error, path: jobPath(request, i) } };
     const job = getJob(store, id);
     if (!job.ok) return { ok: false, error: { ...job.error, path: jobPath(request, i) } };
     lines.push(priceLine(job.value, storedPrintJob(job.value, customers), settings));

@@ -4,7 +4,7 @@ import type { storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
-  importJobs, jobRevisions, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
+  importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveSettings, setJobStatus, similarJobs, updateJob,
 } from '../../db';
 
@@ -32,6 +32,7 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     similarJobs: (input) => similarJobs(ctx.store, input),
     jobRevisions: (input) => jobRevisions(ctx.store, input.id),
     restoreRevision: (input) => restoreRevision(ctx.store, input),
+    keepWorkingRevision: (input) => keepWorkingRevision(ctx.store, input),
     setJobStatus: (input) => setJobStatus(ctx.store, input),
     listCustomers: () => ({ ok: true, value: listCustomers(ctx.store) }),
     getSettings: () => getSettings(ctx.store),

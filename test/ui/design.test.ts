@@ -18,7 +18,7 @@ describe('design from the customer\'s requirement', { timeout: UI_TEST_TIMEOUT }
     await field(page, 'Units').selectOption('metric');
     await fill('Bore (mm)', 'twenty');
     await page.getByRole('button', { name: 'Find designs' }).click();
-    await expect(page.locator('#requirement-envelope-bore-error').textContent()).resolves.toBe('a number, e.g. 2.5');
+    await expect(page.locator('#requirement-envelope-bore-error').textContent()).resolves.toBe('"twenty" is not a number; e.g. 2.5 or 2 000 or 3/8 or 1-1/4');
   });
 
   it('enters the requirement, sees the ranked designs and makes the job from the second', async () => {

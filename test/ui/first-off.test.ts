@@ -32,7 +32,7 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
     await field(page, 'Measured by').fill('R. Demo');
     await page.getByRole('button', { name: 'Record first-off' }).click();
     const forceRow = page.locator('tr', { has: field(page, 'Force at L1 = 45.00 mm') });
-    await expect(forceRow.locator('.field__error').textContent()).resolves.toBe('a number, e.g. 2.5');
+    await expect(forceRow.locator('.field__error').textContent()).resolves.toBe('"15x": "x" is not a unit this field knows');
 
     await field(page, 'Force at L1 = 45.00 mm').fill('152');
     await page.getByRole('button', { name: 'Record first-off' }).click();

@@ -53,7 +53,7 @@ describe('a job from an empty form to the store and back', { timeout: UI_TEST_TI
   it('keeps bad input beside its field and will not leave without asking', async () => {
     await field(page, 'Total coils Nt').fill('9,5');
     const message = page.locator('#job-spec-totalCoils-error');
-    await expect(message.textContent()).resolves.toBe('use a point for decimals, e.g. 2.5');
+    await expect(message.textContent()).resolves.toBe('"9,5": the decimal mark here is "." and "," separates thousands; did you mean 9.5?');
     await expect(field(page, 'Total coils Nt').getAttribute('aria-describedby')).resolves.toContain('job-spec-totalCoils-error');
     await page.keyboard.press('Alt+1');
     const dialog = page.getByRole('dialog', { name: 'Changes not saved' });

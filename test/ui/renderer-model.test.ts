@@ -2,17 +2,19 @@
 import { menuCommands } from '../../core/api/method-names';
 import { commandOfMenu } from '../../renderer/hooks/commands';
 import { describe, expect, it } from 'vitest';
-import type { Job } from '../../core/api';
+import type { Job, RevisionFields } from '../../core/api';
+import { noJudgement } from '../../core/quoting/judgement';
 import type { Spec } from '../../core/spec';
 import { parseSpec } from '../../core/spec';
 import { drawbarExtension, lidTorsion, valveSpringMetric } from '../fixtures/specs';
 import { resolveField } from '../../renderer/model/errors';
 import { evaluateDraft } from '../../renderer/model/evaluate';
 import { jobDraftOf, jobFieldsOf, sameAsStored } from '../../renderer/model/job-draft';
-import { numberText, parseList, parseNumber } from '../../renderer/model/numbers';
+import { numberText, parseList, parseNumber, takeDecimalMark } from '../../renderer/model/numbers';
 import { getAt, setAt } from '../../renderer/model/paths';
 import { convertDraft, draftFromSpec, draftToRaw, emptySpecDraft } from '../../renderer/model/spec-draft';
 import { redoTarget, timelineOf, undoTarget } from '../../renderer/model/timeline';
+import { revisionChanges } from '../../renderer/model/revision-diff';
 
 const parsed = (raw: unknown): Spec => {
   const r = parseSpec(raw);
@@ -21,14 +23,30 @@ const parsed = (raw: unknown): Spec => {
 };
 
 describe('numbers as typed', () => {
-  it('reads plain decimals and says why anything else is not one', () => {
-    expect(parseNumber(' 2.5 ')).toEqual({ ok: true, value: 2.5 });
-    expect(parseNumber('')).toEqual({ ok: true, value: undefined });
-    expect(parseNumber('.5')).toEqual({ ok: true, value: 0.5 });
-    expect(parseNumber('2,5')).toEqual({ ok: false, message: 'use a point for decimals, e.g. 2.5' });
-    expect(parseNumber('2 mm')).toEqual({ ok: false, message: 'a number, e.g. 2.5' });
-    expect(parseList('100, 1000 5000')).toEqual({ ok: true, value: [100, 1000, 5000] });
-    expect(parseList('100, 1.5')).toEqual({ ok: false, message: '"1.5" is not a whole number of pieces' });
+  it('reads numbers as people type them and says why anything else is not one', () => {
+    expect(parseNumber(' 2.5 ')).toEqual({ ok: true, value: 2.5, understood: null });
+    expect(parseNumber('2.5')).toEqual({ ok: true, value: 2.5, understood: null });
+    expect(parseNumber('')).toEqual({ ok: true, value: undefined, understood: null });
+    expect(parseNumber('.5')).toMatchObject({ ok: true, value: 0.5 });
+    expect(parseNumber('2,5')).toMatchObject({ ok: false, code: 'bad-grouping', message: expect.stringContaining('did you mean 2.5?') });
+    expect(parseNumber('2 mm')).toMatchObject({ ok: false, code: 'wrong-unit' });
+    expect(parseNumber('12 mm', 'length', 'inch')).toMatchObject({ ok: true, understood: 'read "12 mm" as 0.4724409 in' });
+    // Split on ";", "/", a line break (and ", " where the comma is not the decimal mark), never inside "2 000".
+    expect(parseList('100; 2 000/5 000')).toMatchObject({ ok: true, value: [100, 2000, 5000] });
+    expect(parseList('100, 1000')).toMatchObject({ ok: true, value: [100, 1000] });
+    expect(parseList('100; 1.5')).toEqual({ ok: false, code: 'not-whole', message: '1.5 is not a whole number of pieces', item: 1 });
+  });
+
+  it('reads and writes with a decimal comma when the shop sets one', () => {
+    takeDecimalMark(',');
+    try {
+      expect(parseNumber('1,6')).toEqual({ ok: true, value: 1.6, understood: null });
+      expect(parseNumber('2.000,5')).toMatchObject({ ok: true, value: 2000.5 });
+      expect(numberText(1.6)).toBe('1,6');
+      expect(parseList('1 000; 2 500')).toMatchObject({ ok: true, value: [1000, 2500] });
+    } finally {
+      takeDecimalMark('.');
+    }
   });
 
   it('shows converted values without float noise and with enough digits to come back', () => {
@@ -78,7 +96,7 @@ describe('spec drafts', () => {
     const d = draftFromSpec(parsed(valveSpringMetric));
     const blank = { length: '', force: '', tolerancePercent: '' };
     const typed = evaluateDraft({ ...d, compression: { ...d.compression, loads: [blank, { ...blank, length: '40', force: 'x' }] } });
-    expect(typed.errors.map((x) => [x.path, x.message])).toEqual([['loads[1].force', 'a number, e.g. 2.5']]);
+    expect(typed.errors.map((x) => [x.path, x.message])).toEqual([['loads[1].force', '"x" is not a number; e.g. 2.5 or 2 000 or 3/8 or 1-1/4']]);
     // The schema sees one load (index 0); its error belongs to the second row of the form.
     const schema = evaluateDraft({ ...d, compression: { ...d.compression, loads: [blank, { ...blank, length: '75' }] } });
     expect(schema.errors.map((x) => x.path)).toEqual(['loads[1].length']);
@@ -148,5 +166,40 @@ describe('the application menu\'s commands', () => {
     expect(commandOfMenu('undo')).toBe('undo');
     expect(commandOfMenu('redo')).toBe('redo');
     expect(commandOfMenu('format-disk')).toBeNull();
+  });
+});
+
+describe('a field that does not read, and what changed between revisions', () => {
+  const saved = parsed(valveSpringMetric);
+
+  it('lets the saved value stand in, keeps the edits that read, and probes which figures wait', () => {
+    const d = draftFromSpec(saved);
+    const e = evaluateDraft({ ...d, wireDiameter: 'abc', compression: { ...d.compression, freeLength: '52' } }, saved);
+    expect(e.waitingOn).toEqual(['wireDiameter']);
+    expect(e.errors.map((x) => [x.path, x.code])).toEqual([['wireDiameter', 'not-a-number']]);
+    expect(e.spec?.wireDiameter).toBe(saved.wireDiameter);
+    expect(e.spec && 'freeLength' in e.spec ? e.spec.freeLength : null).toBe(52);
+    expect(e.probes).toHaveLength(3);
+    // The rate moves with d (G d⁴ / 8 D³ n, EN 13906-1 eq. 9); the probes see it move.
+    expect(e.probes.every((p) => p.kind === 'compression' && e.internal?.kind === 'compression' && p.rate !== e.internal.rate)).toBe(true);
+    // With no saved spec a required field cannot stand in: nothing computes.
+    expect(evaluateDraft({ ...d, wireDiameter: 'abc' }).spec).toBeNull();
+  });
+
+  it('lists each change by its label, in the units of the later revision', () => {
+    const fields: RevisionFields = {
+      customerId: null, customerName: null, partNumber: 'QG-7731', drawingNumber: '', drawingRevision: '', status: 'draft', notes: '',
+      dueDate: null, orderQuantity: null, leadTimeDays: null, judgement: noJudgement(),
+    };
+    const inch = convertDraft(draftFromSpec(saved), 'inch');
+    const after = evaluateDraft({ ...inch, compression: { ...inch.compression, freeLength: '2' } }).spec!;
+    const changes = revisionChanges({ fields, spec: saved }, { fields: { ...fields, partNumber: 'QG-9' }, spec: after });
+    expect(changes).toContainEqual({ field: 'Part number', before: 'QG-7731', after: 'QG-9' });
+    expect(changes).toContainEqual({ field: 'Units', before: 'metric', after: 'inch' });
+    // The free length before, in inches at the trade's 0.001 in (1 in = 25.4 mm, NIST SP 811).
+    const l0 = ('freeLength' in saved ? saved.freeLength : undefined) ?? 0;
+    expect(changes).toContainEqual({ field: 'Free length', before: `${(l0 / 25.4).toFixed(3)} in`, after: '2.000 in' });
+    // Converted values that read the same in inches are not changes.
+    expect(changes.map((c) => c.field)).not.toContain('Wire diameter');
   });
 });

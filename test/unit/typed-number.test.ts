@@ -79,3 +79,11 @@ describe('numbers as people type them', () => {
       }), { numRuns: 2000 });
   });
 });
+
+describe('what the reader says it understood', () => {
+  it('says nothing of a plain number in the shop\'s mark and writes what it read in that mark', () => {
+    expect(readTypedNumber('1,6', { decimalMark: ',', measure: 'length', units: 'metric' })).toEqual({ ok: true, value: 1.6, understood: null });
+    expect(readTypedNumber('3/8', { decimalMark: ',', measure: 'length', units: 'inch' })).toEqual({ ok: true, value: 0.375, understood: 'read "3/8" as 0,375 in' });
+    expect(readTypedNumber('1.6', { decimalMark: '.', measure: 'length', units: 'metric' })).toEqual({ ok: true, value: 1.6, understood: null });
+  });
+});

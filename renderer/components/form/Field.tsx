@@ -10,11 +10,14 @@ interface FieldFrameProps {
   hintId?: string;
   unit?: string;
   wide?: boolean;
+  /** What was understood of the text typed, shown under the field. */
+  understood?: string | undefined;
+  understoodId?: string;
   children: ReactNode;
 }
 
 /** Label above, input with its unit, and the message right beside the input it concerns. */
-export function FieldFrame({ id, errorId, label, error, hint, hintId, unit, wide, children }: FieldFrameProps) {
+export function FieldFrame({ id, errorId, label, error, hint, hintId, unit, wide, understood, understoodId, children }: FieldFrameProps) {
   return (
     <div className={`field${error ? ' field--error' : ''}${wide ? ' field--wide' : ''}`}>
       <label htmlFor={id} className="field__label">
@@ -26,6 +29,7 @@ export function FieldFrame({ id, errorId, label, error, hint, hintId, unit, wide
         {unit ? <span className="field__unit" aria-hidden="true">{unit}</span> : null}
       </div>
       {hint ? <p className="field__hint" id={hintId}>{hint}</p> : null}
+      {understood ? <p className="field__understood" id={understoodId}>{understood}</p> : null}
       {error ? <p className="field__error" id={errorId}>{error.message}</p> : null}
     </div>
   );

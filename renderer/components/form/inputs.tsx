@@ -8,7 +8,12 @@ interface BaseProps {
   hint?: ReactNode;
   wide?: boolean;
   disabled?: boolean;
+  /** A field a drawing rarely gives: out of the compact Tab order (still reachable by mouse, Alt shortcut or "every field"). */
+  rare?: boolean;
 }
+
+/** The Tab stop of a field: none for a rare one while the form keeps the compact order. */
+const tabStop = (f: { compact: boolean }, rare: boolean | undefined): number | undefined => (f.compact && rare ? -1 : undefined);
 
 interface TextProps extends BaseProps {
   value: string;
@@ -23,16 +28,18 @@ interface TextProps extends BaseProps {
 }
 
 /** A text or number field; numbers stay text so whatever is typed survives until it parses. */
-export function TextField({ path, label, hint, wide, value, onChange, unit, numeric, type = 'text', list, placeholder, disabled, autoFocus }: TextProps) {
+export function TextField({ path, label, hint, wide, value, onChange, unit, numeric, type = 'text', list, placeholder, disabled, autoFocus, rare }: TextProps) {
   const f = useFormField(path);
   const hintId = hint ? `${f.id}-hint` : undefined;
+  const understoodId = f.understood ? `${f.id}-understood` : undefined;
   return (
-    <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} unit={unit} wide={wide}>
+    <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} unit={unit} wide={wide}
+      understood={f.understood} understoodId={understoodId}>
       <input
         id={f.id} ref={f.ref} type={type} value={value} list={list} placeholder={placeholder} disabled={disabled}
         inputMode={numeric ? 'decimal' : undefined} autoComplete="off" spellCheck={false} autoFocus={autoFocus}
-        className={numeric ? 'input input--number' : 'input'} data-path={path}
-        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
+        className={numeric ? 'input input--number' : 'input'} data-path={path} tabIndex={tabStop(f, rare)}
+        aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, understoodId, hintId)}
         onChange={(e) => onChange(e.target.value)} onBlur={f.onBlur}
       />
     </FieldFrame>
@@ -50,13 +57,13 @@ interface SelectProps<T extends string> extends BaseProps {
   onChange(value: T): void;
 }
 
-export function SelectField<T extends string>({ path, label, hint, wide, value, choices, onChange, disabled }: SelectProps<T>) {
+export function SelectField<T extends string>({ path, label, hint, wide, value, choices, onChange, disabled, rare }: SelectProps<T>) {
   const f = useFormField(path);
   const hintId = hint ? `${f.id}-hint` : undefined;
   return (
     <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} wide={wide}>
       <select
-        id={f.id} ref={f.ref} value={value} disabled={disabled} className="input" data-path={path}
+        id={f.id} ref={f.ref} value={value} disabled={disabled} className="input" data-path={path} tabIndex={tabStop(f, rare)}
         aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
         onChange={(e) => onChange(e.target.value as T)} onBlur={f.onBlur}
       >
@@ -71,13 +78,13 @@ interface CheckProps extends Omit<BaseProps, 'wide'> {
   onChange(checked: boolean): void;
 }
 
-export function CheckField({ path, label, hint, checked, onChange, disabled }: CheckProps) {
+export function CheckField({ path, label, hint, checked, onChange, disabled, rare }: CheckProps) {
   const f = useFormField(path);
   const hintId = hint ? `${f.id}-hint` : undefined;
   return (
     <div className={`field field--check${f.error ? ' field--error' : ''}`}>
       <input
-        id={f.id} ref={f.ref} type="checkbox" checked={checked} disabled={disabled} data-path={path}
+        id={f.id} ref={f.ref} type="checkbox" checked={checked} disabled={disabled} data-path={path} tabIndex={tabStop(f, rare)}
         aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
         onChange={(e) => onChange(e.target.checked)} onBlur={f.onBlur}
       />
@@ -94,13 +101,13 @@ interface AreaProps extends BaseProps {
   onChange(value: string): void;
 }
 
-export function TextAreaField({ path, label, hint, value, rows = 3, onChange, disabled }: AreaProps) {
+export function TextAreaField({ path, label, hint, value, rows = 3, onChange, disabled, rare }: AreaProps) {
   const f = useFormField(path);
   const hintId = hint ? `${f.id}-hint` : undefined;
   return (
     <FieldFrame id={f.id} errorId={f.errorId} label={label} error={f.error} hint={hint} hintId={hintId} wide>
       <textarea
-        id={f.id} ref={f.ref} value={value} rows={rows} disabled={disabled} className="input" data-path={path}
+        id={f.id} ref={f.ref} value={value} rows={rows} disabled={disabled} className="input" data-path={path} tabIndex={tabStop(f, rare)}
         aria-invalid={f.error ? true : undefined} aria-describedby={describedBy(f.error && f.errorId, hintId)}
         onChange={(e) => onChange(e.target.value)} onBlur={f.onBlur}
       />

@@ -9,6 +9,10 @@ export interface FormScopeValue {
   idFor(path: string): string;
   /** The error to show beside the field now (a missing value only once the field was visited). */
   shownError(path: string): FormError | undefined;
+  /** What the reader understood of the field's text ("read "2 000" as 2000 pcs"), if it was not a plain number. */
+  understood(path: string): string | undefined;
+  /** Fields a drawing rarely fills leave the Tab order until the estimator asks for every field. */
+  compact: boolean;
   visit(path: string): void;
   register(path: string, element: HTMLElement | null): void;
 }
@@ -30,10 +34,15 @@ interface FormScopeProps {
   /** Paths the form has a field for; errors on other paths go to `unplaced`. */
   fields: readonly string[];
   handle?: (handle: FormHandle) => void;
+  /** What was understood of fields typed other than as plain numbers, by path. */
+  understood?: readonly { path: string; message: string }[];
+  compact?: boolean;
   children: (unplaced: FormError[]) => ReactNode;
 }
 
-export function FormScope({ scope, errors, fields, handle, children }: FormScopeProps) {
+const NONE: readonly { path: string; message: string }[] = [];
+
+export function FormScope({ scope, errors, fields, handle, understood = NONE, compact = false, children }: FormScopeProps) {
   const elements = useRef(new Map<string, HTMLElement>());
   const [visited, setVisited] = useState<ReadonlySet<string>>(new Set());
   const [revealed, setRevealed] = useState(false);
@@ -44,15 +53,18 @@ export function FormScope({ scope, errors, fields, handle, children }: FormScope
     if (el) elements.current.set(path, el);
     else elements.current.delete(path);
   }, []);
+  const notes = useMemo(() => new Map(understood.map((u) => [u.path, u.message])), [understood]);
   const value = useMemo<FormScopeValue>(() => ({
     scope,
+    compact,
+    understood: (path) => notes.get(path),
     idFor: (path) => fieldId(scope, path),
     shownError: (path) => {
       const e = byField.get(path);
       return e && (!e.missing || revealed || visited.has(path)) ? e : undefined;
     },
     visit, register,
-  }), [scope, byField, revealed, visited, visit, register]);
+  }), [scope, byField, revealed, visited, visit, register, notes, compact]);
   handle?.({
     focus(path) {
       const field = resolveField(path, new Set(elements.current.keys()));
@@ -67,6 +79,12 @@ export function FormScope({ scope, errors, fields, handle, children }: FormScope
   return <FormScopeContext.Provider value={value}>{children(unplaced.filter((e) => !e.missing || revealed))}</FormScopeContext.Provider>;
 }
 
+/** The Tab stop of a control a drawing rarely needs: none while the form keeps the compact order. */
+export function useRareTabStop(): number | undefined {
+  const form = useContext(FormScopeContext);
+  return form?.compact ? -1 : undefined;
+}
+
 /** What a field needs from its form: id, the message to show, and the hooks for visits and focus. */
 export function useFormField(path: string) {
   const form = useContext(FormScopeContext);
@@ -75,5 +93,6 @@ export function useFormField(path: string) {
   const ref = useCallback((el: HTMLElement | null) => register(path, el), [register, path]);
   const onBlur = useCallback(() => visit(path), [visit, path]);
   const id = form.idFor(path);
-  return { id, errorId: `${id}-error`, error: form.shownError(path), onBlur, ref };
+  const error = form.shownError(path);
+  return { id, errorId: `${id}-error`, error, understood: error ? undefined : form.understood(path), compact: form.compact, onBlur, ref };
 }

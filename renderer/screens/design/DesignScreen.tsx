@@ -27,7 +27,7 @@ export function DesignScreen() {
   const [asked, setAsked] = useState<unknown>(null);
   const [state, setState] = useState<'idle' | 'searching' | 'making'>('idle');
   const [failure, setFailure] = useState<string | null>(null);
-  const formErrors = useMemo(() => errors.map(friendlyError), [errors]);
+  const formErrors = useMemo(() => errors.map((e) => friendlyError(e)), [errors]);
   const set = <K extends keyof RequirementDraft>(key: K, value: RequirementDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
   const search = async () => {

@@ -54,6 +54,8 @@ export function DefaultsSection() {
         <SNumber path="defaults.quoteValidityDays" label="Quotes valid for" unit="days" />
         <SSelect path="defaults.setRemovalMethod" label="Set removal routed by"
           choices={[{ value: 'stricter', label: 'The stricter method' }, { value: 'handbook', label: 'Handbook (Shigley Table 10-6)' }, { value: 'en13906', label: 'EN 13906-1 static' }]} />
+        <SSelect path="defaults.decimalMark" label="Decimal mark in typed numbers"
+          choices={[{ value: '.', label: 'Point: 1.6 and 2,000' }, { value: ',', label: 'Comma: 1,6 and 2.000' }]} />
       </div>
     </section>
   );

@@ -59,9 +59,9 @@ function SettingsEditor({ saved }: { saved: Settings }) {
 
   const local = useMemo(() => {
     const r = parseSettingsPatch(draft);
-    return r.ok ? [] : r.errors.map(friendlyError);
+    return r.ok ? [] : r.errors.map((e) => friendlyError(e));
   }, [draft]);
-  const errors = useMemo(() => [...local, ...(serverError?.details ?? (serverError && serverError.path ? [serverError] : [])).map(friendlyError)], [local, serverError]);
+  const errors = useMemo(() => [...local, ...(serverError?.details ?? (serverError && serverError.path ? [serverError] : [])).map((e) => friendlyError(e))], [local, serverError]);
   const fields = useMemo(() => pathsOf(draft), [draft]);
   const access = useMemo(() => ({
     draft, get: (p: string) => getAt(draft, p),

@@ -63,6 +63,14 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
     ...editor.serverErrors,
   ], [editor.jobCheck.errors, editor.evaluation.errors, editor.serverErrors]));
 
+  const understood = useStable(useMemo(() => [
+    ...editor.jobCheck.understood,
+    ...editor.evaluation.understood.map((u) => ({ ...u, path: `spec.${u.path}` })),
+  ], [editor.jobCheck.understood, editor.evaluation.understood]));
+  // A new job starts in its first field, so a drawing's figures can be typed at once.
+  const fresh = jobId === null && !editor.loading;
+  useEffect(() => { if (fresh) form.current?.focus('spec.kind'); }, [fresh]);
+
   const goTo = (path: string) => {
     setTab('spec');
     // The spec panel stays mounted behind the other tabs, so its fields can take focus at once.
@@ -90,7 +98,7 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
         <TabPanel idPrefix="job" id="spec">
           <div className="bench">
-            <SpecForm drafts={editor.drafts} edit={editor.edit} errors={errors} handle={(h) => { form.current = h; }} />
+            <SpecForm drafts={editor.drafts} edit={editor.edit} errors={errors} understood={understood} handle={(h) => { form.current = h; }} />
             <ResultsPanel evaluation={editor.evaluation} version={editor.version} title={title}
               onGo={(p) => goTo(`spec.${p}`)} />
           </div>

@@ -17,7 +17,7 @@ export const DiameterSection = memo(function DiameterSection({ units, diameterGi
     <fieldset className="section">
       <legend>Diameters</legend>
       <div className="grid grid--3">
-        <SelectField path="spec.diameterGiven" label="The drawing dimensions the" value={diameterGiven}
+        <SelectField rare path="spec.diameterGiven" label="The drawing dimensions the" value={diameterGiven}
           onChange={(v) => set((s) => ({ ...s, diameterGiven: v }))}
           choices={[
             { value: 'outerDiameter', label: 'outside diameter (bore)' },

@@ -15,7 +15,7 @@ export function DutySection({ duty, onChange, points, unit }: DutyProps) {
     <fieldset className="section">
       <legend>Duty</legend>
       <div className="grid grid--3">
-        <SelectField path="spec.duty.type" label="Duty" value={duty.type} onChange={(v) => onChange({ type: v })}
+        <SelectField rare path="spec.duty.type" label="Duty" value={duty.type} onChange={(v) => onChange({ type: v })}
           choices={[{ value: 'static', label: 'static (few cycles)' }, { value: 'cyclic', label: 'cyclic (fatigue)' }]} />
       </div>
       {duty.type === 'cyclic' ? (

@@ -27,7 +27,7 @@ export const FinishSection = memo(function FinishSection({ order, units, edit }:
       <fieldset className="section">
         <legend>Tolerance grade</legend>
         <div className="grid grid--3">
-          <SelectField path="spec.toleranceGrade" label="Tolerance grade (EN 15800)" value={order.toleranceGrade} choices={gradeChoices}
+          <SelectField rare path="spec.toleranceGrade" label="Tolerance grade (EN 15800)" value={order.toleranceGrade} choices={gradeChoices}
             onChange={(v) => set({ toleranceGrade: v })} hint="Sets the limits on the traveller and the inspection plan" wide />
         </div>
       </fieldset>
@@ -41,13 +41,13 @@ export const FinishSection = memo(function FinishSection({ order, units, edit }:
               ...finishes.map((f) => ({ value: f.id, label: f.electroplated ? `${f.name} (electroplated)` : f.name })),
               ...(known ? [] : [{ value: order.finish, label: `${order.finish} (not in the shop's finishes)` }]),
             ]} />
-          <TextField path="spec.bakeSpecification" label="Bake specification" value={order.bakeSpecification}
+          <TextField rare path="spec.bakeSpecification" label="Bake specification" value={order.bakeSpecification}
             placeholder={chosen?.bakeSpecification ?? 'as the customer names it'} onChange={(v) => set({ bakeSpecification: v })} wide />
-          <SelectField path="spec.shotPeen" label="Shot peen" value={order.shotPeen} onChange={(v) => set({ shotPeen: v })}
+          <SelectField rare path="spec.shotPeen" label="Shot peen" value={order.shotPeen} onChange={(v) => set({ shotPeen: v })}
             choices={[{ value: '', label: 'as the duty needs' }, { value: 'yes', label: 'yes' }, { value: 'no', label: 'no' }]} />
-          <TextField path="spec.serviceTemperature.min" label="Service temperature, lowest" unit={temperature} numeric
+          <TextField rare path="spec.serviceTemperature.min" label="Service temperature, lowest" unit={temperature} numeric
             value={order.temperatureMin} onChange={(v) => set({ temperatureMin: v })} />
-          <TextField path="spec.serviceTemperature.max" label="Service temperature, highest" unit={temperature} numeric
+          <TextField rare path="spec.serviceTemperature.max" label="Service temperature, highest" unit={temperature} numeric
             value={order.temperatureMax} onChange={(v) => set({ temperatureMax: v })} />
         </div>
       </fieldset>

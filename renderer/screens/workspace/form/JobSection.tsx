@@ -21,13 +21,13 @@ export const JobSection = memo(function JobSection({ job, edit }: { job: JobDraf
         <TextField path="partNumber" label="Part number" value={job.partNumber} onChange={(v) => set({ partNumber: v })} />
         <TextField path="drawingNumber" label="Drawing number" value={job.drawingNumber} onChange={(v) => set({ drawingNumber: v })} />
         <TextField path="drawingRevision" label="Drawing revision" value={job.drawingRevision} onChange={(v) => set({ drawingRevision: v })} />
-        <SelectField path="status" label="Status" value={job.status} onChange={(v) => set({ status: v })}
+        <SelectField rare path="status" label="Status" value={job.status} onChange={(v) => set({ status: v })}
           choices={jobStatuses.map((s) => ({ value: s, label: statusLabels[s] }))} />
-        <TextField path="orderQuantity" label="Order quantity" unit="pcs" numeric value={job.orderQuantity} onChange={(v) => set({ orderQuantity: v })} />
-        <TextField path="dueDate" label="Due date" type="date" value={job.dueDate} onChange={(v) => set({ dueDate: v })} />
-        <TextField path="leadTimeDays" label="Lead time" unit="days" numeric value={job.leadTimeDays} onChange={(v) => set({ leadTimeDays: v })} />
+        <TextField rare path="orderQuantity" label="Order quantity" unit="pcs" numeric value={job.orderQuantity} onChange={(v) => set({ orderQuantity: v })} />
+        <TextField rare path="dueDate" label="Due date" type="date" value={job.dueDate} onChange={(v) => set({ dueDate: v })} />
+        <TextField rare path="leadTimeDays" label="Lead time" unit="days" numeric value={job.leadTimeDays} onChange={(v) => set({ leadTimeDays: v })} />
       </div>
-      <TextAreaField path="notes" label="Job notes" value={job.notes} rows={2} onChange={(v) => set({ notes: v })} />
+      <TextAreaField rare path="notes" label="Job notes" value={job.notes} rows={2} onChange={(v) => set({ notes: v })} />
     </fieldset>
   );
 });

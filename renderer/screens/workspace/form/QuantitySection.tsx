@@ -12,11 +12,11 @@ export const QuantitySection = memo(function QuantitySection({ order, notes, edi
       <legend>Quantities</legend>
       <div className="grid grid--3">
         <TextField path="spec.quantities" label="Price-break quantities" unit="pcs" value={order.quantities} wide
-          hint="Up to 12, e.g. 100, 1000, 5000" onChange={(v) => set((s) => ({ ...s, order: { ...s.order, quantities: v } }))} />
-        <TextField path="spec.aql" label="Inspection AQL" unit="%" numeric value={order.aql} placeholder="1.0"
+          hint="Up to 12, split by ; or / or a new line, e.g. 100; 1 000; 5 000" onChange={(v) => set((s) => ({ ...s, order: { ...s.order, quantities: v } }))} />
+        <TextField rare path="spec.aql" label="Inspection AQL" unit="%" numeric value={order.aql} placeholder="1.0"
           onChange={(v) => set((s) => ({ ...s, order: { ...s.order, aql: v } }))} />
       </div>
-      <TextAreaField path="spec.notes" label="Spec notes" value={notes} rows={2}
+      <TextAreaField rare path="spec.notes" label="Spec notes" value={notes} rows={2}
         onChange={(v) => set((s) => ({ ...s, notes: v }))} />
     </fieldset>
   );

@@ -4,9 +4,16 @@ import { unitSymbol } from '../../../../core/units';
 import { SelectField, TextField } from '../../../components/form/inputs';
 import { useShopData } from '../../../hooks/shop-data';
 import type { OverridesDraft } from '../../../model/spec-draft';
+import { useRareTabStop } from '../../../components/form/scope';
 import { formatQuantity } from '../../../../core/format';
 import type { Edit } from './edit';
 import { editSpec } from './edit';
+
+/**
+ * The grade's own designation first ("SH", "A228"), the last part of its id: typing it picks the grade in the
+ * closed list, a few keys instead of arrowing through the library.
+ */
+const gradeCode = (id: string): string => (id.split('-').pop() ?? id).toUpperCase();
 
 /** Wire grade and size, and the mill certificate's figures where they replace the library's. */
 interface WireProps {
@@ -19,6 +26,7 @@ interface WireProps {
 
 export const WireSection = memo(function WireSection({ units: u, material, wireDiameter, overrides, edit }: WireProps) {
   const set = editSpec(edit);
+  const rareStop = useRareTabStop();
   const { grades } = useShopData();
   const grade = grades.find((g) => g.id === material);
   const range = grade
@@ -32,12 +40,12 @@ export const WireSection = memo(function WireSection({ units: u, material, wireD
       <div className="grid grid--3">
         <SelectField path="spec.material" label="Wire grade" value={material} wide hint={range}
           onChange={(v) => set((s) => ({ ...s, material: v }))}
-          choices={[{ value: '', label: 'Choose a grade…' }, ...grades.map((g) => ({ value: g.id, label: g.name }))]} />
+          choices={[{ value: '', label: 'Choose a grade…' }, ...grades.map((g) => ({ value: g.id, label: `${gradeCode(g.id)} · ${g.name}` }))]} />
         <TextField path="spec.wireDiameter" label="Wire diameter d" unit={unitSymbol('length', u)} numeric
           value={wireDiameter} onChange={(v) => set((s) => ({ ...s, wireDiameter: v }))} />
       </div>
       <details className="more" open={Object.values(overrides).some((v) => v !== '') || undefined}>
-        <summary>Mill certificate values (replace the library’s)</summary>
+        <summary tabIndex={rareStop}>Mill certificate values (replace the library’s)</summary>
         <div className="grid grid--4">
           <TextField path="spec.materialOverrides.tensileStrength" label="Tensile strength Rm" unit={unitSymbol('stress', u)} numeric
             value={overrides.tensileStrength} onChange={override('tensileStrength')} />

@@ -85,7 +85,7 @@ function FirstOffBody({ job, dirty }: { job: Job; dirty: boolean }) {
     const result = await api.recordFirstOff(input);
     setBusy(false);
     if (!result.ok) {
-      setErrors((result.error.details ?? [result.error]).map(friendlyError));
+      setErrors((result.error.details ?? [result.error]).map((e) => friendlyError(e)));
       return;
     }
     setErrors([]);

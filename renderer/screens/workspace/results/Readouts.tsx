@@ -2,18 +2,21 @@ import type { SpringReport } from '../../../../core/calculate';
 import { formatQuantity } from '../../../../core/format';
 import { allowableBand } from '../../../../core/review/limits';
 import { captions, kindTerms } from '../../../../core/vocabulary';
+import { inShopMark } from '../../../model/numbers';
 import { loadRows, readouts, stressBars } from './readout-data';
 
 /** The figures an estimator checks first, in the job's units. `r` in internal units. */
-export function KeyFigures({ r }: { r: SpringReport }) {
+export function KeyFigures({ r, probes = [], waitingFor }: { r: SpringReport; probes?: readonly SpringReport[]; waitingFor?: string }) {
+  const shown = readouts(r);
+  const moved = new Set(probes.flatMap((probe) => readouts(probe).filter((p, i) => p.value !== shown[i]?.value).map((p) => p.symbol)));
   return (
     <section className="panel" aria-labelledby="figures-title">
       <h3 id="figures-title" className="panel__title">Key figures</h3>
       <dl className="figures">
-        {readouts(r).map((f) => (
+        {shown.map((f) => (
           <div key={f.name} className="figures__item" data-figure={f.symbol}>
             <dt>{f.name} <span className="figures__symbol">{f.symbol}</span></dt>
-            <dd>{f.value}</dd>
+            {moved.has(f.symbol) ? <dd className="figures__waiting">— <span className="muted">waits for {waitingFor}</span></dd> : <dd>{inShopMark(f.value)}</dd>}
           </div>
         ))}
       </dl>
@@ -32,7 +35,7 @@ export function LoadTable({ r }: { r: SpringReport }) {
       <tbody>
         {rows.map((row) => (
           <tr key={row.point}>
-            <th scope="row">{row.point}</th><td className="num">{row.at}</td><td className="num">{row.load}</td><td className="num">{row.asked}</td>
+            <th scope="row">{row.point}</th><td className="num">{inShopMark(row.at)}</td><td className="num">{inShopMark(row.load)}</td><td className="num">{inShopMark(row.asked)}</td>
             <td>{row.within === null ? '—' : row.within ? 'yes' : <strong className="error-text">no</strong>}</td>
           </tr>
         ))}
@@ -51,7 +54,7 @@ export function StressBars({ r }: { r: SpringReport }) {
       <ul className="bars">
         {stressBars(r).map((b) => {
           const ratio = b.value / b.allowable;
-          const text = `${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`;
+          const text = inShopMark(`${formatQuantity(b.value, 'stress', u)} of ${formatQuantity(b.allowable, 'stress', u)} (${Math.round(ratio * 100)} %)`);
           return (
             <li key={b.label} className={`bar bar--${allowableBand(b.value, b.allowable)}`}>
               <span className="bar__label">{b.label}</span>

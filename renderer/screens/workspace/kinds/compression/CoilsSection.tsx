@@ -14,7 +14,7 @@ export function CoilsSection({ spring, order, edit }: { spring: CompressionDraft
     <fieldset className="section">
       <legend>Coils &amp; ends</legend>
       <div className="grid grid--4">
-        <SelectField path="spec.coilsGiven" label="Coils given as" value={spring.coilsGiven}
+        <SelectField rare path="spec.coilsGiven" label="Coils given as" value={spring.coilsGiven}
           onChange={(v) => set((k) => ({ ...k, coilsGiven: v }))}
           choices={[{ value: 'totalCoils', label: 'total coils Nt' }, { value: 'activeCoils', label: 'active coils n' }]} />
         <TextField path={`spec.${spring.coilsGiven}`} label={spring.coilsGiven === 'totalCoils' ? 'Total coils Nt' : 'Active coils n'} numeric

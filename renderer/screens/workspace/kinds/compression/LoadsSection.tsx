@@ -19,7 +19,7 @@ export function LoadsSection({ spring, units, edit }: { spring: CompressionDraft
       <div className="grid grid--3">
         <TextField path="spec.freeLength" label="Free length L0" unit={length} numeric value={spring.freeLength}
           onChange={(v) => set((k) => ({ ...k, freeLength: v }))} />
-        <SelectField path="spec.seating" label="Seating (for buckling)" value={spring.seating} wide
+        <SelectField rare path="spec.seating" label="Seating (for buckling)" value={spring.seating} wide
           onChange={(v) => set((k) => ({ ...k, seating: v }))}
           choices={seatingSchema.options.map((s) => ({ value: s, label: seatingLabels[s] }))} />
       </div>
@@ -27,13 +27,13 @@ export function LoadsSection({ spring, units, edit }: { spring: CompressionDraft
         columns={[
           { key: 'length', label: (n) => `Test length L${n}`, unit: length },
           { key: 'force', label: (n) => `Force F${n} (if specified)`, unit: unitSymbol('force', units) },
-          { key: 'tolerancePercent', label: (n) => `Tolerance on F${n} ±`, unit: '%' },
+          { key: 'tolerancePercent', label: (n) => `Tolerance on F${n} ±`, unit: '%', rare: true },
         ]} />
       <fieldset className="subsection">
         <legend>The maker may adjust (EN 15800 free parameters)</legend>
         <div className="checks">
           {freeParameterSchema.options.map((p) => (
-            <CheckField key={p} path={`spec.freeParameters.${p}`} label={freeParameterLabels[p]} checked={spring.freeParameters.includes(p)}
+            <CheckField rare key={p} path={`spec.freeParameters.${p}`} label={freeParameterLabels[p]} checked={spring.freeParameters.includes(p)}
               onChange={(on) => set((k) => ({ ...k, freeParameters: on ? [...k.freeParameters, p] : k.freeParameters.filter((x) => x !== p) }))} />
           ))}
         </div>

@@ -24,7 +24,7 @@ function EndFields({ end, i, length, onChange }: { end: EndDraft; i: number; len
         <TextField path={`spec.ends[${i}].extension`} label={`${name}: hook extension`} unit={length} numeric value={end.extension}
           onChange={(v) => onChange({ extension: v })} />
       ) : null}
-      <TextField path={`spec.ends[${i}].bendRadius`} label={`${name}: bend radius`} unit={length} numeric value={end.bendRadius}
+      <TextField rare path={`spec.ends[${i}].bendRadius`} label={`${name}: bend radius`} unit={length} numeric value={end.bendRadius}
         onChange={(v) => onChange({ bendRadius: v })} />
     </>
   );
@@ -59,14 +59,14 @@ export const ExtensionSections = memo(function ExtensionSections({ spring, order
           <TextField path="spec.initialTension" label="Initial tension" unit={unitSymbol('force', units)} numeric value={spring.initialTension}
             hint="Leave empty to have one proposed" onChange={(v) => set((k) => ({ ...k, initialTension: v }))} />
           <TextField path="spec.loopAngle" label="Loop angle" unit="°" numeric value={spring.loopAngle} onChange={(v) => set((k) => ({ ...k, loopAngle: v }))} />
-          <TextField path="spec.loopAngleTolerance" label="Loop angle tolerance ±" unit="°" numeric value={spring.loopAngleTolerance}
+          <TextField rare path="spec.loopAngleTolerance" label="Loop angle tolerance ±" unit="°" numeric value={spring.loopAngleTolerance}
             onChange={(v) => set((k) => ({ ...k, loopAngleTolerance: v }))} />
         </div>
         <LoadRows rows={spring.loads} noun="test length" tag="L" blank={emptyLoad} onChange={(loads) => set((k) => ({ ...k, loads }))}
           columns={[
             { key: 'length', label: (n) => `Length inside ends L${n}`, unit: length },
             { key: 'force', label: (n) => `Force F${n} (if specified)`, unit: unitSymbol('force', units) },
-            { key: 'tolerancePercent', label: (n) => `Tolerance on F${n} ±`, unit: '%' },
+            { key: 'tolerancePercent', label: (n) => `Tolerance on F${n} ±`, unit: '%', rare: true },
           ]} />
         <CheckField path="spec.mechanicalStop" label="The assembly has a mechanical stop (limits the extension)" checked={spring.mechanicalStop}
           onChange={(on) => set((k) => ({ ...k, mechanicalStop: on }))} />

@@ -18,7 +18,7 @@ function LegFields({ leg, i, length, onChange }: { leg: LegDraft; i: number; len
       <TextField path={`spec.legs[${i}].length`} label={`${name}: length`} unit={length} numeric value={leg.length} onChange={(v) => onChange({ length: v })} />
       <SelectField path={`spec.legs[${i}].form`} label={`${name}: form`} value={leg.form} onChange={(v) => onChange({ form: v })}
         choices={legFormSchema.options.map((f) => ({ value: f, label: legFormLabels[f] }))} />
-      <TextField path={`spec.legs[${i}].bendRadius`} label={`${name}: bend radius`} unit={length} numeric value={leg.bendRadius}
+      <TextField rare path={`spec.legs[${i}].bendRadius`} label={`${name}: bend radius`} unit={length} numeric value={leg.bendRadius}
         onChange={(v) => onChange({ bendRadius: v })} />
     </>
   );
@@ -51,14 +51,14 @@ export const TorsionSections = memo(function TorsionSections({ spring, units, ed
         <div className="grid grid--4">
           <TextField path="spec.freeAngle" label="Free angle between legs" unit="°" numeric value={spring.freeAngle}
             onChange={(v) => set((k) => ({ ...k, freeAngle: v }))} />
-          <TextField path="spec.freeAngleTolerance" label="Free angle tolerance ±" unit="°" numeric value={spring.freeAngleTolerance}
+          <TextField rare path="spec.freeAngleTolerance" label="Free angle tolerance ±" unit="°" numeric value={spring.freeAngleTolerance}
             onChange={(v) => set((k) => ({ ...k, freeAngleTolerance: v }))} />
         </div>
         <LoadRows rows={spring.loads} noun="working angle" tag="α" blank={emptyAngleLoad} onChange={(loads) => set((k) => ({ ...k, loads }))}
           columns={[
             { key: 'angle', label: (n) => `Deflection α${n} from free`, unit: '°' },
             { key: 'torque', label: (n) => `Torque M${n} (if specified)`, unit: unitSymbol('torque', units) },
-            { key: 'tolerancePercent', label: (n) => `Tolerance on M${n} ±`, unit: '%' },
+            { key: 'tolerancePercent', label: (n) => `Tolerance on M${n} ±`, unit: '%', rare: true },
           ]} />
       </fieldset>
       <DutySection duty={spring.duty} unit="°" points={['Working deflection, first', 'Working deflection, second']}

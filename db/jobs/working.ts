@@ -1,0 +1,48 @@
+import type { Store } from '../store';
+import type { JobState } from './state';
+import { revisionFields } from './state';
+
+/** A job's open working session: autosaves since the last permanent revision, not yet kept as one. */
+export interface WorkingRow {
+  job_id: number;
+  base_revision: number;
+  opened_at: string;
+  saved_at: string;
+  saves: number;
+}
+
+export function workingRow(store: Store, jobId: number): WorkingRow | undefined {
+  return store.sql('SELECT * FROM job_working_revisions WHERE job_id = ?').get(jobId) as WorkingRow | undefined;
+}
+
+/** Records one autosave of the session (opening it when none is open). Inside a transaction. */
+export function markWorkingSave(store: Store, jobId: number, baseRevision: number, at: string): void {
+  store.sql(`INSERT INTO job_working_revisions (job_id, base_revision, opened_at, saved_at, saves) VALUES (?, ?, ?, ?, 1)
+             ON CONFLICT (job_id) DO UPDATE SET saved_at = excluded.saved_at, saves = saves + 1`).run(jobId, baseRevision, at, at);
+}
+
+/** Writes one permanent revision; revisions are immutable (triggers), so this only ever inserts. */
+export function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
+  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
+    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec));
+}
+
+/** Ends the session without a revision of its own: the save under way records its state. */
+export function dropWorking(store: Store, jobId: number): void {
+  store.sql('DELETE FROM job_working_revisions WHERE job_id = ?').run(jobId);
+}
+
+/**
+ * Closes the job's open session: the state the autosaves left in the jobs row becomes one permanent revision.
+ * Returns whether there was a session to close. Inside a transaction.
+ */
+export function closeWorking(store: Store, jobId: number, reason: string, stateOf: () => { revision: number; state: JobState }): boolean {
+  const open = workingRow(store, jobId);
+  if (!open) return false;
+  const { revision, state } = stateOf();
+  const now = store.now().toISOString();
+  addRevision(store, jobId, revision + 1, reason, state, now);
+  store.sql('UPDATE jobs SET revision = ? WHERE id = ?').run(revision + 1, jobId);
+  dropWorking(store, jobId);
+  return true;
+}
