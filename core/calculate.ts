@@ -32,7 +32,7 @@ export function analyseSpec(spec: Spec, settings?: Settings): SpringReport {
   const kind = kindEntryOf(spec.kind);
   const x = kind.design(spec) ?? unknownGrade(spec);
   const r = kind.analyse(x, settings);
-  return withFindings(r, kind.review(x, r));
+  return withFindings(r, kind.review(x, r, settings));
 }
 
 /** The report in the spec's own unit system, as the CLI, the UI and documents show it. */

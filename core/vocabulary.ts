@@ -22,19 +22,21 @@ export interface KindTerms {
   document: { heading: string; diagramCaption: string };
   /** What the working positions are: lengths along the axis or angles of the legs. */
   workingPosition: 'length' | 'angle';
+  /** The tolerance grade with the tables it reads for this kind. */
+  toleranceGrade: string;
 }
 
 export const kindTerms: Record<SpringKind, KindTerms> = {
   compression: {
-    label: 'Compression', workingPosition: 'length',
+    label: 'Compression', workingPosition: 'length', toleranceGrade: 'Tolerance grade (EN 15800)',
     document: { heading: 'Helical compression spring', diagramCaption: 'Load–length diagram' },
   },
   extension: {
-    label: 'Extension', workingPosition: 'length',
+    label: 'Extension', workingPosition: 'length', toleranceGrade: 'Tolerance grade (DIN 2097 and trade extension tables)',
     document: { heading: 'Helical extension spring', diagramCaption: 'Load–length diagram (lengths inside the ends)' },
   },
   torsion: {
-    label: 'Torsion', workingPosition: 'angle',
+    label: 'Torsion', workingPosition: 'angle', toleranceGrade: 'Tolerance grade (shop torsion tables)',
     document: { heading: 'Helical torsion spring', diagramCaption: 'Torque–angle diagram' },
   },
 };

@@ -14,10 +14,12 @@ export interface PrintedPdf {
   findings: string[];
 }
 
+const travellerInput = z.object({ jobId, quantity: jobId.optional(), customerOrder: z.string().trim().max(64).optional() }).strict();
+
 /** Documents for stored jobs: the traveller, a newly issued quote, and the reprint of an issued one. */
 export const documentMethods = {
-  printTraveller: method<z.ZodObject<{ jobId: typeof jobId; quantity: z.ZodOptional<typeof jobId> }>, PrintedPdf>(
-    z.object({ jobId, quantity: jobId.optional() }).strict()),
+  /** `customerOrder`: the customer's order number, printed in the job block. */
+  printTraveller: method<typeof travellerInput, PrintedPdf>(travellerInput),
   /** Issues the job's quote (priced by the service, guarded as `issueQuote`) and prints it. */
   printQuote: method<typeof issueQuoteSchema, PrintedPdf>(issueQuoteSchema),
   reprintQuote: method<z.ZodObject<{ number: z.ZodString }>, PrintedPdf>(z.object({ number: z.string().min(1).max(40) }).strict()),

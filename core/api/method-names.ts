@@ -9,7 +9,7 @@ import type { ApiResult } from './contract';
 export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision', 'keepWorkingRevision',
-  'setJobStatus', 'listCustomers', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
+  'setJobStatus', 'copyJob', 'archiveJob', 'deleteJob', 'undoDeleteJob', 'listCustomers', 'saveCustomer', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
   'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { jobJudgementSchema, noJudgement } from '../quoting/judgement';
 import { specBounds } from '../spec/bounds';
+import { quoteTermsInputSchema } from '../documents/quote-terms';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
 export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
@@ -15,6 +16,18 @@ export const customerRefSchema = z.object({
   email: z.string().max(120).optional(),
   phone: z.string().max(40).optional(),
 }).strict();
+
+/** A customer as the customer screen adds (no id) or edits (with id) one. */
+export const customerInputSchema = z.object({
+  id: id.optional(),
+  name: z.string().trim().min(1, 'a customer needs a name').max(120),
+  contact: z.string().trim().max(120).default(''),
+  email: z.string().trim().max(120).refine((e) => e === '' || /^[^\s@]+@[^\s@]+$/.test(e), 'an e-mail address such as buyer@example.com').default(''),
+  phone: z.string().trim().max(40).default(''),
+  addressLines: z.array(z.string().trim().max(120)).max(6, 'at most 6 address lines').default([]),
+  paymentTerms: z.string().trim().max(200).default(''),
+}).strict();
+export type CustomerInput = z.input<typeof customerInputSchema>;
 
 const fields = {
   customer: customerRefSchema.nullable(),
@@ -88,6 +101,8 @@ export const listJobsSchema = z.object({
   customerId: id.optional(),
   kind: z.string().min(1).optional(),
   material: z.string().min(1).optional(),
+  /** true lists the archived jobs instead (newest archived first unless sorted otherwise); search finds both. */
+  archived: z.boolean().default(false),
   dates: z.object({
     field: z.enum(['created', 'updated', 'due']).default('updated'),
     from: isoDateSchema.optional(),
@@ -114,9 +129,12 @@ export const similarJobsSchema = z.object({
   spec: z.unknown(),
   limit: z.number().int().min(1).max(100).default(10),
   excludeJobId: id.optional(),
+  /** The quantity asked about: each hit's last quoted price is read at the break nearest it. */
+  quantity: z.number().int().positive().optional(),
 }).strict();
 
 export const jobIdSchema = z.object({ id }).strict();
+export const archiveJobSchema = z.object({ id, archived: z.boolean() }).strict();
 /** A job by its id or by the shop's job number. */
 export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().trim().min(1) }).strict()]);
 /** Ends a job's working session as one permanent revision; `reason` says what closed it. */
@@ -138,6 +156,8 @@ export const issueQuoteSchema = z.object({
   jobIds: z.array(id).min(1, 'name at least one job').max(MAX_QUOTE_LINES, `a quotation holds at most ${MAX_QUOTE_LINES} lines`).optional(),
   validityDays: z.number().int().min(1).max(365).optional(),
   accept: z.string().trim().min(3, 'say in a few words why the problems are accepted').max(500).optional(),
+  /** The customer's enquiry reference and this quote's terms; what is left out comes from the customer or the shop. */
+  terms: quoteTermsInputSchema.optional(),
 }).strict().superRefine((q, ctx) => {
   if ((q.jobId === undefined) === (q.jobIds === undefined)) {
     ctx.addIssue({ code: 'custom', path: ['jobIds'], message: 'name the job (jobId) or the jobs of the quotation (jobIds), not both' });

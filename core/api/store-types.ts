@@ -8,8 +8,14 @@ import type { JobJudgement } from '../quoting/judgement';
 export interface Customer {
   id: number;
   name: string;
+  /** The person quotes are addressed to. */
+  contact: string;
   email: string;
   phone: string;
+  /** Postal address, one printed line each. */
+  addressLines: string[];
+  /** Payment terms agreed with this customer; '' prints the shop's default. */
+  paymentTerms: string;
 }
 
 export interface JobShape {
@@ -59,15 +65,45 @@ export interface JobSummary extends JobDetails {
   revision: number;
   createdAt: string;
   updatedAt: string;
+  /** When the job left the default list; null while it is listed. Search still finds an archived job. */
+  archivedAt: string | null;
   shape: JobShape;
   /** Present when the stored spec no longer reads: the job still lists, and opening it reports this. */
   problem?: StoredProblem;
+}
+
+/** Another job a job is linked to, and when the link was made. */
+export interface JobLink {
+  id: number;
+  number: string;
+  at: string;
 }
 
 export interface Job extends JobSummary {
   spec: Spec;
   /** Present while a working session is open: its autosaves are in the job, and become one revision when it closes. */
   working?: { baseRevision: number; openedAt: string; savedAt: string; saves: number };
+  /** The past job this one was made from, and the jobs made from this one. */
+  lineage: { copiedFrom: JobLink | null; copiedTo: JobLink[] };
+}
+
+/** A deleted draft: it can be brought back with undoDeleteJob while this record is kept. */
+export interface DeletedJob {
+  jobId: number;
+  number: string;
+  deletedAt: string;
+}
+
+/** How near a past job is, in the words an estimator reads at a glance. */
+export type MatchWords = 'same spring' | 'very close' | 'close' | 'loosely similar' | 'far';
+
+/** The last price quoted for a past job, at the quantity break nearest the asked quantity. */
+export interface LastQuotedPrice {
+  quoteNumber: string;
+  issuedAt: string;
+  quantity: number;
+  unitPrice: number;
+  currency: string;
 }
 
 export interface JobPage {
@@ -117,6 +153,9 @@ export interface SimilarJob {
   /** (past − asked) / asked per dimension. */
   relative: Record<DimensionName, number>;
   summary: string;
+  /** "very close", "close"… and the biggest difference named, e.g. "close: OD 9 % larger". */
+  match: { words: MatchWords; biggest: string | null; text: string };
+  lastQuoted: LastQuotedPrice | null;
 }
 
 /** One line of a quotation as its lists show it: the job it quotes, as the job stood at issue. */

@@ -19,6 +19,12 @@ export const DEFAULT_QUANTITIES = [100, 1000, 5000];
 
 type Missing = MissingCost[];
 
+/** The kilograms a price per kg is charged on; an inch job also reads them in pounds. */
+function kgText(kg: number, plan: ManufacturingPlan): string {
+  const text = `${figure(kg, 3)} kg`;
+  return plan.units === 'metric' ? text : `${text} (${formatQuantity(kg, 'massBulk', 'inch')})`;
+}
+
 function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Missing): CostLine {
   const price = wirePrice(settings.materialPrices, plan.material.grade, plan.material.wireDiameter);
   const kg = rounded(plan.lotWire.kg, 3);
@@ -26,11 +32,11 @@ function materialLine(plan: ManufacturingPlan, settings: Settings, missing: Miss
   if (!price) {
     missing.push({ code: 'no-wire-price', path: 'materialPrices',
       message: `no price for ${plan.material.grade} at ${formatQuantity(plan.material.wireDiameter, 'length', plan.units)}: material is not costed` });
-    return { key: 'material', item, basis: `${figure(kg, 3)} kg, no price on file`, amount: 0, group: 'material' };
+    return { key: 'material', item, basis: `${kgText(kg, plan)}, no price on file`, amount: 0, group: 'material' };
   }
   return {
     key: 'material', item, group: 'material', amount: cents(kg * price.pricePerKg),
-    basis: `${figure(kg, 3)} kg (${plan.lotWire.startQuantity} pcs started incl. scrap + setup wire) × ${rateText(price.pricePerKg)}/kg, ` +
+    basis: `${kgText(kg, plan)} (${plan.lotWire.startQuantity} pcs started incl. scrap + setup wire) × ${rateText(price.pricePerKg)}/kg, ` +
       `${price.supplier || 'supplier not named'} ${price.date}`,
   };
 }
@@ -94,11 +100,11 @@ function outsideLines(plan: ManufacturingPlan, settings: Settings, spec: Spec): 
   const priced = cents(byKg + byPiece);
   const amount = Math.max(priced, finish.lotMinimum);
   const basis = [
-    finish.pricePerKg !== undefined ? `${figure(kg, 3)} kg × ${rateText(finish.pricePerKg)}/kg` : '',
+    finish.pricePerKg !== undefined ? `${kgText(kg, plan)} × ${rateText(finish.pricePerKg)}/kg` : '',
     finish.pricePerPiece !== undefined ? `${plan.orderQuantity} pcs × ${rateText(finish.pricePerPiece)}` : '',
   ].filter(Boolean).join(' + ');
   return [{
-    key: `outside:${finish.id}`, item: `${finish.name} (${finish.vendor || 'vendor'})`, group: 'outside', amount,
+    key: `outside:${finish.id}`, item: `${finish.name} (${finish.inHouse ? 'in house' : finish.vendor || 'vendor'})`, group: finish.inHouse ? 'run' : 'outside', amount,
     basis: `${basis || 'no vendor price'}${amount > priced ? `; vendor lot minimum ${rateText(finish.lotMinimum)}` : ''}`,
   }];
 }

@@ -1,3 +1,5 @@
+import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 import type { PointKey } from './frame';
 import type { LimitCode, Miss } from './misses';
 import type { WireChoice } from './wire-sizes';
@@ -44,11 +46,12 @@ export class Closest {
   }
 
   /** A wire for which the envelope and the preferred index leave no mean diameter at all. */
-  offerEmptyRange(wire: WireChoice, range: { lo: number; hi: number }): void {
+  offerEmptyRange(wire: WireChoice, range: { lo: number; hi: number }, units: UnitSystem): void {
+    const len = (v: number) => formatQuantity(v, 'length', units);
     const miss: Miss = {
       limit: 'envelope', path: 'envelope', quantity: 'length', value: range.lo, bound: range.hi, sense: 'max',
       relative: (range.lo - range.hi) / Math.max(range.hi, 1e-9),
-      note: `wire ${wire.d} mm needs a mean diameter of at least ${range.lo.toFixed(2)} mm; the envelope leaves at most ${range.hi.toFixed(2)} mm`,
+      note: `wire ${len(wire.d)} needs a mean diameter of at least ${len(range.lo)}; the envelope leaves at most ${len(range.hi)}`,
     };
     this.count([miss]);
     // A wire that fits nowhere is a poorer near miss than any point tried or any grade ruled out.

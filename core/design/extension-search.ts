@@ -137,7 +137,7 @@ export function searchExtension(r: ExtensionRequirement, settings: Settings) {
     const unfit = gradeMisses({ duty: { type: 'static' }, serviceTemperature: req.serviceTemperature }, wire.grade);
     const empty = isEmptyGrid(range, settings.design.diameterStep);
     if (unfit.length > 0) ctx.closest.offerWire(wire, unfit);
-    else if (empty) ctx.closest.offerEmptyRange(wire, range);
+    else if (empty) ctx.closest.offerEmptyRange(wire, range, r.units);
     for (const ends of req.ends) {
       ctx.stats.combinations++;
       if (unfit.length > 0 || empty) continue;

@@ -102,7 +102,7 @@ export function searchCompression(r: CompressionRequirement, settings: Settings)
     const unfit = gradeMisses(req, wire.grade);
     const empty = isEmptyGrid(range, settings.design.diameterStep);
     if (unfit.length > 0) ctx.closest.offerWire(wire, unfit);
-    else if (empty) ctx.closest.offerEmptyRange(wire, range);
+    else if (empty) ctx.closest.offerEmptyRange(wire, range, ctx.req.units);
     let props: WireProperties | undefined;
     for (const ends of req.ends) {
       for (const peened of peening) {

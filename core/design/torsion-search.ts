@@ -186,7 +186,7 @@ export function searchTorsion(r: TorsionRequirement, settings: Settings) {
     const range = torsionDiameterRange(req, wire.d);
     const unfit = gradeMisses({ duty: { type: 'static' }, serviceTemperature: req.serviceTemperature }, wire.grade);
     if (unfit.length > 0) { ctx.closest.offerWire(wire, unfit); continue; }
-    if (isEmptyGrid(range, settings.design.diameterStep)) { ctx.closest.offerEmptyRange(wire, range); continue; }
+    if (isEmptyGrid(range, settings.design.diameterStep)) { ctx.closest.offerEmptyRange(wire, range, req.units); continue; }
     const props = wireProperties(wire.grade.id, wire.d)!.props;
     const thin = wireTooThin(req, props, wire.d);
     if (thin) { ctx.closest.offerWire(wire, [thin]); continue; }

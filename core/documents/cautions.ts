@@ -13,11 +13,16 @@ export const STORED_ENERGY_CAUTION =
 export const REVIEW_CAUTION =
   'The figures in this document support, and do not replace, review of the design by a qualified engineer, ' +
   'the customer\'s approval of the drawing, and the standards, codes and regulations that apply where the ' +
-  'spring is used. Tolerance and process tables are reproduced from third-party reprints and may be incomplete: check them against the ' +
-  'current standard.';
+  'spring is used.';
 
-export function cautionNotice(): NoticeModel {
-  return { title: 'Caution', paragraphs: [STORED_ENERGY_CAUTION, REVIEW_CAUTION] };
+/** For the shop's own papers only: where its tables come from is no matter for a customer document. */
+export const TABLES_CAUTION =
+  'Tolerance and process tables are reproduced from third-party reprints and may be incomplete: check them against the current standard.';
+
+/** The caution every document carries; the shop's own papers add the note on its tables. */
+export function cautionNotice(audience: 'customer' | 'shop'): NoticeModel {
+  const review = audience === 'shop' ? `${REVIEW_CAUTION} ${TABLES_CAUTION}` : REVIEW_CAUTION;
+  return { title: 'Caution', paragraphs: [STORED_ENERGY_CAUTION, review] };
 }
 
 /** What the floor must know before it starts, from the operations the routing holds. */

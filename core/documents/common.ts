@@ -1,7 +1,7 @@
 import type { Settings } from '../settings/schema';
 import type { Spec, SpringKind } from '../spec';
 import { effectiveFinish } from '../finishing/effective';
-import { kindLabel } from '../vocabulary';
+import { kindLabel, kindTerms } from '../vocabulary';
 import type { Field, Letterhead } from './types';
 
 export function letterhead(settings: Settings): Letterhead {
@@ -34,6 +34,14 @@ export function orderFields(spec: Spec, settings: Settings): Field[] {
   const { id, finish, bakeSpecification } = effectiveFinish(spec, settings.finishes);
   const fields: Field[] = [{ label: 'Finish', value: finish?.name ?? id ?? 'none (plain)' }];
   if (finish?.electroplated) fields.push({ label: 'Hydrogen relief bake', value: bakeSpecification ?? 'to be named by the customer' });
-  fields.push({ label: 'Tolerance grade', value: String(spec.toleranceGrade ?? settings.defaults.toleranceGrade) });
+  fields.push({ label: kindTerms[spec.kind].toleranceGrade, value: String(spec.toleranceGrade ?? settings.defaults.toleranceGrade) });
   return fields;
+}
+
+/**
+ * The drawing's free length; with a force specified it is a reference dimension (EN 15800 / DIN 2095: the
+ * maker adjusts it to hold the force), and the document says so.
+ */
+export function freeLengthText(length: string, forceSpecified: boolean): string {
+  return forceSpecified ? `${length} (reference)` : length;
 }

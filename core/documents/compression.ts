@@ -4,7 +4,7 @@ import type { Settings } from '../settings/schema';
 import type { CompressionSpec } from '../spec';
 import type { CompressionReport } from '../springs/compression/report';
 import { findGrade } from '../materials';
-import { orderFields } from './common';
+import { freeLengthText, orderFields } from './common';
 import { piecesText, plainText, wordText } from './text';
 import type { Field } from './types';
 
@@ -32,7 +32,7 @@ export function compressionFields(spec: CompressionSpec, r: CompressionReport, s
     { label: 'Wire Ø d', value: len(r.wireDiameter) },
     { label: 'Outside Ø De', value: len(r.outerDiameter) },
     { label: 'Inside Ø Di', value: len(r.innerDiameter) },
-    { label: 'Free length L0', value: len(r.freeLength) },
+    { label: 'Free length L0', value: freeLengthText(len(r.freeLength), r.loads.some((l) => l.specifiedForce !== null)) },
     { label: 'Total coils nt', value: plainText(r.totalCoils) },
     { label: 'Active coils n', value: plainText(r.activeCoils) },
     { label: 'Ends', value: wordText(spec.ends) },

@@ -32,6 +32,7 @@ const lineContent = {
   prices: z.object({ currency: z.string(), table, notes: z.array(z.string()) }),
   exceptions: z.array(z.string()).default([]),
   leadTime: z.string(),
+  priceCurve: figure.nullable().default(null),
 };
 
 const quoteHead = {
@@ -39,7 +40,9 @@ const quoteHead = {
   type: z.literal('quote'),
   issue: z.object({ number: z.string(), date: z.string(), validUntil: z.string(), validityDays: z.number().int().positive() }),
   customer: z.object({ name: z.string(), lines: z.array(z.string()) }),
+  commercial: z.array(field).default([]),
   terms: z.array(z.string()),
+  signature: z.object({ preparedBy: z.string(), boxes: z.array(z.string()) }).nullable().default(null),
 };
 
 const quotationSchema = z.object({
@@ -54,8 +57,9 @@ const quotationSchema = z.object({
  * quotation whose page is drawn exactly as it was.
  */
 const oneJobQuoteSchema = z.object({ ...quoteHead, ...lineContent }).transform((q): QuoteDocument => {
-  const { part, specification, drawing, prices, exceptions, leadTime, ...head } = q;
-  return { ...head, overview: part, items: null, lines: [{ item: '1', title: 'Item 1', part, specification, drawing, prices, exceptions, leadTime }] };
+  const { part, specification, drawing, prices, exceptions, leadTime, priceCurve, ...head } = q;
+  return { ...head, overview: part, items: null,
+    lines: [{ item: '1', title: 'Item 1', part, specification, drawing, prices, exceptions, leadTime, priceCurve }] };
 });
 
 const quoteSchema: z.ZodType<QuoteDocument, unknown> = z.unknown().transform((raw, ctx) => {

@@ -3,6 +3,8 @@ export type * from './types';
 export { DOCUMENT_VERSION } from './types';
 export { quotationDocument, quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
 export type { QuotationInput, QuoteInput, QuoteJob, QuoteLineInput } from './quote';
+export { quoteTermsInputSchema, statedTerms } from './quote-terms';
+export type { QuoteTermsInput, StatedTerms } from './quote-terms';
 export { travellerDocument } from './traveller';
 export type { TravellerInput, TravellerJob } from './traveller';
 export { cautionNotice, safetyNotes, STORED_ENERGY_CAUTION, REVIEW_CAUTION } from './cautions';

@@ -16,6 +16,8 @@ export interface PrintJob {
   number: string | null;
   customerName: string | null;
   customerLines: string[];
+  /** Payment terms agreed with the customer, when they differ from the shop's. */
+  customerPaymentTerms?: string;
   partNumber: string;
   drawingNumber: string;
   drawingRevision: string;

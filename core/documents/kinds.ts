@@ -6,7 +6,7 @@ import type { ExtensionReport } from '../springs/extension/report';
 import type { TorsionReport } from '../springs/torsion/report';
 import { extensionEndTerms, legFormTerms, loadDirectionTerms } from '../vocabulary';
 import { findGrade } from '../materials';
-import { orderFields } from './common';
+import { freeLengthText, orderFields } from './common';
 import { piecesText, plainText, wordText } from './text';
 import type { Field } from './types';
 
@@ -28,7 +28,7 @@ export function extensionFields(spec: ExtensionSpec, r: ExtensionReport, setting
     { label: 'Outside Ø De', value: len(r.outerDiameter) },
     { label: 'Body coils Nb', value: plainText(r.bodyCoils) },
     { label: 'Ends', value: r.ends.map((e) => extensionEndTerms[e].long).join(' / ') },
-    { label: 'Free length inside ends L0', value: len(r.freeLength) },
+    { label: 'Free length inside ends L0', value: freeLengthText(len(r.specifiedFreeLength ?? r.freeLength), r.loads.some((l) => l.specifiedForce !== null)) },
     { label: 'Initial tension F0', value: `${force(r.initialTension)}${r.initialTensionProposed ? ' (proposed)' : ''}` },
     ...r.loads.map((l, i) => ({
       label: `Load F${i + 1} at L${i + 1} = ${len(l.length)}`,
@@ -62,7 +62,7 @@ export function torsionFields(spec: TorsionSpec, r: TorsionReport, settings: Set
     { label: 'Rate per degree', value: formatQuantity(r.ratePerDegree, 'torqueRatePerDegree', r.units) },
     { label: 'Arbor Ø', value: r.arborDiameter === null ? 'not given' : len(r.arborDiameter) },
     { label: 'Inside Ø at the largest angle', value: len(r.insideDiameterAtLoad) },
-    { label: 'Tolerances', value: 'shop-entered: no sourced torsion-spring tolerance table is used' },
+    { label: 'Tolerances', value: 'as stated on the drawing; otherwise our usual torsion-spring tolerances' },
     { label: 'Duty', value: dutyText(spec) },
     ...orderFields(spec, settings),
   ];

@@ -5,8 +5,11 @@ import type { Spec } from '../spec';
 import { cautionNotice } from './cautions';
 import { drawingText, kindTitle, letterhead, present } from './common';
 import { springContent } from './spring';
+import { commercialFields, signatureBlock, statedTerms } from './quote-terms';
+import type { QuoteTermsInput } from './quote-terms';
+import { priceCurve } from '../drawing';
 import { addDays, dayOf, moneyText, piecesText, unitPriceText } from './text';
-import type { Field, QuoteDocument, QuoteIssue, QuoteLineModel, TableModel } from './types';
+import type { Field, FigureModel, QuoteDocument, QuoteIssue, QuoteLineModel, TableModel } from './types';
 import { DOCUMENT_VERSION } from './types';
 
 export interface QuoteJob {
@@ -19,6 +22,8 @@ export interface QuoteJob {
   drawingNumber: string;
   drawingRevision: string;
   leadTimeDays: number | null;
+  /** Payment terms agreed with this customer; empty or absent for the shop's. */
+  customerPaymentTerms?: string;
 }
 
 /** One line of a quotation: a job's spring, its own estimate and its accepted exceptions. */
@@ -38,6 +43,8 @@ interface QuoteCommonInput {
   /** The quote number; "DRAFT" until the store issues one (see `withQuoteIssue`). */
   number?: string;
   validityDays?: number;
+  /** The enquiry reference and the terms the estimator set on this quote. */
+  terms?: QuoteTermsInput;
 }
 
 /** A quotation of several lines for one customer (named by the first line's job). */
@@ -65,6 +72,13 @@ function priceTable(estimate: CostEstimate): TableModel {
   };
 }
 
+const PRICE_CURVE = { width: 480, height: 240 };
+
+function priceCurveFigure(estimate: CostEstimate): FigureModel {
+  const points = estimate.breaks.map((b) => ({ quantity: b.quantity, unitPrice: b.unitPrice }));
+  return { caption: `Unit price (${estimate.currency}) against quantity`, svg: priceCurve(points, estimate.currency, PRICE_CURVE), ...PRICE_CURVE };
+}
+
 function priceNotes(estimate: CostEstimate): string[] {
   if (estimate.minimumOrderValue <= 0) return [];
   return [`Minimum order value ${estimate.currency} ${moneyText(estimate.minimumOrderValue)}: a smaller order is charged at the minimum.`];
@@ -87,10 +101,14 @@ function leadTimeText(days: number | null): string {
   return days === null ? 'to be confirmed with the order' : `${days} days from order and drawing approval`;
 }
 
-/** The part, drawing and our job; a line of several leaves out the part number its title already gives. */
-function partFields(job: QuoteJob, titled = false): Field[] {
+/**
+ * The enquiry, part, drawing and our job; a line of several leaves out the part number its title already
+ * gives, and the enquiry the quotation names once.
+ */
+function partFields(job: QuoteJob, o: { enquiryReference?: string; titled?: boolean } = {}): Field[] {
   return present([
-    { label: 'Part number', value: titled ? '' : job.partNumber },
+    { label: 'Your enquiry', value: o.enquiryReference ?? '' },
+    { label: 'Part number', value: o.titled ? '' : job.partNumber },
     { label: 'Drawing', value: drawingText(job.drawingNumber, job.drawingRevision) },
     { label: 'Our job', value: job.number ?? '' },
   ]);
@@ -106,12 +124,13 @@ function quoteLine(line: QuoteLineInput, settings: Settings, index: number, coun
   return {
     item: String(index + 1),
     title: job.partNumber ? `Item ${index + 1}: ${job.partNumber}` : `Item ${index + 1}`,
-    part: partFields(job, count > 1),
+    part: partFields(job, { titled: count > 1 }),
     specification: { heading: spring.heading, fields: spring.fields },
     drawing: spring.drawing,
     prices: { currency: estimate.currency, table: priceTable(estimate), notes: priceNotes(estimate) },
     exceptions: [...(line.exceptions ?? [])],
     leadTime: leadTimeText(job.leadTimeDays),
+    priceCurve: settings.quoteTerms.priceCurveOnQuote ? priceCurveFigure(estimate) : null,
   };
 }
 
@@ -129,9 +148,9 @@ function itemsTable(lines: readonly QuoteLineInput[]): TableModel {
   };
 }
 
-function overview(lines: readonly QuoteLineInput[]): Field[] {
-  if (lines.length === 1) return partFields(lines[0]!.job);
-  return [{ label: 'Items', value: `${lines.length} parts, listed below` }];
+function overview(lines: readonly QuoteLineInput[], enquiryReference: string): Field[] {
+  if (lines.length === 1) return partFields(lines[0]!.job, { enquiryReference });
+  return present([{ label: 'Your enquiry', value: enquiryReference }, { label: 'Items', value: `${lines.length} parts, listed below` }]);
 }
 
 export function quotationDocument(input: QuotationInput): QuoteDocument {
@@ -142,15 +161,18 @@ export function quotationDocument(input: QuotationInput): QuoteDocument {
   const validityDays = input.validityDays ?? settings.defaults.quoteValidityDays;
   const issue = quoteIssue(input.number ?? 'DRAFT', input.issuedAt, validityDays);
   const first = lines[0]!.job;
+  const stated = statedTerms(settings.quoteTerms, first.customerPaymentTerms, input.terms);
   return {
     version: DOCUMENT_VERSION, type: 'quote', paperSize: settings.defaults.paperSize, createdAt: input.issuedAt,
-    title: 'Quotation', reference: `Quotation ${issue.number}`, letterhead: letterhead(settings), caution: cautionNotice(),
+    title: 'Quotation', reference: `Quotation ${issue.number}`, letterhead: letterhead(settings), caution: cautionNotice('customer'),
     issue,
     customer: { name: first.customerName ?? 'Customer not named', lines: [...(first.customerLines ?? [])] },
-    overview: overview(lines),
+    overview: overview(lines, stated.enquiryReference),
     items: lines.length === 1 ? null : itemsTable(lines),
     lines: lines.map((l, i) => quoteLine(l, settings, i, lines.length)),
+    commercial: commercialFields(stated),
     terms: terms(currency, validityDays, lines.length),
+    signature: signatureBlock(stated),
   };
 }
 

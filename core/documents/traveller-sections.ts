@@ -4,6 +4,7 @@ import type { ManufacturingPlan } from '../process/plan';
 import type { Characteristic, InspectionPlan } from '../process/inspection-plan';
 import type { OperationOverride, Operation, OperationSetting } from '../process/types';
 import type { UnitSystem } from '../units';
+import type { Finish } from '../settings/schema';
 import { fixedText, percentText, piecesText, plainText, quantityText, wordText } from './text';
 import type { Field, OperationModel, TableModel } from './types';
 
@@ -11,6 +12,16 @@ const OPERATOR_SIGN_OFF = ['Operator', 'Date', 'Qty good', 'Qty scrap'];
 const OUTSIDE_SIGN_OFF = ['Vendor PO', 'Date out', 'Date back', 'Qty back'];
 export const MATERIAL_FILL_IN = ['Heat / lot number', 'Mill certificate ref.', 'Issued by / date'];
 export const INSPECTION_SIGN_OFF = ['Inspector', 'Date', 'Lot accepted / rejected', 'Certificate of conformance no.'];
+/** Before the run goes on: the first pieces approved, and the job released by engineering. */
+export const RELEASE_SIGN_OFF = ['First article approved by', 'Date', 'Engineering release by', 'Date'];
+
+/** What the inspector records of a finish: its thickness where it has one, the plater's bake certificate after plating. */
+export function finishChecks(finish: Finish | null): string[] {
+  if (!finish) return [];
+  const checks = finish.inHouse ? ['Finish checked (visual)'] : ['Coating thickness measured'];
+  if (finish.electroplated) checks.push('Plater\'s bake certificate no.');
+  return checks;
+}
 
 export function settingText(s: OperationSetting, units: UnitSystem): string {
   if (typeof s.value === 'string') return wordText(s.value);
@@ -41,6 +52,7 @@ export function materialFields(plan: ManufacturingPlan): Field[] {
     { label: 'Mass per piece', value: formatQuantity(plan.massPerPiece, 'mass', u) },
     { label: `Wire for ${piecesText(plan.lotWire.startQuantity)} pcs + setup`, value: lot.length },
     { label: 'Wire mass for the lot', value: lot.mass },
+    { label: 'Wire stock', value: plan.lotWire.stock.text },
   ];
 }
 
@@ -53,11 +65,18 @@ function paceField(op: Operation): Field | null {
   return null;
 }
 
-function operationFields(op: Operation): Field[] {
+/** What an operation without a run rate is paced by: the lot sent out and its mass, or the rate still to set. */
+function lotField(op: Operation, lot: OperationLot, units: UnitSystem): Field {
+  const pieces = `${piecesText(lot.pieces)} pcs`;
+  if (op.outside) return { label: 'Lot out', value: `${pieces}, about ${formatQuantity(lot.mass, 'massBulk', units)}` };
+  return { label: 'Lot', value: `${pieces}; run rate not set: add a work centre for it in Settings` };
+}
+
+function operationFields(op: Operation, lot: OperationLot, units: UnitSystem): Field[] {
   const fields: Field[] = [];
   if (!op.outside && op.setupMinutes > 0) fields.push({ label: 'Setup', value: `${plainText(op.setupMinutes, 0)} min` });
   const pace = paceField(op);
-  if (pace) fields.push(pace);
+  fields.push(pace ? { ...pace, value: `${pace.value} (lot ${piecesText(lot.pieces)} pcs)` } : lotField(op, lot, units));
   if (op.scrapFraction > 0) fields.push({ label: 'Scrap allowance', value: percentText(op.scrapFraction) });
   for (const o of op.overrides) fields.push({ label: `${OVERRIDE_LABELS[o.field]} set for this job`, value: overrideText(o) });
   if (op.addedBecause) fields.push({ label: 'Added for this job', value: op.addedBecause });
@@ -83,10 +102,25 @@ function workCentreText(op: Operation): string {
   return op.kind === 'pack' || op.kind === 'load-test' ? 'bench' : 'no work centre assigned';
 }
 
-export function operationModel(op: Operation, units: UnitSystem): OperationModel {
+/** Pieces reaching an operation (the start quantity less the scrap of those before it) and their mass (kg). */
+export interface OperationLot {
+  pieces: number;
+  mass: number;
+}
+
+export function operationLots(plan: ManufacturingPlan): OperationLot[] {
+  let pieces = plan.lotWire.startQuantity;
+  return plan.operations.map((op) => {
+    const lot = { pieces, mass: pieces * plan.massPerPiece };
+    pieces = Math.ceil(pieces * (1 - op.scrapFraction));
+    return lot;
+  });
+}
+
+export function operationModel(op: Operation, units: UnitSystem, lot: OperationLot): OperationModel {
   return {
     sequence: String(op.sequence), title: op.title, workCentre: workCentreText(op), outside: op.outside,
-    fields: operationFields(op),
+    fields: operationFields(op, lot, units),
     settings: op.settings.map((s) => ({ label: s.label, value: settingText(s, units) })),
     notes: [...op.notes],
     signOff: op.outside ? OUTSIDE_SIGN_OFF : OPERATOR_SIGN_OFF,

@@ -71,6 +71,13 @@ export interface QuoteIssue {
   validityDays: number;
 }
 
+/** Who signs a document, and the boxes left for the signature. */
+export interface SignatureBlock {
+  /** "J. Demo, estimator". */
+  preparedBy: string;
+  boxes: string[];
+}
+
 /** One line item of a quotation: one job's part, spring, prices, accepted deviations and lead time. */
 export interface QuoteLineModel {
   /** "1", "2", …: how the customer refers to the line. */
@@ -86,6 +93,8 @@ export interface QuoteLineModel {
   /** Engineering exceptions the shop accepted on this line, in the customer's words. */
   exceptions: string[];
   leadTime: string;
+  /** Unit price against quantity, when the shop prints it on quotes. */
+  priceCurve: FigureModel | null;
 }
 
 /**
@@ -101,7 +110,10 @@ export interface QuoteDocument extends DocumentCommon {
   /** The lines at a glance (several lines only); null for a one-line quotation. */
   items: TableModel | null;
   lines: QuoteLineModel[];
+  /** Payment, delivery, packaging and certificates as offered on this quotation. */
+  commercial: Field[];
   terms: string[];
+  signature: SignatureBlock | null;
 }
 
 /** One operation of the routing as the shop floor reads it, with the boxes the operator fills in. */
@@ -123,8 +135,11 @@ export interface TravellerDocument extends DocumentCommon {
   /** The text of the QR code (the job number), or null for a job not in the store. */
   qr: string | null;
   material: { fields: Field[]; fillIn: string[] };
+  /** First-article approval and engineering release, signed before the run goes on. */
+  release: string[];
   operations: OperationModel[];
-  inspection: { summary: string[]; table: TableModel; signOff: string[] };
+  /** `finish`: what the inspector records of the finish (none when no finish is applied). */
+  inspection: { summary: string[]; table: TableModel; finish: string[]; signOff: string[] };
   figures: FigureModel[];
   safety: string[];
   /** Review findings still open (errors and warnings), printed so nobody misses them on the floor. */
@@ -143,7 +158,7 @@ const tableQuantities: QuantityMap = { columns: { weight: 'ratio' } };
 export const documentQuantities: QuantityMap = {
   version: 'ordinal',
   issue: { validityDays: 'days' },
-  lines: { drawing: figureQuantities, prices: { table: tableQuantities } },
+  lines: { drawing: figureQuantities, priceCurve: figureQuantities, prices: { table: tableQuantities } },
   items: tableQuantities,
   figures: figureQuantities,
   inspection: { table: tableQuantities },

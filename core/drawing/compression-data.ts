@@ -1,4 +1,5 @@
 /** The data block beside a compression spring view, with the symbols of ISO 2162-2 / EN 13906-1. */
+import { materialRow } from './material-row';
 import type { CompressionEnds } from '../spec/compression';
 import type { CompressionLoadResult, CompressionReport } from '../springs/compression/report';
 import { formatQuantity } from '../format';
@@ -29,14 +30,16 @@ export function diameterLabel(input: Pick<DataBlockInput, 'report' | 'diameter'>
   return input.diameter === 'inner' ? { symbol: s.innerDiameter, value: r.innerDiameter } : { symbol: s.outerDiameter, value: r.outerDiameter };
 }
 
+/** With a force specified, L0 is a reference dimension (EN 15800 / DIN 2095): drawn in parentheses. */
+export const freeLengthReference = (r: CompressionReport): boolean => r.loads.some((l) => l.specifiedForce !== null);
+
 export function parameterRows(input: DataBlockInput): TableRow[] {
   const r = input.report;
   const diameter = diameterLabel(input);
   const rows: [string, string][] = [
-    ['Material', r.material],
     [s.wireDiameter, lengthText(r, wireDiameter(r))],
     [diameter.symbol, lengthText(r, diameter.value)],
-    [s.freeLength, lengthText(r, r.freeLength)],
+    [s.freeLength, freeLengthReference(r) ? `(${lengthText(r, r.freeLength)})` : lengthText(r, r.freeLength)],
     [s.activeCoils, plainNumber(r.activeCoils)],
     [s.totalCoils, plainNumber(r.totalCoils)],
     [s.solidLength, lengthText(r, r.solidLength)],
@@ -44,7 +47,7 @@ export function parameterRows(input: DataBlockInput): TableRow[] {
     ['Ends', compressionEndTerms[input.ends].short],
   ];
   if (input.wind) rows.push(['Wind', windTerms[input.wind].short]);
-  return rows.map((cells) => ({ cells }));
+  return [materialRow(r.material), ...rows.map((cells) => ({ cells }))];
 }
 
 /** The drawing states the force asked for, with its tolerance; without one, the force the design gives. */

@@ -7,7 +7,7 @@ import type { CompressionReport } from '../springs/compression/report';
 import type { SpringGeometry, ViewPlacement } from './compression-view';
 import { springGeometry, springStrokes, springView, toScreen } from './compression-view';
 import type { WindDirection } from './compression-data';
-import { diameterLabel, lengthText, loadRows, parameterRows } from './compression-data';
+import { diameterLabel, freeLengthReference, lengthText, loadRows, parameterRows } from './compression-data';
 import { leader, linearDimension } from './dimension';
 import type { Hand } from './coils';
 import type { TableRow } from './table';
@@ -58,7 +58,8 @@ function lengthDimensions({ report, g, v }: DimensionInput): string[] {
   const bottom = g.R + g.d / 2;
   const left = screen({ x: 0, y: bottom });
   return [
-    linearDimension(left, screen({ x: g.L0, y: bottom }), -18, `L0 = ${lengthText(report, report.freeLength)}`),
+    linearDimension(left, screen({ x: g.L0, y: bottom }), -18, `L0 = ${lengthText(report, report.freeLength)}`,
+      { reference: freeLengthReference(report) }),
     linearDimension(left, screen({ x: report.solidLength, y: bottom }), -36,
       `Ls = ${lengthText(report, report.solidLength)}`, { reference: true }),
   ];

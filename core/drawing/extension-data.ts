@@ -1,4 +1,5 @@
 /** The data block beside an extension spring view, with the symbols of ISO 2162-2 / EN 13906-2. */
+import { materialRow } from './material-row';
 import { formatQuantity } from '../format';
 import type { ExtensionReport } from '../springs/extension/report';
 import { angleText, specifiedText, windText } from './common';
@@ -28,7 +29,6 @@ export function extensionParameterRows(
   const r = report;
   const length = (v: number) => extensionLength(r, v);
   const rows: [string, string][] = [
-    ['Material', r.material],
     [s.wireDiameter, length(r.wireDiameter)],
     [s.outerDiameter, length(r.outerDiameter)],
     [s.bodyCoils, plainNumber(r.bodyCoils)],
@@ -42,7 +42,7 @@ export function extensionParameterRows(
   if (stated.directionOfWind) rows.push(['Wind', windText[stated.directionOfWind]]);
   const loop = stated.loopPosition;
   if (loop) rows.push(['Loop position', angleText(loop.angle, loop.tolerance)]);
-  return rows.map((cells) => ({ cells }));
+  return [materialRow(r.material), ...rows.map((cells) => ({ cells }))];
 }
 
 export function extensionLoadRows(report: ExtensionReport): TableRow[] {

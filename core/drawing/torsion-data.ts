@@ -1,4 +1,5 @@
 /** The data block beside the torsion spring views, with the symbols of ISO 2162-2 / EN 13906-3. */
+import { materialRow } from './material-row';
 import { formatQuantity } from '../format';
 import type { LegForm } from '../spec/torsion';
 import type { TorsionReport } from '../springs/torsion/report';
@@ -26,7 +27,6 @@ export function torsionParameterRows(report: TorsionReport, layout: LegLayout, f
   const r = report;
   const length = (v: number) => torsionLength(r, v);
   const rows: [string, string][] = [
-    ['Material', r.material],
     [s.wireDiameter, length(r.wireDiameter)],
     [s.outerDiameter, length(r.outerDiameter)],
     [s.innerDiameter, length(r.innerDiameter)],
@@ -40,7 +40,7 @@ export function torsionParameterRows(report: TorsionReport, layout: LegLayout, f
   ];
   if (r.arborDiameter !== null) rows.push(['Arbor', length(r.arborDiameter)]);
   if (r.maximumAngle > 0) rows.push([`${s.innerDiameter} at ${angleText(r.maximumAngle)}`, length(r.insideDiameterAtLoad)]);
-  return rows.map((cells) => ({ cells }));
+  return [materialRow(r.material), ...rows.map((cells) => ({ cells }))];
 }
 
 export function torsionLoadRows(report: TorsionReport): TableRow[] {

@@ -2,6 +2,8 @@
 import type { HardnessEstimate } from './bake-hardness';
 import { hvAsHrc, isBorderline } from './bake-hardness';
 import type { BakeSpecId } from './bake-specs';
+import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 import { astmB850, astmF1941, iso4042, saeAms2759_9, saeUscar5, springMakerPractice } from './bake-specs';
 
 export type BakeStatus = 'bake' | 'no-bake' | 'conditional' | 'not-covered';
@@ -39,20 +41,25 @@ const describe = (h: HardnessEstimate, unit: 'HV' | 'HRC'): string => {
   return `${prefix}${value} ${unit} (${h.source})`;
 };
 
-export function b850(tensile: number): BakeStatement {
+/** A strength in the job's units: the chart is in MPa, an inch job reads psi. */
+const strengthText = (mpa: number, units: UnitSystem): string =>
+  (units === 'metric' ? `${fmt(mpa)} MPa` : formatQuantity(mpa, 'stress', units));
+
+export function b850(tensile: number, units: UnitSystem = 'metric'): BakeStatement {
   const t = astmB850;
+  const s = (mpa: number) => strengthText(mpa, units);
   const none = { hours: null, temperatureC: null, startWithinHours: null };
   if (tensile <= t.notEssentialUpTo) {
-    return statement('astm-b850', t, { ...none, status: 'no-bake', says: `up to ${t.notEssentialUpTo} MPa a bake is not essential` });
+    return statement('astm-b850', t, { ...none, status: 'no-bake', says: `up to ${s(t.notEssentialUpTo)} a bake is not essential` });
   }
   const band = t.bands.find((b) => tensile > b.over && tensile <= b.upTo);
   if (!band) {
     return statement('astm-b850', t, { ...none, status: 'not-covered',
-      says: `${fmt(tensile)} MPa is beyond the partial table (up to 1800 MPa): take the bake from the full standard` });
+      says: `${s(tensile)} is beyond the partial table (up to ${s(t.bands[t.bands.length - 1]!.upTo)}): take the bake from the full standard` });
   }
   return statement('astm-b850', t, {
     status: 'bake', hours: { min: band.hours, max: null }, temperatureC: t.temperatureC, startWithinHours: null,
-    says: `bake at least ${band.hours} h at ${t.temperatureC.min}–${t.temperatureC.max} °C (${band.over + 1}–${band.upTo} MPa band). ${t.caution}`,
+    says: `bake at least ${band.hours} h at ${t.temperatureC.min}–${t.temperatureC.max} °C (${units === 'metric' ? `${band.over + 1}–${band.upTo} MPa` : `${s(band.over)}–${s(band.upTo)}`} band). ${t.caution}`,
   });
 }
 

@@ -86,3 +86,12 @@ export const bakeSpecTitles: Readonly<Record<BakeSpecId, string>> = {
   'astm-f1941': astmF1941.title,
   'sae-ams-2759-9': saeAms2759_9.title,
 };
+
+/** Each specification as a drawing, an order or a plater writes it (what findings and fixes name). */
+export const bakeSpecNames: Readonly<Record<BakeSpecId, string>> = {
+  'astm-b850': 'ASTM B850',
+  'iso-4042': 'ISO 4042',
+  'sae-uscar-5': 'SAE/USCAR-5',
+  'astm-f1941': 'ASTM F1941',
+  'sae-ams-2759-9': 'SAE AMS 2759/9',
+};

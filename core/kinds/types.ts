@@ -7,6 +7,7 @@ import type { z } from 'zod';
 import type { Field } from '../documents/types';
 import type { SpringDiagramOptions, SpringDrawingOptions } from '../drawing/spring';
 import type { InspectionPlan } from '../process/inspection-plan';
+import type { ShopTables } from '../tolerances';
 import type { RoutingChoices } from '../process/operations';
 import type { Operation } from '../process/types';
 import type { FieldError, Finding } from '../result';
@@ -34,11 +35,13 @@ export interface KindParts<S, X extends CoilBody, R> {
   design(spec: S): X | undefined;
   /** The shop's settings choose between methods where the kind has a choice (compression: set removal). */
   analyse(design: X, settings?: Settings): R;
-  review(design: X, report: R): Finding[];
+  /** The maker's review; the shop's settings supply the shop's own tables where a rule reads one. */
+  review(design: X, report: R, settings?: Settings): Finding[];
   /** What each number of the report measures; reports convert out to the job's units with it. */
   reportQuantities: QuantityMap;
   routing(settings: Settings, design: X, report: R, choices: RoutingChoices): Operation[];
-  inspection(design: X, report: R, lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[]): InspectionPlan;
+  /** `tables`: the shop's own tolerance tables (Settings → Tolerances). */
+  inspection(design: X, report: R, lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[], tables: ShopTables): InspectionPlan;
   /** The free length the coiler makes and the finished one; null where the kind has none (torsion). */
   freeLengths(report: R): { coiled: number | null; finished: number | null };
   drawing(report: R, options: SpringDrawingOptions): string;

@@ -3,6 +3,8 @@
  * analysed spec, so everything that does not depend on d is prepared when the module loads; the nested
  * objects of the result are shared and frozen.
  */
+import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 import type { Finding } from '../result';
 import { staticAllowables } from './allowables';
 import type { StaticAllowable } from './allowables';
@@ -54,14 +56,16 @@ const prepared = new Map(wireGrades.map((g) => [g.id, prepare(g)]));
 // One lookup result, reused: JavaScript runs this synchronously, and the values are copied out at once.
 const scratch: StrengthScratch = { min: 0, max: null, basis: 'table', source: '', verified: false, fitIndex: -1 };
 
-function outsideRange(p: Prepared, d: number): Finding {
+function outsideRange(p: Prepared, d: number, units: UnitSystem): Finding {
+  const len = (x: number) => formatQuantity(x, 'length', units);
+  const range = units === 'metric' ? p.rangeText : `${len(p.grade.diameterRange.min)}–${len(p.grade.diameterRange.max)}`;
   return {
     code: 'wire-diameter-outside-grade',
     severity: 'error',
     path: 'wireDiameter',
-    message: `Wire diameter ${mm(d)} mm is outside the sizes ${p.grade.name} is made in (${p.rangeText}); `
+    message: `Wire diameter ${units === 'metric' ? `${mm(d)} mm` : len(d)} is outside the sizes ${p.grade.name} is made in (${range}); `
       + 'its properties are taken at the nearest size in range.',
-    fix: `Choose a grade made in this size, or a wire diameter within ${p.rangeText}.`,
+    fix: `Choose a grade made in this size, or a wire diameter within ${range}.`,
   };
 }
 
@@ -104,14 +108,14 @@ function properties(p: Prepared, d: number, o: MaterialOverrides | undefined): W
  * library values; an overridden tensile strength has basis 'override'.
  */
 export function wireProperties(
-  gradeId: string, d: number, overrides?: MaterialOverrides,
+  gradeId: string, d: number, overrides?: MaterialOverrides, units: UnitSystem = 'metric',
 ): { props: WireProperties; findings: Finding[] } | undefined {
   const p = prepared.get(gradeId);
   if (!p) return undefined;
   strengthInto(p.strength, d, scratch);
   const props = properties(p, d, overrides);
   const findings: Finding[] = [];
-  if (!(d >= p.lo && d <= p.hi)) findings.push(outsideRange(p, d));
+  if (!(d >= p.lo && d <= p.hi)) findings.push(outsideRange(p, d, units));
   if (props.tensileStrengthBasis === 'fit') findings.push(strengthNote(p, scratch.fitIndex));
   return { props, findings };
 }

@@ -37,9 +37,11 @@ export function extensionInspection(
   const characteristics = r.loads.map((_l, i) => loadCharacteristic(x, r, grade, i));
   characteristics.push(freeLengthCharacteristic(x, r), diameterCharacteristic(x, r.springIndex, grade));
   const loop = loopPositionTolerance({ totalCoils: r.bodyCoils });
-  if (x.loopAngle !== null && loop.ok) {
-    const plusMinus = x.loopAngleTolerance ?? loop.value;
-    characteristics.push(limited('Relative loop position', 'angle', x.loopAngle, plusMinus, 'protractor', x.loopAngleTolerance === null ? loop.source : 'drawing'));
+  if (loop.ok || x.loopAngleTolerance !== null) {
+    // Loops not given a position are made in line (0°), common trade practice.
+    const name = x.loopAngle === null ? 'Relative loop position (loops in line)' : 'Relative loop position';
+    const plusMinus = x.loopAngleTolerance ?? (loop.ok ? loop.value : 0);
+    characteristics.push(limited(name, 'angle', x.loopAngle ?? 0, plusMinus, 'protractor', x.loopAngleTolerance === null && loop.ok ? loop.source : 'drawing'));
   }
   characteristics.push(reference('Initial tension (reference)', 'force', r.initialTension, GAUGE, 'calculated'));
   return sampledInspection(characteristics, lotSize, aql, findings);

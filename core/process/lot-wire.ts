@@ -12,7 +12,7 @@ export function startQuantity(ordered: number, operations: readonly Operation[])
 }
 
 /** Wire for the lot: start quantity × developed length, plus the coiler's setup scrap. */
-export function lotWire(start: number, wireLengthMm: number, setupScrapMetres: number, d: number, density: number): LotWire {
+export function lotWire(start: number, wireLengthMm: number, setupScrapMetres: number, d: number, density: number): Omit<LotWire, 'stock'> {
   const metres = (start * wireLengthMm) / 1000 + setupScrapMetres;
   return { startQuantity: start, metres, kg: wireMass(d, metres * 1000, density) };
 }

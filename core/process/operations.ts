@@ -3,8 +3,9 @@ import type { Finish, Machine, MachineOperation, Settings } from '../settings/sc
 import type { Operation, OperationSetting } from './types';
 import type { WorkCentreOffer } from './work-centre';
 import { capableMachines, machinePiecesPerHour } from './work-centre';
-import { bakeGuidance } from '../finishing/bake';
+import { bakeGuidance, parseBakeCondition, parseBakeSpecification } from '../finishing/bake';
 import { formatQuantity } from '../format';
+import type { UnitSystem } from '../units';
 
 /** Operations every kind of spring shares: stress relief, peening, finishing and bake, inspection, packing. */
 /** Job-level choices the routing depends on (from the spec's order fields). */
@@ -63,28 +64,38 @@ export function peen(settings: Settings, x: CoilBody): Draft {
   return op;
 }
 
+/**
+ * The finish, and after electroplating the hydrogen-relief bake: one instruction, the named specification's bake.
+ * What the other specifications say stays on the screen; the plater's paper carries only the one that governs.
+ */
 export function finishOperations(x: CoilBody, c: RoutingChoices): Draft[] {
   const f = c.finish;
   if (!f) return [];
   const finish: Draft = {
-    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, choice: null, offers: [], outside: true,
-    settings: [{ label: 'Vendor', value: f.vendor || '(to be chosen)' }],
+    kind: 'finish', title: `Finish: ${f.name}`, workCentre: null, choice: null, offers: [], outside: !f.inHouse,
+    settings: f.inHouse ? [] : [{ label: 'Vendor', value: f.vendor || '(to be chosen)' }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0, notes: [],
   };
   if (!f.electroplated) return [finish];
   finish.notes.push('stress relieve before plating; hydrogen embrittlement risk on high-strength wire');
-  const guidance = bakeGuidance(x.wire.tensileStrength);
   const bake: Draft = {
-    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: true,
-    settings: [
-      { label: 'Bake specification', value: c.bakeSpecification ?? 'NOT NAMED: ask the customer' },
-      ...(guidance.ok ? guidance.value.map((g) => ({ label: `${g.title} says`, value: g.says })) : []),
-    ],
+    kind: 'bake', title: 'Hydrogen-embrittlement relief bake', workCentre: null, choice: null, offers: [], outside: !f.inHouse,
+    settings: [{ label: 'Bake', value: bakeInstruction(x.wire.tensileStrength, c.bakeSpecification, x.units) }],
     setupMinutes: 0, piecesPerHour: null, batch: null, scrapFraction: 0,
-    notes: ['the tool lists what each specification says and never picks one: the named specification governs',
-      'start the bake within the specification\'s window after plating'],
+    notes: ['start the bake within the specification\'s window after plating'],
   };
   return [finish, bake];
+}
+
+/** The bake as the order writes it, else what the named specification says for this wire's strength. */
+export function bakeInstruction(tensileStrength: number, named: string | null, units: UnitSystem = 'metric'): string {
+  if (named === null) return 'NOT NAMED: hold the lot until the customer names the specification';
+  const text = named.trim();
+  if (parseBakeCondition(text)) return text;
+  const id = parseBakeSpecification(text);
+  const guidance = bakeGuidance(tensileStrength, { units });
+  const says = id && guidance.ok ? guidance.value.find((g) => g.spec === id)?.says : undefined;
+  return says ? `${text}: ${says}` : `as ${text} requires`;
 }
 
 export function inspect(settings: Settings, x: CoilBody, title = 'Inspect: loads and dimensions', first = 'compress once to solid'): Draft {

@@ -4,6 +4,7 @@ import { convertFields, OWN } from '../units';
 import type { Settings } from '../settings/schema';
 import type { Spec } from '../spec';
 import type { ToleranceGrade } from '../tolerances';
+import { shopTablesOf } from '../tolerances';
 import type { CoilBody } from '../springs/coil-body';
 import { kindEntryOf } from '../kinds/registry';
 import { checkBakeSpecification } from '../finishing/bake';
@@ -12,6 +13,7 @@ import { findGrade } from '../materials';
 import type { RoutingChoices } from './operations';
 import type { InspectionPlan } from './inspection-plan';
 import { lotWire, startQuantity } from './lot-wire';
+import { checkWireStock } from './wire-stock';
 import { assignWorkCentres } from './assign';
 import { judgedOperations, pinsOf, withRunOverrides } from './judged-routing';
 import type { RemovedOperation } from './judged-routing';
@@ -55,7 +57,7 @@ function routingChoices(spec: Spec, settings: Settings, findings: Finding[], ten
     findings.push({ code: 'unknown-finish', severity: 'error', path: 'finish',
       message: `finish "${finishId}" is not in the shop's finishes`, fix: 'choose one from Settings → Finishes, or "none"' });
   }
-  if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength));
+  if (finish?.electroplated) findings.push(...checkBakeSpecification(bake, tensileStrength, { units: spec.units }));
   const peened = spec.duty.type === 'cyclic' && spec.duty.peened;
   return {
     directionOfWind: spec.kind === 'torsion' ? spec.windDirection : spec.directionOfWind ?? 'either',
@@ -86,10 +88,10 @@ function plannerFor(spec: Spec, settings: Settings): KindPlanner {
   const r = kind.analyse(x, settings);
   const lengths = kind.freeLengths(r);
   return {
-    body: x, findings: kind.review(x, r), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
+    body: x, findings: kind.review(x, r, settings), coiledFreeLength: lengths.coiled, freeLength: lengths.finished,
     wireLength: r.wireLength, mass: r.mass,
     route: (c) => kind.routing(settings, x, r, c),
-    inspect: (lot, aql, grade, f) => kind.inspection(x, r, lot, aql, grade, f),
+    inspect: (lot, aql, grade, f) => kind.inspection(x, r, lot, aql, grade, f, shopTablesOf(settings.toleranceTables)),
   };
 }
 
@@ -117,6 +119,10 @@ function settleRouting(operations: Operation[], orderQuantity: number, pieceValu
   return { start, routed };
 }
 
+function withStock(wire: Omit<LotWire, 'stock'>, settings: Settings, grade: string, d: number, units: Spec['units']): LotWire {
+  return { ...wire, stock: checkWireStock(settings.wireStock, grade, d, wire.kg, units) };
+}
+
 /** The manufacturing plan for an order quantity: routing, wire, tolerances and inspection. */
 export function planManufacture(spec: Spec, settings: Settings, orderQuantity: number, judgement: JobJudgement = noJudgement()): ManufacturingPlan {
   const k = plannerFor(spec, settings);
@@ -131,7 +137,7 @@ export function planManufacture(spec: Spec, settings: Settings, orderQuantity: n
       diameterTolerance: wireDiameterTolerance(wire.gradeId) },
     coiledFreeLength: k.coiledFreeLength, freeLength: k.freeLength,
     wireLengthPerPiece: k.wireLength, massPerPiece: k.mass, massPer1000: 1000 * k.mass,
-    lotWire: lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density),
+    lotWire: withStock(lotWire(start, k.wireLength, settings.costing.setupScrapMetres, d, wire.density), settings, wire.gradeId, d, spec.units),
     operations: routed, removed: judged.removed,
     inspection: k.inspect(orderQuantity, spec.aql ?? DEFAULT_AQL, grade, findings),
     findings,
@@ -163,7 +169,10 @@ export const planQuantities: QuantityMap = {
   orderQuantity: 'count', toleranceGrade: 'ordinal',
   material: { wireDiameter: 'length', tensileStrength: 'stress' },
   coiledFreeLength: 'length', freeLength: 'length', wireLengthPerPiece: 'length', massPerPiece: 'mass', massPer1000: 'massBulk',
-  lotWire: { startQuantity: 'count', metres: 'stockLength', kg: 'stockMass' },
+  lotWire: {
+    startQuantity: 'count', metres: 'stockLength', kg: 'stockMass',
+    stock: { onHandKg: 'stockMass', neededKg: 'stockMass', lots: { kg: 'stockMass' }, otherSizes: 'length' },
+  },
   operations: operationQuantities,
   inspection: inspectionQuantities,
 };

@@ -1,4 +1,5 @@
-import type { ToleranceGrade } from '../tolerances';
+import type { ShopTables, ToleranceGrade } from '../tolerances';
+import { demoShopTables, plusMinusTolerance } from '../tolerances';
 import type { TorsionDesign } from '../springs/torsion/design';
 import type { TorsionReport } from '../springs/torsion/report';
 import { realisticFreeAngleTolerance } from '../review/torsion';
@@ -21,17 +22,30 @@ function torqueCharacteristic(x: TorsionDesign, r: TorsionReport, grade: Toleran
     grade === 1 || percent < HUNDRED_PERCENT_LOAD_TOLERANCE);
 }
 
+/** The free angle's limits: the drawing's, else the shop's free-angle table, else the realistic rule from memory. */
+function freeAngleCharacteristic(x: TorsionDesign, r: TorsionReport, freeAngle: number, tables: ShopTables): Characteristic {
+  const name = 'Free angle between legs';
+  if (x.freeAngleTolerance !== null) return limited(name, 'angle', freeAngle, x.freeAngleTolerance, 'protractor', 'drawing');
+  const shop = plusMinusTolerance(tables.freeAngle, r.bodyCoils);
+  if (shop.ok) return limited(name, 'angle', freeAngle, shop.value, 'protractor', shop.source);
+  return limited(name, 'angle', freeAngle, realisticFreeAngleTolerance(r.bodyCoils), 'protractor',
+    `${shop.message}; ±(2° + 1.5° per coil), from memory`);
+}
+
+function legCharacteristic(length: number, i: number, tables: ShopTables): Characteristic {
+  const shop = plusMinusTolerance(tables.legLength, length);
+  return shop.ok ? limited(`Leg ${i + 1} length`, 'length', length, shop.value, 'calliper', shop.source)
+    : reference(`Leg ${i + 1} length`, 'length', length, 'calliper', `${TORSION_TOLERANCE_SOURCE}; ${shop.message}`);
+}
+
 /** What to measure on a torsion spring: torque at angle, free angle, diameters, legs. */
 export function torsionInspection(
   x: TorsionDesign, r: TorsionReport, lotSize: number, aql: number, grade: ToleranceGrade, findings: Finding[],
+  tables: ShopTables = demoShopTables,
 ): InspectionPlan {
   const characteristics = r.loads.map((_l, i) => torqueCharacteristic(x, r, grade, i));
-  if (x.freeAngle !== null) {
-    const plusMinus = x.freeAngleTolerance ?? realisticFreeAngleTolerance(r.bodyCoils);
-    characteristics.push(limited('Free angle between legs', 'angle', x.freeAngle, plusMinus, 'protractor',
-      x.freeAngleTolerance === null ? `${TORSION_TOLERANCE_SOURCE}; ±(2° + 1.5° per coil), from memory` : 'drawing'));
-  }
+  if (x.freeAngle !== null) characteristics.push(freeAngleCharacteristic(x, r, x.freeAngle, tables));
   characteristics.push(diameterCharacteristic(x, r.springIndex, grade));
-  r.legLengths.forEach((length, i) => characteristics.push(reference(`Leg ${i + 1} length`, 'length', length, 'calliper', TORSION_TOLERANCE_SOURCE)));
+  r.legLengths.forEach((length, i) => characteristics.push(legCharacteristic(length, i, tables)));
   return sampledInspection(characteristics, lotSize, aql, findings);
 }

@@ -1,6 +1,7 @@
 import type { Quantity } from '../units';
 import type { MachineOperation } from '../settings/schema';
 import type { WorkCentreChoice, WorkCentreOffer } from './work-centre';
+import type { WireStockCheck } from './wire-stock';
 
 /** Operations a spring passes through; machine operations plus outside and manual ones. */
 export type OperationKind = MachineOperation | 'finish' | 'bake' | 'inspect' | 'extra';
@@ -61,4 +62,6 @@ export interface LotWire {
   /** Metres of wire for the lot, including setup scrap. */
   metres: number;
   kg: number;
+  /** The lot's wire against the shop's stock list. */
+  stock: WireStockCheck;
 }

@@ -14,6 +14,9 @@ import type { CoiledBound, SetRemovalMethod } from '../springs/compression/set-r
 import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
 import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
+import type { Settings } from '../settings/schema';
+import type { ShopToleranceTable } from '../tolerances/shop-tables';
+import { shopTablesOf } from '../tolerances/shop-settings';
 
 const methodNames: Record<SetRemovalMethod, string> = { handbook: 'handbook method', en13906: 'EN 13906-1 static method' };
 
@@ -48,19 +51,20 @@ const boundWords: Record<CoiledBound, { message: string; fix: string }> = {
  */
 export function setControlTolerance(
   s: { freeLength: number; toleranceGrade: 1 | 2 | 3 | undefined; springIndex: number; activeCoils: number },
+  table?: ShopToleranceTable,
 ): { plusMinus: number; source: string } | null {
   const t = freeLengthTolerance({
     L0: s.freeLength, grade: s.toleranceGrade ?? 2, index: s.springIndex, activeCoils: s.activeCoils, loadSpecified: false,
-  });
+  }, table);
   return t.ok && !t.value.reference ? { plusMinus: t.value.plusMinus, source: t.source } : null;
 }
 
-function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): void {
+function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink, settings: Settings | undefined): void {
   const s = r.setRemoval;
   const u = x.units;
   const tolerance = setControlTolerance({
     freeLength: r.freeLength, toleranceGrade: x.toleranceGrade, springIndex: r.springIndex, activeCoils: r.activeCoils,
-  });
+  }, settings && shopTablesOf(settings.toleranceTables).freeLength);
   if (tolerance && (s.expectedSet ?? 0) < tolerance.plusMinus) {
     add(out, 'warning', 'set-below-length-tolerance', 'freeLength',
       `the expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)} is under the free-length tolerance ` +
@@ -70,7 +74,7 @@ function reviewSetSize(x: CompressionDesign, r: CompressionReport, out: Sink): v
   }
 }
 
-function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink): void {
+function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink, settings: Settings | undefined): void {
   const s = r.setRemoval;
   const u = x.units;
   if (!s.achievable) {
@@ -88,7 +92,7 @@ function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink
     add(out, 'note', 'set-removal-required', 'freeLength',
       `coil to ${formatQuantity(s.coiledFreeLength ?? r.freeLength, 'length', u)} and press to solid ` +
       `(expected set ${formatQuantity(s.expectedSet ?? 0, 'length', u)}): ${both}`);
-    reviewSetSize(x, r, out);
+    reviewSetSize(x, r, out, settings);
   }
   if (s.ratio > lim.maximumSetRatio) {
     add(out, 'warning', 'set-ratio-high', 'freeLength',
@@ -152,6 +156,12 @@ const freeParameterWords: Record<FreeParameter, string> = {
   wireDiameter: 'wire diameter', diameter: 'coil diameter', coils: 'coils', freeLength: 'free length',
 };
 
+/** What the drawing holds fixed: every parameter not left to the maker, in the trade's order. */
+function fixedWords(free: ReadonlySet<FreeParameter>): string {
+  const fixed = (Object.keys(freeParameterWords) as FreeParameter[]).filter((p) => !free.has(p)).map((p) => freeParameterWords[p]);
+  return fixed.length <= 1 ? fixed.join('') : `${fixed.slice(0, -1).join(', ')} and ${fixed.at(-1)}`;
+}
+
 function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
   if (forced.length === 0) return;
@@ -162,14 +172,14 @@ function reviewDetermination(x: CompressionDesign, out: Sink): void {
   const missing = needed.filter((p) => !free.has(p));
   if (missing.length === 0) return;
   add(out, 'warning', 'over-determined', `loads[${forced[0]!.i}].force`,
-    `the drawing fixes wire, coil diameter, coils and free length and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
+    `the drawing fixes ${fixedWords(free)} and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
     `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m]).join(' and ')} (free parameters), or accept a wider load tolerance`);
 }
 
 function reviewManufacture(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   if (endForms[x.ends].ground && x.d < lim.minimumGroundWire) {
     add(out, 'warning', 'grinding-fine-wire', 'ends',
-      `wire under ${lim.minimumGroundWire} mm is normally not ground`, 'specify closed ends, not ground');
+      `wire under ${formatQuantity(lim.minimumGroundWire, 'length', x.units)} is normally not ground`, 'specify closed ends, not ground');
   }
   if (r.activeCoils < lim.minimumActiveCoils) {
     add(out, 'note', 'few-active-coils', x.coilsGiven === 'active' ? 'activeCoils' : 'totalCoils',
@@ -214,10 +224,10 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
 }
 
 /** The maker's review of a compression spring: every finding names the field it concerns. */
-export function reviewCompression(x: CompressionDesign, r: CompressionReport): Finding[] {
+export function reviewCompression(x: CompressionDesign, r: CompressionReport, settings?: Settings): Finding[] {
   const out: Finding[] = [...x.wireFindings];
   reviewIndex(x, r.springIndex, out);
-  reviewSolidStress(x, r, out);
+  reviewSolidStress(x, r, out, settings);
   reviewWorkingLengths(x, r, out);
   reviewLoads(x, r, out);
   reviewDetermination(x, out);

@@ -3,6 +3,8 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
 import { bounded } from './bounds';
+import { checkPlusMinusTable, checkShopToleranceTable, demoShopTables, demoStoredShopTables } from '../tolerances';
+import type { StoredShopTables } from '../tolerances';
 
 /**
  * Shop settings: one validated JSON document per key, stored one row per key. Every number given as a
@@ -98,6 +100,8 @@ export const finishSchema = z.object({
   pricePerPiece: money.optional(),
   lotMinimum: money.default(0),
   electroplated: z.boolean().default(false),
+  /** Done in the shop (light oil, for one): no vendor, not routed as outside processing. */
+  inHouse: z.boolean().default(false),
   bakeSpecification: text(120).optional(),
 }).strict();
 
@@ -107,6 +111,42 @@ export const wireStockSchema = z.object({
   kg: bounded('stockKg'),
   heatNumber: text(60).optional(),
 }).strict();
+
+const band = {
+  over: z.number().finite().min(0).max(1e6),
+  /** null: the band has no upper end ("and over"). */
+  upTo: z.number().finite().positive().max(1e6).nullable(),
+};
+const gradeRowSchema = z.object({
+  grade: z.union([z.literal(1), z.literal(2), z.literal(3)]), ...band,
+  percent: z.number().finite().min(0).max(100),
+  /** The floor in the quantity's internal unit: N for load, mm for free length. */
+  minimum: z.number().finite().min(0).max(1e6),
+}).strict();
+const plusMinusRowSchema = z.object({ ...band, plusMinus: z.number().finite().min(0).max(1000) }).strict();
+const gradeTableSchema = z.object({ bandedBy: z.enum(['activeCoils', 'index']), rows: z.array(gradeRowSchema).max(60) }).strict();
+const plusMinusTableSchema = z.object({ rows: z.array(plusMinusRowSchema).max(30) }).strict();
+const open = <T extends { upTo: number | null }>(rows: T[]) => rows.map((r) => ({ ...r, upTo: r.upTo ?? Infinity }));
+
+/**
+ * The shop's own tolerance tables, read by the plan: load and free length by grade (compression), torsion
+ * leg length and free angle. Demo defaults until the shop sets its own; the sourced tables stay in core.
+ */
+export const toleranceTablesSchema = z.object({
+  load: gradeTableSchema,
+  freeLength: gradeTableSchema,
+  legLength: plusMinusTableSchema,
+  freeAngle: plusMinusTableSchema,
+}).strict().superRefine((t, ctx) => {
+  const report = (key: string, errors: FieldError[]) => errors.forEach((e) => ctx.addIssue({
+    code: 'custom', message: e.message, path: [key, ...e.path.split(/[.[\]]+/).filter(Boolean).map((p) => (/^\d+$/.test(p) ? Number(p) : p))],
+  }));
+  for (const key of ['load', 'freeLength'] as const) {
+    report(key, checkShopToleranceTable({ ...demoShopTables[key], bandedBy: t[key].bandedBy, rows: open(t[key].rows) }));
+  }
+  for (const key of ['legLength', 'freeAngle'] as const) report(key, checkPlusMinusTable({ rows: open(t[key].rows) }));
+});
+export type ToleranceTablesSetting = z.infer<typeof toleranceTablesSchema>;
 
 /** How unit prices are rounded, the same on the screen and every document. */
 export const unitPriceRoundingSchema = z.discriminatedUnion('rule', [
@@ -142,6 +182,22 @@ export const costingSchema = z.object({
   breakFactors: z.array(z.number().finite().positive().max(1000)).min(1).max(8).default([0.5, 1, 2, 5]),
 }).strict();
 
+/**
+ * What a quotation states besides prices, as the shop usually offers it (demo defaults); the estimator may
+ * change each one on a quote, and a customer's own payment terms replace the shop's.
+ */
+export const quoteTermsSchema = z.object({
+  paymentTerms: text(200).default('30 days net from the date of invoice'),
+  deliveryTerms: text(200).default('Ex works (EXW), Incoterms 2020; freight charged at cost'),
+  packaging: text(200).default('Bulk in cardboard cartons, parts counted by weight'),
+  certificates: z.array(text(200)).max(6).default(['Certificate of conformance with each delivery']),
+  /** The estimator who signs quotes unless a quote names another. */
+  estimator: text(120).default(''),
+  /** Prints the unit price against quantity under the price table (it is always on the cost screen). */
+  priceCurveOnQuote: z.boolean().default(false),
+}).strict();
+export type QuoteTerms = z.infer<typeof quoteTermsSchema>;
+
 /** How finely the design search steps the coil count and the mean diameter (demo defaults: quarter turns, 0.1 mm). */
 export const designStepsSchema = z.object({
   coilStep: z.number().finite().min(0.05).max(1).default(0.25),
@@ -173,6 +229,8 @@ export const settingsSchemas = {
     minimumOrderValue: 150, unitPriceRounding: { rule: 'none' }, breakFactors: [0.5, 1, 2, 5],
   }),
   design: designStepsSchema.default({ coilStep: 0.25, diameterStep: 0.1 }),
+  toleranceTables: toleranceTablesSchema.default(demoStoredShopTables() as StoredShopTables & ToleranceTablesSetting),
+  quoteTerms: quoteTermsSchema.default(quoteTermsSchema.parse({})),
 };
 
 export const settingsSchema = z.object(settingsSchemas).strict();

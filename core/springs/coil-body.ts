@@ -41,7 +41,7 @@ function meanDiameter(spec: CoilBodySpec, d: number): { D: number; given: CoilBo
 export function coilBody(spec: CoilBodySpec): CoilBody | undefined {
   const d = spec.wireDiameter;
   const { D, given } = meanDiameter(spec, d);
-  const resolved = wireProperties(spec.material, d, spec.materialOverrides);
+  const resolved = wireProperties(spec.material, d, spec.materialOverrides, spec.units);
   if (!resolved) return undefined;
   return {
     units: spec.units, d, D, diameterGiven: given, serviceTemperature: spec.serviceTemperature,

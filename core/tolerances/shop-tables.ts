@@ -117,3 +117,73 @@ export function freeLengthTolerance(
   const r = lookupRow(table, grade, table.bandedBy === 'index' ? index : activeCoils, L0);
   return r.ok ? { ...r, value: { reference: false, ...r.value } } : r;
 }
+
+/** A ± band table the shop keeps for torsion springs: leg length by leg length (mm), free angle by body coils (°). */
+export interface PlusMinusRow extends Band {
+  plusMinus: number;
+}
+
+export interface PlusMinusTable {
+  quantity: 'legLength' | 'freeAngle';
+  bandedBy: 'legLength' | 'bodyCoils';
+  rows: PlusMinusRow[];
+  source: string;
+  verified: boolean;
+}
+
+const bandsOf = (rows: readonly (readonly [number, number, number])[]): PlusMinusRow[] =>
+  rows.map(([over, upTo, plusMinus]) => ({ over, upTo, plusMinus }));
+
+/** Leg length ± mm by leg length: demo defaults only (round figures from memory of common practice). */
+export const demoLegLengthTolerances: PlusMinusTable = {
+  quantity: 'legLength', bandedBy: 'legLength', verified: false,
+  source: `${DEMO} (round figures, from memory)`,
+  rows: bandsOf([[0, 25, 0.5], [25, 50, 0.8], [50, 100, 1.2], [100, Infinity, 2]]),
+};
+
+/** Free angle ± degrees by body coils: demo defaults read from ±(2° + 1.5° per coil) at each band's top, from memory. */
+export const demoFreeAngleTolerances: PlusMinusTable = {
+  quantity: 'freeAngle', bandedBy: 'bodyCoils', verified: false,
+  source: `${DEMO} (±(2° + 1.5° per coil) at each band's top, from memory)`,
+  rows: bandsOf([[0, 3, 6.5], [3, 6, 11], [6, 10, 17], [10, 20, 32], [20, Infinity, 47]]),
+};
+
+/** Every table the shop keeps; the plan reads them from the shop's settings. */
+export interface ShopTables {
+  load: ShopToleranceTable;
+  freeLength: ShopToleranceTable;
+  legLength: PlusMinusTable;
+  freeAngle: PlusMinusTable;
+}
+
+export const demoShopTables: ShopTables = {
+  load: demoLoadTolerances, freeLength: demoFreeLengthTolerances, legLength: demoLegLengthTolerances, freeAngle: demoFreeAngleTolerances,
+};
+
+/** What each table is called on screens and in the sources the plan names. */
+export const shopTableLabels: Record<keyof ShopTables, string> = {
+  load: 'load', freeLength: 'free length', legLength: 'torsion leg length', freeAngle: 'torsion free angle',
+};
+
+/** ± from the shop's band table, or why the table gives none. */
+export function plusMinusTolerance(table: PlusMinusTable, key: number): Lookup<number> {
+  const bad = checkPositive({ [table.bandedBy]: key });
+  if (bad) return bad;
+  const row = findBand(table.rows, key, true);
+  if (!row) {
+    return notFound('not-in-shop-table', table.bandedBy,
+      `the shop's ${table.quantity === 'legLength' ? 'leg length' : 'free angle'} table has no row for ${table.bandedBy} ${key}: by agreement`);
+  }
+  return found(row.plusMinus, table);
+}
+
+/** A ± table's bands must run upward without gaps; ± not negative. */
+export function checkPlusMinusTable(table: Pick<PlusMinusTable, 'rows'>): FieldError[] {
+  const errors: FieldError[] = [];
+  table.rows.forEach((r, i) => {
+    if (!(r.plusMinus >= 0)) errors.push(fieldError('negative-tolerance', `rows[${i}].plusMinus`, '± must be 0 or more'));
+  });
+  const broken = firstBandBreak(table.rows);
+  if (broken >= 0) errors.push(fieldError('bands-not-contiguous', `rows[${broken}]`, 'each band must start where the previous one ends and end above its start'));
+  return errors;
+}

@@ -50,9 +50,9 @@ export const demoSettings: SettingsInput = {
     { grade: 'en10270-3-1.4310', dMin: 0.2, dMax: 10, pricePerKg: 13.9, date: '2026-02-01', supplier: 'Demo Stainless Ltd' },
   ],
   finishes: [
-    { id: 'oil', name: 'Light oil', vendor: 'in house', pricePerKg: 0.2, lotMinimum: 0, electroplated: false },
+    { id: 'oil', name: 'Light oil', vendor: '', pricePerKg: 0.2, lotMinimum: 0, electroplated: false, inHouse: true },
     { id: 'zinc-yellow', name: 'Zinc plate, yellow passivate', vendor: 'Demo Platers', pricePerKg: 3.5, lotMinimum: 85, electroplated: true,
-      bakeSpecification: 'demo: bake for hydrogen relief within 1 h of plating' },
+      bakeSpecification: 'ASTM B850, 22 h at 200 °C' },
     { id: 'black-oxide', name: 'Black oxide', vendor: 'Demo Platers', pricePerKg: 2.8, lotMinimum: 60, electroplated: false },
     { id: 'passivate', name: 'Passivate (stainless)', vendor: 'Demo Platers', pricePerPiece: 0.02, lotMinimum: 50, electroplated: false },
   ],

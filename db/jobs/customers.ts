@@ -1,5 +1,9 @@
 import type { Customer } from '../../core/api/store';
-import { StoreError } from '../errors';
+import { customerInputSchema } from '../../core/api/store';
+import { parseWith } from '../../core/validation';
+import { StoreError, invalid, success } from '../errors';
+import type { StoreResult } from '../errors';
+import { inTransaction } from '../store';
 import type { Store } from '../store';
 
 /** Customers are matched by name without regard to case or spacing: "ACME  Ltd" is "Acme Ltd". */
@@ -42,6 +46,66 @@ export function resolveCustomer(
   return undefined;
 }
 
+interface CustomerRow {
+  id: number;
+  name: string;
+  contact: string;
+  email: string;
+  phone: string;
+  address: string;
+  payment_terms: string;
+}
+
+const CUSTOMER_COLUMNS = 'id, name, contact, email, phone, address, payment_terms';
+
+function customerOfRow(row: CustomerRow): Customer {
+  return {
+    id: row.id, name: row.name, contact: row.contact, email: row.email, phone: row.phone,
+    addressLines: row.address === '' ? [] : row.address.split('\n'), paymentTerms: row.payment_terms,
+  };
+}
+
 export function listCustomers(store: Store): Customer[] {
-  return store.sql('SELECT id, name, email, phone FROM customers ORDER BY name_key').all() as Customer[];
+  return (store.sql(`SELECT ${CUSTOMER_COLUMNS} FROM customers ORDER BY name_key`).all() as CustomerRow[]).map(customerOfRow);
+}
+
+export function getCustomer(store: Store, id: number): Customer | null {
+  const row = store.sql(`SELECT ${CUSTOMER_COLUMNS} FROM customers WHERE id = ?`).get(id) as CustomerRow | undefined;
+  return row ? customerOfRow(row) : null;
+}
+
+/** Adds a customer (no id) or edits one; a name another customer already has is refused on "name". */
+export function saveCustomer(store: Store, raw: unknown): StoreResult<Customer> {
+  const parsed = parseWith(customerInputSchema, raw);
+  if (!parsed.ok) return invalid(parsed.errors);
+  const c = parsed.value;
+  const name = c.name.replace(/\s+/g, ' ');
+  const key = customerKey(name);
+  const address = c.addressLines.filter((l) => l !== '').join('\n');
+  return attemptStore(() => {
+    const id = inTransaction(store, () => {
+      const other = store.sql('SELECT id FROM customers WHERE name_key = ?').get(key) as { id: number } | undefined;
+      if (other && other.id !== c.id) throw new StoreError('duplicate-customer', `a customer named "${name}" is already on file`, 'name');
+      const now = store.now().toISOString();
+      if (c.id === undefined) {
+        return Number(store.sql(`INSERT INTO customers (name, name_key, contact, email, phone, address, payment_terms, created_at, updated_at)
+                                 VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+          .run(name, key, c.contact, c.email, c.phone, address, c.paymentTerms, now, now).lastInsertRowid);
+      }
+      requireCustomer(store, c.id, 'id');
+      store.sql(`UPDATE customers SET name = ?, name_key = ?, contact = ?, email = ?, phone = ?, address = ?, payment_terms = ?,
+                 updated_at = ? WHERE id = ?`).run(name, key, c.contact, c.email, c.phone, address, c.paymentTerms, now, c.id);
+      return c.id;
+    });
+    return success(getCustomer(store, id)!);
+  });
+}
+
+function attemptStore<T>(fn: () => StoreResult<T>): StoreResult<T> {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
+    throw e;
+  }
 }

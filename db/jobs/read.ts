@@ -1,4 +1,4 @@
-import type { Job, JobRevision, RevisionFields } from '../../core/api/store';
+import type { Job, JobLink, JobRevision, RevisionFields } from '../../core/api/store';
 import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { Store } from '../store';
@@ -20,10 +20,21 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
   const id = typeof ref === 'number' ? ref : ref.id;
   const row = jobRow(store, id);
   if (!row) return failure('not-found', `no job with id ${id}`, 'id');
-  const job = toJob(row);
+  const job = toJob(row, lineageOf(store, id));
   const open = job.ok ? workingRow(store, id) : undefined;
   if (!job.ok || !open) return job;
   return success({ ...job.value, working: { baseRevision: open.base_revision, openedAt: open.opened_at, savedAt: open.saved_at, saves: open.saves } });
+}
+
+const LINK_SQL = {
+  from: 'SELECT j.id, j.number, k.copied_at AS at FROM job_copies k JOIN jobs j ON j.id = k.source_id WHERE k.copy_id = ?',
+  to: 'SELECT j.id, j.number, k.copied_at AS at FROM job_copies k JOIN jobs j ON j.id = k.copy_id WHERE k.source_id = ? ORDER BY k.copied_at, j.id',
+} as const;
+
+/** The job this one was made from and the jobs made from it. */
+export function lineageOf(store: Store, id: number): Job['lineage'] {
+  const from = store.sql(LINK_SQL.from).get(id) as JobLink | undefined;
+  return { copiedFrom: from ?? null, copiedTo: store.sql(LINK_SQL.to).all(id) as JobLink[] };
 }
 
 interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string }

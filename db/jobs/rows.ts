@@ -1,5 +1,5 @@
 import type { SpringKind } from '../../core/spec';
-import type { Job, JobDetails, JobShape, JobStatus, JobSummary, StoredProblem } from '../../core/api/store';
+import type { Job, JobDetails, JobLink, JobShape, JobStatus, JobSummary, StoredProblem } from '../../core/api/store';
 import { failure, success } from '../errors';
 import type { StoreResult } from '../errors';
 import type { StoredSpec } from './stored-spec';
@@ -36,12 +36,13 @@ export interface JobRow {
   active_coils: number;
   rate: number;
   shape_engine: number | null;
+  archived_at: string | null;
   spec: string;
 }
 
 export const SUMMARY_COLUMNS = `j.id, j.number, j.customer_id, c.name AS customer_name, j.part_number, j.drawing_number,
   j.drawing_revision, j.status, j.notes, j.due_date, j.order_quantity, j.lead_time_days, j.judgement, j.revision, j.created_at,
-  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.shape_engine, j.spec`;
+  j.updated_at, j.kind, j.material, j.material_family, j.units, j.d, j.mean_diameter, j.free_length, j.active_coils, j.rate, j.shape_engine, j.archived_at, j.spec`;
 
 export const JOB_FROM = 'jobs j LEFT JOIN customers c ON c.id = j.customer_id';
 
@@ -103,14 +104,17 @@ export function toSummary(row: JobRow, stored?: StoredSpec): JobSummary {
     revision: row.revision,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
+    archivedAt: row.archived_at,
     shape: shapeOf(row),
     ...(problem ? { problem } : {}),
   };
 }
 
+export type { JobLink };
+
 /** The whole job; a spec that no longer reads is this job's problem, with the field it concerns. */
-export function toJob(row: JobRow): StoreResult<Job> {
+export function toJob(row: JobRow, lineage: Job['lineage'] = { copiedFrom: null, copiedTo: [] }): StoreResult<Job> {
   const stored = storedSpecOf(row);
   if (!stored.ok) return failure(stored.problem.code, stored.problem.message, stored.problem.path);
-  return success({ ...toSummary(row, stored), spec: stored.spec });
+  return success({ ...toSummary(row, stored), spec: stored.spec, lineage });
 }

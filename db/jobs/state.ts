@@ -3,6 +3,7 @@ import type { Store } from '../store';
 import type { JobRow } from './rows';
 import { jobDetailsOfRow, shapeOf, storedSpecOf } from './rows';
 import { carriedSpec } from './stored-spec';
+import { searchWords } from './search-words';
 
 /** Everything one save of a job holds: what a revision keeps and what the jobs row shows. */
 export interface JobState extends JobDetails {
@@ -50,12 +51,12 @@ export function rowValues(state: JobState): unknown[] {
     state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
     JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays, JSON.stringify(state.judgement),
     s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
-    state.shapeEngine,
+    state.shapeEngine, searchWords(state.spec, s),
   ];
 }
 
 export const ROW_COLUMNS = `customer_id, part_number, drawing_number, drawing_revision, status, spec, notes, due_date,
   order_quantity, lead_time_days, judgement, kind, material, material_family, units, d, mean_diameter, free_length, active_coils, rate,
-  shape_engine`;
+  shape_engine, search_words`;
 
 export const ROW_PLACEHOLDERS = ROW_COLUMNS.split(',').map(() => '?').join(', ');

@@ -10,7 +10,9 @@ import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 import { updateToVersion0010 } from './0010-quotation-lines';
+import { updateToVersion0011 } from './0011-customer-details';
 import { updateToVersion0013 } from './0013-working-revisions';
+import { updateToVersion0014 } from './0014-job-lineage-and-archive';
 
 export interface Migration {
   version: number;
@@ -30,7 +32,9 @@ export const migrations: readonly Migration[] = [
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
   { version: 10, name: 'quotation lines', update: updateToVersion0010 },
+  { version: 11, name: 'customer details', update: updateToVersion0011 },
   { version: 13, name: 'working revisions', update: updateToVersion0013 },
+  { version: 14, name: 'job lineage, archive and spring words', update: updateToVersion0014 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -7,7 +7,10 @@ import { fail, fieldError, ok } from '../../core/result';
  * are ANDed. Quoting means operators (AND, NEAR, column filters, brackets) in user text are plain text.
  * A single letter or digit is matched as a whole word ("rev B", "A 2"): as a prefix it would match most
  * of a large store and tell the estimator nothing; the index keeps prefixes of two and three characters.
+ * A decimal value ("1.6", "0,063") is a dimension: matched whole, so 1.6 does not find 1.65.
  */
+const DECIMAL = /^\d*[.,]\d+$/;
+
 export function matchExpression(text: string): Result<string> {
   const words = text
     .split(/\s+/)
@@ -16,5 +19,5 @@ export function matchExpression(text: string): Result<string> {
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"${[...w].length > 1 ? '*' : ''}`).join(' '));
+  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"${[...w].length > 1 && !DECIMAL.test(w) ? '*' : ''}`).join(' '));
 }

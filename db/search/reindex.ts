@@ -5,6 +5,7 @@ import { parseWith } from '../../core/validation';
 import { invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
 import { jobShape } from '../jobs/shape';
+import { searchWords } from '../jobs/search-words';
 import { readStoredSpec } from '../jobs/stored-spec';
 import type { Store } from '../store';
 import { inTransaction } from '../store';
@@ -32,9 +33,9 @@ function reindexOne(store: Store, row: IndexRow): { changed: boolean } | StoredP
   }
   const next = { d: shape.wireDiameter, mean_diameter: shape.meanDiameter, free_length: shape.freeLength, active_coils: shape.activeCoils, rate: shape.rate };
   store.sql(`UPDATE jobs SET kind = ?, material = ?, material_family = ?, units = ?, d = ?, mean_diameter = ?, free_length = ?,
-             active_coils = ?, rate = ?, shape_engine = ? WHERE id = ?`)
+             active_coils = ?, rate = ?, shape_engine = ?, search_words = ? WHERE id = ?`)
     .run(shape.kind, shape.material, shape.materialFamily, shape.units, next.d, next.mean_diameter, next.free_length,
-      next.active_coils, next.rate, ENGINE_VERSION, row.id);
+      next.active_coils, next.rate, ENGINE_VERSION, searchWords(stored.spec, shape), row.id);
   return { changed: SHAPE_NUMBERS.some((c) => next[c] !== row[c]) };
 }
 

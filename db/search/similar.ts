@@ -9,7 +9,8 @@ import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
 import type { Spec } from '../../core/spec';
 import type { ShapePoint } from './similarity';
-import { WEIGHTS, describeDifferences, distance } from './similarity';
+import { WEIGHTS, describeDifferences, distance, matchInWords } from './similarity';
+import { lastQuotedPrice } from './last-quoted';
 
 interface Candidate extends ShapePoint {
   id: number;
@@ -132,14 +133,17 @@ export function nearestJobsByScan(store: Store, asked: JobShape, limit: number, 
   return kind === null ? [] : topScored(asked, store.sql(scanSql(kind)).all() as Candidate[], limit, exclude);
 }
 
-function hits(store: Store, asked: JobShape, scored: Scored[]): SimilarJob[] {
+function hits(store: Store, asked: JobShape, scored: Scored[], quantity: number | undefined): SimilarJob[] {
   if (scored.length === 0) return [];
   const rows = store.sql(`SELECT ${SUMMARY_COLUMNS} FROM ${JOB_FROM} WHERE j.id IN (${scored.map(() => '?').join(',')})`)
     .all(...scored.map((s) => s.id)) as JobRow[];
   const byId = new Map(rows.map((r) => [r.id, toSummary(r)]));
   return scored.map((s) => {
     const job = byId.get(s.id)!;
-    return { id: s.id, number: job.number, job, score: Math.exp(-s.distance), distance: s.distance, ...describeDifferences(asked, job.shape) };
+    return {
+      id: s.id, number: job.number, job, score: Math.exp(-s.distance), distance: s.distance, ...describeDifferences(asked, job.shape),
+      match: matchInWords(asked, job.shape, s.distance), lastQuoted: lastQuotedPrice(store, s.id, quantity ?? job.orderQuantity),
+    };
   });
 }
 
@@ -150,5 +154,6 @@ export function similarJobs(store: Store, raw: unknown): StoreResult<SimilarJob[
   const checked = checkSpec(parsed.value.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   const asked = checked.value.shape;
-  return success(hits(store, asked, nearestJobs(store, asked, parsed.value.limit, parsed.value.excludeJobId)));
+  const { limit, excludeJobId, quantity } = parsed.value;
+  return success(hits(store, asked, nearestJobs(store, asked, limit, excludeJobId), quantity));
 }

@@ -1,4 +1,4 @@
-import type { DimensionName, JobShape, SimilarJob } from '../../core/api/store';
+import type { DimensionName, JobShape, MatchWords, SimilarJob } from '../../core/api/store';
 
 /**
  * How far a past job is from the spring asked about. With a = asked, p = past, per dimension:
@@ -60,4 +60,51 @@ export function describeDifferences(asked: JobShape, past: JobShape): Pick<Simil
   const parts = summaryDimensions.map((key) => `${labels[key]} ${texts[key]}`);
   parts.push(material === 'same' ? 'material same' : `material ${material} (${past.material})`);
   return { differences: { ...texts, material }, relative, summary: parts.join(', ') };
+}
+
+/**
+ * Distance limits of the words an estimator reads (judgement, like the weights). The rate follows the wire
+ * and diameter, so 5 % heavier wire at the same OD (rate about +24 %) is a distance near 0.48: "close";
+ * "very close" is a few percent off in one dimension; past 1.5 the job tells little about this one.
+ */
+export const MATCH_WORDS: readonly { upTo: number; words: MatchWords }[] = [
+  { upTo: 0.01, words: 'same spring' },
+  { upTo: 0.15, words: 'very close' },
+  { upTo: 0.6, words: 'close' },
+  { upTo: 1.5, words: 'loosely similar' },
+  { upTo: Infinity, words: 'far' },
+];
+
+const larger: Record<Weighted, readonly [string, string, string]> = {
+  wireDiameter: ['wire', 'heavier', 'lighter'],
+  meanDiameter: ['mean diameter', 'larger', 'smaller'],
+  freeLength: ['length', 'longer', 'shorter'],
+  activeCoils: ['active coils', 'more', 'fewer'],
+  rate: ['rate', 'stiffer', 'softer'],
+};
+
+/** The dimension (or the material) that adds most to the distance, in words: "wire 9 % heavier". */
+function biggestDifference(asked: ShapePoint, past: ShapePoint): string | null {
+  let worst: { weight: number; text: string } | null = null;
+  for (const key of Object.keys(WEIGHTS) as Weighted[]) {
+    const ratio = past[key] / asked[key];
+    const weight = WEIGHTS[key] * Math.abs(Math.log(ratio));
+    const pct = Math.round(Math.abs(ratio - 1) * 100);
+    if (pct === 0 || (worst && worst.weight >= weight)) continue;
+    const [name, up, down] = larger[key];
+    worst = { weight, text: `${name} ${pct} % ${ratio > 1 ? up : down}` };
+  }
+  const material = materialMatch(asked, past);
+  const penalty = material === 'same' ? 0 : material === 'same family' ? MATERIAL_PENALTY.sameFamily : MATERIAL_PENALTY.otherFamily;
+  if (penalty > 0 && (!worst || penalty >= worst.weight)) {
+    return material === 'same family' ? `another grade of the same family (${past.material})` : `another material (${past.material})`;
+  }
+  return worst?.text ?? null;
+}
+
+/** "very close", "close"… for a distance, with the biggest difference named. */
+export function matchInWords(asked: ShapePoint, past: ShapePoint, d: number): SimilarJob['match'] {
+  const words = (MATCH_WORDS.find((m) => d <= m.upTo) ?? MATCH_WORDS[MATCH_WORDS.length - 1]!).words;
+  const biggest = words === 'same spring' ? null : biggestDifference(asked, past);
+  return { words, biggest, text: biggest ? `${words}: ${biggest}` : words };
 }

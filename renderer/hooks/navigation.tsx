@@ -6,6 +6,7 @@ export type Route =
   | { screen: 'job'; id: number | null; key: string }
   | { screen: 'settings' }
   | { screen: 'data' }
+  | { screen: 'customers' }
   | { screen: 'design' };
 
 /** Decides whether the screen may be left now; false keeps the estimator where they are. */

@@ -247,6 +247,8 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   return {
     job, drafts, edit, version, evaluation, jobCheck, valid, complete, dirty, saving, saveError, serverErrors, loading, loadError,
     revisions, save, revert, restore, setChange, saveJudgement,
+    /** Takes the stored job back after a change that leaves its fields alone (archiving). */
+    adoptStored: (j: Job) => adopt(j, false),
     undo: () => step(undoTarget), redo: () => step(redoTarget),
     canUndo: job !== null && (dirty || undoTarget(timeline) !== null),
     canRedo: job !== null && !dirty && redoTarget(timeline) !== null,

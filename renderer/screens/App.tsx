@@ -10,6 +10,7 @@ import { JobsScreen } from './jobs/JobsScreen';
 import { Workspace } from './workspace/Workspace';
 import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
+import { CustomersScreen } from './customers/CustomersScreen';
 import { DesignScreen } from './design/DesignScreen';
 
 export function App() {
@@ -91,6 +92,7 @@ function Shell() {
           {route.screen === 'job' ? <Workspace key={route.key} jobId={route.id} /> : null}
           {route.screen === 'settings' ? <SettingsScreen /> : null}
           {route.screen === 'data' ? <DataScreen /> : null}
+          {route.screen === 'customers' ? <CustomersScreen /> : null}
           {route.screen === 'design' ? <DesignScreen /> : null}
         </main>
       </div>

@@ -29,6 +29,9 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
         <button type="button" className="topbar__link" aria-current={current('settings')} onClick={() => nav.go({ screen: 'settings' })}>
           Shop settings <kbd>Alt+3</kbd>
         </button>
+        <button type="button" className="topbar__link" aria-current={current('customers')} onClick={() => nav.go({ screen: 'customers' })}>
+          Customers
+        </button>
         <button type="button" className="topbar__link" aria-current={current('design')} onClick={() => nav.go({ screen: 'design' })}>
           Design from requirement
         </button>

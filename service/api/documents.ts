@@ -30,10 +30,11 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
       const issued = issueQuotation(ctx.store, input, now());
       return issued.ok ? { ok: true, value: issued.value.quote } : issued;
     },
-    printTraveller: async ({ jobId, quantity }) => {
+    printTraveller: async ({ jobId, quantity, customerOrder }) => {
       const j = jobAndSettings(jobId);
       if (!j.ok) return j;
-      const model = asApi(travellerFor(j.print, j.settings, quantity, now()));
+      const print = customerOrder ? { ...j.print, purchaseOrder: customerOrder } : j.print;
+      const model = asApi(travellerFor(print, j.settings, quantity, now()));
       if (!model.ok) return model;
       return pdf(await (await writers()).renderTraveller(model.value), `traveller-${j.job.number}.pdf`, j.job.number, model.value.findings);
     },

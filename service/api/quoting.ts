@@ -2,7 +2,7 @@ import type { ApiError, ApiResult } from '../../core/api';
 import type { Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
-import type { PrintJob, QuoteDocument } from '../../core/documents';
+import type { PrintJob, QuoteDocument, QuoteTermsInput } from '../../core/documents';
 import { planManufacture } from '../../core/process/plan';
 import type { IssueDecision, IssueProblem } from '../../core/quoting/problems';
 import { issueProblems, problemSummary } from '../../core/quoting/problems';
@@ -19,6 +19,7 @@ export interface IssueRequest {
   validityDays?: number | undefined;
   /** The estimator's reason for issuing despite the problems named; required when there are any. */
   accept?: string | undefined;
+  terms?: QuoteTermsInput | undefined;
 }
 
 /** Refused: the quote has problems and no decision was given. Every problem is in `details`. */
@@ -97,7 +98,7 @@ export function issueQuotation(store: Store, request: IssueRequest, now: Date): 
   const validityDays = request.validityDays ?? settings.value.defaults.quoteValidityDays;
   const { model } = draftQuotation(lines.value.map((l) => ({
     print: l.print, estimate: l.estimate, exceptions: l.problems.flatMap((p) => (p.customerText === null ? [] : [p.customerText])),
-  })), settings.value, now, validityDays);
+  })), settings.value, now, { validityDays, ...(request.terms ? { terms: request.terms } : {}) });
   const quote = recordQuotation(store, {
     lines: lines.value.map((l) => ({
       jobId: l.job.id, jobRevision: l.job.revision, prices: JSON.parse(JSON.stringify(l.estimate)), quantityBreaks: l.estimate.breaks.map((b) => b.quantity),

@@ -5,7 +5,7 @@ import type { OpenOptions, Store } from '../../db';
 import {
   addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
-  saveSettings, setJobStatus, similarJobs, updateJob,
+  saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob,
 } from '../../db';
 
 /** Issuing a quote prices the job: the document handlers answer it. */
@@ -34,7 +34,12 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     restoreRevision: (input) => restoreRevision(ctx.store, input),
     keepWorkingRevision: (input) => keepWorkingRevision(ctx.store, input),
     setJobStatus: (input) => setJobStatus(ctx.store, input),
+    copyJob: (input) => copyJob(ctx.store, input.id),
+    archiveJob: (input) => archiveJob(ctx.store, input),
+    deleteJob: (input) => deleteJob(ctx.store, input.id),
+    undoDeleteJob: (input) => undoDeleteJob(ctx.store, input.id),
     listCustomers: () => ({ ok: true, value: listCustomers(ctx.store) }),
+    saveCustomer: (input) => saveCustomer(ctx.store, input),
     getSettings: () => getSettings(ctx.store),
     saveSettings: (input) => saveSettings(ctx.store, input.settings),
     listQuotes: (input) => listQuotes(ctx.store, input),

@@ -43,6 +43,7 @@ const subcommands: Record<string, Sub> = {
       ...(typeof args.options.get('sort') === 'string' ? { sort: args.options.get('sort') as never } : {}),
       ...(typeof args.options.get('material') === 'string' ? { material: args.options.get('material') as string } : {}),
       ...(typeof args.options.get('after') === 'string' ? { after: args.options.get('after') as string } : {}),
+      ...(args.options.has('archived') ? { archived: true } : {}),
       limit: intOption(args, 'limit') ?? 50,
       offset: intOption(args, 'offset') ?? 0,
     });
@@ -57,6 +58,10 @@ const subcommands: Record<string, Sub> = {
   status: async (args, call) => call('setJobStatus', {
     id: await jobId(call, positional(args, 1, 'ID', 'jobs status')), status: positional(args, 2, 'STATUS', 'jobs status') as JobStatus,
   }),
+  copy: async (args, call) => call('copyJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs copy')) }),
+  archive: async (args, call) => call('archiveJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs archive')), archived: !args.options.has('undo') }),
+  delete: async (args, call) => call('deleteJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs delete')) }),
+  undelete: async (args, call) => call('undoDeleteJob', { id: Number(positional(args, 1, 'ID', 'jobs undelete')) }),
   restore: async (args, call) => call('restoreRevision', {
     id: await jobId(call, positional(args, 1, 'ID', 'jobs restore')), revision: Number(positional(args, 2, 'REVISION', 'jobs restore')),
   }),
@@ -69,6 +74,8 @@ export const jobsCommand: Command = {
     '  jobs show ID|NUMBER --db DB, jobs list [--status S[,S]] [--customer ID] [--kind K] [--sort number|updated|customer]',
     '  [--material ID] [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
     '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB,',
+    '  jobs copy ID|NUMBER --db DB (a new job from a past one), jobs archive ID|NUMBER [--undo] --db DB (jobs list --archived lists them),',
+    '  jobs delete ID|NUMBER --db DB (a draft never quoted), jobs undelete ID --db DB (the id the deletion printed),',
     '  jobs quotes ID|NUMBER [--limit N] --db DB   every quotation the job is a line of, newest first, with its lines',
   ].join('\n'),
   async run(args, out) {

@@ -11,6 +11,7 @@ const commands: Record<string, () => Promise<Command>> = {
   sheet: async () => (await import('./plan-commands')).sheetCommand,
   price: async () => (await import('./plan-commands')).priceCommand,
   jobs: async () => (await import('./job-commands')).jobsCommand,
+  customers: async () => (await import('./customer-commands')).customersCommand,
   db: async () => (await import('./db-commands')).dbCommand,
   demo: async () => (await import('./db-commands')).demoCommand,
   print: async () => (await import('./print-commands')).printCommand,

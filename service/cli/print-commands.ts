@@ -1,4 +1,5 @@
 import { parsePrintFile } from '../../core/documents';
+import type { QuoteTermsInput } from '../../core/documents';
 import type { Result } from '../../core/result';
 import { StoreError, writeFileReplacing } from '../../db';
 import { renderQuote, renderTraveller } from '../pdf';
@@ -43,6 +44,28 @@ function acceptOption(args: ParsedArgs): { accept?: string } {
   return { accept: reason };
 }
 
+/** A text option given once, or nothing; a flag without its text is an error naming the option. */
+function textOption(args: ParsedArgs, name: string): string | undefined {
+  const v = args.options.get(name);
+  if (v === undefined) return undefined;
+  if (typeof v !== 'string') throw new InputError([{ code: 'invalid-option', path: `--${name}`, message: `--${name} needs its text, e.g. --${name} "…"` }]);
+  return v;
+}
+
+/** The quote's own terms: --enquiry, --payment, --delivery, --packaging, --certificates "a; b", --estimator. */
+function termsOption(args: ParsedArgs): { terms?: QuoteTermsInput } {
+  const terms: QuoteTermsInput = {};
+  const pairs = [['enquiry', 'enquiryReference'], ['payment', 'paymentTerms'], ['delivery', 'deliveryTerms'],
+    ['packaging', 'packaging'], ['estimator', 'estimator']] as const;
+  for (const [option, key] of pairs) {
+    const v = textOption(args, option);
+    if (v !== undefined) terms[key] = v;
+  }
+  const certificates = textOption(args, 'certificates');
+  if (certificates !== undefined) terms.certificates = certificates.split(';').map((c) => c.trim()).filter(Boolean);
+  return Object.keys(terms).length > 0 ? { terms } : {};
+}
+
 /** `--jobs ID,NUMBER,…`: the jobs of a quotation of several lines, each by id or job number, in line order. */
 async function jobIdsOption(args: ParsedArgs, call: Caller): Promise<number[] | undefined> {
   const list = args.options.get('jobs');
@@ -78,12 +101,12 @@ async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string
   }
   const request = await issueRequest(args, call);
   if (request !== null) {
-    const printed = await call('printQuote', { ...request, ...acceptOption(args) });
+    const printed = await call('printQuote', { ...request, ...acceptOption(args), ...termsOption(args) });
     write(out, Buffer.from(printed.base64, 'base64'));
     return { file: out, quote: printed.reference, issued: true, reprint: false };
   }
   const print = printFile(args, 'print quote');
-  const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date());
+  const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date(), termsOption(args));
   write(out, await renderQuote(model));
   return { file: out, quote: model.issue.number, issued: false, missing: estimate.missing };
 }
@@ -94,11 +117,13 @@ async function printTraveller(args: ParsedArgs, call: Caller): Promise<Record<st
   const ref = args.options.get('job');
   if (typeof ref === 'string') {
     const jobId = (await call('getJob', jobRef(ref))).id;
-    const printed = await call('printTraveller', { jobId, ...(quantity === undefined ? {} : { quantity }) });
+    const customerOrder = textOption(args, 'order');
+    const printed = await call('printTraveller', { jobId, ...(quantity === undefined ? {} : { quantity }), ...(customerOrder ? { customerOrder } : {}) });
     write(out, Buffer.from(printed.base64, 'base64'));
     return { file: out, job: printed.reference, findings: printed.findings };
   }
-  const print = printFile(args, 'print traveller');
+  const order = textOption(args, 'order');
+  const print = { ...printFile(args, 'print traveller'), ...(order ? { purchaseOrder: order } : {}) };
   const model = must(travellerFor(print, await call('getSettings', {}), quantity, new Date()));
   write(out, await renderTraveller(model));
   return { file: out, job: print.number, quantity: quantity ?? print.orderQuantity ?? print.spec.quantities?.[0], findings: model.findings };
@@ -115,8 +140,10 @@ export const printCommand: Command = {
     'print quote FILE|--job ID|--jobs ID,ID,… [--accept "reason"] --db DB --out x.pdf   quotation PDF; for stored jobs the',
     '  quotation is issued and kept, one line per job of --jobs (all of one customer); open errors or an incomplete price',
     '  on any line refuse the issue unless --accept gives the reason for accepting them',
+    '  [--enquiry REF] [--payment TEXT] [--delivery TEXT] [--packaging TEXT] [--certificates "a; b"] [--estimator NAME]',
+    '  state this quote\'s enquiry reference and terms (else the customer\'s and the shop\'s)',
     '  print quote --quote NUMBER --db DB --out x.pdf reprint an issued quote from its snapshot',
-    '  print traveller FILE|--job ID [--quantity N] --db DB --out x.pdf   shop traveller PDF',
+    '  print traveller FILE|--job ID [--quantity N] [--order NO] --db DB --out x.pdf   shop traveller PDF; --order: the customer\'s order number',
   ].join('\n'),
   async run(args, out) {
     const sub = subcommandOf('print', args, subcommands);

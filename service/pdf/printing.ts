@@ -2,7 +2,7 @@ import type { Customer, Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
 import { parseQuoteDocument, quotationDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
-import type { PrintJob, QuoteDocument, TravellerDocument } from '../../core/documents';
+import type { PrintJob, QuoteDocument, QuoteTermsInput, TravellerDocument } from '../../core/documents';
 import type { Result } from '../../core/result';
 import type { Settings } from '../../core/settings/schema';
 
@@ -14,10 +14,16 @@ export function storedPrintJob(job: Job, customers: readonly Customer[]): PrintJ
   const customer = job.customer && customers.find((c) => c.id === job.customer!.id);
   return {
     number: job.number, customerName: job.customer?.name ?? null,
-    customerLines: customer ? [customer.email, customer.phone].filter(Boolean) : [],
+    customerLines: customer ? customerLines(customer) : [],
+    ...(customer && customer.paymentTerms !== '' ? { customerPaymentTerms: customer.paymentTerms } : {}),
     partNumber: job.partNumber, drawingNumber: job.drawingNumber, drawingRevision: job.drawingRevision,
     orderQuantity: job.orderQuantity, dueDate: job.dueDate, leadTimeDays: job.leadTimeDays, spec: job.spec, judgement: job.judgement,
   };
+}
+
+/** The customer under its name on a quote: who it is for, the address, then how to reach them. */
+export function customerLines(c: Customer): string[] {
+  return [c.contact && `Attn. ${c.contact}`, ...c.addressLines, c.email, c.phone && `Tel. ${c.phone}`].filter(Boolean);
 }
 
 /** What a job's price depends on besides its spec and the shop: its order quantity and the estimator's overrides. */
@@ -29,6 +35,7 @@ export interface DraftOptions {
   estimate?: CostEstimate;
   exceptions?: string[];
   validityDays?: number;
+  terms?: QuoteTermsInput;
 }
 
 /** One line of a draft quotation: the job and, when the issue has already worked them, its estimate and exceptions. */
@@ -39,11 +46,12 @@ export interface DraftLine {
 }
 
 /** A quotation of one or several lines, each priced with today's settings unless its estimate is given. */
-export function draftQuotation(lines: readonly DraftLine[], settings: Settings, now: Date, validityDays = settings.defaults.quoteValidityDays):
-  { model: QuoteDocument; estimates: CostEstimate[] } {
+export function draftQuotation(lines: readonly DraftLine[], settings: Settings, now: Date,
+  options: Pick<DraftOptions, 'validityDays' | 'terms'> = {}): { model: QuoteDocument; estimates: CostEstimate[] } {
   const estimates = lines.map((l) => l.estimate ?? estimateCost(l.print.spec, settings, undefined, jobPricing(l.print)));
   const model = quotationDocument({
-    settings, issuedAt: now.toISOString(), validityDays,
+    settings, issuedAt: now.toISOString(), validityDays: options.validityDays ?? settings.defaults.quoteValidityDays,
+    ...(options.terms ? { terms: options.terms } : {}),
     lines: lines.map((l, i) => ({ spec: l.print.spec, job: l.print, estimate: estimates[i]!, exceptions: l.exceptions ?? [] })),
   });
   return { model, estimates };
@@ -51,7 +59,9 @@ export function draftQuotation(lines: readonly DraftLine[], settings: Settings, 
 
 export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
   const line: DraftLine = { print, ...(options.estimate ? { estimate: options.estimate } : {}), exceptions: options.exceptions ?? [] };
-  const { model, estimates } = draftQuotation([line], settings, now, options.validityDays);
+  const { model, estimates } = draftQuotation([line], settings, now, {
+    ...(options.validityDays === undefined ? {} : { validityDays: options.validityDays }), ...(options.terms ? { terms: options.terms } : {}),
+  });
   return { model, estimate: estimates[0]! };
 }
 

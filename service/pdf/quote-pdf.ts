@@ -7,7 +7,7 @@ import {
   contentWidth, ensureSpace, heading, leftEdge, paragraphs, paragraphsHeight, put, roomLeft, space, textHeight,
 } from './layout';
 import { fieldGrid, fieldGridHeight } from './grid';
-import { notice } from './boxes';
+import { FILL_IN_HEIGHT, fillInBoxes, notice } from './boxes';
 import { documentHeader } from './letterhead';
 import { finish, openDocument } from './page';
 import { colour, gap, size } from './style';
@@ -54,6 +54,25 @@ function prices(doc: Doc, m: QuoteLineModel): void {
   space(doc, gap.heading);
   fieldGrid(doc, leadTime, LEAD_TIME_GRID);
   space(doc);
+  if (m.priceCurve) figure(doc, m.priceCurve, contentWidth(doc) * 0.75, 220);
+}
+
+/** Payment, delivery, packaging and certificates, read down one column like the lead time above them. */
+function commercial(doc: Doc, m: QuoteDocument): void {
+  if (m.commercial.length === 0) return;
+  heading(doc, 'Payment, delivery and certificates', fieldGridHeight(doc, m.commercial, LEAD_TIME_GRID) + 10);
+  fieldGrid(doc, m.commercial, LEAD_TIME_GRID);
+  space(doc);
+}
+
+/** Who prepared the quote and the boxes for the signature, kept together. */
+function signature(doc: Doc, m: QuoteDocument): void {
+  if (!m.signature) return;
+  ensureSpace(doc, FILL_IN_HEIGHT + 30);
+  put(doc, `For ${m.letterhead.name}: prepared by ${m.signature.preparedBy}`, leftEdge(doc), doc.y, contentWidth(doc), { font: FONT.bold });
+  doc.y += 14;
+  fillInBoxes(doc, m.signature.boxes);
+  space(doc);
 }
 
 /** The drawing fills what is left of the page when that is enough to read it, else it starts the next. */
@@ -64,8 +83,11 @@ function drawing(doc: Doc, f: FigureModel): void {
   figure(doc, f, contentWidth(doc), maxHeight);
 }
 
-/** The spring, its prices, the deviations accepted on it and its drawing. */
-function lineBody(doc: Doc, line: QuoteLineModel): void {
+/**
+ * The spring, its prices, the deviations accepted on it and its drawing; `beforeDrawing` puts what a
+ * one-line quotation prints there (its payment and delivery terms).
+ */
+function lineBody(doc: Doc, line: QuoteLineModel, beforeDrawing?: () => void): void {
   heading(doc, line.specification.heading);
   fieldGrid(doc, line.specification.fields, { columns: 2 });
   space(doc);
@@ -75,6 +97,7 @@ function lineBody(doc: Doc, line: QuoteLineModel): void {
     paragraphs(doc, line.exceptions, { bullet: true });
     space(doc);
   }
+  beforeDrawing?.();
   if (line.drawing) drawing(doc, line.drawing);
 }
 
@@ -105,7 +128,7 @@ export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
   });
   addressee(doc, m);
   if (m.lines.length === 1) {
-    lineBody(doc, m.lines[0]!);
+    lineBody(doc, m.lines[0]!, () => commercial(doc, m));
   } else {
     if (m.items) {
       // The heading keeps to the table's first rows; a long table goes on over the page.
@@ -114,10 +137,12 @@ export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
       space(doc);
     }
     for (const line of m.lines) item(doc, line);
+    commercial(doc, m);
   }
   heading(doc, 'Terms');
   paragraphs(doc, m.terms, { bullet: true });
   space(doc);
+  signature(doc, m);
   notice(doc, m.caution);
   return finish(open, m);
 }

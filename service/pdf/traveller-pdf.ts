@@ -6,6 +6,7 @@ import {
   contentWidth, ensureSpace, heading, leftEdge, pageRoom, paragraphs, paragraphsHeight, put, space,
 } from './layout';
 import { fieldGrid } from './grid';
+import { FONT } from './fonts';
 import { FILL_IN_HEIGHT, fillInBoxes, notice } from './boxes';
 import { documentHeader } from './letterhead';
 import { operationBlock, operationHeight } from './operation-block';
@@ -55,15 +56,29 @@ const INSPECTION_TABLE = { pt: size.body - 0.5, minRowHeight: 20 };
 /** The sampling plan, the table and the inspector's sign-off, on one page whenever they fit on one. */
 function inspection(doc: Doc, m: TravellerDocument): void {
   const summary = m.inspection.summary;
+  const finishRows = m.inspection.finish.length > 0 ? FILL_IN_HEIGHT + 13 + gap.heading : 0;
   const height = paragraphsHeight(doc, summary, contentWidth(doc)) + tableHeight(doc, m.inspection.table, INSPECTION_TABLE)
-    + FILL_IN_HEIGHT + 2 * gap.heading;
+    + FILL_IN_HEIGHT + finishRows + 2 * gap.heading;
   heading(doc, 'Inspection', Math.min(height, pageRoom(doc) - 40));
   paragraphs(doc, summary.slice(0, -1));
   paragraphs(doc, summary.slice(-1), { pt: size.small, fill: colour.muted });
   space(doc, gap.heading);
   drawTable(doc, m.inspection.table, INSPECTION_TABLE);
   space(doc, gap.heading);
+  if (m.inspection.finish.length > 0) {
+    put(doc, 'Finish inspection', leftEdge(doc), doc.y, contentWidth(doc), { font: FONT.bold });
+    doc.y += 13;
+    fillInBoxes(doc, m.inspection.finish);
+    space(doc, gap.heading);
+  }
   fillInBoxes(doc, m.inspection.signOff);
+  space(doc);
+}
+
+/** First-article approval and engineering release: signed before the run goes on. */
+function release(doc: Doc, m: TravellerDocument): void {
+  heading(doc, 'Release to production', FILL_IN_HEIGHT + 20);
+  fillInBoxes(doc, m.release);
   space(doc);
 }
 
@@ -90,6 +105,7 @@ export async function renderTraveller(m: TravellerDocument): Promise<Buffer> {
   heading(doc, 'Safety', 60);
   paragraphs(doc, m.safety, { bullet: true });
   space(doc);
+  release(doc, m);
   routing(doc, m);
   inspection(doc, m);
   figures(doc, m);

@@ -30,7 +30,10 @@ describe('command line: sheet and price', () => {
     for (const key of ['coiledFreeLength', 'wireLengthPerPiece', 'massPerPiece', 'lotWire', 'operations', 'inspection']) {
       expect(plan).toHaveProperty(key);
     }
-    expect(plan.lotWire).toEqual({ startQuantity: expect.any(Number), metres: expect.any(Number), kg: expect.any(Number) });
+    expect(plan.lotWire).toMatchObject({ startQuantity: expect.any(Number), metres: expect.any(Number), kg: expect.any(Number) });
+    // A store with no stock list: the plan says to order the lot's wire.
+    expect(plan.lotWire.stock).toMatchObject({ status: 'order', onHandKg: 0, neededKg: plan.lotWire.kg });
+    expect(plan.lotWire.stock.text).toMatch(/^Order wire: [\d.]+ kg at 2\.00 mm; none of this grade and size on the stock list\.$/);
     expect(plan.inspection).toMatchObject({ sampleSize: 80, accept: 2, reject: 3 });
     expect(plan.inspection.characteristics.length).toBeGreaterThan(3);
     expect(plan.operations[0].kind).toBe('coil');

@@ -29,7 +29,7 @@ describe('cautions beside the results', { timeout: UI_TEST_TIMEOUT }, () => {
     await expect(caution('Hydrogen embrittlement').count()).resolves.toBe(0);
     await field(page, 'Finish').selectOption('zinc-yellow');
     await caution('Hydrogen embrittlement').waitFor();
-    await expect(caution('Hydrogen embrittlement').textContent()).resolves.toContain('demo: bake for hydrogen relief within 1 h of plating');
+    await expect(caution('Hydrogen embrittlement').textContent()).resolves.toContain('Bake to ASTM B850, 22 h at 200 °C');
     await field(page, 'Free length L0 (mm)').fill('40');
     await caution('Stress near solid').waitFor({ state: 'detached' });
     await screenshot(page, 'cautions');

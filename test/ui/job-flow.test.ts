@@ -81,11 +81,11 @@ describe('a job from an empty form to the store and back', { timeout: UI_TEST_TI
     await page.keyboard.press('Alt+S');
     const similar = page.getByRole('dialog', { name: 'Jobs like this spring' });
     await similar.waitFor();
-    const row = similar.locator('tr', { has: page.getByRole('button', { name: number }) });
+    const row = similar.locator('tr', { has: page.getByRole('button', { name: number, exact: true }) });
     await row.waitFor();
     await expect(row.getByRole('list').getAttribute('aria-label')).resolves.toMatch(/^Differences: d same, OD −3 %, L0 \+9 %/);
     await screenshot(page, 'similar-jobs');
-    await row.getByRole('button', { name: number }).click();
+    await row.getByRole('button', { name: number, exact: true }).click();
     // The new spring never saved as a job: it was left through the similar list, which saves first.
     await page.locator('.toolbar__number', { hasText: number }).waitFor();
     await expect(page.getByLabel('Inch').isChecked()).resolves.toBe(true);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  bakeGuidance, bakeSpecifications, checkBakeSpecification, hardnessFromHv, hardnessFromTensile, parseBakeSpecification,
+  bakeGuidance, bakeSpecifications, checkBakeSpecification, hardnessFromHv, hardnessFromTensile, parseBakeCondition, parseBakeSpecification,
 } from '../../core/finishing/bake';
 import type { BakeOptions, BakeStatement } from '../../core/finishing/bake';
 import { hrcToHv, tensileToHrc } from '../../core/finishing/bake-hardness';
@@ -132,6 +132,31 @@ describe('checking the named specification', () => {
     expect(['ASTM B850-98', 'ASTM B850 (R2009)', 'ISO 4042:2018', 'SAE/USCAR-5', 'ASTM F1941-16', 'AMS 2759/9', 'astm-b850']
       .map(parseBakeSpecification))
       .toEqual(['astm-b850', 'astm-b850', 'iso-4042', 'sae-uscar-5', 'astm-f1941', 'sae-ams-2759-9', 'astm-b850']);
+  });
+
+  it('reads a specification written with its bake condition, and not one naming two standards', () => {
+    expect(['ISO 4042, 4 h at 200 °C', 'ASTM B850, 22 h at 200 °C', 'SAE AMS 2759/9 (3 h, 375 °F)', 'B850 class ER-1']
+      .map(parseBakeSpecification)).toEqual(['iso-4042', 'astm-b850', 'sae-ams-2759-9', 'astm-b850']);
+    expect(parseBakeSpecification('ISO 4042 or ASTM B850')).toBeNull();
+    expect(parseBakeSpecification('ISO 40421')).toBeNull();
+    expect(parseBakeCondition('ASTM B850, 22 h at 200 °C')).toEqual({ hours: 22, temperatureC: 200 });
+    // 375 °F = 190.56 °C ((375 − 32) × 5/9, NIST SP 811 B.8)
+    expect(parseBakeCondition('SAE AMS 2759/9 (3 h, 375 °F)')?.temperatureC).toBeCloseTo(190.56, 2);
+  });
+
+  it('the bake written with the specification is checked as a planned one, on the specification\'s field', () => {
+    // ASTM B850 chart (sonicplatinginc.com): 1401–1500 MPa needs at least 16 h at 190–220 °C.
+    expect(checkBakeSpecification('ASTM B850, 22 h at 200 °C', 1450)).toEqual([]);
+    const short = checkBakeSpecification('ASTM B850, 4 h at 200 °C', 1450);
+    expect(codes(short)).toEqual(['error bake-too-short']);
+    expect(short[0]?.path).toBe('bakeSpecification');
+  });
+
+  it('the fix names specifications as people write them, never internal ids', () => {
+    const [unknown] = checkBakeSpecification('house bake', 1600);
+    expect(unknown?.fix).toContain('ASTM B850, ISO 4042, SAE/USCAR-5, ASTM F1941, SAE AMS 2759/9');
+    expect(unknown?.fix).not.toMatch(/astm-b850|iso-4042/);
+    expect(checkBakeSpecification(undefined, 1600)[0]?.fix).not.toMatch(/astm-b850|iso-4042/);
   });
 
   it('B850 named for 1900 MPa wire: the partial table does not cover it', () => {

@@ -77,6 +77,14 @@ describe('compression report in the spec\'s units', () => {
     expect(codes({ ...twoForces, freeParameters: ['freeLength', 'coils', 'wireDiameter'] })).not.toContain('over-determined');
   });
 
+  it('the over-determined finding names only what the drawing still fixes', () => {
+    const message = (input: CompressionSpecInput) => analyseSpec(spec(input)).findings.find((f) => f.code === 'over-determined')?.message;
+    expect(message({ ...valveSpringMetric, freeParameters: [] })).toContain('fixes wire diameter, coil diameter, coils and free length');
+    const coilsFreed = message({ ...valveSpringMetric, freeParameters: ['coils'] });
+    expect(coilsFreed).toContain('fixes wire diameter, coil diameter and free length and a toleranced force');
+    expect(coilsFreed).not.toMatch(/coils/);
+  });
+
   it('a force outside its tolerance is an error finding on that load, with a free length that fixes it', () => {
     const r = analyseSpec(spec({ ...valveSpringMetric, loads: [{ length: 35, force: 200, tolerancePercent: 5 }] }));
     const f = r.findings.find((x) => x.code === 'load-outside-tolerance');

@@ -68,7 +68,24 @@ describe('torsion spring plan', () => {
     const torque = plan.inspection.characteristics.find((c) => c.name === 'Torque at 60°')!;
     expect(torque.lower).toBeCloseTo(360, 9);
     expect(torque.source).toMatch(/shop-entered/);
+    // 5.25 body coils falls in the demo free-angle band over 3 up to 6 coils: ±(2° + 1.5° × 6) = ±11° (from memory).
     const angle = plan.inspection.characteristics.find((c) => c.name === 'Free angle between legs')!;
-    expect(angle.upper! - angle.nominal).toBeCloseTo(2 + 1.5 * 5.25, 9);
+    expect(angle.upper! - angle.nominal).toBeCloseTo(11, 9);
+    expect(angle.source).toMatch(/the shop's torsion free angle table .*still the demo defaults/);
+    // Legs of 25 and 30 mm: the demo leg table's bands up to 25 mm (±0.5) and over 25 up to 50 mm (±0.8).
+    const legs = plan.inspection.characteristics.filter((c) => c.name.startsWith('Leg '));
+    expect(legs.map((c) => c.upper! - c.nominal).map((x) => Math.round(x * 1000) / 1000)).toEqual([0.5, 0.8]);
+  });
+
+  it('reads the shop\'s own torsion tables once the shop edits them, and names them as the shop\'s', () => {
+    const tables = structuredClone(settings.toleranceTables);
+    tables.freeAngle.rows[1]!.plusMinus = 4;
+    tables.legLength.rows[0]!.plusMinus = 0.3;
+    const own = planManufacture(specOf({ ...lidTorsion, legs: [{ length: 25, form: 'hooked' }, { length: 30 }], freeAngle: 90,
+      loads: [{ angle: 60, torque: 400 }] }), { ...settings, toleranceTables: tables }, 500);
+    const angle = own.inspection.characteristics.find((c) => c.name === 'Free angle between legs')!;
+    expect(angle.upper! - angle.nominal).toBeCloseTo(4, 9);
+    expect(angle.source).toBe("the shop's torsion free angle table (Settings → Tolerances)");
+    expect(own.inspection.characteristics.find((c) => c.name === 'Leg 1 length')!.upper! - 25).toBeCloseTo(0.3, 9);
   });
 });

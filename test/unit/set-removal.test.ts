@@ -146,6 +146,30 @@ describe('set removal: one stress basis per method', () => {
   });
 });
 
+describe('the set the first-off can measure is judged against the shop\'s own free-length table', () => {
+  const a = { d: 2, index: 8, na: 8 };
+  const shopWith = (plusMinus: number): Settings => {
+    const s = defaultSettings();
+    // Every band: no percentage, a flat minimum of ±plusMinus (the shop's own rule).
+    const rows = s.toleranceTables.freeLength.rows.map((r) => ({ ...r, percent: 0, minimum: plusMinus }));
+    return { ...s, toleranceTables: { ...s.toleranceTables, freeLength: { ...s.toleranceTables.freeLength, rows } } };
+  };
+  it('a set under the shop\'s band warns, naming the shop\'s table; a band under the set clears it (common trade practice)', () => {
+    for (let ratio = 1.0; ratio <= 1.3; ratio += 0.005) {
+      const r = analyseSpec(spec(input(a, at(a, ratio))), shopWith(10)) as CompressionReport;
+      if (!r.setRemoval.required || r.setRemoval.bound !== null) continue;
+      const set = r.setRemoval.expectedSet ?? 0;
+      const warned = r.findings.find((f) => f.code === 'set-below-length-tolerance');
+      expect(set).toBeLessThan(10);
+      expect(warned?.message).toMatch(/±10\.00 mm \(the shop's free length table/);
+      const tight = analyseSpec(spec(input(a, at(a, ratio))), shopWith(set / 2)) as CompressionReport;
+      expect(tight.findings.map((f) => f.code)).not.toContain('set-below-length-tolerance');
+      return;
+    }
+    throw new Error('no clean set-removal spring in the range');
+  });
+});
+
 describe('set removal: outputs stay within stated physical limits', () => {
   const a = { d: 2, index: 8, na: 8 };
 

@@ -11,9 +11,11 @@ export interface Filters {
   kind: string;
   material: string;
   customerId: string;
+  /** '' lists the jobs in use; 'archived' the archived ones. A text search finds both. */
+  shelf: '' | 'archived';
 }
 
-export const noFilters: Filters = { status: '', kind: '', material: '', customerId: '' };
+export const noFilters: Filters = { status: '', kind: '', material: '', customerId: '', shelf: '' };
 
 interface FilterBarProps {
   text: string;
@@ -31,7 +33,7 @@ export function FilterBar({ text, onText, filters, onFilters, searchRef }: Filte
       <div className="filterbar__search">
         <PlainInput
           label="Search" type="search" value={text} onChange={onText} inputRef={searchRef}
-          placeholder="customer, part or drawing number, notes…" hint="Ctrl+F or / to come back here"
+          placeholder="customer, part, drawing, grade, size (1.6)…" hint="Ctrl+F or / to come back here"
         />
       </div>
       <PlainSelect label="Status" value={filters.status} onChange={set('status')}
@@ -42,6 +44,8 @@ export function FilterBar({ text, onText, filters, onFilters, searchRef }: Filte
         choices={[{ value: '', label: 'Any material' }, ...shop.grades.map((g) => ({ value: g.id, label: g.name }))]} />
       <PlainSelect label="Customer" value={filters.customerId} onChange={set('customerId')}
         choices={[{ value: '', label: 'Any customer' }, ...shop.customers.map((c) => ({ value: String(c.id), label: c.name }))]} />
+      <PlainSelect label="List" value={filters.shelf} onChange={set('shelf')}
+        choices={[{ value: '', label: 'Jobs in use' }, { value: 'archived', label: 'Archived jobs' }]} />
     </div>
   );
 }

@@ -20,6 +20,10 @@ interface JobTableProps {
   onSelectAll(on: boolean): void;
   onOpen(id: number): void;
   onSimilar(job: JobSummary): void;
+  onArchive(job: JobSummary, archived: boolean): void;
+  onDelete(job: JobSummary): void;
+  /** The archived list: its newest-first sort is by the date each job was archived. */
+  archived?: boolean;
 }
 
 function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sort: Sort | null; onSort(k: SortKey): void }) {
@@ -42,7 +46,7 @@ const day = (iso: string) => iso.slice(0, 10);
 const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
   [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
 
-export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar }: JobTableProps) {
+export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete, archived = false }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
     <table className="table jobs" aria-label="Jobs">
@@ -60,7 +64,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           <th scope="col" className="num">OD</th>
           <th scope="col" className="num">L0</th>
           <th scope="col" className="num">Rate</th>
-          <SortHeader label="Updated" k="updated" sort={sort} onSort={onSort} />
+          <SortHeader label={archived ? 'Archived' : 'Updated'} k="updated" sort={sort} onSort={onSort} />
           <th scope="col"><span className="sr-only">Actions</span></th>
         </tr>
       </thead>
@@ -77,15 +81,23 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td><button type="button" className="link" onClick={() => onOpen(j.id)} aria-label={`Open job ${j.number}`}>{j.number}</button></td>
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
               <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
-              <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span></td>
+              <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span>
+                {j.archivedAt ? <><br /><span className="muted">archived {day(j.archivedAt)}</span></> : null}</td>
               <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span>
                 {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
-              <td className="nowrap">{day(j.updatedAt)}</td>
-              <td><button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button></td>
+              <td className="nowrap">{day(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
+              <td className="row-actions">
+                <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>
+                <button type="button" className="button button--small button--quiet" onClick={() => onArchive(j, j.archivedAt === null)}
+                  aria-label={`${j.archivedAt === null ? 'Archive' : 'Put back'} job ${j.number}`}>{j.archivedAt === null ? 'Archive' : 'Put back'}</button>
+                {j.status === 'draft' ? (
+                  <button type="button" className="button button--small button--quiet" onClick={() => onDelete(j)} aria-label={`Delete draft ${j.number}`}>Delete</button>
+                ) : null}
+              </td>
             </tr>
           );
         })}

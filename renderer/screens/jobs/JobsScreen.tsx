@@ -14,6 +14,7 @@ import type { Sort, SortKey } from './JobTable';
 import { JobTable } from './JobTable';
 import { Pager } from './Pager';
 import { QuoteSelected } from './QuoteSelected';
+import { ShelfNotice, useShelfActions } from './ShelfActions';
 
 export const PAGE_SIZE = 50;
 
@@ -28,7 +29,7 @@ function useJobRows(text: string, filters: Filters, sort: Sort, after: string | 
   const input = {
     status: (filters.status || undefined) as JobStatus | undefined, kind: filters.kind || undefined,
     material: filters.material || undefined, customerId: filters.customerId ? Number(filters.customerId) : undefined,
-    sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, after,
+    archived: filters.shelf === 'archived', sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, after,
   };
   const list = useQuery(searching ? null : JSON.stringify(input), () => api.listJobs(input));
   const found = useQuery(searching ? text.trim() : null, () => api.findJobs({ text: text.trim(), limit: 200 }), 120);
@@ -54,8 +55,9 @@ export function JobsScreen() {
   const page = pageKeys.length - 1;
   const setPage = (to: number) => setPageKeys((keys) => (to === 0 ? [undefined] : to < keys.length - 1 ? keys.slice(0, to + 1) : keys));
   const [selected, setSelected] = useState<ReadonlySet<number>>(new Set());
-  const [similar, setSimilar] = useState<{ spec: unknown; id: number; number: string } | null>(null);
+  const [similar, setSimilar] = useState<{ spec: unknown; id: number; number: string; quantity: number | null } | null>(null);
   const [similarError, setSimilarError] = useState<string | null>(null);
+  const shelf = useShelfActions(() => rows.reload());
   const searchRef = useRef<HTMLInputElement>(null);
   const rows = useJobRows(text, filters, sort, pageKeys[page]);
   const nextPage = () => {
@@ -79,7 +81,7 @@ export function JobsScreen() {
   const openSimilar = async (j: JobSummary) => {
     setSimilarError(null);
     const r = await api.getJob({ id: j.id });
-    if (r.ok) setSimilar({ spec: r.value.spec, id: j.id, number: j.number });
+    if (r.ok) setSimilar({ spec: r.value.spec, id: j.id, number: j.number, quantity: j.orderQuantity });
     else setSimilarError(r.error.message);
   };
 
@@ -103,17 +105,19 @@ export function JobsScreen() {
       </p>
       {rows.error ? <p className="error-text" role="alert">{rows.error.message}</p> : null}
       {similarError ? <p className="error-text" role="alert">{similarError}</p> : null}
+      <ShelfNotice shelf={shelf} />
       <div className="table-wrap">
         <JobTable
           jobs={rows.jobs} sort={rows.searching ? null : sort} onSort={onSort} selected={selected} onSelect={select}
           onSelectAll={(on) => rows.jobs.forEach((j) => select(j.id, on))} onOpen={(id) => nav.openJob(id)} onSimilar={(j) => void openSimilar(j)}
+          onArchive={(j, on) => void shelf.archive(j, on)} onDelete={(j) => void shelf.remove(j)} archived={!rows.searching && filters.shelf === 'archived'}
         />
         {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
       </div>
       {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} hasNext={rows.next !== null}
         onPage={(to) => (to > page ? nextPage() : setPage(to))} />}
       <SimilarJobsDialog open={similar !== null} onClose={() => setSimilar(null)} spec={similar?.spec ?? null}
-        excludeJobId={similar?.id} subject={`job ${similar?.number ?? ''}`} />
+        excludeJobId={similar?.id} quantity={similar?.quantity ?? null} subject={`job ${similar?.number ?? ''}`} />
     </section>
   );
 }

@@ -63,9 +63,9 @@ export function FinishesSection() {
   return (
     <section className="settings-section" id="settings-finishes" aria-labelledby="settings-finishes-title">
       <h2 id="settings-finishes-title">Finishes</h2>
-      <p className="muted">Outside processing: vendor prices and lot minimums. An electroplated finish needs a hydrogen-relief bake.</p>
+      <p className="muted">Vendor prices and lot minimums; a finish done in house (light oil) is not outside processing. An electroplated finish needs a hydrogen-relief bake.</p>
       <Rows path="finishes" noun="a finish" title={(f, i) => `Finish ${i + 1}: ${String(f.name ?? '') || 'unnamed'}`}
-        blank={() => ({ id: '', name: '', vendor: '', lotMinimum: 0, electroplated: false })}>
+        blank={() => ({ id: '', name: '', vendor: '', lotMinimum: 0, electroplated: false, inHouse: false })}>
         {(prefix) => (
           <>
             <SText path={`${prefix}.id`} label="Finish id" />
@@ -75,6 +75,7 @@ export function FinishesSection() {
             <SNumber path={`${prefix}.pricePerPiece`} label="Price per piece" optional />
             <SNumber path={`${prefix}.lotMinimum`} label="Lot minimum" />
             <SCheck path={`${prefix}.electroplated`} label="Electroplated" />
+            <SCheck path={`${prefix}.inHouse`} label="Done in house" hint="Not routed as outside processing" />
             <SText path={`${prefix}.bakeSpecification`} label="Bake specification" wide />
           </>
         )}

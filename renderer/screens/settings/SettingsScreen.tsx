@@ -18,11 +18,14 @@ import { SettingsDraftContext } from './draft';
 import { FinishesSection, MachinesSection } from './MachinesSection';
 import { DefaultsSection, NumberingSection, ProfileSection } from './ProfileSection';
 import { MaterialPricesSection, WireStockSection } from './StockSection';
+import { TolerancesSection } from './TolerancesSection';
+import { QuoteTermsSection } from './QuoteTermsSection';
 
 const sections = [
   ['settings-profile', 'Shop profile'], ['settings-defaults', 'Defaults'], ['settings-machines', 'Machines & rates'],
   ['settings-prices', 'Material prices'], ['settings-finishes', 'Finishes'], ['settings-stock', 'Wire stock'],
-  ['settings-costing', 'Costing'], ['settings-design', 'Design search'], ['settings-numbering', 'Numbering'],
+  ['settings-tolerances', 'Tolerances'], ['settings-costing', 'Costing'], ['settings-quote-terms', 'Quote terms'], ['settings-design', 'Design search'],
+  ['settings-numbering', 'Numbering'],
 ] as const;
 
 /** Every path in the draft, so each error finds the field it belongs to. */
@@ -115,7 +118,9 @@ function SettingsEditor({ saved }: { saved: Settings }) {
                 <MaterialPricesSection />
                 <FinishesSection />
                 <WireStockSection />
+                <TolerancesSection />
                 <CostingSection />
+                <QuoteTermsSection />
                 <DesignStepsSection />
                 <NumberingSection />
               </form>

@@ -34,6 +34,8 @@ export function WireStockSection() {
   return (
     <section className="settings-section" id="settings-stock" aria-labelledby="settings-stock-title">
       <h2 id="settings-stock-title">Wire stock</h2>
+      <p className="muted">Coils on hand by grade and diameter (mm). The manufacturing plan takes the lot&apos;s wire from here
+        when the grade and size are stocked, names the heat or lot, and says &ldquo;order wire&rdquo; when they are not.</p>
       <Rows path="wireStock" noun="a coil of stock" title={(w, i) => `Stock ${i + 1}: ${String(w.grade ?? '') || 'no grade'} ${w.d ?? ''}`}
         blank={() => ({ grade: '', d: 1, kg: 0 })}>
         {(prefix) => (
@@ -41,7 +43,7 @@ export function WireStockSection() {
             <SSelect path={`${prefix}.grade`} label="Grade" choices={grades} wide />
             <SNumber path={`${prefix}.d`} label="Wire diameter" unit="mm" />
             <SNumber path={`${prefix}.kg`} label="On hand" unit="kg" />
-            <SText path={`${prefix}.heatNumber`} label="Heat number" />
+            <SText path={`${prefix}.heatNumber`} label="Heat / lot" />
           </>
         )}
       </Rows>

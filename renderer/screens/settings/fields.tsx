@@ -27,9 +27,9 @@ const sameValue = (text: string, value: unknown): boolean => {
 
 /**
  * A number kept as text while it is typed ("1." must survive), stored as a number once it parses. Empty
- * text leaves an optional number out; a required one keeps "" so the schema names the field.
+ * text leaves an optional number out (a nullable one null); a required one keeps "" so the schema names the field.
  */
-export function SNumber({ path, label, hint, unit, optional }: Props & { unit?: string; optional?: boolean }) {
+export function SNumber({ path, label, hint, unit, optional, nullable }: Props & { unit?: string; optional?: boolean; nullable?: boolean }) {
   const d = useSettingsDraft();
   const value = d.get(path);
   const [text, setText] = useState(() => (typeof value === 'number' ? numberText(value) : typeof value === 'string' ? value : ''));
@@ -39,7 +39,7 @@ export function SNumber({ path, label, hint, unit, optional }: Props & { unit?: 
   const change = (t: string) => {
     setText(t);
     const p = parseNumber(t);
-    d.set(path, p.ok ? (p.value ?? (optional ? undefined : t)) : t);
+    d.set(path, p.ok ? (p.value ?? (nullable ? null : optional ? undefined : t)) : t);
   };
   return <TextField path={path} label={label} hint={hint} unit={unit} numeric value={text} onChange={change} />;
 }

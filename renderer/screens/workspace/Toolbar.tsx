@@ -20,22 +20,33 @@ interface ToolbarProps {
   problems: number;
   onSave(): void;
   onSimilar(): void;
+  onCopy(): void;
+  onArchive(archived: boolean): void;
 }
 
-export function Toolbar({ editor, problems, onSave, onSimilar }: ToolbarProps) {
+export function Toolbar({ editor, problems, onSave, onSimilar, onCopy, onArchive }: ToolbarProps) {
   const status = saveStatus(editor, problems);
   const job = editor.job;
+  const settled = job !== null && !editor.dirty && !editor.saving;
   return (
     <div className="toolbar">
       <div className="toolbar__title">
         <span className="toolbar__number">{job ? job.number : 'New job'}</span>
-        <span className="toolbar__sub">{job ? [job.customer?.name, job.partNumber].filter(Boolean).join(' · ') || 'no customer yet' : 'not in the store yet'}</span>
+        <span className="toolbar__sub">{job ? [job.customer?.name, job.partNumber].filter(Boolean).join(' · ') || 'no customer yet' : 'not in the store yet'}
+          {job?.archivedAt ? <span className="badge" title={`archived ${job.archivedAt.slice(0, 10)}`}> archived</span> : null}</span>
       </div>
       <p className={`save-status save-status--${status.tone}`} role="status" aria-live="polite" data-save={status.tone}>{status.text}</p>
       <div className="toolbar__actions">
         <button type="button" className="button" onClick={() => void editor.undo()} disabled={!editor.canUndo} aria-keyshortcuts="Control+Z">Undo</button>
         <button type="button" className="button" onClick={() => void editor.redo()} disabled={!editor.canRedo} aria-keyshortcuts="Control+Shift+Z">Redo</button>
         <button type="button" className="button" onClick={onSimilar} disabled={!editor.evaluation.spec} aria-keyshortcuts="Alt+S">Find similar</button>
+        <button type="button" className="button" onClick={onCopy} disabled={!settled}
+          title="A new job with the next number, this spec and the order fields; the two jobs stay linked">New job from this one</button>
+        {job ? (
+          <button type="button" className="button" onClick={() => onArchive(job.archivedAt === null)} disabled={!settled}>
+            {job.archivedAt === null ? 'Archive' : 'Back to the list'}
+          </button>
+        ) : null}
         <button type="button" className="button button--primary" onClick={onSave} aria-keyshortcuts="Control+S">Save now</button>
       </div>
     </div>

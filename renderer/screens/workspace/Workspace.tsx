@@ -1,8 +1,8 @@
 import { ChangeKind } from './ChangeKind';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import type { Job } from '../../../core/api';
+import type { ApiError, Job } from '../../../core/api';
 import type { Settings } from '../../../core/settings/schema';
-import { usePlatform } from '../../api';
+import { useApi, usePlatform } from '../../api';
 import type { FormHandle } from '../../components/form/scope';
 import { ScreenHeading } from '../../components/ScreenHeading';
 import { TabList, TabPanel } from '../../components/Tabs';
@@ -12,6 +12,7 @@ import { useShopData } from '../../hooks/shop-data';
 import { useJobEditor } from '../../hooks/useJobEditor';
 import { useStable } from '../../hooks/useStable';
 import { SimilarJobsDialog } from '../shared/SimilarJobs';
+import { useCopyJob } from '../shared/useCopyJob';
 import { SpecForm } from './form/SpecForm';
 import { CostPane } from './panes/CostPane';
 import { DocumentsPane } from './panes/DocumentsPane';
@@ -57,6 +58,16 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
   }, [nav, editor.settle]);
   useEffect(() => platform.guardUnload(() => pending.current), [platform]);
 
+  const api = useApi();
+  const copier = useCopyJob();
+  const [actionError, setActionError] = useState<ApiError | null>(null);
+  const archive = async (archived: boolean) => {
+    if (!editor.job) return;
+    const r = await api.archiveJob({ id: editor.job.id, archived });
+    if (r.ok) editor.adoptStored(r.value);
+    else setActionError(r.error);
+  };
+
   const errors = useStable(useMemo(() => [
     ...editor.jobCheck.errors,
     ...editor.evaluation.errors.map((e) => ({ ...e, path: `spec.${e.path}` })),
@@ -92,7 +103,9 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
   return (
     <section className="screen screen--workspace" aria-labelledby="job-title">
       <ScreenHeading id="job-title" visuallyHidden>{editor.job ? `Job ${editor.job.number}` : 'New job'}</ScreenHeading>
-      <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={() => setSimilar(true)} />
+      <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={() => setSimilar(true)}
+        onCopy={() => { if (editor.job) void copier.copy(editor.job.id); }} onArchive={(on) => void archive(on)} />
+      {copier.error ?? actionError ? <p className="error-text" role="alert">{(copier.error ?? actionError)?.message}</p> : null}
       <ChangeKind editor={editor} />
       <TabList<Tab> label="Job views" idPrefix="job" tabs={tabs} active={tab} onSelect={setTab} />
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
@@ -114,7 +127,7 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
         </div>
       ) : null}
       <SimilarJobsDialog open={similar} onClose={() => setSimilar(false)} spec={editor.evaluation.spec}
-        excludeJobId={editor.job?.id} subject={editor.job ? `job ${editor.job.number} as edited` : 'this spring'} />
+        excludeJobId={editor.job?.id} quantity={editor.job?.orderQuantity ?? null} subject={editor.job ? `job ${editor.job.number} as edited` : 'this spring'} />
     </section>
   );
 }

@@ -25,6 +25,24 @@ function jobFile(dir: string, name: string, over: Record<string, unknown> = {}, 
   return file;
 }
 
+describe('command line: jobs from past jobs, archive and delete', () => {
+  it('copies a job, archives it out of the list, deletes a draft and brings it back', { timeout: SEVERAL_PROCESSES }, () => {
+    const dir = tempDir();
+    const db = join(dir, 'shop.db');
+    expect(cli('jobs', 'add', jobFile(dir, 'a.json', { partNumber: 'CP-1', orderQuantity: 300 }), '--db', db).code).toBe(0);
+    const copy = cli('jobs', 'copy', 'J-26-0001', '--db', db).json() as { number: string; partNumber: string; orderQuantity: number; lineage: { copiedFrom: { number: string } } };
+    expect(copy).toMatchObject({ number: 'J-26-0002', partNumber: 'CP-1', orderQuantity: 300, lineage: { copiedFrom: { number: 'J-26-0001' } } });
+    expect((cli('jobs', 'archive', 'J-26-0001', '--db', db).json() as { archivedAt: string | null }).archivedAt).not.toBeNull();
+    expect((cli('jobs', 'list', '--db', db).json() as { total: number }).total).toBe(1);
+    expect((cli('jobs', 'list', '--archived', '--db', db).json() as { jobs: { number: string }[] }).jobs.map((j) => j.number)).toEqual(['J-26-0001']);
+    const deleted = cli('jobs', 'delete', 'J-26-0002', '--db', db).json() as { jobId: number; number: string };
+    expect(deleted.number).toBe('J-26-0002');
+    expect(cli('jobs', 'show', 'J-26-0002', '--db', db).code).not.toBe(0);
+    expect((cli('jobs', 'undelete', String(deleted.jobId), '--db', db).json() as { number: string }).number).toBe('J-26-0002');
+    expect((cli('jobs', 'archive', 'J-26-0001', '--undo', '--db', db).json() as { archivedAt: string | null }).archivedAt).toBeNull();
+  });
+});
+
 describe('command line: jobs', () => {
   it('adds, shows, lists, finds, compares and lists revisions', () => {
     const dir = tempDir();

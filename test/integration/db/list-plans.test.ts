@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createJob, listJobs, setJobStatus } from '../../../db';
+import { archiveJob, createJob, listJobs, setJobStatus } from '../../../db';
 import { countJobsSql, listJobsSql } from '../../../db/search/list';
 import { boxSql } from '../../../db/search/similar';
 import { FIND_SQL, NEWEST_BOUND_SQL } from '../../../db/search/text';
@@ -72,6 +72,29 @@ describe('job list', () => {
     }
   });
 
+  it('walks the archived list page by page in every sort, and the default list without them', () => {
+    const store = seeded();
+    const all = value(listJobs(store, { sort: 'number', limit: 500 })).jobs;
+    for (const j of all.filter((_j, i) => i % 2 === 0)) value(archiveJob(store, { id: j.id, archived: true }));
+    for (const archived of [true, false]) {
+      for (const sort of ['updated', 'number', 'customer'] as const) {
+        for (const direction of ['asc', 'desc'] as const) {
+          const whole = value(listJobs(store, { archived, sort, direction, limit: 500 }));
+          expect(whole.total).toBe(archived ? 5 : 4);
+          expect(whole.jobs.every((j) => (j.archivedAt !== null) === archived)).toBe(true);
+          const walked: string[] = [];
+          let after: string | undefined;
+          do {
+            const page = value(listJobs(store, { archived, sort, direction, limit: 2, ...(after ? { after } : {}) }));
+            walked.push(...page.jobs.map((j) => j.number));
+            after = page.next ?? undefined;
+          } while (after !== undefined);
+          expect(walked).toEqual(whole.jobs.map((j) => j.number));
+        }
+      }
+    }
+  });
+
   it('keeps the counted total equal to a count of the rows through status changes and renames', () => {
     const store = seeded();
     const count = (q: Record<string, unknown>) => (store.db.prepare(`SELECT count(*) AS n FROM jobs j ${
@@ -131,6 +154,34 @@ describe('query plans', () => {
       });
     }
   }
+
+  it('lists the archived jobs newest archived first through their partial index, pages included', () => {
+    const store = seeded();
+    for (const direction of ['asc', 'desc']) {
+      const q = listJobsSchema.parse({ archived: true, direction });
+      const first = listJobsSql(q);
+      for (const page of [first, listJobsSql(q, first.columns.map(() => 'x'))]) {
+        const detail = plan(store, page.sql, [...page.params, 50, 0]);
+        expect(detail).toMatch(/(SCAN|SEARCH) j USING INDEX jobs_archived/);
+        expect(detail).not.toMatch(/TEMP B-TREE/);
+      }
+    }
+    const withStatus = listJobsSql(listJobsSchema.parse({ archived: true, status: 'quoted' }));
+    expect(plan(store, withStatus.sql, [...withStatus.params, 50, 0])).toMatch(/(SCAN|SEARCH) j USING INDEX jobs_archived/);
+    expect(plan(store, withStatus.sql, [...withStatus.params, 50, 0])).not.toMatch(/TEMP B-TREE/);
+  });
+
+  it('counts the archived jobs from the kept counts, and a customer\'s listed jobs through its index alone', () => {
+    const store = seeded();
+    const archived = countJobsSql({ archived: true, kind: 'compression' });
+    expect(plan(store, archived.sql, archived.params)).toMatch(/job_counts/);
+    expect(plan(store, archived.sql, archived.params)).not.toMatch(/\bj\b|jobs/);
+    const byCustomer = countJobsSql({ customerId: 1 });
+    const detail = plan(store, byCustomer.sql, byCustomer.params);
+    expect(detail).toMatch(/SCALAR SUBQUERY 1\nSEARCH j USING COVERING INDEX jobs_by_customer/);
+    expect(detail).toMatch(/SCALAR SUBQUERY 2\nSEARCH j USING INDEX jobs_by_customer/);
+    expect(detail).not.toMatch(/SCAN j/);
+  });
 
   it('counts status, kind and material from the kept counts, and a customer through its index', () => {
     const store = seeded();

@@ -1,6 +1,8 @@
 import { memo } from 'react';
 import type { UnitSystem } from '../../../../core/units';
 import { unitSymbol } from '../../../../core/units';
+import type { SpringKind } from '../../../../core/spec';
+import { kindTerms } from '../../../../core/vocabulary';
 import { SelectField, TextField } from '../../../components/form/inputs';
 import { useShopData } from '../../../hooks/shop-data';
 import type { OrderDraft } from '../../../model/spec-draft';
@@ -15,7 +17,7 @@ const gradeChoices = [
 ] as const;
 
 /** Tolerance grade, finish with its bake, peening and the service temperature. */
-export const FinishSection = memo(function FinishSection({ order, units, edit }: { order: OrderDraft; units: UnitSystem; edit: Edit }) {
+export const FinishSection = memo(function FinishSection({ kind, order, units, edit }: { kind: SpringKind; order: OrderDraft; units: UnitSystem; edit: Edit }) {
   const set = (patch: Partial<OrderDraft>) => editSpec(edit)((s) => ({ ...s, order: { ...s.order, ...patch } }));
   const { settings } = useShopData();
   const finishes = settings?.finishes ?? [];
@@ -27,7 +29,7 @@ export const FinishSection = memo(function FinishSection({ order, units, edit }:
       <fieldset className="section">
         <legend>Tolerance grade</legend>
         <div className="grid grid--3">
-          <SelectField rare path="spec.toleranceGrade" label="Tolerance grade (EN 15800)" value={order.toleranceGrade} choices={gradeChoices}
+          <SelectField rare path="spec.toleranceGrade" label={kindTerms[kind].toleranceGrade} value={order.toleranceGrade} choices={gradeChoices}
             onChange={(v) => set({ toleranceGrade: v })} hint="Sets the limits on the traveller and the inspection plan" wide />
         </div>
       </fieldset>

@@ -71,7 +71,7 @@ export function SpecForm({ drafts, edit, errors, understood, handle }: SpecFormP
           <WireSection units={spec.units} material={spec.material} wireDiameter={spec.wireDiameter} overrides={spec.overrides} edit={edit} />
           <DiameterSection units={spec.units} diameterGiven={spec.diameterGiven} diameter={spec.diameter} edit={edit} />
           <KindSections kind={spec.kind} spec={spec} edit={edit} />
-          <FinishSection order={spec.order} units={spec.units} edit={edit} />
+          <FinishSection kind={spec.kind} order={spec.order} units={spec.units} edit={edit} />
           <QuantitySection order={spec.order} notes={spec.notes} edit={edit} />
           <label className="entry-order">
             <input type="checkbox" checked={every} onChange={(e) => setEvery(e.target.checked)} />

@@ -8,6 +8,7 @@ import type { JobEditor } from '../../../hooks/useJobEditor';
 import { timelineOf } from '../../../model/timeline';
 import { statusLabels } from '../../../model/labels';
 import { kindLabel } from '../../../../core/vocabulary';
+import { Lineage } from './Lineage';
 
 /** One line for a revision's spring; a stored spec holds its values in its own units. */
 function springText(s: Spec): string {
@@ -47,6 +48,7 @@ export function HistoryPane({ editor }: { editor: JobEditor }) {
   const head = revisions.find((r) => r.revision === job.revision);
   return (
     <div className="pane">
+      <Lineage job={job} />
       <p className="muted">Undo (Ctrl+Z outside a text field) steps back one saved revision and Redo steps forward; both work after a restart,
         because they are kept as revisions too. Restoring never deletes a revision.</p>
       <table className="table history">

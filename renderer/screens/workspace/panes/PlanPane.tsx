@@ -1,7 +1,10 @@
+import { kindTerms } from '../../../../core/vocabulary';
+import { BakeComparison } from './BakeComparison';
 import { useState } from 'react';
 import type { ManufacturingPlan } from '../../../../core/process/plan';
 import type { Spec } from '../../../../core/spec';
 import { planSafetyNotes } from '../../../../core/documents/cautions';
+import { lotWireTexts } from '../../../../core/documents/traveller-sections';
 import { useApi } from '../../../api';
 import { Caution } from '../../../components/Caution';
 import { PlainInput } from '../../../components/Plain';
@@ -57,6 +60,7 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
   const { settings } = useShopData();
   const notes = planSafetyNotes(plan, spec, settings?.finishes ?? []);
   const u = plan.units;
+  const lot = lotWireTexts(plan);
   const len = (v: number) => `${v.toFixed(u === 'inch' ? 3 : 2)} ${u === 'inch' ? 'in' : 'mm'}`;
   return (
     <>
@@ -67,13 +71,15 @@ function PlanBody({ plan, spec, onGo }: { plan: ManufacturingPlan; spec: Spec; o
         ) : null}
         <div><dt>Wire per piece</dt><dd>{len(plan.wireLengthPerPiece)}</dd></div>
         <div><dt>Start quantity</dt><dd>{plan.lotWire.startQuantity} pcs for {plan.orderQuantity} good</dd></div>
-        <div><dt>Wire for the lot</dt><dd>{plan.lotWire.metres.toFixed(1)} m, {plan.lotWire.kg.toFixed(2)} kg</dd></div>
-        <div><dt>Tolerance grade</dt><dd>{plan.toleranceGrade}</dd></div>
+        <div><dt>Wire for the lot</dt><dd>{lot.length}, {lot.mass}</dd></div>
+        <div><dt>Wire stock</dt><dd className={`stock stock--${plan.lotWire.stock.status}`} data-stock={plan.lotWire.stock.status}>{plan.lotWire.stock.text}</dd></div>
+        <div><dt>{kindTerms[plan.kind].toleranceGrade}</dt><dd>{plan.toleranceGrade}</dd></div>
       </dl>
       <div className="cautions cautions--grid">
         {notes.map((n) => <Caution key={n} title={floorTitle(n)}>{n}</Caution>)}
       </div>
       <Operations plan={plan} />
+      <BakeComparison plan={plan} spec={spec} finishes={settings?.finishes ?? []} />
       <SetCalibrationPanel spec={spec} />
       <Inspection plan={plan} />
       {plan.findings.length > 0 ? <Findings findings={plan.findings} onGo={onGo} title="Planning findings" /> : null}
