@@ -10,11 +10,17 @@ import { cliSuite } from './suites/cli';
 import { crashSuite } from './suites/crash';
 import { designSuite } from './suites/design';
 import { fuzzSuite } from './suites/fuzz';
+import { requestSheetSuite } from './suites/request-sheet';
+import { storeServiceSuite } from './suites/store-service';
+import { storePgSuite } from './suites/store-pg';
+import { pgWriter, storePgLoadSuite } from './suites/store-pg-load';
 
-const suites: BenchSuite[] = [engineSuite, storeSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite, quotingSuite];
+const suites: BenchSuite[] = [engineSuite, storeSuite, storeServiceSuite, storePgSuite, storePgLoadSuite, storeMillionSuite, documentsSuite, rendererSuite, cliSuite, designSuite, fuzzSuite, crashSuite, quotingSuite, requestSheetSuite];
 
 async function main(): Promise<void> {
   const only = process.argv[2];
+  // A writer process of the PostgreSQL load suite (it starts copies of this bundle with these arguments).
+  if (only === '--pg-writer') return pgWriter(process.argv[3]!, Number(process.argv[4]), Number(process.argv[5]));
   const rows: BenchRow[] = [];
   for (const suite of suites) {
     if (only ? suite.name !== only : suite.onlyWhenAsked) continue;

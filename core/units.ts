@@ -131,27 +131,74 @@ function isIdentity(map: QuantityMap, units: UnitSystem): boolean {
   return known;
 }
 
-export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: 'in' | 'out'): T {
-  if (isIdentity(map, units)) return value;
-  const convert = direction === 'in' ? toInternal : fromInternal;
-  const walk = (v: unknown, m: Quantity | typeof OWN | QuantityMap, parent: Record<string, unknown>): unknown => {
+type Walker = (v: unknown, parent: Record<string, unknown>) => unknown;
+type Direction = 'in' | 'out';
+
+/** One number's conversion, with the same arithmetic as toInternal / fromInternal. */
+function converter(def: UnitDef, direction: Direction): (x: number) => number {
+  const factor = def.factor;
+  const offset = def.offset ?? 0;
+  return direction === 'in' ? (x) => (x + offset) * factor : (x) => x / factor - offset;
+}
+
+/** A number (or list of numbers) of one declared quantity, or of its object's own `quantity` field (OWN). */
+function leafWalker(m: Quantity | typeof OWN, units: UnitSystem, direction: Direction): Walker {
+  const fixed = m === OWN ? undefined : converter(systems[units][m], direction);
+  const walk: Walker = (v, parent) => {
     if (v === null || v === undefined) return v;
-    if (Array.isArray(v)) return v.map((item) => walk(item, m, parent));
-    if (typeof m === 'string') {
-      const q = declared(m, parent);
-      return typeof v === 'number' && q !== undefined ? convert(v, q, units) : v;
-    }
+    if (Array.isArray(v)) return v.map((item) => walk(item, parent));
+    if (typeof v !== 'number') return v;
+    if (fixed) return fixed(v);
+    const q = declared(OWN, parent);
+    return q === undefined ? v : converter(systems[units][q], direction)(v);
+  };
+  return walk;
+}
+
+/** An object (or list of objects) the map describes: a copy with the declared fields converted. */
+function objectWalker(map: QuantityMap, units: UnitSystem, direction: Direction): Walker {
+  const fields = Object.keys(map).map((key) => {
+    const m = map[key]!;
+    return [key, typeof m === 'string' ? leafWalker(m, units, direction) : objectWalker(m, units, direction)] as const;
+  });
+  const walk: Walker = (v, parent) => {
+    if (v === null || v === undefined) return v;
+    if (Array.isArray(v)) return v.map((item) => walk(item, parent));
     if (typeof v !== 'object') return v;
     const object = v as Record<string, unknown>;
     // A copy keeps the object's shape; only the fields the map declares are replaced.
     const out: Record<string, unknown> = { ...object };
-    for (const key in m) {
-      const inner = object[key];
-      if (inner !== undefined) out[key] = walk(inner, m[key]!, object);
+    for (let i = 0; i < fields.length; i++) {
+      const [key, inner] = fields[i]!;
+      const value = object[key];
+      if (value !== undefined) out[key] = inner(value, object);
     }
     return out;
   };
-  return walk(value, map, {}) as T;
+  return walk;
+}
+
+/** Walkers built once per map, unit system and direction: specs convert on every analysis. */
+const walkers = new WeakMap<QuantityMap, Map<string, Walker>>();
+
+function walkerFor(map: QuantityMap, units: UnitSystem, direction: Direction): Walker {
+  let byWay = walkers.get(map);
+  if (!byWay) {
+    byWay = new Map();
+    walkers.set(map, byWay);
+  }
+  const way = `${units} ${direction}`;
+  let walker = byWay.get(way);
+  if (!walker) {
+    walker = objectWalker(map, units, direction);
+    byWay.set(way, walker);
+  }
+  return walker;
+}
+
+export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: Direction): T {
+  if (isIdentity(map, units)) return value;
+  return walkerFor(map, units, direction)(value, {}) as T;
 }
 
 /**

@@ -7,7 +7,7 @@ import type { Store } from './store';
 import { inTransaction } from './store';
 import { parseWith } from '../core/validation';
 
-const COLUMNS = 'id, job_id AS jobId, name, mime_type AS mimeType, size, sha256, added_at AS addedAt';
+const COLUMNS = 'id, job_id AS "jobId", name, mime_type AS "mimeType", size, sha256, added_at AS "addedAt"';
 
 /** Stores a file (the customer's drawing) with the job, with its size and SHA-256 to prove it intact. */
 export function addAttachment(store: Store, raw: unknown): StoreResult<Attachment> {

@@ -5,11 +5,12 @@ import type { BackupResult, RestoreResult } from '../core/api/store';
 import { StoreError, failure, success } from './errors';
 import type { StoreResult } from './errors';
 import { inspectStoreFile } from './inspect';
+import type { LongRun } from './long-run';
 import type { OpenOptions } from './open';
 import { INCOMING } from './recover';
 import { prepareIncoming, removeStoreFiles } from './restore-copy';
 import { replaceRows } from './restore-into';
-import type { Store } from './store';
+import type { SqliteStore as Store } from './store';
 import { readOnlyError, writeFailure } from './store';
 
 function asFailure(e: unknown): { ok: false; error: { code: string; message: string; path: string } } {
@@ -34,17 +35,26 @@ function sameFile(a: string, b: string): boolean {
   return resolve(a) === resolve(b);
 }
 
+/** better-sqlite3's own default: pages copied between two turns of the event loop. */
+const BACKUP_PAGES_PER_STEP = 100;
+
 /**
  * Copies the open store to `file` with SQLite's online backup (consistent even while writing), then
  * checks the copy opens as a store and passes its integrity check. An existing file is not overwritten.
  */
-export async function backupStore(store: Store, file: string): Promise<StoreResult<BackupResult>> {
+export async function backupStore(store: Store, file: string, long: LongRun = {}): Promise<StoreResult<BackupResult>> {
   if (sameFile(file, store.file)) return failure('same-file', 'a backup cannot be written over the store itself', 'file');
   if (existsSync(file)) return failure('file-exists', `${file} already exists: choose a new file name`, 'file');
   if (!existsSync(dirname(resolve(file)))) return failure('no-folder', `the folder of ${file} does not exist`, 'file');
   const partial = `${file}.partial`;
   try {
-    await store.db.backup(partial);
+    await store.db.backup(partial, {
+      progress({ totalPages, remainingPages }) {
+        if (long.signal?.aborted) throw new StoreError('cancelled', 'the backup was cancelled: no file was written', '');
+        long.onProgress?.(totalPages - remainingPages, totalPages);
+        return BACKUP_PAGES_PER_STEP;
+      },
+    });
     makeStandalone(partial);
     const info = inspectStoreFile(partial, { check: 'full' });
     renameSync(partial, file);

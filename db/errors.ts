@@ -3,13 +3,14 @@ import type { FieldError } from '../core/result';
 
 /** Thrown only where a caller cannot go on (opening, migrating); every other failure is a value. */
 export class StoreError extends Error {
-  constructor(readonly code: string, message: string, readonly path = '') {
+  constructor(readonly code: string, message: string, readonly path = '', readonly details?: FieldError[]) {
     super(message);
     this.name = 'StoreError';
   }
 
   toApiError(): ApiError {
-    return { code: this.code, message: this.message, path: this.path };
+    const head = { code: this.code, message: this.message, path: this.path };
+    return this.details && this.details.length > 0 ? { ...head, details: this.details } : head;
   }
 }
 

@@ -6,7 +6,7 @@ import { StoreError } from './errors';
 const FULL = new Set(['ENOSPC', 'EDQUOT']);
 
 /** Through the fs module object, so a test can make the disk fill up part way (ENOSPC from writeSync). */
-function writeAll(fd: number, data: Buffer): void {
+export function writeAll(fd: number, data: Buffer): void {
   for (let at = 0; at < data.length;) at += fs.writeSync(fd, data, at, data.length - at);
 }
 
@@ -29,8 +29,13 @@ export function writeFileReplacing(file: string, data: string | Buffer, path = '
   } catch (e) {
     if (fd !== undefined) fs.closeSync(fd);
     fs.rmSync(temporary, { force: true });
-    const code = (e as NodeJS.ErrnoException).code ?? (e as Error).message;
-    if (FULL.has(code)) throw new StoreError('disk-full', `the disk is full: ${file} was not written (nothing was changed)`, path);
-    throw new StoreError('unwritable-file', `${file}: cannot be written (${code})`, path);
+    throw fileWriteFailure(file, e, path);
   }
+}
+
+/** A failed file write as the answer: the disk is full, or the file cannot be written, naming the field. */
+export function fileWriteFailure(file: string, e: unknown, path = 'file'): StoreError {
+  const code = (e as NodeJS.ErrnoException).code ?? (e as Error).message;
+  if (FULL.has(code)) return new StoreError('disk-full', `the disk is full: ${file} was not written (nothing was changed)`, path);
+  return new StoreError('unwritable-file', `${file}: cannot be written (${code})`, path);
 }

@@ -6,7 +6,7 @@ import { inspectStoreFile } from './inspect';
 import { LATEST_VERSION, migrate, schemaVersion } from './migrations';
 import { openForReading } from './read-only';
 import { finishInterruptedRestore } from './recover';
-import type { Store } from './store';
+import type { SqliteStore } from './store';
 import { makeStore } from './store';
 
 export interface OpenOptions {
@@ -19,6 +19,8 @@ export interface OpenOptions {
    * at 100 000 jobs, see `npm run bench -- store`), or none (the bench's baseline only).
    */
   check?: 'quick' | 'none';
+  /** Who saves through this store (the signed-in name); by default COILWRIGHT_USER or the computer's account. */
+  author?: string;
 }
 
 /** Connection settings that do not persist in the file, so they are set on every open. */
@@ -65,7 +67,7 @@ function connect(file: string, readOnly: boolean, options: OpenOptions): Databas
  * be written (read-only file or folder) opens read-only: reads work, saves say why they cannot. Pending
  * migrations apply in one transaction.
  */
-export function openStore(file: string, options: OpenOptions = {}): Store {
+export function openStore(file: string, options: OpenOptions = {}): SqliteStore {
   finishInterruptedRestore(file);
   const info = inspectStoreFile(file, { check: options.check ?? 'quick' });
   const readOnly = readOnlyReason(file);
@@ -83,12 +85,12 @@ export function openStore(file: string, options: OpenOptions = {}): Store {
     if (e instanceof StoreError) throw e;
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
-  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly);
+  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly, options.author);
 }
 
 /** openStore as a value: `{ ok: false, error }` instead of an exception. */
 export function tryOpenStore(file: string, options: OpenOptions = {}):
-  { ok: true; value: Store } | { ok: false; error: { code: string; message: string; path: string } } {
+  { ok: true; value: SqliteStore } | { ok: false; error: { code: string; message: string; path: string } } {
   try {
     return { ok: true, value: openStore(file, options) };
   } catch (e) {

@@ -19,7 +19,7 @@ import { parseWith } from '../core/validation';
 interface QuoteRow {
   id: number; number: string; job_id: number; job_revision: number; issued_at: string; validity_days: number;
   currency: string; job?: string; spec?: string; settings?: string; prices?: string; quantity_breaks?: string; document?: string;
-  decision?: string | null;
+  decision?: string | null; made_by?: string;
 }
 
 interface LineRow {
@@ -70,6 +70,7 @@ function toQuote(row: QuoteRow, lineRows: readonly LineRow[]): StoreResult<Quote
     document: JSON.parse(row.document!),
     decision: row.decision ? JSON.parse(row.decision) as IssueDecision : null,
     lines,
+    madeBy: row.made_by ?? '',
   });
 }
 
@@ -130,11 +131,11 @@ export function recordQuotation(store: Store, snapshot: QuotationSnapshot): Stor
       const settings = readSettings(store);
       const number = takeNumber(store, 'quotes');
       const result = store.sql(`INSERT INTO quotes (number, job_id, job_revision, issued_at, validity_days, currency, job, spec,
-                                  settings, prices, quantity_breaks, document, decision, line_count) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+                                  settings, prices, quantity_breaks, document, decision, made_by, line_count) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
         .run(number, first.row.id, first.row.revision, store.now().toISOString(), snapshot.validityDays, settings.defaults.currency,
           JSON.stringify(first.job), JSON.stringify(first.spec), JSON.stringify(settings), JSON.stringify(first.snapshot.prices),
           JSON.stringify(first.snapshot.quantityBreaks), JSON.stringify(snapshot.document),
-          snapshot.decision === null ? null : JSON.stringify(snapshot.decision), held.length);
+          snapshot.decision === null ? null : JSON.stringify(snapshot.decision), store.author, held.length);
       const quoteId = Number(result.lastInsertRowid);
       const insertLine = store.sql(`INSERT INTO quote_lines (quote_id, line, job_id, job_revision, job, spec, prices, quantity_breaks)
                                     VALUES (?, ?, ?, ?, ?, ?, ?, ?)`);
@@ -172,8 +173,9 @@ const SUMMARY = 'q.id, q.number, q.job_id, q.job_revision, q.issued_at, q.validi
 function lineSummaries(store: Store, quoteIds: readonly number[]): Map<number, LineRow[]> {
   const byQuote = new Map<number, LineRow[]>(quoteIds.map((id) => [id, []]));
   if (quoteIds.length === 0) return byQuote;
+  // Plain placeholders, one per quote of the page: the same statement reads on SQLite and PostgreSQL.
   const rows = store.sql(`SELECT quote_id, line, job_id, job_revision, job FROM quote_lines
-                          WHERE quote_id IN (SELECT value FROM json_each(?)) ORDER BY quote_id, line`).all(JSON.stringify(quoteIds)) as LineRow[];
+                          WHERE quote_id IN (${quoteIds.map(() => '?').join(', ')}) ORDER BY quote_id, line`).all(...quoteIds) as LineRow[];
   for (const r of rows) byQuote.get(r.quote_id)!.push(r);
   return byQuote;
 }

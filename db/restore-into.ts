@@ -2,7 +2,7 @@ import type Database from 'better-sqlite3';
 import type { Settings } from '../core/settings/schema';
 import { StoreError } from './errors';
 import { readSetting, writeSetting } from './settings';
-import type { Store } from './store';
+import type { SqliteStore as Store } from './store';
 
 interface TableEntry { name: string; type: string }
 

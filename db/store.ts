@@ -1,24 +1,72 @@
 import Database from 'better-sqlite3';
+import { userInfo } from 'node:os';
 import { StoreError } from './errors';
 
-/** An open job store: the connection, its file, a statement cache and the clock writes are stamped with. */
+/** One SQL statement of either backend: `?` placeholders, rows as plain objects. */
+export interface Statement {
+  get(...params: unknown[]): unknown;
+  all(...params: unknown[]): unknown[];
+  run(...params: unknown[]): { changes: number; lastInsertRowid: number | bigint };
+}
+
+/**
+ * An open job store, whichever database holds it: every store function (db/) works through this alone.
+ * SQLite (a file, better-sqlite3) is the default; PostgreSQL (db/pg) answers the same SQL through the same
+ * calls. SQL written here is portable: `?` placeholders, no rowid, quoted camelCase aliases; a statement that
+ * cannot be portable branches on `dialect` (see DEVELOPERS.md, "Give a store function its PostgreSQL side").
+ */
 export interface Store {
-  readonly db: Database.Database;
+  readonly dialect: 'sqlite' | 'postgres';
+  /** What the title bar and messages name: the file, or host/database of a server (never a password). */
   readonly file: string;
   /** Why nothing can be saved (the file or its folder is read-only); undefined when the store is writable. */
   readonly readOnly: string | undefined;
+  /** Who the revisions, quotes and records saved through this store are by (migration 0015). */
+  author: string;
   /** A prepared statement, cached by its SQL text. */
-  sql(text: string): Database.Statement;
+  sql(text: string): Statement;
+  /** Runs fn as one write transaction (a savepoint inside one); writers take turns, as with BEGIN IMMEDIATE. */
+  transaction<T>(fn: () => T): T;
   now(): Date;
+  /**
+   * A mark that moves when another connection commits a change, so an open job list knows to read again
+   * without querying the jobs: SQLite's PRAGMA data_version; on PostgreSQL, the count of change notices
+   * (LISTEN coilwright_jobs, migration 0015) received so far.
+   */
+  changeMark(): string;
   close(): void;
 }
 
-export function makeStore(db: Database.Database, file: string, clock: () => Date, readOnly?: string): Store {
+/** A store in a SQLite file: backup, restore and the damage checks reach the connection itself. */
+export interface SqliteStore extends Store {
+  readonly dialect: 'sqlite';
+  readonly db: Database.Database;
+  sql(text: string): Database.Statement;
+}
+
+export const isSqliteStore = (store: Store): store is SqliteStore => store.dialect === 'sqlite';
+
+/** The signed-in name, else the operating-system account: who a save is by when nobody signed in. */
+export function defaultAuthor(): string {
+  const named = process.env.COILWRIGHT_USER?.trim();
+  if (named) return named;
+  try {
+    return userInfo().username;
+  } catch {
+    return '';
+  }
+}
+
+export function makeStore(db: Database.Database, file: string, clock: () => Date, readOnly?: string, author = defaultAuthor()): SqliteStore {
   const cache = new Map<string, Database.Statement>();
   return {
+    dialect: 'sqlite',
     db,
     file,
     readOnly,
+    author,
+    transaction: (fn) => db.transaction(fn).immediate(),
+    changeMark: () => `sqlite:${String(db.pragma('data_version', { simple: true }))}`,
     sql(text) {
       let statement = cache.get(text);
       if (!statement) {
@@ -56,7 +104,7 @@ export function readOnlyError(store: Store, reason: string): StoreError {
  * here, so each says that nothing was saved.
  */
 export function writeFailure(store: Store, e: unknown): unknown {
-  if (!(e instanceof Database.SqliteError)) return e;
+  if (!(e instanceof Database.SqliteError)) return e instanceof StoreError ? e : translatedFailure(store, e);
   if (e.code === 'SQLITE_FULL') {
     return new StoreError('disk-full', `the disk is full: nothing was saved. Free some space on the disk that holds ${store.file}, then save again`);
   }
@@ -74,8 +122,19 @@ export function writeFailure(store: Store, e: unknown): unknown {
 export function inTransaction<T>(store: Store, fn: () => T): T {
   if (store.readOnly) throw readOnlyError(store, store.readOnly);
   try {
-    return store.db.transaction(fn).immediate();
+    return store.transaction(fn);
   } catch (e) {
     throw writeFailure(store, e);
   }
+}
+
+/** A PostgreSQL connection lost mid-write: the server rolled the transaction back. */
+function translatedFailure(store: Store, e: unknown): unknown {
+  const code = (e as { sqlState?: string }).sqlState;
+  if (store.dialect !== 'postgres' || code === undefined) return e;
+  if (code.startsWith('08') || code === '57P01') {
+    return new StoreError('store-unreachable', `the connection to ${store.file} was lost: nothing was saved, try again`);
+  }
+  if (code === '53100') return new StoreError('disk-full', `the server of ${store.file} has no disk space left: nothing was saved`);
+  return e;
 }

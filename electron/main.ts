@@ -4,19 +4,21 @@
  */
 import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session, shell } from 'electron';
 import { existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
 import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
-import { createService } from '../service/api';
+import { createService, dispatch } from '../service/api';
 import type { Service } from '../service/api';
 import { createDataActions } from './shell/data-actions';
 import { registerDataActionIpc } from './shell/data-ipc';
+import { registerRequestSheetIpc } from './shell/request-sheet-ipc';
 import { offerRestoreOfDamagedStore } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
-import { openShopStore } from '../service/host/first-run';
+import { chosenStore, openShopStoreAt } from '../service/host/first-run';
 import { createLog } from './shell/logging';
 import type { Log } from './shell/logging';
 import { applicationMenu } from './shell/menu';
@@ -55,7 +57,8 @@ function openService(log: Log): Service | { code: string; message: string } {
     electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
   });
   if (!binding.ok) return binding.error;
-  const opened = openShopStore(userFile('coilwright.db'));
+  // COILWRIGHT_STORE (a file or a postgres:// connection string) names another store than the user's own file.
+  const opened = openShopStoreAt(chosenStore({}) ?? userFile('coilwright.db'));
   if (!opened.ok) return opened.error;
   if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
   const { notice } = opened.value;
@@ -83,7 +86,8 @@ function sendCommand(previews: PdfPreviews, command: MenuCommand, windowId: numb
 function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): void {
   const data = createDataActions({
     dialogs: electronDialogs(liveMainWindow),
-    call: (name, input) => service.files.run(name, input as never),
+    call: (name, input, long) => service.files.run(name, input as never, long),
+    progress: (fraction) => liveMainWindow()?.setProgressBar(fraction ?? -1),
     notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
     documentsDir: app.getPath('documents'),
     today: () => new Date().toISOString().slice(0, 10),
@@ -98,6 +102,11 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   registerDataActionIpc(ipcMain, data, { onUnexpected: (context, e) => faults.report(context, e) });
+  registerRequestSheetIpc(ipcMain, {
+    openFile: electronDialogs(liveMainWindow).openFile,
+    readFile: (file) => readFile(file),
+    read: (input) => dispatch(service.handlers, 'readRequestSheet', input),
+  }, { onUnexpected: (context, e) => faults.report(context, e) });
 }
 
 /** The PDF writer's fonts: shipped as resources when packaged, assets/fonts of the project otherwise. */

@@ -1,12 +1,12 @@
 /**
  * The sandboxed preload: one bundled file that may require only 'electron'. It exposes one function
- * per API method, the menu-command listener, the two PDF functions and the data-action request; never
- * ipcRenderer itself.
+ * per API method, the menu-command listener, the two PDF functions, the data-action request and the
+ * request-sheet open dialog; never ipcRenderer itself.
  */
 import { contextBridge, ipcRenderer } from 'electron';
 import type { Api } from '../core/api';
 import {
-  DATA_ACTION_CHANNEL, MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, apiChannel, apiMethodNames, menuCommands,
+  DATA_ACTION_CHANNEL, MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, REQUEST_SHEET_CHANNEL, apiChannel, apiMethodNames, menuCommands,
 } from '../core/api/method-names';
 import type { CoilwrightBridge, DataActionName, MenuCommand, PdfFile } from '../core/api/method-names';
 
@@ -34,6 +34,7 @@ const bridge: CoilwrightBridge = {
   previewPdf: (file: PdfFile) => ipcRenderer.invoke(PDF_PREVIEW_CHANNEL, file),
   savePdf: (file: PdfFile) => ipcRenderer.invoke(PDF_SAVE_CHANNEL, file),
   runDataAction: (name: DataActionName) => ipcRenderer.invoke(DATA_ACTION_CHANNEL, name),
+  openRequestSheet: () => ipcRenderer.invoke(REQUEST_SHEET_CHANNEL),
 };
 
 contextBridge.exposeInMainWorld('coilwright', bridge);

@@ -12,7 +12,7 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const at = (...parts) => path.join(root, ...parts);
 
 /** Runtime packages main loads from node_modules (native code, or data files they read themselves). */
-const mainExternals = ['electron', 'better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit'];
+const mainExternals = ['electron', 'better-sqlite3', 'pg', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit'];
 
 /** In the Electron main bundle, db/ gets better-sqlite3 through the shim that picks the Electron build. */
 const electronSqlite = {

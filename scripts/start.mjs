@@ -1,7 +1,8 @@
 // npm start: the desktop app when Electron's runtime is on this machine (build, then `electron .`, as
 // always). Where it is not (its download failed or is blocked), one plain line says so and the same
 // app is served on 127.0.0.1 by the web transport and opened in the default browser.
-//   node scripts/start.mjs [--db FILE] [--port N]   (the options apply to the browser start only)
+//   node scripts/start.mjs [--db FILE | --store LOCATION] [--port N]   (the options apply to the browser start only;
+//   COILWRIGHT_STORE names the store for both starts)
 // BROWSER=none prints the address instead of opening it; BROWSER=/path/to/program opens it with that.
 import { spawn, spawnSync } from 'node:child_process';
 import { homedir } from 'node:os';
@@ -53,7 +54,8 @@ async function startInBrowser(reason) {
   await buildRenderer({ quiet: true });
   await buildWebServer();
   const args = process.argv.slice(2);
-  const withDb = args.includes('--db') ? args : ['--db', desktopStoreFile(), ...args];
+  const named = args.includes('--db') || args.includes('--store') || Boolean(process.env.COILWRIGHT_STORE?.trim());
+  const withDb = named ? args : ['--db', desktopStoreFile(), ...args];
   const server = spawn(process.execPath, [path.join(root, 'dist', 'web', 'web-server.cjs'), ...withDb], {
     cwd: root, stdio: ['ignore', 'pipe', 'inherit'],
   });

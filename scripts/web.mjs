@@ -1,4 +1,4 @@
-// npm run web [-- --port N] [-- --db FILE]: builds the renderer and the web transport, then serves the
+// npm run web [-- --port N] [-- --db FILE | --store postgres://…]: builds the renderer and the web transport, then serves the
 // UI on 127.0.0.1 and prints the address to open. The store defaults to ~/.coilwright/coilwright.db.
 import { spawn } from 'node:child_process';
 import path from 'node:path';

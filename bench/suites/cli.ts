@@ -21,6 +21,41 @@ function timed(args: string[]): number {
   return ms;
 }
 
+/** 1 000 DEMO specs (invented parts), varied in size, grade and units, one JSON line each; every tenth is bad. */
+function batchOfSpecs(count: number): string {
+  const grades = ['en10270-1-dh', 'astm-a228', 'en10270-1-sm', 'astm-a313-302'];
+  const lines: string[] = [];
+  for (let i = 0; i < count; i++) {
+    const d = 0.6 + (i % 19) * 0.2;
+    const inch = i % 3 === 0;
+    const f = inch ? 1 / 25.4 : 1;
+    lines.push(JSON.stringify({
+      kind: 'compression', units: inch ? 'inch' : 'metric', material: grades[i % grades.length],
+      wireDiameter: d * f, outerDiameter: d * (6 + (i % 6)) * f, totalCoils: 6 + (i % 9), ends: 'closed-ground',
+      freeLength: (i % 10 === 9 ? -1 : d * 30) * f, loads: [{ length: d * 24 * f }],
+    }));
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+const BATCH = 1000;
+
+/** `calc --batch` over 1 000 specs in one process, through the launcher as a user runs it (median of 3). */
+function batchRows(dir: string): BenchRow[] {
+  const file = join(dir, 'batch.jsonl');
+  writeFileSync(file, batchOfSpecs(BATCH));
+  const times: number[] = [];
+  for (let i = 0; i < 3; i++) {
+    const t0 = performance.now();
+    const r = spawnSync(process.execPath, ['scripts/cli.mjs', 'calc', '--batch', file], { cwd: process.cwd(), encoding: 'utf8', maxBuffer: 1 << 28 });
+    times.push(performance.now() - t0);
+    const lines = r.stdout.trim().split('\n');
+    if (lines.length !== BATCH) throw new Error(`calc --batch wrote ${lines.length} lines for ${BATCH} specs: ${r.stderr}`);
+  }
+  const ms = median(times);
+  return [row(`calc --batch of ${BATCH} specs, one process (JSON lines; median of 3)`, ms, 'ms', '< 2 000 ms', ms < 2000)];
+}
+
 const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
 const row = (name: string, value: number, unit: string, target?: string, pass?: boolean): BenchRow =>
@@ -49,6 +84,7 @@ export const cliSuite: BenchSuite = {
       }
       const ratio = median(calcTimes) / median(idleTimes);
       return [
+        ...batchRows(dir),
         row('npm run -s cli -- calc FILE (median of 9)', median(calcTimes), 'ms'),
         row('npm -s pkg get name (median of 9, same run)', median(idleTimes), 'ms'),
         row('calc call against npm doing nothing', ratio, '×', `≤ ${TARGET_RATIO}×`, ratio <= TARGET_RATIO),

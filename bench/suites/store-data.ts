@@ -1,6 +1,6 @@
 import type { JobStatus } from '../../core/api/store';
 import { jobStatuses } from '../../core/api/store';
-import type { Store } from '../../db';
+import type { SqliteStore as Store } from '../../db';
 import { checkNewJob } from '../../db/jobs/input';
 import { writeNewJob } from '../../db/jobs/write';
 

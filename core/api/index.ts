@@ -4,6 +4,7 @@ import { shopMethods } from './shop';
 import { documentMethods } from './documents';
 import { firstOffMethods } from './first-off';
 import { designMethods } from './design';
+import { requestSheetMethods } from './request-sheet';
 import type { MethodInput, MethodOutput, ApiResult } from './contract';
 
 export * from './contract';
@@ -11,6 +12,7 @@ export * from './store';
 export type { PrintedPdf } from './documents';
 export type { JobCostReview } from './shop';
 export * from './first-off';
+export * from './request-sheet';
 
 /** The one contract: every method the app, the web transport and the CLI reach, with its input schema. */
 export const contract = {
@@ -20,6 +22,7 @@ export const contract = {
   ...documentMethods,
   ...firstOffMethods,
   ...designMethods,
+  ...requestSheetMethods,
 };
 
 export type Contract = typeof contract;

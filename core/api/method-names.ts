@@ -4,16 +4,18 @@
  */
 import type { Api, MethodName } from './index';
 import type { ApiResult } from './contract';
+import type { RequestSheet } from '../request-sheet/preview';
 
 /** Every contract method, in the contract's order (a test holds this equal to Object.keys(contract)). */
 export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision', 'keepWorkingRevision',
   'setJobStatus', 'copyJob', 'archiveJob', 'deleteJob', 'undoDeleteJob', 'listCustomers', 'saveCustomer', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'storeInfo', 'signIn', 'openServerStore',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
   'designSprings', 'adoptDesign', 'jobRequirement',
+  'readRequestSheet', 'previewRequestSheet', 'importRequestSheet', 'listEnquiries', 'enquiryJobs',
 ] as const;
 
 type Listed = (typeof apiMethodNames)[number];
@@ -28,6 +30,8 @@ export const MENU_COMMAND_CHANNEL = 'menu-command';
 export const PDF_PREVIEW_CHANNEL = 'pdf:preview';
 export const PDF_SAVE_CHANNEL = 'pdf:save';
 export const DATA_ACTION_CHANNEL = 'data:action';
+/** The desktop shell's open dialog for a request sheet: main reads the file chosen and answers with its cells. */
+export const REQUEST_SHEET_CHANNEL = 'file:request-sheet';
 
 /**
  * What the window may ask the shell to do with files, by name only: main shows the file dialog, asks
@@ -58,4 +62,6 @@ export interface CoilwrightBridge {
   savePdf(file: PdfFile): Promise<ApiResult<{ saved: string | null }>>;
   /** Runs a File-menu data action in main (its dialogs and confirmation included); resolves when it is over. */
   runDataAction(name: DataActionName): Promise<ApiResult<{ finished: DataActionName }>>;
+  /** Shows main's open dialog for a request sheet and reads the file chosen; null when the user cancelled. */
+  openRequestSheet(): Promise<ApiResult<RequestSheet | null>>;
 }

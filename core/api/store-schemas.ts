@@ -229,3 +229,15 @@ export const saveSettingsSchema = z.object({ settings: z.record(z.string(), z.un
 
 /** Re-index the search numbers of jobs computed by another engine version; `all` recomputes every job. */
 export const reindexJobsSchema = z.object({ all: z.boolean().default(false) }).strict();
+
+/** The name an estimator signs in with: what revisions, quotes and records saved from this window say they are by. */
+export const signInSchema = z.object({ name: z.string().trim().min(1, 'type the name you sign your work with').max(80) }).strict();
+
+/**
+ * A PostgreSQL job store to work in, by connection string. Only postgres:// strings: files are opened by the
+ * host (command line, desktop dialogs), never named through the contract. The string is used to connect and
+ * then forgotten; it is never written to the store, a log or an export.
+ */
+export const openServerStoreSchema = z.object({
+  connection: z.string().trim().max(2000).regex(/^postgres(ql)?:\/\//i, 'a connection string starts with postgres:// (for example postgres://user@host:5432/shop)'),
+}).strict();

@@ -127,6 +127,8 @@ export interface JobRevision {
   savedAt: string;
   /** "created", "saved", "status", "restored revision 3", "imported". */
   reason: string;
+  /** Who saved it: the signed-in name or the database user; '' for revisions saved before this was kept. */
+  madeBy: string;
   fields: RevisionFields;
   /** Null when this revision's stored spec no longer reads; `problem` then says why. */
   spec: Spec | null;
@@ -200,6 +202,8 @@ export interface Quote extends QuoteSummary {
   document: unknown;
   /** The estimator's decision on open problems at issue (reason and each problem); null when there were none. */
   decision: IssueDecision | null;
+  /** Who issued it; '' for quotes issued before this was kept. */
+  madeBy: string;
   lines: QuoteLine[];
 }
 
@@ -253,4 +257,17 @@ export interface RestoreResult {
   /** The store as it was before the restore, kept beside it. */
   previousKeptAs: string | null;
   version: number;
+}
+
+/** The store the program works in, as the title bar and the Data screen show it. */
+export interface StoreInfo {
+  backend: 'sqlite' | 'postgres';
+  /** The file, or host:port/database of a server: never a user name or password of the connection. */
+  name: string;
+  /** Who saves are recorded as by: the signed-in name, else the database user or the computer's account. */
+  author: string;
+  /** Why nothing can be saved, or null. */
+  readOnly: string | null;
+  /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
+  changeMark: string;
 }

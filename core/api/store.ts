@@ -41,4 +41,7 @@ export const storeMethods = {
   exportJobs: method<typeof s.exportJobsSchema, t.ExportResult>(s.exportJobsSchema),
   importJobs: method<typeof s.importJobsSchema, t.ImportResult>(s.importJobsSchema),
   reindexJobs: method<typeof s.reindexJobsSchema, t.ReindexResult>(s.reindexJobsSchema),
+  storeInfo: method<typeof none, t.StoreInfo>(none),
+  signIn: method<typeof s.signInSchema, t.StoreInfo>(s.signInSchema),
+  openServerStore: method<typeof s.openServerStoreSchema, t.StoreInfo>(s.openServerStoreSchema),
 };

@@ -6,9 +6,9 @@ import type { SpringKind } from '../../core/spec';
 import { springKinds } from '../../core/spec';
 import type { Quantity } from '../../core/units';
 import { unitSymbol } from '../../core/units';
-import { symbols } from '../../core/vocabulary';
 import type { FirstOffExport } from './first-off';
 import { importedFirstOffSchema } from './first-off';
+import { specColumnHeader, specColumns } from '../../core/spec/columns';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
 export const EXCHANGE_VERSION = 1;
@@ -48,35 +48,24 @@ export const documentHeadSchema = z.object({
   jobs: z.array(z.unknown()),
 }).strict();
 
-/** A shape column's unit in internal units, as its header names it. */
-const internal = (quantity: Quantity): string => unitSymbol(quantity, 'metric');
-
-/** What a shape column holds for kinds that differ from the rest, from each kind's registry entry: "torsion: body". */
-function kindExceptions(describe: (kind: SpringKind) => string | null): string {
-  return springKinds.flatMap((k) => {
-    const text = describe(k);
-    return text === null ? [] : [`; ${k}: ${text}`];
-  }).join('');
-}
-
 /** The rate's quantity most kinds share; kinds with another name theirs in the header. */
 const rateQuantity = (k: SpringKind): Quantity => kindEntryOf(k).shape.rateQuantity;
-const commonRate: Quantity = 'rate';
+const bothSystems = (q: Quantity): string => `${unitSymbol(q, 'metric')} | ${unitSymbol(q, 'inch')}`;
+const rateHeader = `rate (${bothSystems('rate')}${springKinds.filter((k) => rateQuantity(k) !== 'rate').map((k) => `; ${k}: ${bothSystems(rateQuantity(k))}`).join('')})`;
 
 /**
- * Column order of the CSV job list. Shape columns are in internal units, their headers derived from the
- * quantities each kind declares for its compared length and rate (the length is the free length, or the
- * body length of a torsion spring), and are ignored on import, where the spec column is the source.
+ * Columns of the CSV job list, written for people: every job in its own unit system (the units column
+ * says which; each header names the unit in both), numbers at the trade's precision, the grade's name
+ * beside its id, and one column per spec field (spec-columns.ts). The last columns, spec (the spec as
+ * JSON) and judgement, are what an import reads: the per-field columns are rounded for reading and are
+ * ignored on import, so what the export writes imports back unchanged. To change a spec, change it in
+ * the app, or edit the spec column.
  */
-export const CSV_COLUMNS = [
+export const CSV_COLUMNS: readonly string[] = [
   'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'material', 'units',
-  `d_${internal('length')}`, `D_${internal('length')}`, `OD_${internal('length')}`,
-  `length_${internal('length')} (${symbols.freeLength}${kindExceptions((k) => kindEntryOf(k).shape.lengthNote)})`,
-  'activeCoils',
-  `rate (${internal(commonRate)}${kindExceptions((k) => (rateQuantity(k) === commonRate ? null : internal(rateQuantity(k))))})`,
-  'spec', 'judgement',
-] as const;
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'units', 'material', 'materialName',
+  ...specColumns.map((c) => `spec.${specColumnHeader(c)}`), rateHeader, 'spec', 'judgement',
+];
 
 export const CSV_IMPORTED = new Set<string>([
   'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',

@@ -19,9 +19,10 @@ export const importedFirstOffSchema = z.array(z.unknown()).max(1000).optional();
 /** The stored columns of a record (the export reads the table itself, without the job's number). */
 type Row = Omit<FirstOffRow, 'id' | 'job_number' | 'job_revision'>;
 
-/** Every job's first-off records for export, by job id, oldest measurement first. */
-export function firstOffByJob(store: Store): Map<number, FirstOffExport[]> {
-  const rows = store.sql('SELECT * FROM first_off_records ORDER BY job_id, measured_on, id').all() as Row[];
+/** The first-off records of the given jobs for export, by job id, oldest measurement first. */
+export function firstOffByJob(store: Store, jobIds: readonly number[]): Map<number, FirstOffExport[]> {
+  const rows = store.sql(`SELECT * FROM first_off_records WHERE job_id IN (SELECT value FROM json_each(?))
+                          ORDER BY job_id, measured_on, id`).all(JSON.stringify(jobIds)) as Row[];
   const byJob = new Map<number, FirstOffExport[]>();
   for (const r of rows) {
     const list = byJob.get(r.job_id) ?? [];

@@ -1,166 +1,155 @@
-import { readFileSync } from 'node:fs';
+import { closeSync, createReadStream, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import type { ImportResult } from '../../core/api/store';
 import { importFileSchema } from '../../core/api/store';
-import type { FieldError, Result } from '../../core/result';
-import { fail, fieldError, formatPath, ok } from '../../core/result';
-import { failure, invalid, success } from '../errors';
+import type { Result } from '../../core/result';
+import { fail, fieldError, ok } from '../../core/result';
+import { parseWith } from '../../core/validation';
+import { StoreError, invalid, success } from '../errors';
 import type { StoreResult } from '../errors';
-import type { CheckedJob } from '../jobs/input';
-import { checkSpec } from '../jobs/input';
-import { attempt, writeNewJob } from '../jobs/write';
-import type { Store } from '../store';
-import { inTransaction } from '../store';
-import { parseWith, zodErrors } from '../../core/validation';
-import { CsvSyntaxError, parseCsv, unguarded } from './csv';
-import { CSV_IMPORTED, documentHeadSchema, importRecordSchema } from './document';
-import type { CheckedFirstOff } from './first-off';
-import { checkImportedFirstOff, writeImportedFirstOff } from './first-off';
+import type { LongRun } from '../long-run';
+import { cancelled } from '../long-run';
+import { openStore } from '../open';
+import type { SqliteStore, Store } from '../store';
+import { inTransaction, isSqliteStore, readOnlyError, writeFailure } from '../store';
+import { CsvSyntaxError, csvRecords, parseCsv } from './csv';
+import { WholeFileError, csvTaker, detectFormat, headerError, jsonTaker } from './import-formats';
+import { ImportRun } from './import-run';
 
-interface ImportItem {
-  /** "jobs[3]" for JSON, "lines[7]" (line 7 of the file) for CSV. */
-  at: PropertyKey[];
-  raw: unknown;
-}
+const rollback = (store: SqliteStore) => {
+  if (store.db.inTransaction) store.db.exec('ROLLBACK');
+};
 
-interface CheckedItem extends CheckedJob {
-  at: string;
-  number?: string | undefined;
-  createdAt?: string | undefined;
-  updatedAt?: string | undefined;
-  firstOff: CheckedFirstOff[];
-}
-
-function checkItem(item: ImportItem): Result<CheckedItem> {
-  const parsed = importRecordSchema.safeParse(item.raw);
-  const spec = typeof item.raw === 'object' && item.raw !== null ? (item.raw as { spec?: unknown }).spec : undefined;
-  const specCheck = checkSpec(spec, [...item.at, 'spec']);
-  if (!parsed.success || !specCheck.ok) {
-    return fail([...(parsed.success ? [] : zodErrors(parsed.error, item.at)), ...(specCheck.ok ? [] : specCheck.errors)]);
-  }
-  const { number, createdAt, updatedAt, firstOff: rawFirstOff, ...fields } = parsed.data;
-  const firstOff = checkImportedFirstOff(rawFirstOff, specCheck.value.spec, item.at);
-  if (!firstOff.ok) return firstOff;
-  return ok({ at: formatPath(item.at), fields, ...specCheck.value, number, createdAt, updatedAt, firstOff: firstOff.value });
-}
-
-function numberErrors(store: Store, items: CheckedItem[]): FieldError[] {
-  const errors: FieldError[] = [];
-  const seen = new Map<string, string>();
-  for (const item of items) {
-    if (item.number === undefined) continue;
-    const path = `${item.at}.number`;
-    const earlier = seen.get(item.number);
-    if (earlier) errors.push(fieldError('duplicate-number', path, `job number ${item.number} is also used by ${earlier}`));
-    else if (store.sql('SELECT 1 FROM jobs WHERE number = ?').get(item.number) !== undefined) {
-      errors.push(fieldError('duplicate-number', path, `job number ${item.number} is already in this store (import with renumber to give new numbers)`));
-    }
-    seen.set(item.number, item.at);
-  }
-  return errors;
-}
-
-function jsonItems(text: string): Result<ImportItem[]> {
-  let doc: unknown;
+function fileText(file: string): Result<string> {
   try {
-    doc = JSON.parse(text);
+    return ok(readFileSync(file, 'utf8'));
   } catch (e) {
-    return fail([fieldError('invalid-json', '', `not valid JSON (${(e as Error).message})`)]);
-  }
-  const head = parseWith(documentHeadSchema, doc);
-  if (!head.ok) return head;
-  return ok(head.value.jobs.map((raw, i) => ({ at: ['jobs', i], raw })));
-}
-
-function csvValue(column: string, text: string, at: PropertyKey[]): Result<unknown> {
-  if (column === 'spec' || column === 'judgement') {
-    if (column === 'judgement' && text === '') return ok(undefined);
-    try {
-      return ok(JSON.parse(text));
-    } catch (e) {
-      return fail([fieldError('invalid-json', formatPath([...at, column]), `the ${column} column is not valid JSON (${(e as Error).message})`)]);
-    }
-  }
-  if (column === 'customer') return ok(text === '' ? null : { name: text });
-  if (['dueDate', 'orderQuantity', 'leadTimeDays'].includes(column) && text === '') return ok(null);
-  if (['orderQuantity', 'leadTimeDays'].includes(column) && /^-?\d+(\.\d+)?$/.test(text)) return ok(Number(text));
-  return ok(text);
-}
-
-/** The e-mail and phone columns belong to the customer object; without a customer they say nothing. */
-function withCustomerContact(raw: Record<string, unknown>): Record<string, unknown> {
-  const { customerEmail, customerPhone, ...rest } = raw;
-  if (rest.customer === null || rest.customer === undefined) return rest;
-  const contact = {
-    ...(customerEmail !== undefined && customerEmail !== '' ? { email: customerEmail } : {}),
-    ...(customerPhone !== undefined && customerPhone !== '' ? { phone: customerPhone } : {}),
-  };
-  return { ...rest, customer: { ...(rest.customer as object), ...contact } };
-}
-
-function csvItems(text: string): Result<ImportItem[]> {
-  let records;
-  try {
-    records = parseCsv(text);
-  } catch (e) {
-    if (e instanceof CsvSyntaxError) return fail([fieldError('invalid-csv', `lines[${e.line}]`, e.message)]);
-    throw e;
-  }
-  const [header, ...rows] = records;
-  if (!header || !header.fields.includes('spec')) return fail([fieldError('invalid-csv', 'lines[1]', 'the first line must name the columns, including spec')]);
-  const errors: FieldError[] = [];
-  const items = rows.map((row) => {
-    const at: PropertyKey[] = ['lines', row.line];
-    const raw: Record<string, unknown> = {};
-    header.fields.forEach((column, i) => {
-      const blankOptional = (row.fields[i] ?? '') === '' && ['number', 'createdAt', 'updatedAt'].includes(column);
-      if (!CSV_IMPORTED.has(column) || blankOptional) return;
-      const value = csvValue(column, unguarded(row.fields[i] ?? ''), at);
-      if (value.ok) raw[column] = value.value;
-      else errors.push(...value.errors);
-    });
-    return { at, raw: withCustomerContact(raw) };
-  });
-  return errors.length > 0 ? fail(errors) : ok(items);
-}
-
-function importText(raw: { file?: string | undefined; text?: string | undefined }): Result<string> {
-  if (raw.text !== undefined) return ok(raw.text);
-  try {
-    return ok(readFileSync(raw.file!, 'utf8'));
-  } catch (e) {
-    return fail([fieldError('unreadable-file', 'file', `${raw.file}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`)]);
+    return fail([fieldError('unreadable-file', 'file', `${file}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`)]);
   }
 }
 
-function detectFormat(text: string, file: string | undefined, given: 'json' | 'csv' | undefined): 'json' | 'csv' {
-  if (given) return given;
-  if (file?.toLowerCase().endsWith('.csv')) return 'csv';
-  return text.trimStart().startsWith('{') ? 'json' : 'csv';
-}
-
-/** Checks every record (schema, parseSpec, numbers), then writes all of them in one transaction, or none. */
+/** Import from text held in memory (the screen's upload): checked and written in one transaction, or none. */
 export function importJobs(store: Store, input: unknown): StoreResult<ImportResult> {
   const parsed = parseWith(importFileSchema, input);
   if (!parsed.ok) return invalid(parsed.errors);
-  const text = importText(parsed.value);
+  const text = parsed.value.text !== undefined ? ok(parsed.value.text) : fileText(parsed.value.file!);
   if (!text.ok) return invalid(text.errors);
-  const format = detectFormat(text.value, parsed.value.file, parsed.value.format);
-  const items = format === 'json' ? jsonItems(text.value) : csvItems(text.value);
-  if (!items.ok) return invalid(items.errors);
-  const checks = items.value.map(checkItem);
-  const errors = checks.flatMap((c) => (c.ok ? [] : c.errors));
-  const checked = checks.flatMap((c) => (c.ok ? [c.value] : []));
-  if (!parsed.value.renumber) errors.push(...numberErrors(store, checked));
-  if (errors.length > 0) {
-    const records = new Set(errors.map((e) => e.path.replace(/^((jobs|lines)\[\d+\]).*$/, '$1'))).size;
-    return failure(errors[0]!.code, `${records} record(s) are not valid, nothing was imported: ${errors[0]!.path}: ${errors[0]!.message}`, errors[0]!.path, errors);
+  const format = detectFormat(text.value.slice(0, 64), parsed.value.file, parsed.value.format);
+  const run = new ImportRun(store, parsed.value.renumber);
+  const Refused = Symbol('refused');
+  try {
+    inTransaction(store, () => {
+      if (format === 'json') {
+        const json = jsonTaker(run);
+        json.feed(text.value.replace(/^\uFEFF/, ''));
+        const headErrors = json.end();
+        if (headErrors.length > 0) throw new WholeFileError(headErrors);
+      } else {
+        const take = csvTaker(run);
+        const records = parseCsv(text.value);
+        const wrong = records.length === 0 ? headerError() : records.map(take).find((e) => e !== undefined);
+        if (wrong) throw new WholeFileError([wrong]);
+      }
+      if (run.failed) throw Refused;
+    });
+  } catch (e) {
+    return answerOf(e, run, Refused);
   }
-  return attempt(() => success({ imported: inTransaction(store, () => checked.map((item) => {
-    const id = writeNewJob(store, item, {
-      number: parsed.value.renumber ? undefined : item.number, reason: 'imported',
-      createdAt: item.createdAt, updatedAt: item.updatedAt,
-    }, item.at);
-    writeImportedFirstOff(store, id, item.firstOff);
-    return { id, number: (store.sql('SELECT number FROM jobs WHERE id = ?').get(id) as { number: string }).number };
-  })) }));
+  return success({ imported: run.imported });
+}
+
+function answerOf(e: unknown, run: ImportRun, refused?: symbol): StoreResult<never> {
+  if (e === refused) return run.refusal();
+  if (e instanceof WholeFileError) return invalid(e.errors);
+  if (e instanceof CsvSyntaxError) return invalid([fieldError('invalid-csv', `lines[${e.line}]`, e.message)]);
+  if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
+  throw e;
+}
+
+/** Text of the file a piece at a time, counting the bytes read for progress. */
+async function* pieces(file: string, onBytes: (bytes: number) => void): AsyncGenerator<string> {
+  let bytes = 0;
+  const stream = createReadStream(file, { highWaterMark: 256 * 1024 });
+  stream.on('data', (chunk) => { bytes += chunk.length; });
+  stream.setEncoding('utf8');
+  for await (const piece of stream as AsyncIterable<string>) {
+    yield piece;
+    onBytes(bytes);
+  }
+}
+
+async function feedFile(file: string, format: 'json' | 'csv', run: ImportRun, long: LongRun, total: number): Promise<void> {
+  const check = (bytes: number) => {
+    if (long.signal?.aborted) throw cancelled('import');
+    long.onProgress?.(bytes, total);
+  };
+  if (format === 'json') {
+    const json = jsonTaker(run);
+    for await (const piece of pieces(file, check)) json.feed(piece);
+    const headErrors = json.end();
+    if (headErrors.length > 0) throw new WholeFileError(headErrors);
+    return;
+  }
+  const take = csvTaker(run);
+  let records = 0;
+  for await (const record of csvRecords(pieces(file, check))) {
+    records++;
+    const wrong = take(record);
+    if (wrong) throw new WholeFileError([wrong]);
+  }
+  if (records === 0) throw new WholeFileError([headerError()]);
+}
+
+/** The first bytes of the file, to tell JSON from CSV when neither the caller nor the name says. */
+function readStart(file: string): string {
+  const fd = openSync(file, 'r');
+  try {
+    const buffer = Buffer.alloc(64);
+    return buffer.toString('utf8', 0, readSync(fd, buffer, 0, 64, 0));
+  } finally {
+    closeSync(fd);
+  }
+}
+
+/**
+ * Import from a file, streamed: the file is read in pieces, each record checked and written as it comes,
+ * all inside one transaction on a connection of its own, committed only when every record was good. So
+ * memory stays flat at any file size, a cancel or a bad record rolls everything back, and a process killed
+ * half-way leaves the store as it was (SQLite drops the uncommitted transaction). Other saves meanwhile
+ * wait for the import, up to the store's busy timeout.
+ */
+export async function importJobsFromFile(store: Store, input: unknown, long: LongRun = {}): Promise<StoreResult<ImportResult>> {
+  const parsed = parseWith(importFileSchema, input);
+  if (!parsed.ok) return invalid(parsed.errors);
+  const { file, renumber } = parsed.value;
+  // A store without a file of its own (in memory) cannot be opened twice: it imports on its own connection.
+  // A server store imports in one transaction of its own connection, the server keeping others' reads consistent.
+  if (file === undefined || !isSqliteStore(store) || store.file === ':memory:' || store.file === '') return importJobs(store, parsed.value);
+  if (store.readOnly) return { ok: false, error: readOnlyError(store, store.readOnly).toApiError() };
+  let total: number;
+  let start: string;
+  try {
+    total = statSync(file).size;
+    start = readStart(file);
+  } catch (e) {
+    return invalid([fieldError('unreadable-file', 'file', `${file}: cannot be read (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`)]);
+  }
+  const writer = openStore(store.file, { check: 'none', clock: () => store.now() });
+  writer.author = store.author;
+  const run = new ImportRun(writer, renumber);
+  try {
+    writer.db.exec('BEGIN IMMEDIATE');
+    await feedFile(file, detectFormat(start, file, parsed.value.format), run, long, total);
+    if (run.failed) {
+      rollback(writer);
+      return run.refusal();
+    }
+    writer.db.exec('COMMIT');
+    long.onProgress?.(total, total);
+    return success({ imported: run.imported });
+  } catch (e) {
+    rollback(writer);
+    return answerOf(e instanceof StoreError || e instanceof WholeFileError || e instanceof CsvSyntaxError ? e : writeFailure(writer, e), run);
+  } finally {
+    writer.close();
+  }
 }

@@ -46,9 +46,9 @@ function toRecord(row: FirstOffRow): FirstOffRecord {
 /** Writes a checked record. Call inside a transaction. */
 export function insertFirstOff(store: Store, jobId: number, jobRevision: number, f: FirstOffFields, recordedAt: string): number {
   const result = store.sql(`INSERT INTO first_off_records (job_id, job_revision, units, coiled_free_length, free_length_after_set,
-      outer_diameter, forces, measured_on, measured_by, notes, recorded_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
+      outer_diameter, forces, measured_on, measured_by, notes, recorded_at, made_by) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`)
     .run(jobId, jobRevision, f.units, f.coiledFreeLength, f.freeLengthAfterSet, f.outerDiameter, JSON.stringify(f.forces),
-      f.measuredOn, f.measuredBy, f.notes, recordedAt);
+      f.measuredOn, f.measuredBy, f.notes, recordedAt, store.author);
   return Number(result.lastInsertRowid);
 }
 

@@ -18,6 +18,7 @@ const OWN_ROWS = [
   { table: 'job_cost_acceptance', where: 'job_id = ?' },
   { table: 'job_copies', where: 'copy_id = ? OR source_id = ?' },
   { table: 'job_working_revisions', where: 'job_id = ?' },
+  { table: 'enquiry_jobs', where: 'job_id = ?' },
 ] as const;
 type OwnTable = (typeof OWN_ROWS)[number]['table'];
 
@@ -95,6 +96,11 @@ export function undoDeleteJob(store: Store, id: number): StoreResult<Job> {
         const { id: _rowId, ...fields } = decode(r);
         const moved = Object.fromEntries(Object.entries(fields).map(([k, v]) => [k, k.endsWith('job_id') || k.endsWith('_id') ? remap(v) : v]));
         if (table === 'job_copies' && !linksExisting(store, moved)) continue;
+        // An enquiry link keeps its enquiry's id (only the job's may move), and comes back only while the enquiry is there.
+        if (table === 'enquiry_jobs') {
+          moved.enquiry_id = fields.enquiry_id;
+          if (!store.sql('SELECT 1 FROM enquiries WHERE id = ?').get(fields.enquiry_id)) continue;
+        }
         insertRow(store, table, moved);
       }
     }

@@ -18,10 +18,21 @@ export function getJob(store: Store, ref: number | { id: number } | { number: st
     ref = found.id;
   }
   const id = typeof ref === 'number' ? ref : ref.id;
+  const read = jobRead(store, id);
+  return read ? jobOfRead(read) : failure('not-found', `no job with id ${id}`, 'id');
+}
+
+/** A job's row and its open working session, read together (a save reads them inside its transaction). */
+export interface JobRead { row: JobRow; open: ReturnType<typeof workingRow>; lineage: Job['lineage'] }
+
+export function jobRead(store: Store, id: number): JobRead | undefined {
   const row = jobRow(store, id);
-  if (!row) return failure('not-found', `no job with id ${id}`, 'id');
-  const job = toJob(row, lineageOf(store, id));
-  const open = job.ok ? workingRow(store, id) : undefined;
+  return row ? { row, open: workingRow(store, id), lineage: lineageOf(store, id) } : undefined;
+}
+
+/** The Job of a read: the spec parsed and checked, the working session and the copy links attached. */
+export function jobOfRead({ row, open, lineage }: JobRead): StoreResult<Job> {
+  const job = toJob(row, lineage);
   if (!job.ok || !open) return job;
   return success({ ...job.value, working: { baseRevision: open.base_revision, openedAt: open.opened_at, savedAt: open.saved_at, saves: open.saves } });
 }
@@ -37,12 +48,12 @@ export function lineageOf(store: Store, id: number): Job['lineage'] {
   return { copiedFrom: from ?? null, copiedTo: store.sql(LINK_SQL.to).all(id) as JobLink[] };
 }
 
-interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string }
+interface RevisionRow { job_id: number; revision: number; saved_at: string; reason: string; fields: string; spec: string; number: string; made_by: string }
 
 function toRevision(row: RevisionRow): JobRevision {
   const stored = readStoredSpec(row.spec, `revision ${row.revision} of job ${row.number}`);
   return {
-    jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason,
+    jobId: row.job_id, revision: row.revision, savedAt: row.saved_at, reason: row.reason, madeBy: row.made_by,
     fields: JSON.parse(row.fields) as RevisionFields,
     ...(stored.ok ? { spec: stored.spec } : { spec: null, problem: stored.problem }),
   };

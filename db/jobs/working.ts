@@ -23,8 +23,8 @@ export function markWorkingSave(store: Store, jobId: number, baseRevision: numbe
 
 /** Writes one permanent revision; revisions are immutable (triggers), so this only ever inserts. */
 export function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string): void {
-  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec) VALUES (?, ?, ?, ?, ?, ?)')
-    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec));
+  store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec, made_by) VALUES (?, ?, ?, ?, ?, ?, ?)')
+    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec), store.author);
 }
 
 /** Ends the session without a revision of its own: the save under way records its state. */

@@ -10,14 +10,15 @@ import { resolveCustomer } from './customers';
 import type { CheckedJob } from './input';
 import { checkNewJob, checkSpec } from './input';
 import { takeNumber } from './numbering';
-import { getJob, jobRow, revisionRow } from './read';
+import { jobOfRead, jobRead, jobRow, revisionRow } from './read';
+import type { JobRead } from './read';
 import type { JobRow } from './rows';
 import { storedSpecOf } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, rowValues, stateOfRow } from './state';
 import { addRevision, closeWorking, dropWorking, markWorkingSave } from './working';
 import { judgementOf } from './rows';
-
+import { staleSave } from './conflict';
 
 export interface NewJobOptions {
   /** Keep this number (import) instead of taking the next from the sequence. */
@@ -47,6 +48,15 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   return id;
 }
 
+/**
+ * The job as the save left it: its row is read inside the save's transaction (so another desk's later save
+ * cannot answer for this one) and turned into a Job after the commit, keeping the write lock short.
+ */
+function savedJob(read: JobRead | undefined): StoreResult<Job> {
+  if (!read) throw new StoreError('not-found', 'the saved job could not be read back');
+  return jobOfRead(read);
+}
+
 /** Runs a write; a StoreError thrown inside (after its transaction rolled back) becomes a value. */
 export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
   try {
@@ -60,7 +70,7 @@ export function attempt<T>(fn: () => StoreResult<T>): StoreResult<T> {
 export function createJob(store: Store, raw: unknown, options: NewJobOptions = {}): StoreResult<Job> {
   const checked = checkNewJob(raw);
   if (!checked.ok) return invalid(checked.errors);
-  return attempt(() => getJob(store, inTransaction(store, () => writeNewJob(store, checked.value, options))));
+  return attempt(() => savedJob(inTransaction(store, () => jobRead(store, writeNewJob(store, checked.value, options)))));
 }
 
 const SETTERS = ROW_COLUMNS.split(',').map((c) => `${c.trim()} = ?`).join(', ');
@@ -96,22 +106,17 @@ function closeSession(store: Store, id: number, reason: string): boolean {
  * when no session is open. `reason` says what closed it (a deliberate save, leaving the job, an issue).
  */
 export function keepWorkingRevision(store: Store, input: { id: number; reason?: string }): StoreResult<Job> {
-  return attempt(() => {
-    inTransaction(store, () => {
-      if (!jobRow(store, input.id)) throw new StoreError('not-found', `no job with id ${input.id}`, 'id');
-      closeSession(store, input.id, input.reason ?? 'saved');
-    });
-    return getJob(store, input.id);
-  });
+  return attempt(() => savedJob(inTransaction(store, () => {
+    if (!jobRow(store, input.id)) throw new StoreError('not-found', `no job with id ${input.id}`, 'id');
+    closeSession(store, input.id, input.reason ?? 'saved');
+    return jobRead(store, input.id);
+  })));
 }
 
-function loadForSave(store: Store, id: number, expectedRevision: number | undefined) {
+function loadForSave(store: Store, id: number, expectedRevision: number | undefined, patch: Record<string, unknown> = {}) {
   const row = jobRow(store, id);
   if (!row) throw new StoreError('not-found', `no job with id ${id}`, 'id');
-  if (expectedRevision !== undefined && expectedRevision !== row.revision) {
-    throw new StoreError('stale-revision',
-      `job ${row.number} was saved again since revision ${expectedRevision} (now ${row.revision}): reload it before saving`, 'expectedRevision');
-  }
+  if (expectedRevision !== undefined && expectedRevision !== row.revision) throw staleSave(store, row, expectedRevision, patch);
   return row;
 }
 
@@ -166,8 +171,8 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
     return failure('customer-twice', 'give the customer by name or by id, not both', 'customerId');
   }
   return attempt(() => {
-    inTransaction(store, () => {
-      const row = loadForSave(store, id, expectedRevision);
+    return savedJob(inTransaction(store, () => {
+      const row = loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec });
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
       if (checked === undefined) refuseUnreadable(row);
@@ -179,8 +184,8 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       // A correction or a drawing revision is never folded into a working session: it is its own revision.
       if (working === true && why === reason) saveWorking(store, id, row.revision, next);
       else saveState(store, id, row.revision, next, why);
-    });
-    return getJob(store, id);
+      return jobRead(store, id);
+    }));
   });
 }
 
@@ -198,7 +203,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
   const checked = checkSpec(old.spec, ['spec']);
   if (!checked.ok) return invalid(checked.errors);
   return attempt(() => {
-    inTransaction(store, () => {
+    return savedJob(inTransaction(store, () => {
       // What the session typed stays in the history before the older state comes back.
       closeSession(store, input.id, 'saved');
       const row = loadForSave(store, input.id, undefined);
@@ -209,7 +214,7 @@ export function restoreRevision(store: Store, input: { id: number; revision: num
       const exists = fields.customerId !== null && store.sql('SELECT 1 FROM customers WHERE id = ?').get(fields.customerId);
       const next: JobState = { ...fields, judgement: judgementOf(fields.judgement), customerId: exists ? fields.customerId : null, ...checked.value };
       saveState(store, input.id, row.revision, next, `restored revision ${input.revision}`);
-    });
-    return getJob(store, input.id);
+      return jobRead(store, input.id);
+    }));
   });
 }

@@ -11,8 +11,10 @@ import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
 import { updateToVersion0010 } from './0010-quotation-lines';
 import { updateToVersion0011 } from './0011-customer-details';
+import { updateToVersion0012 } from './0012-enquiries';
 import { updateToVersion0013 } from './0013-working-revisions';
 import { updateToVersion0014 } from './0014-job-lineage-and-archive';
+import { updateToVersion0015 } from './0015-who-made-it';
 
 export interface Migration {
   version: number;
@@ -33,8 +35,10 @@ export const migrations: readonly Migration[] = [
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
   { version: 10, name: 'quotation lines', update: updateToVersion0010 },
   { version: 11, name: 'customer details', update: updateToVersion0011 },
+  { version: 12, name: 'enquiries', update: updateToVersion0012 },
   { version: 13, name: 'working revisions', update: updateToVersion0013 },
   { version: 14, name: 'job lineage, archive and spring words', update: updateToVersion0014 },
+  { version: 15, name: 'who made it', update: updateToVersion0015 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -21,3 +21,19 @@ export function matchExpression(text: string): Result<string> {
   }
   return ok(words.map((w) => `"${w.replace(/"/g, '""')}"${[...w].length > 1 && !DECIMAL.test(w) ? '*' : ''}`).join(' '));
 }
+
+/**
+ * The same search as a PostgreSQL tsquery: each word's letter and digit runs in sequence (`<->`, as FTS5
+ * reads a quoted phrase), the last run a prefix unless the word is a single character; the words ANDed.
+ */
+export function tsQueryExpression(text: string): Result<string> {
+  const words = text.split(/\s+/).map((w) => w.replace(/\*+$/, '').toLowerCase()).filter((w) => /[\p{L}\p{N}]/u.test(w));
+  if (words.length === 0) {
+    return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
+  }
+  return ok(words.map((w) => {
+    const runs = w.match(/[\p{L}\p{N}]+/gu) ?? [];
+    const prefix = [...w].length > 1 ? ':*' : '';
+    return runs.map((r, i) => `'${r}'${i === runs.length - 1 ? prefix : ''}`).join(' <-> ');
+  }).join(' & '));
+}

@@ -16,8 +16,8 @@ interface Candidate extends ShapePoint {
   id: number;
 }
 
-const SHAPE_COLUMNS = `id, d AS wireDiameter, dm AS meanDiameter, l0 AS freeLength, na AS activeCoils, rate, material,
-  family AS materialFamily`;
+const SHAPE_COLUMNS = `id, d AS "wireDiameter", dm AS "meanDiameter", l0 AS "freeLength", na AS "activeCoils", rate, material,
+  family AS "materialFamily"`;
 
 /** Each kind's own R*Tree (migration 0009): a search reads only the jobs of the kind asked about. */
 const SHAPE_TABLES: Record<Spec['kind'], string> = {

@@ -6,7 +6,7 @@ import type { JobRow } from '../jobs/rows';
 import { SUMMARY_COLUMNS, toSummary } from '../jobs/rows';
 import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
-import { matchExpression } from './match';
+import { matchExpression, tsQueryExpression } from './match';
 
 /**
  * How many matches are ranked at most. A short prefix in a large store matches hundreds of thousands of
@@ -24,13 +24,31 @@ export const FIND_SQL = `SELECT ${SUMMARY_COLUMNS}, t.rank AS text_rank
   JOIN jobs j ON j.id = t.rowid LEFT JOIN customers c ON c.id = j.customer_id
   ORDER BY t.rank`;
 
+/** The same two queries on PostgreSQL: job_text's weighted tsvector through its GIN index (migration 0002). */
+const PG_NEWEST_BOUND_SQL = `SELECT id AS rowid FROM job_text WHERE document @@ to_tsquery('simple', ?)
+  ORDER BY id DESC LIMIT 1 OFFSET ${RANKED_MATCHES - 1}`;
+const PG_FIND_SQL = `SELECT ${SUMMARY_COLUMNS}, t.rank AS text_rank
+  FROM (SELECT id, -ts_rank(document, to_tsquery('simple', ?)) AS rank FROM job_text
+        WHERE document @@ to_tsquery('simple', ?) AND id >= ? ORDER BY rank, id DESC LIMIT ?) t
+  JOIN jobs j ON j.id = t.id LEFT JOIN customers c ON c.id = j.customer_id
+  ORDER BY t.rank, j.id DESC`;
+
 /** Text search over job number, customer, part number, drawing number and notes, with prefix matching. */
 export function findJobs(store: Store, raw: unknown): StoreResult<TextHit[]> {
   const parsed = parseWith(findJobsSchema, raw);
   if (!parsed.ok) return invalid(parsed.errors);
+  if (store.dialect === 'postgres') return findOnServer(store, parsed.value.text, parsed.value.limit);
   const match = matchExpression(parsed.value.text);
   if (!match.ok) return invalid(match.errors);
   const bound = store.sql(NEWEST_BOUND_SQL).get(match.value) as { rowid: number } | undefined;
   const rows = store.sql(FIND_SQL).all(match.value, bound?.rowid ?? 0, parsed.value.limit) as (JobRow & { text_rank: number })[];
+  return success(rows.map((row) => ({ job: toSummary(row), rank: row.text_rank })));
+}
+
+function findOnServer(store: Store, text: string, limit: number): StoreResult<TextHit[]> {
+  const query = tsQueryExpression(text);
+  if (!query.ok) return invalid(query.errors);
+  const bound = store.sql(PG_NEWEST_BOUND_SQL).get(query.value) as { rowid: number } | undefined;
+  const rows = store.sql(PG_FIND_SQL).all(query.value, query.value, bound?.rowid ?? 0, limit) as (JobRow & { text_rank: number })[];
   return success(rows.map((row) => ({ job: toSummary(row), rank: row.text_rank })));
 }

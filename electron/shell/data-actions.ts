@@ -1,6 +1,6 @@
 import path from 'node:path';
 import type { ApiResult } from '../../core/api';
-import type { FileActionName } from '../../service/api/files';
+import type { FileActionName, LongRun } from '../../service/api/files';
 import type { BackupResult, ExportResult, ImportResult, RestoreResult } from '../../core/api/store-types';
 import type { MenuCommand } from '../../core/api/method-names';
 
@@ -20,7 +20,9 @@ export interface DataDialogs {
 export interface DataActionDeps {
   dialogs: DataDialogs;
   /** The host's file actions (not the contract): paths come only from the dialogs above. */
-  call(name: FileActionName, input: unknown): Promise<ApiResult<unknown>>;
+  call(name: FileActionName, input: unknown, long?: LongRun): Promise<ApiResult<unknown>>;
+  /** How far a backup, export or import is (0–1), shown on the window's task-bar button; null clears it. */
+  progress?: (fraction: number | null) => void;
   /** Tells the renderer to reload what it shows. */
   notify(command: MenuCommand): void;
   documentsDir: string;
@@ -34,8 +36,25 @@ const failedTitle: Record<FileActionName, string> = {
 };
 const formatOf = (file: string): 'json' | 'csv' => (path.extname(file).toLowerCase() === '.csv' ? 'csv' : 'json');
 
+/** Progress to the task-bar button at most every 1 %, cleared when the action ends. */
+async function callShowingProgress(deps: DataActionDeps, name: FileActionName, input: unknown): Promise<ApiResult<unknown>> {
+  const show = deps.progress;
+  if (!show) return deps.call(name, input);
+  let shown = -1;
+  try {
+    return await deps.call(name, input, {
+      onProgress: (done, total) => {
+        const percent = total > 0 ? Math.floor((100 * done) / total) : 0;
+        if (percent !== shown) show((shown = percent) / 100);
+      },
+    });
+  } finally {
+    show(null);
+  }
+}
+
 async function run<T>(deps: DataActionDeps, name: FileActionName, input: unknown, done: (value: T) => [string, string]): Promise<boolean> {
-  const result = await deps.call(name, input);
+  const result = await callShowingProgress(deps, name, input);
   if (!result.ok) {
     await deps.dialogs.tell('warning', failedTitle[name], result.error.message);
     return false;

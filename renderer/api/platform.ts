@@ -1,3 +1,4 @@
+import type { ApiResult, RequestSheet } from '../../core/api';
 import { shellBridge } from './bridge';
 import { createStoreFiles } from './store-files';
 import type { StoreFiles } from './store-files';
@@ -16,6 +17,11 @@ export interface Platform {
   onMenuCommand(listener: (command: string) => void): () => void;
   readText(file: File): Promise<string>;
   readDataUrl(file: File): Promise<string>;
+  /**
+   * The desktop shell's open dialog for a request sheet (main reads the file and answers with its cells;
+   * null when cancelled). Absent in a browser, where the page uploads the file the user picked.
+   */
+  openRequestSheet?: () => Promise<ApiResult<RequestSheet | null>>;
   /** Whether the desktop shell (rather than a browser tab) carries the UI. */
   desktop: boolean;
   /** Backup and restore of the whole store, without the page naming a file. */
@@ -45,6 +51,7 @@ export function createPlatform(): Platform {
   const bridge = shellBridge();
   return {
     desktop: bridge !== undefined,
+    ...(bridge ? { openRequestSheet: () => bridge.openRequestSheet() } : {}),
     storeFiles: createStoreFiles(bridge, download),
     saveFile({ fileName, mimeType, text, base64 }) {
       const body = base64 !== undefined ? bytesOf(base64) : (text ?? '');

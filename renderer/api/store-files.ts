@@ -1,9 +1,17 @@
-import type { ApiResult, RestoreResult } from '../../core/api';
+import type { ApiResult, ImportResult, RestoreResult } from '../../core/api';
 import type { ShellBridge } from './bridge';
 import { isApiResult, transportFailure } from './result';
 
 /** What the Data screen hears back: done (with what to say), cancelled in a dialog, or failed. */
 export type StoreFileOutcome = ApiResult<{ message: string }>;
+
+/** How far a long file action is (done of total; total 0 while unknown), and its cancel. */
+export interface LongAction {
+  onProgress?: (done: number, total: number) => void;
+  signal?: AbortSignal;
+}
+
+const cancelledOutcome = (what: string): StoreFileOutcome => ({ ok: false, error: { code: 'cancelled', message: `${what} cancelled: nothing was saved.`, path: '' } });
 
 /**
  * Backup and restore without a path ever leaving or entering the page. In the app, main runs its own
@@ -11,8 +19,18 @@ export type StoreFileOutcome = ApiResult<{ message: string }>;
  * file the user picked.
  */
 export interface StoreFiles {
-  /** The desktop shell asks where (and reports) itself; a browser downloads the backup. */
-  backup(): Promise<StoreFileOutcome>;
+  /** The desktop shell asks where (and reports) itself; a browser downloads the backup, reporting how far. */
+  backup(long?: LongAction): Promise<StoreFileOutcome>;
+  /**
+   * A browser downloads the export as the service writes it, a chunk of jobs at a time, reporting jobs
+   * received of the whole; undefined in the app, whose shell exports through its own save dialog.
+   */
+  exportJobs?: (input: { format: 'json' | 'csv'; status?: string | undefined }, long?: LongAction) => Promise<StoreFileOutcome>;
+  /**
+   * A browser uploads the picked file and the service imports it streamed, all or nothing, reporting bytes
+   * imported of the file's size; undefined in the app, which sends the file's text through the API.
+   */
+  importJobs?: (file: File, options: { renumber: boolean }, long?: LongAction) => Promise<ApiResult<ImportResult>>;
   /** `file` is the backup picked in the page (browser only); the app's shell asks with its own dialog. */
   restore(file: File | null): Promise<StoreFileOutcome>;
   /** Whether the shell shows the dialogs (so the page shows no file picker or confirmation of its own). */
@@ -28,17 +46,93 @@ async function resultOf<T>(response: Response): Promise<ApiResult<T>> {
   }
 }
 
+/** The body of a download, piece by piece, each piece counted by `measure` toward the progress. */
+async function received(response: Response, measure: (piece: Uint8Array) => number, total: number, long: LongAction): Promise<Blob> {
+  const pieces: Uint8Array<ArrayBuffer>[] = [];
+  const reader = response.body!.getReader();
+  let done = 0;
+  for (;;) {
+    const { value, done: finished } = await reader.read();
+    if (finished) break;
+    pieces.push(value as Uint8Array<ArrayBuffer>);
+    done += measure(value);
+    long.onProgress?.(Math.min(done, total), total);
+  }
+  return new Blob(pieces, { type: response.headers.get('content-type') ?? 'application/octet-stream' });
+}
+
+/** Line breaks in a piece: the export writes one job a line (JSON) or one line a job (CSV). */
+function lineBreaks(piece: Uint8Array): number {
+  let n = 0;
+  for (let i = 0; i < piece.length; i++) if (piece[i] === 10) n++;
+  return n;
+}
+
+const fileNameOf = (response: Response, fallback: string) => /filename="([^"]+)"/.exec(response.headers.get('content-disposition') ?? '')?.[1] ?? fallback;
+
+/** The JSON lines of an import's answer: progress as they come, then the result. */
+async function importAnswer(response: Response, long: LongAction): Promise<ApiResult<ImportResult>> {
+  const reader = response.body!.pipeThrough(new TextDecoderStream()).getReader();
+  let pending = '';
+  let result: ApiResult<ImportResult> | undefined;
+  for (;;) {
+    const { value, done } = await reader.read();
+    if (done) break;
+    pending += value;
+    const lines = pending.split('\n');
+    pending = lines.pop()!;
+    for (const line of lines) {
+      const message = JSON.parse(line) as { progress?: [number, number] } | ApiResult<ImportResult>;
+      if ('progress' in message && message.progress) long.onProgress?.(message.progress[0], message.progress[1]);
+      else if (isApiResult(message)) result = message as ApiResult<ImportResult>;
+    }
+  }
+  return result ?? transportFailure('The service ended the import without a result.');
+}
+
 function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles {
   return {
     shellDialogs: false,
-    async backup() {
+    async importJobs(file, options, long = {}) {
       try {
-        const response = await fetch('/files/backup', { credentials: 'same-origin' });
+        long.onProgress?.(0, 0);
+        const format = file.name.toLowerCase().endsWith('.csv') ? 'csv' : 'json';
+        const response = await fetch(`/files/import?format=${format}${options.renumber ? '&renumber=1' : ''}`, {
+          method: 'POST', body: file, credentials: 'same-origin', signal: long.signal ?? null,
+          headers: { 'content-type': 'application/octet-stream', 'x-file-name': encodeURIComponent(file.name) },
+        });
         if (!response.ok) return resultOf(response);
-        const name = /filename="([^"]+)"/.exec(response.headers.get('content-disposition') ?? '')?.[1] ?? 'coilwright-backup.db';
-        download(await response.blob(), name);
+        return await importAnswer(response, long);
+      } catch (e) {
+        if (long.signal?.aborted) return { ok: false, error: { code: 'cancelled', message: 'Import cancelled: nothing was imported.', path: '' } };
+        return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
+      }
+    },
+    async backup(long = {}) {
+      try {
+        long.onProgress?.(0, 0);
+        const response = await fetch('/files/backup', { credentials: 'same-origin', signal: long.signal ?? null });
+        if (!response.ok) return resultOf(response);
+        const name = fileNameOf(response, 'coilwright-backup.db');
+        download(await received(response, (piece) => piece.length, Number(response.headers.get('content-length') ?? 0), long), name);
         return { ok: true, value: { message: `Backup downloaded as ${name}.` } };
       } catch (e) {
+        if (long.signal?.aborted) return cancelledOutcome('Backup');
+        return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
+      }
+    },
+    async exportJobs(input, long = {}) {
+      try {
+        long.onProgress?.(0, 0);
+        const query = new URLSearchParams({ format: input.format, ...(input.status ? { status: input.status } : {}) });
+        const response = await fetch(`/files/export?${query.toString()}`, { credentials: 'same-origin', signal: long.signal ?? null });
+        if (!response.ok) return resultOf(response);
+        const total = Number(response.headers.get('x-job-count') ?? 0);
+        const name = fileNameOf(response, `coilwright-jobs.${input.format}`);
+        download(await received(response, lineBreaks, total, long), name);
+        return { ok: true, value: { message: `${total} job${total === 1 ? '' : 's'} exported, downloaded as ${name}.` } };
+      } catch (e) {
+        if (long.signal?.aborted) return cancelledOutcome('Export');
         return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
       }
     },

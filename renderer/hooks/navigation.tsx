@@ -7,7 +7,8 @@ export type Route =
   | { screen: 'settings' }
   | { screen: 'data' }
   | { screen: 'customers' }
-  | { screen: 'design' };
+  | { screen: 'design' }
+  | { screen: 'requests' };
 
 /** Decides whether the screen may be left now; false keeps the estimator where they are. */
 export type LeaveGuard = () => Promise<boolean>;

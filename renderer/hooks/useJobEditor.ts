@@ -187,6 +187,21 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     return save();
   }, [save]);
 
+  /**
+   * Someone else saved the job since it was opened here (stale-revision): keep what was typed here as the
+   * next revision on top of theirs, or take theirs and drop it. Their revision stays in the history either way.
+   */
+  const resolveSavedElsewhere = useCallback(async (keep: 'mine' | 'saved'): Promise<boolean> => {
+    const j = live.current.job;
+    if (!j) return false;
+    const r = await api.getJob({ id: j.id });
+    if (!r.ok) { setSaveError(r.error); return false; }
+    adopt(r.value, keep === 'saved');
+    setSaveError(null);
+    await loadRevisions(j.id);
+    return keep === 'mine' ? save() : true;
+  }, [api, adopt, loadRevisions, save]);
+
   /** Saves the estimator's routing and price overrides of the saved job; the error, or null when saved. */
   const saveJudgement = useCallback(async (judgement: JobJudgementInput): Promise<ApiError | null> => {
     while (inFlight.current) await inFlight.current;
@@ -246,7 +261,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
 
   return {
     job, drafts, edit, version, evaluation, jobCheck, valid, complete, dirty, saving, saveError, serverErrors, loading, loadError,
-    revisions, save, revert, restore, setChange, saveJudgement,
+    revisions, save, revert, restore, setChange, saveJudgement, resolveSavedElsewhere,
     /** Takes the stored job back after a change that leaves its fields alone (archiving). */
     adoptStored: (j: Job) => adopt(j, false),
     undo: () => step(undoTarget), redo: () => step(redoTarget),

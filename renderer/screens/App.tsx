@@ -12,6 +12,7 @@ import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
 import { CustomersScreen } from './customers/CustomersScreen';
 import { DesignScreen } from './design/DesignScreen';
+import { RequestSheetScreen } from './requests/RequestSheetScreen';
 
 export function App() {
   return (
@@ -94,6 +95,7 @@ function Shell() {
           {route.screen === 'data' ? <DataScreen /> : null}
           {route.screen === 'customers' ? <CustomersScreen /> : null}
           {route.screen === 'design' ? <DesignScreen /> : null}
+          {route.screen === 'requests' ? <RequestSheetScreen /> : null}
         </main>
       </div>
       <ShortcutsDialog open={help} onClose={() => setHelp(false)} />

@@ -1,5 +1,6 @@
 import type { Route } from '../hooks/navigation';
 import { useNavigation } from '../hooks/navigation';
+import { storeLabel, useStoreInfo } from '../hooks/store-info';
 
 interface HeaderProps {
   route: Route;
@@ -12,6 +13,7 @@ interface HeaderProps {
 /** The shop bar: wordmark, the four places of the app, and the keyboard list. */
 export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
   const nav = useNavigation();
+  const store = useStoreInfo();
   const current = (screen: Route['screen']) => (route.screen === screen ? 'page' : undefined);
   return (
     <header className="topbar">
@@ -35,10 +37,18 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
         <button type="button" className="topbar__link" aria-current={current('design')} onClick={() => nav.go({ screen: 'design' })}>
           Design from requirement
         </button>
+        <button type="button" className="topbar__link" aria-current={current('requests')} onClick={() => nav.go({ screen: 'requests' })}>
+          Request sheets
+        </button>
         <button type="button" className="topbar__link" aria-current={current('data')} onClick={() => nav.go({ screen: 'data' })}>
           Data &amp; backups <kbd>Alt+4</kbd>
         </button>
       </nav>
+      {store && (
+        <span className="topbar__store" data-testid="store-name" title={`Saves are recorded as by ${store.author || 'no one named'}`}>
+          {storeLabel(store)}
+        </span>
+      )}
       <div className="topbar__tools">
         <button type="button" className="button button--on-dark" onClick={() => nav.newJob()}>New job <kbd>Alt+N</kbd></button>
         <button type="button" className="button button--on-dark" onClick={onShortcuts}>Keys <kbd>F1</kbd></button>

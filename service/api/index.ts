@@ -10,6 +10,7 @@ import { fileActions } from './files';
 import type { FileActions } from './files';
 import { firstOffHandlers } from './first-off';
 import { designHandlers } from './design';
+import { requestSheetHandlers } from './request-sheet';
 
 export { dispatch } from './dispatch';
 export type { Handlers } from './dispatch';
@@ -27,7 +28,7 @@ export interface Service {
 export function createService(store: Store, openOptions: OpenOptions = {}): Service {
   const ctx: StoreContext = { store, openOptions };
   const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers(() => readSettings(ctx.store)), ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
-    ...firstOffHandlers(ctx), ...designHandlers(ctx) };
+    ...firstOffHandlers(ctx), ...designHandlers(ctx), ...requestSheetHandlers(ctx) };
   return {
     handlers,
     files: fileActions(ctx),

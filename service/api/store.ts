@@ -1,9 +1,9 @@
 import type { z } from 'zod';
 import type { ApiResult, Contract, MethodOutput } from '../../core/api';
-import type { storeMethods } from '../../core/api/store';
+import type { StoreInfo, storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
-  addAttachment, createJob, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
+  addAttachment, createJob, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob,
 } from '../../db';
@@ -20,6 +20,12 @@ export type TypedHandlers<K extends keyof Contract> = {
 export interface StoreContext {
   store: Store;
   openOptions?: OpenOptions;
+}
+
+const success = <T>(value: T): ApiResult<T> => ({ ok: true, value });
+
+export function storeInfo(store: Store): StoreInfo {
+  return { backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark() };
 }
 
 export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName> {
@@ -50,5 +56,16 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     exportJobs: (input) => exportJobs(ctx.store, input),
     importJobs: (input) => importJobs(ctx.store, input),
     reindexJobs: (input) => reindexJobs(ctx.store, input),
+    storeInfo: () => success(storeInfo(ctx.store)),
+    signIn: (input) => {
+      ctx.store.author = input.name;
+      return success(storeInfo(ctx.store));
+    },
+    openServerStore: (input) => {
+      const opened = openPgStore(input.connection, { author: ctx.store.author, ...(ctx.openOptions?.clock ? { clock: ctx.openOptions.clock } : {}) });
+      ctx.store.close();
+      ctx.store = opened;
+      return success(storeInfo(opened));
+    },
   };
 }

@@ -1,11 +1,11 @@
 import type { ParsedArgs } from './io';
 import { InputError } from './io';
 
-/** One CLI command: prints its result to stdout, throws InputError for bad input. */
+/** One CLI command: prints its result to stdout, throws InputError for bad input; may answer its own exit code (a batch). */
 export interface Command {
   name: string;
   usage: string;
-  run(args: ParsedArgs, out: (text: string) => void): Promise<void> | void;
+  run(args: ParsedArgs, out: (text: string) => void): Promise<void | number> | void | number;
 }
 
 /** The subcommand named by the first word after the command, or an input error listing the ones there are. */

@@ -6,9 +6,14 @@ import type { ApiResult } from '../../core/api';
 import type { FileActions } from '../api';
 import type { Caller } from './store-session';
 import { positional, raise, withStore } from './store-session';
-import { createDemoShop, restoreDamagedStore } from '../../db';
+import { StoreError, copyStore, createDemoShop, openStoreAt, restoreDamagedStore, writeExport } from '../../db';
+import type { Store } from '../../db';
+import { bytesRead, withProgress } from './progress';
 
-type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller) => Promise<void>;
+type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller, store: Store) => Promise<void>;
+
+const jobsDone = (done: number, total: number) => `${done} of ${total} jobs`;
+const pagesCopied = (done: number, total: number) => `${done} of ${total} pages`;
 
 /** The command line names its files itself: it reaches the host's file actions, which the window cannot. */
 async function must<T>(result: Promise<ApiResult<T>>): Promise<T> {
@@ -17,21 +22,33 @@ async function must<T>(result: Promise<ApiResult<T>>): Promise<T> {
   return r.value;
 }
 
+/** Standard output as the export's sink, waiting whenever the pipe is full. */
+const stdoutSink = {
+  write: (text: string) => new Promise<void>((resolve, reject) => {
+    process.stdout.write(text, (e) => (e ? reject(e) : resolve()));
+  }),
+};
+
 const subcommands: Record<string, Sub> = {
-  backup: async (args, files, out) => out(toJson(await must(files.run('backup', { file: requireOption(args, 'out') })))),
+  backup: async (args, files, out) => out(toJson(await must(withProgress('Backing up', (p) => files.run('backup', { file: requireOption(args, 'out') }, p), pagesCopied)))),
   restore: async (args, files, out) => out(toJson(await must(files.run('restore', { file: requireOption(args, 'from') })))),
-  export: async (args, files, out) => {
+  export: async (args, files, out, _call, store) => {
     const file = args.options.get('out');
-    const result = await must(files.run('exportJobs', {
-      format: args.options.has('csv') ? 'csv' : 'json', force: args.options.has('force'),
-      ...(typeof file === 'string' ? { file } : {}),
-    }));
-    if (result.text !== undefined) out(result.text.replace(/\r?\n$/, ''));
-    else out(toJson({ format: result.format, count: result.count, file: result.file }));
+    const format = args.options.has('csv') ? 'csv' : 'json';
+    if (typeof file !== 'string') {
+      // Straight to standard output, a chunk at a time, so a million jobs never sit in memory.
+      await withProgress('Exporting', (p) => writeExport(store, { format }, stdoutSink, p), jobsDone);
+      return;
+    }
+    const result = await must(withProgress('Exporting', (p) => files.run('exportJobs', { format, force: args.options.has('force'), file }, p), jobsDone));
+    out(toJson({ format: result.format, count: result.count, file: result.file, ...(result.problems ? { problems: result.problems } : {}) }));
   },
-  import: async (args, files, out) => out(toJson(await must(files.run('importJobs', {
-    file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
-  })))),
+  import: async (args, files, out) => {
+    const result = await must(withProgress('Importing', (p) => files.run('importJobs', {
+      file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
+    }, p), bytesRead));
+    out(toJson({ count: result.imported.length, imported: result.imported }));
+  },
   reindex: async (args, _files, out, call) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };
 
@@ -45,18 +62,47 @@ export const dbCommand: Command = {
     '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
     '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
+    '  db copy --from STORE --to STORE every job, revision, quote, attachment, setting and record into an empty store, in one',
+    '                                  transaction, counts and checksums verified; STORE is a file or a postgres:// connection string',
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];
+    if (name === 'copy') return copyBetween(args, out);
     const sub = subcommandOf('db', args, subcommands);
     try {
-      await withStore(args, (call, service) => sub(args, service.files, out, call));
+      await withStore(args, (call, service) => sub(args, service.files, out, call, service.store()));
     } catch (e) {
       if (name !== 'restore' || !(e instanceof InputError) || e.errors[0]?.code !== 'store-corrupt') throw e;
       await restoreOverDamaged(args, out);
     }
   },
 };
+
+function openNamed(args: ParsedArgs, option: 'from' | 'to'): Store {
+  try {
+    return openStoreAt(requireOption(args, option));
+  } catch (e) {
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: `--${option}` }]);
+    throw e;
+  }
+}
+
+/** `db copy`: both stores are named by file or host/database in the output, never by their connection strings. */
+async function copyBetween(args: ParsedArgs, out: (text: string) => void): Promise<void> {
+  const source = openNamed(args, 'from');
+  try {
+    const target = openNamed(args, 'to');
+    try {
+      const result = copyStore(source, target);
+      if (!result.ok) raise(result.error);
+      out(toJson({ from: source.file, to: target.file, tables: result.value.tables }));
+    } finally {
+      target.close();
+    }
+  } finally {
+    source.close();
+  }
+}
 
 /** A damaged store cannot be opened, so its restore puts the backup in its place and keeps it beside. */
 async function restoreOverDamaged(args: ParsedArgs, out: (text: string) => void): Promise<void> {
@@ -69,8 +115,8 @@ export const demoCommand: Command = {
   name: 'demo',
   usage: 'demo --db FILE            create the DEMO shop (settings, customers, about 30 jobs) in a new store',
   async run(args, out) {
-    const result = await withStore(args, async (_call, service) => createDemoShop(service.store()));
+    const { file, result } = await withStore(args, async (_call, service) => ({ file: service.store().file, result: createDemoShop(service.store()) }));
     if (!result.ok) raise(result.error);
-    out(toJson({ file: requireOption(args, 'db'), ...result.value }));
+    out(toJson({ file, ...result.value }));
   },
 };

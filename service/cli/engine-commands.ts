@@ -2,16 +2,27 @@ import { calculate } from '../../core/calculate';
 import { gradeSummaries } from '../../core/materials';
 import type { Command } from './commands';
 import { InputError, readJson, toJson } from './io';
+import { runBatch } from './batch';
+
+/** The report of one spec, or its field errors as an input error. */
+function reportOf(raw: unknown): unknown {
+  const result = calculate(raw);
+  if (!result.ok) throw new InputError(result.errors);
+  return result.value;
+}
 
 export const calcCommand: Command = {
   name: 'calc',
-  usage: 'calc FILE|-            analyse and review a spring spec; prints the report as JSON',
+  usage: [
+    'calc FILE|-            analyse and review a spring spec; prints the report as JSON',
+    '  calc --batch FILE|-    many specs (a JSON list, JSON lines, or a CSV with one spec a line under field-path headers):',
+    '                         one JSON line each, {spec, line?, ok, result} or {spec, line?, ok: false, errors}; exit 2 if any failed',
+  ].join('\n'),
   run(args, out) {
+    if (args.options.has('batch')) return runBatch(args, out, reportOf);
     const file = args.positional[0];
     if (!file) throw new InputError([{ code: 'missing-file', path: 'FILE', message: 'calc needs a spec file, or - for standard input' }]);
-    const result = calculate(readJson(file));
-    if (!result.ok) throw new InputError(result.errors);
-    out(toJson(result.value));
+    out(toJson(reportOf(readJson(file))));
   },
 };
 

@@ -17,6 +17,7 @@ const commands: Record<string, () => Promise<Command>> = {
   print: async () => (await import('./print-commands')).printCommand,
   design: async () => (await import('./design-commands')).designCommand,
   'first-off': async () => (await import('./first-off-commands')).firstOffCommand,
+  'import-request': async () => (await import('./request-commands')).importRequestCommand,
 };
 
 async function usage(): Promise<string> {
@@ -37,8 +38,8 @@ export async function runCli(
     return name === undefined || name === 'help' || name === '--help' ? EXIT.ok : EXIT.badInput;
   }
   try {
-    await (await load()).run(parseArgs(rest), out);
-    return EXIT.ok;
+    const code = await (await load()).run(parseArgs(rest), out);
+    return typeof code === 'number' ? code : EXIT.ok;
   } catch (e) {
     if (e instanceof InputError) {
       err(toJson({ errors: e.errors }));

@@ -8,7 +8,9 @@ import { StoreError, getSettings, openStore } from '../../db';
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
-import { intOption, positional } from './store-session';
+import { intOption, positional, withStore } from './store-session';
+import { runBatch } from './batch';
+import type { SetCalibration } from '../../core/process/set-calibration';
 import { sheetCalibration } from './first-off-commands';
 
 /** A spec file, or a job file (checked as `jobs add` and `print` check it) whose `spec` and `orderQuantity` are used. */
@@ -47,22 +49,45 @@ function orderQuantity(args: ParsedArgs, fromFile: number | undefined, spec: Spe
   return q;
 }
 
+type Calibrate = (spec: Spec) => Promise<SetCalibration>;
+
+async function sheetOf(raw: unknown, args: ParsedArgs, settings: Settings, calibrate: Calibrate): Promise<unknown> {
+  const { spec, orderQuantity: fromFile } = specAndQuantity(raw);
+  const plan = planManufacture(spec, settings, orderQuantity(args, fromFile, spec));
+  return { ...planInSpecUnits(plan), setCalibration: await calibrate(spec) };
+}
+
+const BATCH_NOTE = '--batch FILE|-: many specs or job files, one JSON line each (as calc --batch)';
+
 export const sheetCommand: Command = {
   name: 'sheet',
-  usage: 'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
+  usage: [
+    'sheet FILE [--db DB] [--quantity N]   manufacturing plan: routing, wire, inspection, set calibration by first-off records (JSON)',
+    `  sheet --batch FILE|- [--db DB] [--quantity N]   ${BATCH_NOTE}; the store opens once`,
+  ].join('\n'),
   async run(args, out) {
-    const { spec, orderQuantity: fromFile } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'sheet')));
     const settings = settingsFor(args, false);
-    const plan = planManufacture(spec, settings, orderQuantity(args, fromFile, spec));
-    out(toJson({ ...planInSpecUnits(plan), setCalibration: await sheetCalibration(args, spec, settings.defaults.setRemovalMethod) }));
+    const method = settings.defaults.setRemovalMethod;
+    if (!args.options.has('batch')) {
+      out(toJson(await sheetOf(readJson(positional(args, 0, 'FILE', 'sheet')), args, settings, (spec) => sheetCalibration(args, spec, method))));
+      return undefined;
+    }
+    if (typeof args.options.get('db') !== 'string') return runBatch(args, out, (raw) => sheetOf(raw, args, settings, (spec) => sheetCalibration(args, spec, method)));
+    return withStore(args, (call) => runBatch(args, out, (raw) => sheetOf(raw, args, settings, (spec) => call('setCalibration', { spec }))));
   },
 };
 
 export const priceCommand: Command = {
   name: 'price',
-  usage: 'price FILE --db DB               cost and unit price at each quantity break (JSON)',
+  usage: [
+    'price FILE --db DB               cost and unit price at each quantity break (JSON)',
+    `  price --batch FILE|- --db DB     ${BATCH_NOTE}`,
+  ].join('\n'),
   run(args, out) {
-    const { spec } = specAndQuantity(readJson(positional(args, 0, 'FILE', 'price')));
-    out(toJson(estimateCost(spec, settingsFor(args, true))));
+    const settings = settingsFor(args, true);
+    const priced = (raw: unknown) => estimateCost(specAndQuantity(raw).spec, settings);
+    if (args.options.has('batch')) return runBatch(args, out, priced);
+    out(toJson(priced(readJson(positional(args, 0, 'FILE', 'price')))));
+    return undefined;
   },
 };

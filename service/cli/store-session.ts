@@ -1,9 +1,10 @@
 import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '../../core/api';
-import { StoreError, openStore, readOnlyNotice } from '../../db';
+import { STORE_VARIABLE, StoreError, openStoreAt, readOnlyNotice } from '../../db';
+import { chosenStore } from '../host/first-run';
 import { createService, dispatch } from '../api';
 import type { Service } from '../api';
 import type { ParsedArgs } from './io';
-import { InputError, requireOption } from './io';
+import { InputError } from './io';
 
 /** Bad input becomes exit 2 with every field error; anything unexpected is exit 1. */
 export function raise(error: ApiError): never {
@@ -14,14 +15,28 @@ export function raise(error: ApiError): never {
   throw new InputError(details.length === 0 ? [head] : details[0]!.code === head.code ? details : [head, ...details]);
 }
 
+/** --store (a postgres:// connection string or a file), --db FILE, or COILWRIGHT_STORE; one is required. */
+export function storeOption(args: ParsedArgs): { location: string; path: string } {
+  const given = (name: string) => {
+    const v = args.options.get(name);
+    return typeof v === 'string' ? v : undefined;
+  };
+  const location = chosenStore({ store: given('store'), db: given('db') });
+  if (location === undefined) {
+    throw new InputError([{ code: 'missing-option', path: '--db',
+      message: `--db FILE or --store LOCATION (a file or a postgres:// connection string) is required, or set ${STORE_VARIABLE}` }]);
+  }
+  return { location, path: given('store') !== undefined ? '--store' : given('db') !== undefined ? '--db' : STORE_VARIABLE };
+}
+
 export function openService(args: ParsedArgs): Service {
-  const file = requireOption(args, 'db');
+  const { location, path } = storeOption(args);
   try {
-    const store = openStore(file);
+    const store = openStoreAt(location);
     if (store.readOnly) process.stderr.write(`${readOnlyNotice(store.file, store.readOnly)}\n`);
     return createService(store);
   } catch (e) {
-    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path: '--db' }]);
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path }]);
     throw e;
   }
 }

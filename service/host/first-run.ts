@@ -1,11 +1,11 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { ApiError } from '../../core/api';
-import { createDemoShop, readOnlyNotice, tryOpenStore } from '../../db';
-import type { OpenOptions, Store } from '../../db';
+import { STORE_VARIABLE, StoreError, createDemoShop, isPostgresLocation, openPgStore, readOnlyNotice, storeName, tryOpenStore } from '../../db';
+import type { OpenOptions, SqliteStore, Store } from '../../db';
 
 export interface ShopStore {
-  store: Store;
+  store: SqliteStore;
   /** Jobs put in by the demo shop on this open; 0 when the store already had a life of its own. */
   demoJobs: number;
   /** Something the user should read on start (the store is open read-only), or undefined. */
@@ -18,7 +18,7 @@ function isPristine(store: Store): boolean {
   return count('jobs') === 0 && count('settings') === 0;
 }
 
-function openQuietly(file: string, options: OpenOptions): { ok: true; value: Store } | { ok: false; error: ApiError } {
+function openQuietly(file: string, options: OpenOptions): { ok: true; value: SqliteStore } | { ok: false; error: ApiError } {
   try {
     return tryOpenStore(file, options);
   } catch (e) {
@@ -50,4 +50,38 @@ export function openShopStore(file: string, options: OpenOptions = {}):
     return demo;
   }
   return { ok: true, value: { store, demoJobs: demo.value.jobs } };
+}
+
+/** A pristine store of any backend gets the demo shop, as a new file does. */
+function withDemo(store: Store): { ok: true; value: { store: Store; demoJobs: number } } | { ok: false; error: ApiError } {
+  if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
+  const demo = createDemoShop(store);
+  if (!demo.ok) {
+    store.close();
+    return demo;
+  }
+  return { ok: true, value: { store, demoJobs: demo.value.jobs } };
+}
+
+/**
+ * The shop's store at a location: a PostgreSQL connection string (`postgres://…`) or a SQLite file. Errors
+ * name the store by host and database, never by the connection string (it may carry a password).
+ */
+export function openShopStoreAt(location: string, options: OpenOptions = {}):
+  { ok: true; value: { store: Store; demoJobs: number; notice?: string } } | { ok: false; error: ApiError } {
+  if (!isPostgresLocation(location)) return openShopStore(location, options);
+  try {
+    return withDemo(openPgStore(location, { ...(options.clock ? { clock: options.clock } : {}), ...(options.author ? { author: options.author } : {}) }));
+  } catch (e) {
+    if (e instanceof StoreError) return { ok: false, error: { ...e.toApiError(), path: '--store' } };
+    return { ok: false, error: { code: 'store-unopenable', message: `${storeName(location)} cannot be opened: ${(e as Error).message}`, path: '--store' } };
+  }
+}
+
+/**
+ * Which store a program opens: --store (a connection string or a file), else --db (a file), else the
+ * COILWRIGHT_STORE environment variable, else the program's default (undefined here).
+ */
+export function chosenStore(options: { store?: string | undefined; db?: string | undefined }, env: NodeJS.ProcessEnv = process.env): string | undefined {
+  return options.store ?? options.db ?? (env[STORE_VARIABLE]?.trim() || undefined);
 }

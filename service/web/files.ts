@@ -15,7 +15,7 @@ export const RESTORE_ROUTE = '/files/restore';
 
 const fail = (code: string, message: string): { ok: false; error: ApiError } => ({ ok: false, error: { code, message, path: '' } });
 
-function tempFolder(): { dir: string; done(): void } {
+export function tempFolder(): { dir: string; done(): void } {
   const dir = mkdtempSync(path.join(tmpdir(), 'coilwright-web-'));
   return { dir, done: () => rmSync(dir, { recursive: true, force: true }) };
 }
@@ -43,7 +43,7 @@ export async function sendBackup(service: Service, res: ServerResponse, today: s
 }
 
 /** Streams the body into `file`, at most `limit` bytes; false (and reading stopped) when it is larger. */
-function receive(req: IncomingMessage, file: string, limit: number): Promise<boolean> {
+export function receive(req: IncomingMessage, file: string, limit: number): Promise<boolean> {
   return new Promise((resolve, reject) => {
     const out = createWriteStream(file);
     let size = 0;
@@ -65,7 +65,7 @@ function receive(req: IncomingMessage, file: string, limit: number): Promise<boo
 }
 
 /** The picked file's name, as the page sent it (URI-encoded), for the answer only; never used as a path. */
-function uploadedName(header: string | string[] | undefined): string {
+export function uploadedName(header: string | string[] | undefined): string {
   if (typeof header !== 'string') return 'the uploaded backup';
   try {
     return decodeURIComponent(header).slice(0, 255);

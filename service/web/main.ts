@@ -1,21 +1,28 @@
 /**
- * `npm run web [-- --port N] [-- --db FILE] [-- --static DIR]`: the UI in any browser, served on
- * 127.0.0.1 only. Prints the address to open (it carries this run's token).
+ * `npm run web [-- --port N] [-- --db FILE | --store LOCATION] [-- --static DIR]`: the UI in any browser, served on
+ * 127.0.0.1 only. Prints the address to open (it carries this run's token). LOCATION is a file or a
+ * postgres:// connection string; without either option COILWRIGHT_STORE names the store, else the default file.
  */
 import { homedir } from 'node:os';
 import path from 'node:path';
+import { isPostgresLocation } from '../../db';
+import { chosenStore } from '../host/first-run';
 import { startWebServer } from './server';
 
 export interface WebArgs {
   port: number;
+  /** The store: a SQLite file (resolved) or a PostgreSQL connection string. */
   dbFile: string;
   staticDir: string;
 }
 
-export function parseWebArgs(argv: string[], defaults: { home: string; cwd: string }): WebArgs | string {
+const located = (location: string) => (isPostgresLocation(location) ? location : path.resolve(location));
+
+export function parseWebArgs(argv: string[], defaults: { home: string; cwd: string; env?: NodeJS.ProcessEnv }): WebArgs | string {
+  const fromEnv = chosenStore({}, defaults.env ?? {});
   const args: WebArgs = {
     port: 0,
-    dbFile: path.join(defaults.home, '.coilwright', 'coilwright.db'),
+    dbFile: fromEnv !== undefined ? located(fromEnv) : path.join(defaults.home, '.coilwright', 'coilwright.db'),
     staticDir: path.join(defaults.cwd, 'dist', 'renderer'),
   };
   for (let i = 0; i < argv.length; i += 2) {
@@ -23,6 +30,7 @@ export function parseWebArgs(argv: string[], defaults: { home: string; cwd: stri
     if (value === undefined) return `${flag} needs a value`;
     if (flag === '--port' && /^\d{1,5}$/.test(value) && Number(value) <= 65535) args.port = Number(value);
     else if (flag === '--db') args.dbFile = path.resolve(value);
+    else if (flag === '--store') args.dbFile = located(value);
     else if (flag === '--static') args.staticDir = path.resolve(value);
     else return `unknown or bad option ${flag} ${value}`;
   }
@@ -30,14 +38,14 @@ export function parseWebArgs(argv: string[], defaults: { home: string; cwd: stri
 }
 
 async function run(): Promise<void> {
-  const args = parseWebArgs(process.argv.slice(2), { home: homedir(), cwd: process.cwd() });
+  const args = parseWebArgs(process.argv.slice(2), { home: homedir(), cwd: process.cwd(), env: process.env });
   if (typeof args === 'string') {
-    console.error(`${args}\nusage: npm run web -- [--port N] [--db FILE] [--static DIR]`);
+    console.error(`${args}\nusage: npm run web -- [--port N] [--db FILE | --store LOCATION] [--static DIR]`);
     process.exitCode = 2;
     return;
   }
   const web = await startWebServer({ dbFile: args.dbFile, staticDir: args.staticDir, port: args.port });
-  console.log(`Coilwright is serving ${args.dbFile}\nOpen ${web.url}\n(Ctrl+C stops it)`);
+  console.log(`Coilwright is serving ${web.storeName}\nOpen ${web.url}\n(Ctrl+C stops it)`);
   const stop = () => void web.close().then(() => process.exit(0));
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -5,10 +5,12 @@ import type { ApiError } from '../../core/api';
 import { dispatch } from '../api/dispatch';
 import { createService } from '../api';
 import type { Service } from '../api';
-import { openShopStore } from '../host/first-run';
+import { openShopStoreAt } from '../host/first-run';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
 import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
+import { EXPORT_ROUTE, sendExport } from './export-download';
+import { IMPORT_ROUTE, receiveImport } from './import-upload';
 import { sendFile, sendJson, sendText } from './respond';
 
 export const WEB_HOST = '127.0.0.1';
@@ -33,6 +35,8 @@ export interface WebServer {
   url: string;
   token: string;
   port: number;
+  /** The store open: its file, or host/database of a server (never a password). */
+  storeName: string;
   server: Server;
   close(): Promise<void>;
 }
@@ -112,6 +116,12 @@ async function route(ctx: Context, req: IncomingMessage, res: ServerResponse): P
   }
   if (isApi) return routeApi(ctx, req, res, pathname);
   if (pathname === BACKUP_ROUTE && req.method === 'GET') return sendBackup(ctx.service, res, new Date().toISOString().slice(0, 10));
+  if (pathname === IMPORT_ROUTE) {
+    if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'an import is sent with POST'));
+    if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
+    return receiveImport(ctx.service, req, res, ctx.maxUploadBytes);
+  }
+  if (pathname === EXPORT_ROUTE && req.method === 'GET') return sendExport(ctx.service, req, res, new Date().toISOString().slice(0, 10));
   if (pathname === RESTORE_ROUTE) {
     if (req.method !== 'POST') return sendJson(res, 405, valueError('method-not-allowed', 'a restore is sent with POST'));
     if (foreignOrigin(req, ctx.port())) return sendJson(res, 403, valueError('foreign-origin', 'calls from other sites are refused'));
@@ -132,7 +142,7 @@ function listen(server: Server, port: number): Promise<number> {
 }
 
 function openService(dbFile: string, onNotice: (text: string) => void): Service {
-  const opened = openShopStore(dbFile);
+  const opened = openShopStoreAt(dbFile);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
   return createService(opened.value.store);
@@ -169,6 +179,7 @@ export async function startWebServer(options: WebServerOptions): Promise<WebServ
   }
   return {
     url: `http://${WEB_HOST}:${port}/?token=${ctx.token}`,
+    storeName: service.store().file,
     token: ctx.token,
     port,
     server,

@@ -18,6 +18,18 @@ function setup(answers: { save?: string | null; open?: string | null; confirm?: 
 }
 
 describe('File menu data actions', () => {
+  it('shows how far an export is on the task-bar button, and clears it at the end', async () => {
+    const shown: (number | null)[] = [];
+    const call = vi.fn(async (_name: string, _input: unknown, long?: { onProgress?: (done: number, total: number) => void }) => {
+      for (const done of [0, 250, 500, 500, 1000]) long?.onProgress?.(done, 1000);
+      return { ok: true as const, value: { format: 'json', count: 1000, file: '/out/jobs.json' } };
+    });
+    const dialogs = { saveFile: vi.fn(async () => '/out/jobs.json'), openFile: vi.fn(async () => null), confirm: vi.fn(async () => true), tell: vi.fn(async () => undefined) };
+    const actions = createDataActions({ dialogs, call, notify: vi.fn(), progress: (f) => shown.push(f), documentsDir: '/d', today: () => '2026-05-06' });
+    await actions.exportJobs();
+    expect(shown).toEqual([0, 0.25, 0.5, 1, null]);
+  });
+
   it('does nothing when a dialog is cancelled', async () => {
     const s = setup({}, { ok: true, value: {} });
     await s.actions.backup();

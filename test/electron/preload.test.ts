@@ -15,7 +15,7 @@ beforeAll(async () => {
 describe('the preload bridge', () => {
   it('exposes only window.coilwright, with exactly the api, menu and PDF functions', () => {
     expect([...captured.exposed.keys()]).toEqual(['coilwright']);
-    expect(Object.keys(bridge).sort()).toEqual(['api', 'onMenuCommand', 'previewPdf', 'runDataAction', 'savePdf']);
+    expect(Object.keys(bridge).sort()).toEqual(['api', 'onMenuCommand', 'openRequestSheet', 'previewPdf', 'runDataAction', 'savePdf']);
     expect(Object.keys(bridge.api)).toEqual(Object.keys(contract));
   });
 

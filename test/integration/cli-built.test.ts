@@ -39,6 +39,13 @@ describe('the command line as built JavaScript', () => {
     expect(run.loaded.filter((r) => [...PDF_PACKAGES, 'better-sqlite3'].includes(r))).toEqual([]);
   }, 120_000);
 
+  it('calc --batch runs many specs in one process, loading neither the store nor the PDF writers', () => {
+    writeFileSync(join(dir, 'specs.jsonl'), `${JSON.stringify(valveSpringMetric)}\n${JSON.stringify({ ...valveSpringMetric, wireDiameter: 0 })}\n`);
+    const run = cli(['calc', '--batch', 'specs.jsonl']);
+    expect(run.stdout.trim().split('\n').map((l) => (JSON.parse(l) as { ok: boolean }).ok)).toEqual([true, false]);
+    expect(run.loaded.filter((r) => [...PDF_PACKAGES, 'better-sqlite3'].includes(r))).toEqual([]);
+  }, 120_000);
+
   it('a store command loads the store but not the PDF writers; print finds the fonts beside the program', () => {
     const db = join(dir, 'shop.db');
     const list = cli(['jobs', 'list', '--db', db]);

@@ -256,6 +256,38 @@ describe('the loopback web transport', () => {
     expect((await fetch(`http://127.0.0.1:${web.port}/files/backup`)).status).toBe(401);
   });
 
+  it('streams the job export as a download with the job count, and refuses a bad format', async () => {
+    const jobs = (await (await api('listJobs', { limit: 200 })).json()).value.jobs.length as number;
+    const csv = await fetch(`http://127.0.0.1:${web.port}/files/export?format=csv`, { headers: { cookie } });
+    expect(csv.status).toBe(200);
+    expect(csv.headers.get('content-disposition')).toMatch(/^attachment; filename="coilwright-jobs-\d{4}-\d{2}-\d{2}\.csv"$/);
+    expect(Number(csv.headers.get('x-job-count'))).toBeGreaterThanOrEqual(jobs);
+    const text = await csv.text();
+    expect(text.startsWith('number,customer,')).toBe(true);
+    const json = await (await fetch(`http://127.0.0.1:${web.port}/files/export?format=json&status=draft`, { headers: { cookie } })).json();
+    expect(json.format).toBe('coilwright-jobs');
+    expect(json.jobs.every((j: { status: string }) => j.status === 'draft')).toBe(true);
+    expect((await fetch(`http://127.0.0.1:${web.port}/files/export?format=xls`, { headers: { cookie } })).status).toBe(400);
+    expect((await fetch(`http://127.0.0.1:${web.port}/files/export?format=csv`)).status).toBe(401);
+  });
+
+  it('imports an uploaded file streamed, answering progress lines and then the result; all or nothing', async () => {
+    const exported = await (await fetch(`http://127.0.0.1:${web.port}/files/export?format=json`, { headers: { cookie } })).text();
+    const send = (body: string, query: string) => fetch(`http://127.0.0.1:${web.port}/files/import?${query}`, {
+      method: 'POST', headers: { cookie, 'content-type': 'application/octet-stream', 'x-file-name': 'jobs%20from%20shop.json' }, body,
+    });
+    const answer = await send(exported, 'format=json&renumber=1');
+    expect(answer.headers.get('content-type')).toMatch(/^application\/x-ndjson/);
+    const lines = (await answer.text()).trim().split('\n').map((l) => JSON.parse(l));
+    const result = lines.pop();
+    expect(lines.every((l) => Array.isArray(l.progress))).toBe(true);
+    expect(result).toMatchObject({ ok: true, value: { importedFrom: 'jobs from shop.json' } });
+    expect(result.value.imported.length).toBe(JSON.parse(exported).jobs.length);
+    const refused = (await (await send(exported, 'format=json')).text()).trim().split('\n').map((l) => JSON.parse(l)).pop();
+    expect(refused).toMatchObject({ ok: false, error: { code: 'duplicate-number' } });
+    expect((await send(exported, 'format=xml')).status).toBe(400);
+  });
+
   it('answers an unknown method with 404 and dispatch’s value', async () => {
     for (const name of ['launchRocket', '__proto__', 'constructor', 'toString']) {
       const res = await api(name, {});

@@ -1,5 +1,5 @@
 import { closeSync, openSync, writeSync } from 'node:fs';
-import type { Store } from '../../db';
+import type { SqliteStore as Store } from '../../db';
 
 /**
  * Closes the store and overwrites one index page of its jobs table with junk, past the page header, so the

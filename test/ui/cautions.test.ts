@@ -26,7 +26,7 @@ describe('cautions beside the results', { timeout: UI_TEST_TIMEOUT }, () => {
     await fillSpring(page, { grade: 'en10270-1-dh', d: '2', od: '22', coils: '10', l0: '78' });
     await caution('Stress near solid').waitFor();
     await expect(caution('Stress near solid').textContent()).resolves.toContain('set removal');
-    await expect(caution('Hydrogen embrittlement').count()).resolves.toBe(0);
+    await expect.poll(() => caution('Hydrogen embrittlement').count(), { timeout: 10_000 }).toBe(0);
     await field(page, 'Finish').selectOption('zinc-yellow');
     await caution('Hydrogen embrittlement').waitFor();
     await expect(caution('Hydrogen embrittlement').textContent()).resolves.toContain('Bake to ASTM B850, 22 h at 200 °C');

@@ -65,7 +65,7 @@ describe('bake specifications compared on the plan', { timeout: UI_TEST_TIMEOUT 
     const table = page.getByRole('region', { name: 'Hydrogen-relief bake: what each specification says' });
     await table.waitFor();
     await expect(table.locator('tr.is-selected').textContent()).resolves.toContain('ISO 4042 (named)');
-    await expect(table.getByRole('row').count()).resolves.toBe(7);
+    await expect.poll(() => table.getByRole('row').count(), { timeout: 10_000 }).toBe(7);
     await table.scrollIntoViewIfNeeded();
     await screenshot(page, 'plan-bake-comparison');
     expect(errors).toEqual([]);

@@ -1,6 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { usePgCluster } from '../support/pg-stores';
 import { UI_TEST_TIMEOUT, screenshot, shopSession } from './support';
+
+const pg = usePgCluster();
 
 describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
   const session = shopSession();
@@ -9,7 +12,9 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     const { page, errors } = session;
     await page.keyboard.press('Alt+4');
     await page.getByRole('heading', { name: 'Back up the store' }).waitFor();
-    await expect(page.getByRole('textbox').count()).resolves.toBe(0);
+    // The text fields are the name saves are signed with and a server's connection string: none takes a path on this computer.
+    const names = await page.getByRole('textbox').evaluateAll((boxes) => boxes.map((b) => (b as HTMLInputElement).labels?.[0]?.textContent ?? ''));
+    expect(names).toEqual(['Sign your work as', 'Open a shared store on a PostgreSQL server']);
     await screenshot(page, 'data-backups');
 
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download a backup' }).click()]);
@@ -22,6 +27,43 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     await page.getByRole('dialog', { name: 'Replace the store?' }).waitFor();
     await page.getByRole('button', { name: /^Restore coilwright-backup-/ }).click();
     await page.getByRole('status').filter({ hasText: /^Restored from coilwright-backup-/ }).waitFor();
+    expect(errors).toEqual([]);
+  });
+
+  it('exports jobs as a streamed download, saying how many went out', async () => {
+    const { page, errors } = session;
+    await page.keyboard.press('Alt+4');
+    await page.getByRole('heading', { name: 'Export jobs' }).waitFor();
+    await page.getByLabel('Format').selectOption('csv');
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export', exact: true }).click()]);
+    expect(download.suggestedFilename()).toMatch(/^coilwright-jobs-\d{4}-\d{2}-\d{2}\.csv$/);
+    const text = readFileSync(await download.path(), 'utf8');
+    expect(text.split('\r\n')[0]).toMatch(/^number,customer,customerEmail,.*,units,material,materialName,spec\.wireDiameter \(mm \| in\),/);
+    await page.getByRole('status').filter({ hasText: /jobs? exported, downloaded as coilwright-jobs-/ }).waitFor();
+    // The CSV goes back in through the upload, every job with a new number.
+    await page.getByLabel('File to import (JSON or CSV)').setInputFiles({ name: 'jobs.csv', mimeType: 'text/csv', buffer: Buffer.from(text) });
+    await page.getByRole('button', { name: 'Import', exact: true }).click();
+    const rows = text.trimEnd().split('\r\n').length - 1;
+    await page.getByRole('status').filter({ hasText: new RegExp(`^${rows} jobs imported: `) }).waitFor();
+    expect(errors).toEqual([]);
+  });
+
+  it('signs saves with a name, opens a shared PostgreSQL store by connection string and names it by host and database', async () => {
+    const { page, errors } = session;
+    await page.keyboard.press('Alt+4');
+    await page.getByLabel('Sign your work as').fill('Fay (estimator)');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('status').filter({ hasText: 'recorded as by Fay (estimator)' }).waitFor();
+    const url = pg.freshDatabase().replace('postgres@', 'postgres:pw-never-shown@');
+    await page.getByLabel('Open a shared store on a PostgreSQL server').fill(url);
+    await page.getByRole('button', { name: 'Open server store' }).click();
+    await page.getByRole('status').filter({ hasText: /^Now working in PostgreSQL 127\.0\.0\.1:\d+\/shop_/ }).waitFor();
+    await page.getByTestId('store-name').filter({ hasText: /^PostgreSQL 127\.0\.0\.1:\d+\/shop_/ }).waitFor();
+    await expect(page.getByTestId('store-open').textContent()).resolves.toMatch(/saves are recorded as by Fay \(estimator\)/);
+    await expect(page.getByLabel('Open a shared store on a PostgreSQL server').inputValue()).resolves.toBe('');
+    await expect(page.title()).resolves.toMatch(/^Coilwright — PostgreSQL 127\.0\.0\.1:\d+\/shop_/);
+    await expect(page.content()).resolves.not.toContain('pw-never-shown');
+    await screenshot(page, 'data-store');
     expect(errors).toEqual([]);
   });
 });

@@ -85,7 +85,7 @@ describe('design from the customer\'s requirement', { timeout: UI_TEST_TIMEOUT }
     await page.getByRole('button', { name: 'Find designs' }).click();
     const table = page.getByRole('table', { name: 'Designs that meet the requirement, cheapest first' });
     await table.waitFor();
-    await expect(table.getByRole('columnheader', { name: 'Body coils' }).count()).resolves.toBe(1);
+    await expect.poll(() => table.getByRole('columnheader', { name: 'Body coils' }).count(), { timeout: 10_000 }).toBe(1);
     expect(await table.locator('tbody tr').count()).toBeGreaterThan(0);
     await table.scrollIntoViewIfNeeded();
     await screenshot(page, 'design-extension');

@@ -51,7 +51,7 @@ describe('printed documents', { timeout: PDF_TEST_TIMEOUT }, () => {
     await page.getByRole('button', { name: 'Issue and print quote (PDF)' }).click();
     const decision = page.getByRole('dialog', { name: 'Issue this quote with its problems?' });
     await decision.waitFor();
-    await expect(decision.locator('[data-code="solid-stress-over-set-removed-allowable"]').count()).resolves.toBe(1);
+    await expect.poll(() => decision.locator('[data-code="solid-stress-over-set-removed-allowable"]').count(), { timeout: 10_000 }).toBe(1);
     await expect(decision.getByRole('button', { name: 'Accept and issue' }).isDisabled()).resolves.toBe(true);
     await decision.getByLabel('Reason for accepting them').fill('customer fits a stop at the working length');
     await screenshot(page, 'workspace-issue-decision');
@@ -96,7 +96,7 @@ describe('printed documents', { timeout: PDF_TEST_TIMEOUT }, () => {
     const dialog = page.getByRole('dialog', { name: 'Printing travellers' });
     await dialog.getByText('2 of 2, finished').waitFor();
     await expect(dialog.getByRole('progressbar', { name: 'Travellers' }).getAttribute('value')).resolves.toBe('2');
-    await expect(dialog.getByRole('listitem').count()).resolves.toBe(2);
+    await expect.poll(() => dialog.getByRole('listitem').count(), { timeout: 10_000 }).toBe(2);
     await screenshot(page, 'batch-print');
     await dialog.getByRole('button', { name: 'Close', exact: true }).click();
 
@@ -113,7 +113,7 @@ describe('printed documents', { timeout: PDF_TEST_TIMEOUT }, () => {
     await dialog.getByRole('button', { name: 'Cancel after this job' }).click();
     release();
     await dialog.getByText(`1 of ${all}, cancelled`).waitFor();
-    await expect(dialog.getByRole('listitem').count()).resolves.toBe(1);
+    await expect.poll(() => dialog.getByRole('listitem').count(), { timeout: 10_000 }).toBe(1);
     await page.unroute('**/api/printTraveller');
   });
 

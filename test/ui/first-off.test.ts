@@ -39,8 +39,8 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
     const message = page.locator('#first-off-freeLengthAfterSet-error');
     await message.waitFor();
     await expect(message.textContent()).resolves.toMatch(/larger than the coiled deflection to solid/);
-    await expect(forceRow.locator('.field__error').count()).resolves.toBe(0);
-    await expect(page.locator('.form-errors').count()).resolves.toBe(0);
+    await expect.poll(() => forceRow.locator('.field__error').count(), { timeout: 10_000 }).toBe(0);
+    await expect.poll(() => page.locator('.form-errors').count(), { timeout: 10_000 }).toBe(0);
     await expect(field(page, 'Free length after set removal').getAttribute('aria-describedby')).resolves.toContain('first-off-freeLengthAfterSet-error');
     await expect(page.getByText('None yet.').isVisible()).resolves.toBe(true);
     await screenshot(page, 'workspace-first-off-refused');
@@ -51,9 +51,9 @@ describe('first-off records in the job workspace', { timeout: UI_TEST_TIMEOUT },
     await page.getByRole('button', { name: 'Record first-off' }).click();
     await page.getByRole('status').filter({ hasText: `First-off recorded for job ${number}: set 5.80 mm.` }).waitFor();
     const row = page.locator('section[aria-labelledby="first-off-records-title"] tbody tr');
-    await expect(row.count()).resolves.toBe(1);
+    await expect.poll(() => row.count(), { timeout: 10_000 }).toBe(1);
     await expect(row.first().textContent()).resolves.toContain('R. Demo');
-    await expect(page.locator('#first-off-freeLengthAfterSet-error').count()).resolves.toBe(0);
+    await expect.poll(() => page.locator('#first-off-freeLengthAfterSet-error').count(), { timeout: 10_000 }).toBe(0);
     await screenshot(page, 'workspace-first-off');
   });
 

@@ -72,7 +72,7 @@ describe('a job from an empty form to the store and back', { timeout: UI_TEST_TI
     await page.keyboard.type('QG-7731');
     const open = page.getByRole('button', { name: `Open job ${number}` });
     await open.waitFor();
-    await expect(page.locator('table.jobs tbody tr').count()).resolves.toBe(1);
+    await expect.poll(() => page.locator('table.jobs tbody tr').count(), { timeout: 10_000 }).toBe(1);
 
     await page.getByRole('button', { name: /^New job/ }).first().click();
     await page.getByLabel('Metric').check();

@@ -31,7 +31,7 @@ describe('the job list', { timeout: UI_TEST_TIMEOUT }, () => {
     const status = page.getByRole('status').filter({ hasText: /^\d+ jobs$/ });
     const total = Number((await status.textContent())!.split(' ')[0]);
     expect(total).toBeGreaterThan(50);
-    await expect(page.locator('table.jobs tbody tr').count()).resolves.toBe(50);
+    await expect.poll(() => page.locator('table.jobs tbody tr').count(), { timeout: 10_000 }).toBe(50);
     const first = await numbers(page);
     await page.getByRole('button', { name: 'Next page' }).click();
     await page.getByText(`Jobs 51–${total} of ${total} · page 2 of 2`).waitFor();

@@ -101,7 +101,7 @@ describe('jobs from past jobs and the archive', { timeout: UI_TEST_TIMEOUT }, ()
     // A job that is not a draft offers no delete: it is archived instead.
     await page.getByRole('searchbox', { name: 'Search' }).fill('AH-PAST-1');
     await row(page, source.number).waitFor();
-    await expect(row(page, source.number).getByRole('button', { name: /^Delete/ }).count()).resolves.toBe(0);
+    await expect.poll(() => row(page, source.number).getByRole('button', { name: /^Delete/ }).count(), { timeout: 10_000 }).toBe(0);
   });
 
   it('archives a job out of the list; the archived list and search still find it', async () => {
@@ -127,7 +127,7 @@ describe('jobs from past jobs and the archive', { timeout: UI_TEST_TIMEOUT }, ()
     await page.getByRole('heading', { name: 'Tolerances', level: 2 }).scrollIntoViewIfNeeded();
     // The published tables sit beside the shop's own, read-only, each with its source.
     await page.getByText('EN 15800 coil diameter A_D (± mm)').click();
-    await expect(page.getByRole('table', { name: 'EN 15800 coil diameter A_D (± mm)' }).getByRole('textbox').count()).resolves.toBe(0);
+    await expect.poll(() => page.getByRole('table', { name: 'EN 15800 coil diameter A_D (± mm)' }).getByRole('textbox').count(), { timeout: 10_000 }).toBe(0);
     await screenshot(page, 'settings-tolerances');
     const table = page.getByRole('group', { name: 'The shop\'s free length table' });
     await table.scrollIntoViewIfNeeded();

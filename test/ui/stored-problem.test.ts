@@ -30,7 +30,7 @@ describe('a stored job that no longer reads', { timeout: UI_TEST_TIMEOUT }, () =
     const row = page.locator('table.jobs tbody tr', { has: page.getByRole('button', { name: `Open job ${broken}` }) });
     await expect.poll(() => row.locator('.job-problem').textContent())
       .toMatch(new RegExp(`job ${broken}: the stored spec no longer reads .*spec\\.material: unknown wire grade "en10270-1-withdrawn"`));
-    await expect(page.locator('table.jobs tbody tr.has-problem').count()).resolves.toBe(1);
+    await expect.poll(() => page.locator('table.jobs tbody tr.has-problem').count(), { timeout: 10_000 }).toBe(1);
     await screenshot(page, 'jobs-stored-problem');
   });
 

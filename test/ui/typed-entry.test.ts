@@ -36,7 +36,7 @@ describe('numbers as people type them, and history that shows what changed', { t
     await expect(understood(page, 'spec.loads[0].length')).resolves.toBe('read "12 mm" as 0,4724409 in');
     await expect(understood(page, 'spec.quantities')).resolves.toBe('read "2 000" as 2000 pcs; read "10 000" as 10000 pcs');
     // "1,6" is the shop's plain way of writing 1.6: nothing to explain, and 1.6 in is 40.64 mm.
-    await expect(page.locator('[id="job-spec-freeLength-understood"]').count()).resolves.toBe(0);
+    await expect.poll(() => page.locator('[id="job-spec-freeLength-understood"]').count(), { timeout: 10_000 }).toBe(0);
     await savedJobNumber(page);
     await screenshot(page, 'typed-entry-understood');
     await page.getByLabel('Metric').check();
@@ -52,7 +52,7 @@ describe('numbers as people type them, and history that shows what changed', { t
     await field(page, 'Part number').fill('DEMO-TN-17');
     await page.locator('.results[data-state="partial"]').waitFor();
     await expect(page.locator('#job-spec-totalCoils-error').textContent()).resolves.toMatch(/^"twelve" is not a number/);
-    await expect(page.getByRole('heading', { name: 'Waiting for total coils' }).count()).resolves.toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Waiting for total coils' }).count(), { timeout: 10_000 }).toBe(1);
     // The spring index C = D/d does not depend on the coils; the rate does (EN 13906-1, 9.2).
     await expect(figure(page, 'Spring index').textContent()).resolves.toBe(index);
     await expect(figure(page, 'Rate').textContent()).resolves.toMatch(/^— waits for total coils/);
@@ -81,13 +81,13 @@ describe('numbers as people type them, and history that shows what changed', { t
     await field(page, 'Free length L0 (in)').fill('1,75');
     await page.locator('[data-save="ok"]').filter({ hasText: 'working on revision 2' }).waitFor();
     await page.getByRole('tab', { name: 'History' }).click();
-    const working = page.locator('tr.history__working');
-    await expect(working.textContent()).resolves.toContain('Free length: 1,600 in → 1,750 in');
+    // The second autosave may still be on its way: wait for the working row to show it.
+    await page.locator('tr.history__working').filter({ hasText: 'Free length: 1,600 in → 1,750 in' }).waitFor();
     await page.keyboard.press('Control+S');
     await page.locator('[data-save="ok"]').filter({ hasText: 'Saved · revision 2 ·' }).waitFor();
-    await expect(page.locator('tr.history__working').count()).resolves.toBe(0);
+    await expect.poll(() => page.locator('tr.history__working').count()).toBe(0);
     const rows = page.locator('table.history tbody tr');
-    await expect(rows.count()).resolves.toBe(2);
+    await expect.poll(() => rows.count()).toBe(2);
     const newest = await rows.first().textContent();
     expect(newest).toContain('Free length: 1,600 in → 1,750 in');
     expect(newest).toContain('Part number: DEMO-TN-16 → DEMO-TN-17');

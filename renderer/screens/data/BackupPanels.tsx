@@ -7,8 +7,15 @@ import { useShopData } from '../../hooks/shop-data';
 import { useLongCall } from './useLongCall';
 import type { CallState } from './useLongCall';
 
-export function CallOutcome<T>({ call, done }: { call: CallState<T>; done(value: T): string }) {
-  if (call.state === 'running') return <Progress label={call.label} />;
+export function CallOutcome<T>({ call, done, cancel }: { call: CallState<T>; done(value: T): string; cancel?: () => void }) {
+  if (call.state === 'running') {
+    return (
+      <div className="long-call">
+        <Progress label={call.label} {...(call.total > 0 ? { value: call.done, max: call.total, detail: `${Math.floor((100 * call.done) / call.total)} %` } : {})} />
+        {call.cancellable && cancel ? <button type="button" className="button" onClick={cancel}>Cancel</button> : null}
+      </div>
+    );
+  }
   if (call.state === 'failed') return <p className="error-text" role="alert">{call.message}</p>;
   if (call.state === 'done') return <p className="ok-text" role="status">{done(call.value)}</p>;
   return null;
@@ -16,15 +23,15 @@ export function CallOutcome<T>({ call, done }: { call: CallState<T>; done(value:
 
 export function BackupPanel() {
   const { storeFiles } = usePlatform();
-  const { call, run, running } = useLongCall<{ message: string }>();
+  const { call, run, cancel, running } = useLongCall<{ message: string }>();
   return (
     <section className="panel" aria-labelledby="backup-title">
       <h2 id="backup-title" className="panel__title">Back up the store</h2>
       <p className="muted">A consistent copy of every job, revision, quote and setting, taken while the store stays open.
         {storeFiles.shellDialogs ? ' You choose where to keep it.' : ' Your browser downloads it.'}</p>
       <button type="button" className="button button--primary" disabled={running}
-        onClick={() => void run('Backing up…', () => storeFiles.backup())}>{storeFiles.shellDialogs ? 'Back up…' : 'Download a backup'}</button>
-      <CallOutcome call={call} done={(v) => v.message} />
+        onClick={() => void run('Backing up…', (control) => storeFiles.backup(control), !storeFiles.shellDialogs)}>{storeFiles.shellDialogs ? 'Back up…' : 'Download a backup'}</button>
+      <CallOutcome call={call} done={(v) => v.message} cancel={cancel} />
     </section>
   );
 }

@@ -2,8 +2,9 @@ import { ScreenHeading } from '../../components/ScreenHeading';
 import { usePlatform } from '../../api';
 import { BackupPanel, RestorePanel } from './BackupPanels';
 import { ExportPanel, ImportPanel } from './ExchangePanels';
+import { StorePanel } from './StorePanel';
 
-/** Backups of the whole store, and jobs in and out as JSON or CSV. */
+/** The store open, backups of the whole store, and jobs in and out as JSON or CSV. */
 export function DataScreen() {
   const platform = usePlatform();
   return (
@@ -15,6 +16,7 @@ export function DataScreen() {
           : 'Files come from and go to your browser: backups and exports download, restores and imports upload.'}
       </p>
       <div className="data-grid">
+        <StorePanel />
         <BackupPanel />
         <RestorePanel />
         <ExportPanel />

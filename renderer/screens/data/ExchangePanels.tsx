@@ -22,8 +22,14 @@ export function ExportPanel() {
   const [format, setFormat] = useState<'json' | 'csv'>('json');
   const [status, setStatus] = useState('');
   const { call, run, running } = useLongCall<ExportResult>();
+  const streamed = useLongCall<{ message: string }>();
+  const download = platform.storeFiles.exportJobs;
   const go = async () => {
     const input = { format, status: (status || undefined) as JobStatus | undefined };
+    if (download) {
+      await streamed.run('Exporting…', (control) => download(input, control), true);
+      return;
+    }
     const r = await run('Exporting…', () => api.exportJobs(input));
     if (r?.text !== undefined) {
       platform.saveFile({ fileName: `coilwright-jobs.${format}`, mimeType: format === 'csv' ? 'text/csv' : 'application/json', text: r.text });
@@ -37,8 +43,9 @@ export function ExportPanel() {
         <PlainSelect label="Jobs" value={status} onChange={setStatus}
           choices={[{ value: '', label: 'every job' }, ...jobStatuses.map((s) => ({ value: s, label: `${statusLabels[s]} only` }))]} />
       </div>
-      <button type="button" className="button button--primary" disabled={running} onClick={() => void go()}>Export</button>
+      <button type="button" className="button button--primary" disabled={running || streamed.running} onClick={() => void go()}>Export</button>
       <CallOutcome call={call} done={exportedText} />
+      <CallOutcome call={streamed.call} done={(v) => v.message} cancel={streamed.cancel} />
     </section>
   );
 }
@@ -51,12 +58,17 @@ export function ImportPanel() {
   const fileId = useId();
   const [picked, setPicked] = useState<File | null>(null);
   const [renumber, setRenumber] = useState(true);
-  const { call, run, running } = useLongCall<ImportResult>();
+  const { call, run, cancel, running } = useLongCall<ImportResult>();
+  const upload = platform.storeFiles.importJobs;
   const go = async () => {
     if (!picked) return;
-    const text = await platform.readText(picked);
-    const format = picked.name.toLowerCase().endsWith('.csv') ? 'csv' : 'json';
-    if (await run(`Importing ${picked.name}…`, () => api.importJobs({ text, format, renumber }))) {
+    const label = `Importing ${picked.name}…`;
+    const imported = upload
+      ? await run(label, (control) => upload(picked, { renumber }, control), true)
+      : await run(label, async () => api.importJobs({
+        text: await platform.readText(picked), format: picked.name.toLowerCase().endsWith('.csv') ? 'csv' : 'json', renumber,
+      }));
+    if (imported) {
       shop.refresh();
       bus.broadcast('data-changed');
     }
@@ -73,7 +85,7 @@ export function ImportPanel() {
         <label htmlFor={`${fileId}-renumber`} className="field__label">Give imported jobs new numbers from this shop’s sequence</label>
       </div>
       <button type="button" className="button button--primary" disabled={running || !picked} onClick={() => void go()}>Import</button>
-      <CallOutcome call={call} done={(v) => `${v.imported.length} job${v.imported.length === 1 ? '' : 's'} imported${v.imported.length > 0 ? `: ${v.imported.slice(0, 8).map((j) => j.number).join(', ')}${v.imported.length > 8 ? '…' : ''}` : ''}.`} />
+      <CallOutcome call={call} cancel={cancel} done={(v) => `${v.imported.length} job${v.imported.length === 1 ? '' : 's'} imported${v.imported.length > 0 ? `: ${v.imported.slice(0, 8).map((j) => j.number).join(', ')}${v.imported.length > 8 ? '…' : ''}` : ''}.`} />
     </section>
   );
 }

@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
+import { useStoreChanges } from '../../hooks/store-info';
 import type { JobStatus, JobSummary } from '../../../core/api';
 import { useApi } from '../../api';
 import { ScreenHeading } from '../../components/ScreenHeading';
@@ -68,6 +69,8 @@ export function JobsScreen() {
   useEffect(() => refresh(), [refresh]);
   useCommand('find', () => searchRef.current?.focus());
   useCommand('data-changed', rows.reload);
+  // Jobs saved on another desk appear without a restart.
+  useStoreChanges(rows.reload);
 
   const onSort = (key: SortKey) => {
     setSort((s) => (s.key === key ? { key, direction: s.direction === 'asc' ? 'desc' : 'asc' } : { key, direction: key === 'updated' ? 'desc' : 'asc' }));

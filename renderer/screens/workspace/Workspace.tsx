@@ -1,4 +1,5 @@
 import { ChangeKind } from './ChangeKind';
+import { SavedElsewhere } from './SavedElsewhere';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { ApiError, Job } from '../../../core/api';
 import type { Settings } from '../../../core/settings/schema';
@@ -107,6 +108,7 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
         onCopy={() => { if (editor.job) void copier.copy(editor.job.id); }} onArchive={(on) => void archive(on)} />
       {copier.error ?? actionError ? <p className="error-text" role="alert">{(copier.error ?? actionError)?.message}</p> : null}
       <ChangeKind editor={editor} />
+      <SavedElsewhere editor={editor} />
       <TabList<Tab> label="Job views" idPrefix="job" tabs={tabs} active={tab} onSelect={setTab} />
       <div className="workspace__body workspace__body--bench" hidden={tab !== 'spec'}>
         <TabPanel idPrefix="job" id="spec">

@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { createJob, exportJobs, importJobs, listJobs } from '../../../db';
 import { csvField, parseCsv, unguarded } from '../../../db/exchange/csv';
-import type { Store } from '../../../db';
+import type { SqliteStore as Store } from '../../../db';
 import { job, spec, tempDir, tempStore, value } from './helpers';
 
 function count(store: Store): number {

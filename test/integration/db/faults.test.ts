@@ -5,6 +5,7 @@ import { runCli } from '../../../service/cli/main';
 import { createService, dispatch } from '../../../service/api';
 import type { Service } from '../../../service/api';
 import { createJob, openStore } from '../../../db';
+import type { SqliteStore } from '../../../db';
 import { job, tempDir, track } from './helpers';
 
 function service(): Service {
@@ -16,7 +17,7 @@ const call = (s: Service, method: string, input: unknown) => dispatch(s.handlers
 
 /** What a save could change: every row count and the numbering sequence. */
 function footprint(s: Service): unknown {
-  const db = s.store().db;
+  const db = (s.store() as SqliteStore).db;
   const tables = ['jobs', 'job_revisions', 'customers', 'settings', 'attachments', 'quotes', 'job_text', 'job_shape_compression', 'job_shape_extension', 'job_shape_torsion'];
   return Object.fromEntries(tables.map((t) => [t, (db.prepare(`SELECT count(*) AS n FROM ${t}`).get() as { n: number }).n]));
 }
@@ -27,8 +28,8 @@ function footprint(s: Service): unknown {
  * which leaves no room in the pages either.
  */
 async function fillDisk(s: Service): Promise<void> {
-  const pages = s.store().db.pragma('page_count', { simple: true }) as number;
-  s.store().db.pragma(`max_page_count = ${pages}`);
+  const pages = (s.store() as SqliteStore).db.pragma('page_count', { simple: true }) as number;
+  (s.store() as SqliteStore).db.pragma(`max_page_count = ${pages}`);
   for (let i = 0; i < 500; i++) {
     const saved = await call(s, 'createJob', job({ partNumber: `FILL-${i}` }));
     if (!saved.ok) return;
@@ -62,12 +63,12 @@ describe('a full disk', () => {
       }
     }
     expect(footprint(s)).toEqual(before);
-    expect(s.store().db.pragma('integrity_check', { simple: true })).toBe('ok');
+    expect((s.store() as SqliteStore).db.pragma('integrity_check', { simple: true })).toBe('ok');
     // Space again: the same save goes through, with the next number in the sequence.
-    s.store().db.pragma('max_page_count = 1073741823');
+    (s.store() as SqliteStore).db.pragma('max_page_count = 1073741823');
     const after = await call(s, 'createJob', job({ partNumber: 'P-FULL' }));
     expect(after.ok).toBe(true);
-    const numbers = s.store().db.prepare('SELECT number FROM jobs').all() as { number: string }[];
+    const numbers = (s.store() as SqliteStore).db.prepare('SELECT number FROM jobs').all() as { number: string }[];
     expect(new Set(numbers.map((r) => r.number)).size).toBe(numbers.length);
   });
 });

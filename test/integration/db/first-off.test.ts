@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createDemoShop, createJob, exportJobs, importJobs, listFirstOff, recordFirstOff, saveSettings, setCalibration, updateJob } from '../../../db';
-import type { Store } from '../../../db';
+import type { SqliteStore as Store } from '../../../db';
 import { parseSpec } from '../../../core/spec';
 import { setModelValues } from '../../../core/process/set-model-values';
 import { planManufacture } from '../../../core/process/plan';

@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach } from 'vitest';
-import type { Store } from '../../../db';
+import type { SqliteStore as Store } from '../../../db';
 import { openStore } from '../../../db';
 
 const dirs: string[] = [];

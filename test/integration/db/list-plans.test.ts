@@ -4,7 +4,7 @@ import { countJobsSql, listJobsSql } from '../../../db/search/list';
 import { boxSql } from '../../../db/search/similar';
 import { FIND_SQL, NEWEST_BOUND_SQL } from '../../../db/search/text';
 import { listJobsSchema } from '../../../core/api/store';
-import type { Store } from '../../../db';
+import type { SqliteStore as Store } from '../../../db';
 import { job, steppingClock, tempStore, value } from './helpers';
 
 function plan(store: Store, sql: string, params: unknown[]): string {

@@ -3,6 +3,7 @@ import { existsSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { backupStore, createJob, recordQuote, getJob, listJobs, openStore } from '../../../db';
+import type { SqliteStore } from '../../../db';
 import { openShopStore } from '../../../service/host/first-run';
 import { job, tempDir, track, value } from './helpers';
 import { damageIndexPage } from '../../support/damage';
@@ -48,7 +49,7 @@ async function shop(): Promise<{ dir: string; file: string; backup: string }> {
 function reopen(file: string): { parts: string[]; integrity: unknown; demoJobs: number } {
   const opened = openShopStore(file);
   if (!opened.ok) throw new Error(opened.error.message);
-  const store = track(opened.value.store);
+  const store = track(opened.value.store as SqliteStore);
   return {
     parts: value(listJobs(store, {})).jobs.map((j) => j.partNumber).sort(),
     integrity: store.db.pragma('integrity_check', { simple: true }),

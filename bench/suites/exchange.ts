@@ -1,0 +1,69 @@
+import { spawnSync } from 'node:child_process';
+import { closeSync, createReadStream, openSync, statSync, writeSync } from 'node:fs';
+import { createInterface } from 'node:readline';
+import { dirname, join } from 'node:path';
+import { openStore } from '../../db';
+import type { BenchRow } from '../harness';
+
+import type { ChildReport } from './exchange-child';
+
+/** Built beside the bench's bundle by scripts/bench.mjs. */
+const childBundle = (): string => join(dirname(process.argv[1]!), 'exchange-child.cjs');
+
+function runChild(args: string[]): ChildReport {
+  const r = spawnSync(process.execPath, [childBundle(), ...args], { encoding: 'utf8', maxBuffer: 1 << 20 });
+  if (r.status !== 0) throw new Error(`exchange child ${args[0]} failed: ${r.stderr}`);
+  return JSON.parse(r.stdout.trim().split('\n').pop()!) as ChildReport;
+}
+
+/** The first `count` jobs of a JSON export (one job a line, as the export writes it), as a document of its own. */
+async function firstJobs(source: string, target: string, count: number): Promise<void> {
+  const fd = openSync(target, 'w');
+  try {
+    let kept = 0;
+    let last: string | undefined;
+    for await (const line of createInterface({ input: createReadStream(source), crlfDelay: Infinity })) {
+      if (!line.startsWith('    {')) {
+        if (kept === 0) writeSync(fd, `${line}\n`);
+        continue;
+      }
+      if (kept === count) break;
+      if (last !== undefined) writeSync(fd, `${last}\n`);
+      last = line;
+      kept++;
+    }
+    if (last !== undefined) writeSync(fd, `${last.replace(/,$/, '')}\n`);
+    writeSync(fd, '  ]\n}\n');
+  } finally {
+    closeSync(fd);
+  }
+}
+
+const IMPORT_ROWS = 100_000;
+
+/**
+ * Export of the whole store (JSON and CSV) and import of 100 000 of its jobs into an empty store, each in a
+ * child process whose peak RSS is its own: the export holds one chunk of jobs at a time, the import one
+ * record, so both stay flat however large the store or the file.
+ */
+export async function exchangeRows(storeFile: string, dir: string, jobs: number, row: (name: string, value: number, unit: string, target?: string, pass?: boolean) => BenchRow): Promise<BenchRow[]> {
+  const rows: BenchRow[] = [];
+  const json = join(dir, 'export.json');
+  for (const file of [json, join(dir, 'export.csv')]) {
+    const format = file.endsWith('.csv') ? 'CSV' : 'JSON';
+    const r = runChild(['export', storeFile, file]);
+    const mb = statSync(file).size / 1e6;
+    rows.push(row(`${format} export of ${r.count} jobs (${mb.toFixed(0)} MB file): time`, r.seconds, 's'));
+    rows.push(row(`${format} export of ${r.count} jobs: peak RSS of the process`, r.peakMegabytes, 'MB', '< 200 MB', r.peakMegabytes < 200));
+  }
+  const slice = join(dir, 'import.json');
+  const count = Math.min(IMPORT_ROWS, jobs);
+  await firstJobs(json, slice, count);
+  const target = join(dir, 'import-target.db');
+  openStore(target).close();
+  const r = runChild(['import', target, slice]);
+  if (r.count !== count) throw new Error(`the import brought in ${r.count} jobs, not ${count}`);
+  rows.push(row(`JSON import of ${r.count} jobs into an empty store (one transaction): time`, r.seconds, 's', '< 15 s', r.seconds < 15));
+  rows.push(row(`JSON import of ${r.count} jobs: peak RSS of the process`, r.peakMegabytes, 'MB', '< 300 MB', r.peakMegabytes < 300));
+  return rows;
+}
