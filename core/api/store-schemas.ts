@@ -143,17 +143,31 @@ export const keepWorkingRevisionSchema = z.object({ id, reason: z.enum(['saved',
 export const restoreRevisionSchema = z.object({ id, revision: z.number().int().positive() }).strict();
 export const setJobStatusSchema = z.object({ id, status: jobStatusSchema, expectedRevision: z.number().int().positive().optional() }).strict();
 
+/** The most lines one quotation holds: a long enquiry, still one readable document. */
+export const MAX_QUOTE_LINES = 50;
+
 /**
- * Issue a quote for a stored job: the service prices it and builds the document; nothing priced comes from
- * the caller. `accept` is the estimator's reason for issuing despite open errors or an incomplete price.
+ * Issue a quotation for stored jobs: one (`jobId`) or several of one customer (`jobIds`, one line each, in
+ * that order). The service prices every line and builds the document; nothing priced comes from the caller.
+ * `accept` is the estimator's reason for issuing despite open errors or an incomplete price on any line.
  */
 export const issueQuoteSchema = z.object({
-  jobId: id,
+  jobId: id.optional(),
+  jobIds: z.array(id).min(1, 'name at least one job').max(MAX_QUOTE_LINES, `a quotation holds at most ${MAX_QUOTE_LINES} lines`).optional(),
   validityDays: z.number().int().min(1).max(365).optional(),
   accept: z.string().trim().min(3, 'say in a few words why the problems are accepted').max(500).optional(),
   /** The customer's enquiry reference and this quote's terms; what is left out comes from the customer or the shop. */
   terms: quoteTermsInputSchema.optional(),
-}).strict();
+}).strict().superRefine((q, ctx) => {
+  if ((q.jobId === undefined) === (q.jobIds === undefined)) {
+    ctx.addIssue({ code: 'custom', path: ['jobIds'], message: 'name the job (jobId) or the jobs of the quotation (jobIds), not both' });
+  }
+  const seen = new Set<number>();
+  (q.jobIds ?? []).forEach((jobId, i) => {
+    if (seen.has(jobId)) ctx.addIssue({ code: 'custom', path: ['jobIds', i], message: `job ${jobId} is named twice: a job is one line` });
+    seen.add(jobId);
+  });
+});
 export type IssueQuoteInput = z.input<typeof issueQuoteSchema>;
 
 export const listQuotesSchema = z.object({

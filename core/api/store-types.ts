@@ -160,20 +160,42 @@ export interface SimilarJob {
   lastQuoted: LastQuotedPrice | null;
 }
 
+/** One line of a quotation as its lists show it: the job it quotes, as the job stood at issue. */
+export interface QuoteLineSummary {
+  /** 1, 2, …: the item number printed on the quotation. */
+  line: number;
+  jobId: number;
+  jobRevision: number;
+  jobNumber: string;
+  partNumber: string;
+}
+
 export interface QuoteSummary {
   id: number;
   number: string;
+  /** The first line's job (a one-line quotation's only one); `lines` names every job quoted. */
   jobId: number;
   jobRevision: number;
   issuedAt: string;
   validityDays: number;
   validUntil: string;
   currency: string;
+  lines: QuoteLineSummary[];
+}
+
+/** A line as issued: the job, its spec and the figures it was quoted at. */
+export interface QuoteLine extends QuoteLineSummary {
+  job: RevisionFields & { number: string };
+  spec: Spec;
+  prices: unknown;
+  quantityBreaks: unknown[];
 }
 
 export interface Quote extends QuoteSummary {
+  /** The first line's job, spec, prices and breaks, as a one-line quote has always kept them. */
   job: RevisionFields & { number: string };
   spec: Spec;
+  /** The shop settings at issue, shared by every line. */
   settings: Settings;
   prices: unknown;
   quantityBreaks: unknown[];
@@ -182,6 +204,7 @@ export interface Quote extends QuoteSummary {
   decision: IssueDecision | null;
   /** Who issued it; '' for quotes issued before this was kept. */
   madeBy: string;
+  lines: QuoteLine[];
 }
 
 export interface Attachment {

@@ -1,8 +1,8 @@
 /** Printed documents as data: pure builders, no PDF library; service/pdf draws them. */
 export type * from './types';
 export { DOCUMENT_VERSION } from './types';
-export { quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
-export type { QuoteInput, QuoteJob } from './quote';
+export { quotationDocument, quoteDocument, quoteIssue, withQuoteIssue, OVER_UNDER_PERCENT } from './quote';
+export type { QuotationInput, QuoteInput, QuoteJob, QuoteLineInput } from './quote';
 export { quoteTermsInputSchema, statedTerms } from './quote-terms';
 export type { QuoteTermsInput, StatedTerms } from './quote-terms';
 export { travellerDocument } from './traveller';

@@ -78,22 +78,41 @@ export interface SignatureBlock {
   boxes: string[];
 }
 
+/** One line item of a quotation: one job's part, spring, prices, accepted deviations and lead time. */
+export interface QuoteLineModel {
+  /** "1", "2", …: how the customer refers to the line. */
+  item: string;
+  /** "Item 2: FG-101", the heading of the line on a quotation of several. */
+  title: string;
+  /** Part number, drawing and our job. */
+  part: Field[];
+  specification: { heading: string; fields: Field[] };
+  drawing: FigureModel | null;
+  /** The line's quantity breaks and its one-off charges. */
+  prices: { currency: string; table: TableModel; notes: string[] };
+  /** Engineering exceptions the shop accepted on this line, in the customer's words. */
+  exceptions: string[];
+  leadTime: string;
+  /** Unit price against quantity, when the shop prints it on quotes. */
+  priceCurve: FigureModel | null;
+}
+
+/**
+ * A quotation for one customer: one or several line items, each a job with its own breaks and charges,
+ * under one number, one validity and one set of terms.
+ */
 export interface QuoteDocument extends DocumentCommon {
   type: 'quote';
   issue: QuoteIssue;
   customer: { name: string; lines: string[] };
-  part: Field[];
-  specification: { heading: string; fields: Field[] };
-  drawing: FigureModel | null;
-  prices: { currency: string; table: TableModel; notes: string[] };
-  /** Engineering exceptions the shop accepted, in the customer's words. */
-  exceptions: string[];
-  leadTime: string;
-  /** Payment, delivery, packaging and certificates as offered on this quote. */
+  /** Printed beside the customer: the part of a one-line quotation, or what several lines cover. */
+  overview: Field[];
+  /** The lines at a glance (several lines only); null for a one-line quotation. */
+  items: TableModel | null;
+  lines: QuoteLineModel[];
+  /** Payment, delivery, packaging and certificates as offered on this quotation. */
   commercial: Field[];
   terms: string[];
-  /** Unit price against quantity, when the shop prints it on quotes. */
-  priceCurve: FigureModel | null;
   signature: SignatureBlock | null;
 }
 
@@ -139,9 +158,8 @@ const tableQuantities: QuantityMap = { columns: { weight: 'ratio' } };
 export const documentQuantities: QuantityMap = {
   version: 'ordinal',
   issue: { validityDays: 'days' },
-  drawing: figureQuantities,
-  priceCurve: figureQuantities,
+  lines: { drawing: figureQuantities, priceCurve: figureQuantities, prices: { table: tableQuantities } },
+  items: tableQuantities,
   figures: figureQuantities,
-  prices: { table: tableQuantities },
   inspection: { table: tableQuantities },
 };

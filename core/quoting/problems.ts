@@ -15,6 +15,8 @@ export interface IssueProblem {
   path: string;
   /** For a finding: the sentence the quote prints when it is accepted. */
   customerText: string | null;
+  /** The job number of the line, on a quotation of several lines. */
+  job?: string;
 }
 
 export function issueProblems(spec: Spec, findings: readonly Finding[], estimate: CostEstimate): IssueProblem[] {
@@ -33,5 +35,5 @@ export interface IssueDecision {
 
 /** One line naming every problem, for the refusal an API or CLI caller sees. */
 export function problemSummary(problems: readonly IssueProblem[]): string {
-  return problems.map((p) => `${p.kind === 'price' ? 'price incomplete' : 'open error'}: ${p.message}`).join('; ');
+  return problems.map((p) => `${p.kind === 'price' ? 'price incomplete' : 'open error'}${p.job ? ` on ${p.job}` : ''}: ${p.message}`).join('; ');
 }

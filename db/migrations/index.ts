@@ -9,6 +9,7 @@ import { updateToVersion0006 } from './0006-keep-issued-rows';
 import { updateToVersion0007 } from './0007-estimating';
 import { updateToVersion0008 } from './0008-job-requirements';
 import { updateToVersion0009 } from './0009-list-and-shape-indexes';
+import { updateToVersion0010 } from './0010-quotation-lines';
 import { updateToVersion0011 } from './0011-customer-details';
 import { updateToVersion0012 } from './0012-enquiries';
 import { updateToVersion0013 } from './0013-working-revisions';
@@ -32,6 +33,7 @@ export const migrations: readonly Migration[] = [
   { version: 7, name: 'estimating', update: updateToVersion0007 },
   { version: 8, name: 'job requirements', update: updateToVersion0008 },
   { version: 9, name: 'list and shape indexes', update: updateToVersion0009 },
+  { version: 10, name: 'quotation lines', update: updateToVersion0010 },
   { version: 11, name: 'customer details', update: updateToVersion0011 },
   { version: 12, name: 'enquiries', update: updateToVersion0012 },
   { version: 13, name: 'working revisions', update: updateToVersion0013 },

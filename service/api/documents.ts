@@ -4,7 +4,7 @@ import type { documentMethods, PrintedPdf } from '../../core/api/documents';
 import type { Result } from '../../core/result';
 import { getJob, getQuote, getSettings, listCustomers } from '../../db';
 import { issuedQuoteDocument, storedPrintJob, travellerFor } from '../pdf/printing';
-import { issueJobQuote } from './quoting';
+import { issueQuotation } from './quoting';
 import type { StoreContext, TypedHandlers } from './store';
 
 const asApi = <T>(r: Result<T>): ApiResult<T> => (r.ok ? r : { ok: false, error: inputError(r.errors) });
@@ -27,7 +27,7 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
   };
   return {
     issueQuote: (input) => {
-      const issued = issueJobQuote(ctx.store, input, now());
+      const issued = issueQuotation(ctx.store, input, now());
       return issued.ok ? { ok: true, value: issued.value.quote } : issued;
     },
     printTraveller: async ({ jobId, quantity, customerOrder }) => {
@@ -39,7 +39,7 @@ export function documentHandlers(ctx: StoreContext, now: () => Date = () => new 
       return pdf(await (await writers()).renderTraveller(model.value), `traveller-${j.job.number}.pdf`, j.job.number, model.value.findings);
     },
     printQuote: async (input) => {
-      const issued = issueJobQuote(ctx.store, input, now());
+      const issued = issueQuotation(ctx.store, input, now());
       if (!issued.ok) return issued;
       const number = issued.value.quote.number;
       return pdf(await (await writers()).renderQuote(issued.value.model), `quote-${number}.pdf`, number);

@@ -54,6 +54,7 @@ const subcommands: Record<string, Sub> = {
     return hits.map(({ job, ...hit }) => ({ ...hit, customer: job.customer?.name ?? null, partNumber: job.partNumber, status: job.status }));
   },
   revisions: async (args, call) => call('jobRevisions', { id: await jobId(call, positional(args, 1, 'ID', 'jobs revisions')) }),
+  quotes: async (args, call) => call('listQuotes', { jobId: await jobId(call, positional(args, 1, 'ID', 'jobs quotes')), limit: intOption(args, 'limit') ?? 50 }),
   status: async (args, call) => call('setJobStatus', {
     id: await jobId(call, positional(args, 1, 'ID', 'jobs status')), status: positional(args, 2, 'STATUS', 'jobs status') as JobStatus,
   }),
@@ -74,7 +75,8 @@ export const jobsCommand: Command = {
     '  [--material ID] [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
     '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB,',
     '  jobs copy ID|NUMBER --db DB (a new job from a past one), jobs archive ID|NUMBER [--undo] --db DB (jobs list --archived lists them),',
-    '  jobs delete ID|NUMBER --db DB (a draft never quoted), jobs undelete ID --db DB (the id the deletion printed)',
+    '  jobs delete ID|NUMBER --db DB (a draft never quoted), jobs undelete ID --db DB (the id the deletion printed),',
+    '  jobs quotes ID|NUMBER [--limit N] --db DB   every quotation the job is a line of, newest first, with its lines',
   ].join('\n'),
   async run(args, out) {
     const sub = subcommandOf('jobs', args, subcommands);

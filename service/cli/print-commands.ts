@@ -66,17 +66,44 @@ function termsOption(args: ParsedArgs): { terms?: QuoteTermsInput } {
   return Object.keys(terms).length > 0 ? { terms } : {};
 }
 
-/** A stored job (--job ID|NUMBER) goes through the API, which issues its quote; a file prints as a draft. */
+/** `--jobs ID,NUMBER,…`: the jobs of a quotation of several lines, each by id or job number, in line order. */
+async function jobIdsOption(args: ParsedArgs, call: Caller): Promise<number[] | undefined> {
+  const list = args.options.get('jobs');
+  if (list === undefined) return undefined;
+  const refs = typeof list === 'string' ? list.split(',').map((r) => r.trim()).filter((r) => r !== '') : [];
+  if (refs.length === 0) {
+    throw new InputError([{ code: 'invalid-option', path: '--jobs', message: '--jobs needs the jobs of the quotation, comma-separated, e.g. --jobs J-26-0004,J-26-0007' }]);
+  }
+  const ids: number[] = [];
+  for (const ref of refs) ids.push((await call('getJob', jobRef(ref))).id);
+  return ids;
+}
+
+/** The quotation of stored jobs the options name (--jobs for several lines, --job for one), or null. */
+async function issueRequest(args: ParsedArgs, call: Caller): Promise<{ jobId: number } | { jobIds: number[] } | null> {
+  const jobIds = await jobIdsOption(args, call);
+  const ref = args.options.get('job');
+  if (jobIds !== undefined && ref !== undefined) {
+    throw new InputError([{ code: 'invalid-option', path: '--jobs', message: 'give --job for one job or --jobs for several, not both' }]);
+  }
+  if (jobIds !== undefined) return { jobIds };
+  return typeof ref === 'string' ? { jobId: (await call('getJob', jobRef(ref))).id } : null;
+}
+
+/** Stored jobs (--job, --jobs) go through the API, which issues their quotation; a file prints as a draft. */
 async function printQuote(args: ParsedArgs, call: Caller): Promise<Record<string, unknown>> {
   const out = requireOption(args, 'out');
   const number = args.options.get('quote');
-  const ref = args.options.get('job');
-  if (typeof number === 'string' || typeof ref === 'string') {
-    const printed = typeof number === 'string'
-      ? await call('reprintQuote', { number })
-      : await call('printQuote', { jobId: (await call('getJob', jobRef(ref as string))).id, ...acceptOption(args), ...termsOption(args) });
+  if (typeof number === 'string') {
+    const printed = await call('reprintQuote', { number });
     write(out, Buffer.from(printed.base64, 'base64'));
-    return { file: out, quote: printed.reference, issued: typeof number !== 'string', reprint: typeof number === 'string' };
+    return { file: out, quote: printed.reference, issued: false, reprint: true };
+  }
+  const request = await issueRequest(args, call);
+  if (request !== null) {
+    const printed = await call('printQuote', { ...request, ...acceptOption(args), ...termsOption(args) });
+    write(out, Buffer.from(printed.base64, 'base64'));
+    return { file: out, quote: printed.reference, issued: true, reprint: false };
   }
   const print = printFile(args, 'print quote');
   const { model, estimate } = draftQuote(print, await call('getSettings', {}), new Date(), termsOption(args));
@@ -110,8 +137,9 @@ const subcommands: Record<string, (args: ParsedArgs, call: Caller) => Promise<Re
 export const printCommand: Command = {
   name: 'print',
   usage: [
-    'print quote FILE|--job ID [--accept "reason"] --db DB --out x.pdf   quotation PDF; for a stored job the quote is issued',
-    '  and kept; open errors or an incomplete price refuse the issue unless --accept gives the reason for accepting them',
+    'print quote FILE|--job ID|--jobs ID,ID,… [--accept "reason"] --db DB --out x.pdf   quotation PDF; for stored jobs the',
+    '  quotation is issued and kept, one line per job of --jobs (all of one customer); open errors or an incomplete price',
+    '  on any line refuse the issue unless --accept gives the reason for accepting them',
     '  [--enquiry REF] [--payment TEXT] [--delivery TEXT] [--packaging TEXT] [--certificates "a; b"] [--estimator NAME]',
     '  state this quote\'s enquiry reference and terms (else the customer\'s and the shop\'s)',
     '  print quote --quote NUMBER --db DB --out x.pdf reprint an issued quote from its snapshot',

@@ -1,7 +1,7 @@
 import type { Customer, Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
-import { parseQuoteDocument, quoteDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
+import { parseQuoteDocument, quotationDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
 import type { PrintJob, QuoteDocument, QuoteTermsInput, TravellerDocument } from '../../core/documents';
 import type { Result } from '../../core/result';
 import type { Settings } from '../../core/settings/schema';
@@ -38,14 +38,31 @@ export interface DraftOptions {
   terms?: QuoteTermsInput;
 }
 
-export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
-  const estimate = options.estimate ?? estimateCost(print.spec, settings, undefined, jobPricing(print));
-  const model = quoteDocument({
-    spec: print.spec, settings, estimate, issuedAt: now.toISOString(),
-    validityDays: options.validityDays ?? settings.defaults.quoteValidityDays, job: print, exceptions: options.exceptions ?? [],
+/** One line of a draft quotation: the job and, when the issue has already worked them, its estimate and exceptions. */
+export interface DraftLine {
+  print: PrintJob;
+  estimate?: CostEstimate;
+  exceptions?: string[];
+}
+
+/** A quotation of one or several lines, each priced with today's settings unless its estimate is given. */
+export function draftQuotation(lines: readonly DraftLine[], settings: Settings, now: Date,
+  options: Pick<DraftOptions, 'validityDays' | 'terms'> = {}): { model: QuoteDocument; estimates: CostEstimate[] } {
+  const estimates = lines.map((l) => l.estimate ?? estimateCost(l.print.spec, settings, undefined, jobPricing(l.print)));
+  const model = quotationDocument({
+    settings, issuedAt: now.toISOString(), validityDays: options.validityDays ?? settings.defaults.quoteValidityDays,
     ...(options.terms ? { terms: options.terms } : {}),
+    lines: lines.map((l, i) => ({ spec: l.print.spec, job: l.print, estimate: estimates[i]!, exceptions: l.exceptions ?? [] })),
   });
-  return { model, estimate };
+  return { model, estimates };
+}
+
+export function draftQuote(print: PrintJob, settings: Settings, now: Date, options: DraftOptions = {}): { model: QuoteDocument; estimate: CostEstimate } {
+  const line: DraftLine = { print, ...(options.estimate ? { estimate: options.estimate } : {}), exceptions: options.exceptions ?? [] };
+  const { model, estimates } = draftQuotation([line], settings, now, {
+    ...(options.validityDays === undefined ? {} : { validityDays: options.validityDays }), ...(options.terms ? { terms: options.terms } : {}),
+  });
+  return { model, estimate: estimates[0]! };
 }
 
 /** An issued quote prints from its snapshot alone, whatever the prices are today. */

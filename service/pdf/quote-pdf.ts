@@ -1,5 +1,5 @@
 /** The quotation as a PDF, drawn from its document model alone (plus the embedded fonts). */
-import type { FigureModel, QuoteDocument } from '../../core/documents';
+import type { FigureModel, QuoteDocument, QuoteLineModel } from '../../core/documents';
 import { figure } from './figure';
 import { FONT } from './fonts';
 import type { Doc } from './layout';
@@ -23,19 +23,19 @@ function customerHeight(doc: Doc, m: QuoteDocument, width: number): number {
   return 10 + textHeight(doc, m.customer.name, width, FONT.bold, size.heading) + lines;
 }
 
-/** The customer on the left, the part on the right, side by side. */
+/** The customer on the left, what the quotation covers (the part of a one-line quotation) on the right. */
 function addressee(doc: Doc, m: QuoteDocument): void {
   const half = (contentWidth(doc) - 20) / 2;
   const x = leftEdge(doc);
   const right = x + half + 20;
-  const height = Math.max(customerHeight(doc, m, half), fieldGridHeight(doc, m.part, { columns: 1, width: half }));
+  const height = Math.max(customerHeight(doc, m, half), fieldGridHeight(doc, m.overview, { columns: 1, width: half }));
   ensureSpace(doc, height);
   const y = doc.y;
   let top = y + put(doc, 'Prepared for', x, y, half, { pt: size.small, fill: colour.muted });
   top += put(doc, m.customer.name, x, top, half, { font: FONT.bold, pt: size.heading });
   for (const line of m.customer.lines) top += put(doc, line, x, top, half, { pt: size.small });
   doc.y = y;
-  fieldGrid(doc, m.part, { columns: 1, x: right, width: half, labelShare: 0.35 });
+  fieldGrid(doc, m.overview, { columns: 1, x: right, width: half, labelShare: 0.35 });
   doc.y = y + height + gap.block;
 }
 
@@ -43,7 +43,7 @@ const PRICE_PT = size.body + 0.5;
 const LEAD_TIME_GRID = { columns: 1, labelShare: 0.2 };
 
 /** Prices, their notes and the lead time stay together on one page. */
-function prices(doc: Doc, m: QuoteDocument): void {
+function prices(doc: Doc, m: QuoteLineModel): void {
   const leadTime = [{ label: 'Lead time', value: m.leadTime }];
   const height = tableHeight(doc, m.prices.table, { pt: PRICE_PT }) + 2 * gap.heading
     + paragraphsHeight(doc, m.prices.notes, contentWidth(doc), { pt: size.small }) + fieldGridHeight(doc, leadTime, LEAD_TIME_GRID);
@@ -83,6 +83,39 @@ function drawing(doc: Doc, f: FigureModel): void {
   figure(doc, f, contentWidth(doc), maxHeight);
 }
 
+/**
+ * The spring, its prices, the deviations accepted on it and its drawing; `beforeDrawing` puts what a
+ * one-line quotation prints there (its payment and delivery terms).
+ */
+function lineBody(doc: Doc, line: QuoteLineModel, beforeDrawing?: () => void): void {
+  heading(doc, line.specification.heading);
+  fieldGrid(doc, line.specification.fields, { columns: 2 });
+  space(doc);
+  prices(doc, line);
+  if (line.exceptions.length > 0) {
+    heading(doc, 'Accepted deviations from the drawing');
+    paragraphs(doc, line.exceptions, { bullet: true });
+    space(doc);
+  }
+  beforeDrawing?.();
+  if (line.drawing) drawing(doc, line.drawing);
+}
+
+const ITEM_PART_GRID = { columns: 3, labelShare: 0.4 };
+const ITEMS_KEEP = 120;
+
+/** One line of a quotation of several: its title and part fields kept with the start of its spring. */
+function item(doc: Doc, line: QuoteLineModel): void {
+  const keep = fieldGridHeight(doc, line.part, ITEM_PART_GRID) + 80;
+  ensureSpace(doc, size.name + gap.heading + keep);
+  const x = leftEdge(doc);
+  const y = doc.y;
+  doc.y = y + put(doc, line.title, x, y, contentWidth(doc), { font: FONT.bold, pt: size.name, fill: colour.accent }) + gap.heading;
+  fieldGrid(doc, line.part, ITEM_PART_GRID);
+  space(doc, gap.heading);
+  lineBody(doc, line);
+}
+
 export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
   const open = openDocument(m);
   const { doc } = open;
@@ -94,17 +127,18 @@ export async function renderQuote(m: QuoteDocument): Promise<Buffer> {
     ],
   });
   addressee(doc, m);
-  heading(doc, m.specification.heading);
-  fieldGrid(doc, m.specification.fields, { columns: 2 });
-  space(doc);
-  prices(doc, m);
-  if (m.exceptions.length > 0) {
-    heading(doc, 'Accepted deviations from the drawing');
-    paragraphs(doc, m.exceptions, { bullet: true });
-    space(doc);
+  if (m.lines.length === 1) {
+    lineBody(doc, m.lines[0]!, () => commercial(doc, m));
+  } else {
+    if (m.items) {
+      // The heading keeps to the table's first rows; a long table goes on over the page.
+      heading(doc, 'Items', Math.min(tableHeight(doc, m.items), ITEMS_KEEP));
+      drawTable(doc, m.items);
+      space(doc);
+    }
+    for (const line of m.lines) item(doc, line);
+    commercial(doc, m);
   }
-  commercial(doc, m);
-  if (m.drawing) drawing(doc, m.drawing);
   heading(doc, 'Terms');
   paragraphs(doc, m.terms, { bullet: true });
   space(doc);

@@ -110,7 +110,7 @@ describe('price overrides', () => {
     expect(e.breaks.map((b) => b.total)).toEqual(plain.breaks.map((b) => b.total));
     const doc = quoteDocument({ spec, settings: settingsOf(shop), estimate: e, issuedAt: '2026-11-02T09:00:00Z',
       job: { number: null, customerName: null, partNumber: '', drawingNumber: '', drawingRevision: '', leadTimeDays: null } });
-    expect(doc.prices.table.rows.slice(2)).toEqual([['Tooling, once per order', '', '250.00'], ['First-article inspection report, once per order', '', '85.00']]);
+    expect(doc.lines[0]!.prices.table.rows.slice(2)).toEqual([['Tooling, once per order', '', '250.00'], ['First-article inspection report, once per order', '', '85.00']]);
   });
 
   it('the shop\'s rounding rule sets the unit price, and the total is that price times the quantity', () => {

@@ -7,6 +7,7 @@ import { version0006 } from './0006-keep-issued-rows';
 import { version0007 } from './0007-estimating';
 import { version0008 } from './0008-job-requirements';
 import { version0009 } from './0009-list-and-shape-indexes';
+import { version0010 } from './0010-quotation-lines';
 import { version0011 } from './0011-customer-details';
 import { version0012 } from './0012-enquiries';
 import { version0013 } from './0013-working-revisions';
@@ -28,6 +29,7 @@ export const pgMigrations: readonly { version: number; sql: string; after?: (c: 
   { version: 7, sql: version0007 },
   { version: 8, sql: version0008 },
   { version: 9, sql: version0009 },
+  { version: 10, sql: version0010 },
   { version: 11, sql: version0011 },
   { version: 12, sql: version0012 },
   { version: 13, sql: version0013 },

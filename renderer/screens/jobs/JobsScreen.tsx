@@ -14,6 +14,7 @@ import { FilterBar, noFilters } from './JobFilters';
 import type { Sort, SortKey } from './JobTable';
 import { JobTable } from './JobTable';
 import { Pager } from './Pager';
+import { QuoteSelected } from './QuoteSelected';
 import { ShelfNotice, useShelfActions } from './ShelfActions';
 
 export const PAGE_SIZE = 50;
@@ -43,7 +44,7 @@ function useJobRows(text: string, filters: Filters, sort: Sort, after: string | 
   };
 }
 
-/** The job book: search by text, filter, sort, page, find similar springs, print travellers for a selection. */
+/** The job book: search by text, filter, sort, page, find similar springs, print travellers or quote a selection. */
 export function JobsScreen() {
   const api = useApi();
   const nav = useNavigation();
@@ -93,6 +94,7 @@ export function JobsScreen() {
         <ScreenHeading id="jobs-title">Jobs</ScreenHeading>
         <div className="screen__actions">
           <BatchPrint selected={selected} onDone={() => setSelected(new Set())} />
+          <QuoteSelected selected={selected} onDone={() => { setSelected(new Set()); rows.reload(); }} />
           <button type="button" className="button button--primary" onClick={() => nav.newJob()}>New job</button>
         </div>
       </div>

@@ -48,7 +48,7 @@ describe('a quote is issued by job id and priced by the service', () => {
     expect(quote.decision).toBeNull();
     const estimate = await must<{ breaks: { unitPrice: number }[] }>('costEstimate', { spec: created.spec });
     expect((quote.prices as typeof estimate).breaks.map((b) => b.unitPrice)).toEqual(estimate.breaks.map((b) => b.unitPrice));
-    expect((quote.document as QuoteDocument).exceptions).toEqual([]);
+    expect((quote.document as QuoteDocument).lines[0]!.exceptions).toEqual([]);
     expect((await must<Job>('getJob', { id: created.id })).status).toBe('quoted');
     service.close();
   });
@@ -76,7 +76,7 @@ describe('open errors or an incomplete price need an explicit decision', () => {
     expect(quote.number).toBe('Q-26-0001');
     expect(quote.decision?.reason).toBe('customer confirmed the 18 mm is a stop, not a working length');
     expect(quote.decision?.problems.map((p) => p.code)).toEqual(['working-length-below-solid']);
-    const exceptions = (quote.document as QuoteDocument).exceptions;
+    const exceptions = (quote.document as QuoteDocument).lines[0]!.exceptions;
     expect(exceptions).toEqual(['A working length on the drawing is shorter than the spring\'s solid length: the spring cannot reach it.']);
     expect(exceptions.join(' ')).not.toMatch(/working-length-below-solid|MPa|allowable/);
     const again = await must<Quote>('getQuote', { number: quote.number });
@@ -91,7 +91,7 @@ describe('open errors or an incomplete price need an explicit decision', () => {
     expect(refused.ok ? [] : refused.error.details!.map((d) => d.code)).toEqual(['no-wire-price']);
     const quote = await must<Quote>('issueQuote', { jobId: created.id, accept: 'wire price to follow from the mill; held at last order' });
     expect(quote.decision?.problems).toMatchObject([{ kind: 'price', code: 'no-wire-price', customerText: null }]);
-    expect((quote.document as QuoteDocument).exceptions).toEqual([]);
+    expect((quote.document as QuoteDocument).lines[0]!.exceptions).toEqual([]);
     service.close();
   });
 

@@ -68,6 +68,11 @@ describe.each(backends)('the job store on $name', (backend) => {
     expect((anna.sql('SELECT made_by FROM first_off_records LIMIT 1').get() as { made_by: string }).made_by).toBe('Anna (estimator)');
     refused(anna, 'UPDATE quotes SET currency = ? WHERE id = ?', 'XXX', quote.id);
     refused(anna, 'DELETE FROM quotes WHERE id = ?', quote.id);
+    refused(anna, 'UPDATE quote_lines SET prices = ? WHERE quote_id = ?', '{}', quote.id);
+    refused(anna, 'DELETE FROM quote_lines WHERE quote_id = ?', quote.id);
+    // A line added to an issued quote after the fact is refused: the quote has the lines it was issued with.
+    refused(anna, `INSERT INTO quote_lines (quote_id, line, job_id, job_revision, job, spec, prices, quantity_breaks)
+      SELECT quote_id, 2, job_id, job_revision, job, spec, prices, quantity_breaks FROM quote_lines WHERE quote_id = ?`, quote.id);
     refused(anna, 'UPDATE job_revisions SET reason = ? WHERE job_id = ?', 'forged', first.id);
     refused(anna, 'DELETE FROM job_revisions WHERE job_id = ?', first.id);
     refused(anna, 'UPDATE first_off_records SET notes = ?', 'forged');

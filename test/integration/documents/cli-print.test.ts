@@ -79,7 +79,7 @@ describe('command line: print quote and print traveller', () => {
       expect(list.ok && list.value.map((x) => x.number)).toEqual([out.quote]);
       const stored = getQuote(store, { number: out.quote });
       if (!stored.ok) throw new Error(JSON.stringify(stored.error));
-      expect(stored.value.document).toMatchObject({ type: 'quote', prices: { currency: 'EUR' } });
+      expect(stored.value.document).toMatchObject({ type: 'quote', lines: [{ prices: { currency: 'EUR' } }] });
     } finally {
       store.close();
     }
@@ -139,5 +139,50 @@ describe('command line: print quote and print traveller', () => {
     const text = (await pdfText(readFileSync(join(dir, 'accepted.pdf')))).all;
     expect(text).toContain('Accepted deviations from the drawing');
     expect(text).toContain('shorter than the spring\'s solid length');
+  });
+
+  it('issues one quotation for several jobs of a customer with --jobs, refused on an open error until --accept gives the reason', async () => {
+    const store = openStore(db);
+    const numbers: string[] = [];
+    try {
+      for (const [part, spec] of [['TTD-INJ-3', valveSpec], ['TTD-STOP-4', { ...valveSpec, loads: [{ length: 5 }] }]] as const) {
+        const created = createJob(store, { customer: { name: 'Tamsin Test Devices (demo)' }, partNumber: part, orderQuantity: 400, spec });
+        if (!created.ok) throw new Error(JSON.stringify(created.error));
+        numbers.push(created.value.number);
+      }
+    } finally {
+      store.close();
+    }
+    const jobs = `${jobNumber},${numbers.join(',')}`;
+    const refused = cli(['print', 'quote', '--jobs', jobs, '--db', db, '--out', join(dir, 'lines-refused.pdf')]);
+    expect(refused.status).toBe(2);
+    const errors = JSON.parse(refused.stderr).errors;
+    expect(errors[0].message).toContain(`open error on ${numbers[1]}`);
+    expect(errors.slice(1)).toContainEqual(expect.objectContaining({ code: 'working-length-below-solid', path: 'jobIds[2].spec.loads[0].length' }));
+    expect(cli(['print', 'quote', '--jobs', ',', '--db', db, '--out', join(dir, 'x.pdf')]).status).toBe(2);
+
+    const issued = cli(['print', 'quote', '--jobs', jobs, '--accept', 'customer fits a stop on TTD-STOP-4', '--db', db, '--out', join(dir, 'lines.pdf')]);
+    expect(issued.status, issued.stderr).toBe(0);
+    const number = JSON.parse(issued.stdout).quote;
+    const reopened = openStore(db);
+    try {
+      const quote = getQuote(reopened, { number });
+      if (!quote.ok) throw new Error(JSON.stringify(quote.error));
+      expect(quote.value.lines.map((l) => l.jobNumber)).toEqual([jobNumber, ...numbers]);
+      expect(quote.value.decision?.reason).toBe('customer fits a stop on TTD-STOP-4');
+      const history = listQuotes(reopened, { jobId: quote.value.lines[1]!.jobId });
+      expect(history.ok && history.value.map((q) => q.number)).toEqual([number]);
+    } finally {
+      reopened.close();
+    }
+    const history = cli(['jobs', 'quotes', numbers[0]!, '--db', db]);
+    expect(history.status, history.stderr).toBe(0);
+    expect(JSON.parse(history.stdout)).toMatchObject([{ number, lines: [{ line: 1, jobNumber }, { line: 2, jobNumber: numbers[0] }, { line: 3 }] }]);
+    const text = (await pdfText(readFileSync(join(dir, 'lines.pdf')))).all;
+    expect(text).toContain('Item 3: TTD-STOP-4');
+    expect(text).toContain('shorter than the spring\'s solid length');
+    const again = cli(['print', 'quote', '--quote', number, '--db', db, '--out', join(dir, 'lines-again.pdf')]);
+    expect(again.status, again.stderr).toBe(0);
+    expect(readFileSync(join(dir, 'lines-again.pdf')).equals(readFileSync(join(dir, 'lines.pdf')))).toBe(true);
   });
 });

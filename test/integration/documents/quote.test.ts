@@ -74,7 +74,7 @@ describe('quote PDF', () => {
     const issued = withQuoteIssue(model, { number: 'Q-26-0003', issuedAt: '2026-03-05T10:00:00.000Z' });
     expect(issued.issue).toEqual({ number: 'Q-26-0003', date: '2026-03-05', validUntil: '2026-04-19', validityDays: 45 });
     expect(issued.reference).toBe('Quotation Q-26-0003');
-    expect(issued.prices).toEqual(model.prices);
+    expect(issued.lines).toEqual(model.lines);
   });
 
   it('prints the shop\'s logo, leaves out one it cannot read, and names the bake of a plated spring', async () => {
@@ -108,10 +108,10 @@ describe('quote PDF', () => {
 
   it('refuses a damaged stored model and names the field', () => {
     const damaged = JSON.parse(JSON.stringify(model)) as Record<string, unknown>;
-    (damaged.prices as Record<string, unknown>).table = null;
+    ((damaged.lines as Record<string, Record<string, unknown>>[])[0]!.prices!).table = null;
     const parsed = parseQuoteDocument(damaged);
     expect(parsed.ok).toBe(false);
-    expect(!parsed.ok && parsed.errors[0]!.path).toBe('document.prices.table');
+    expect(!parsed.ok && parsed.errors[0]!.path).toBe('document.lines[0].prices.table');
     expect(parseQuoteDocument(JSON.parse(JSON.stringify(model))).ok).toBe(true);
   });
 });

@@ -33,7 +33,7 @@ describe('the quote in the trade\'s form', () => {
   it('addresses the customer\'s contact at their address and names their enquiry', async () => {
     const model = quote(spec, settingsOf(), { terms: { enquiryReference: 'RFQ 2026/118' } });
     expect(model.customer.lines).toEqual(['Attn. R. Okafor, purchasing', '4 Mill Lane', 'Demo Town DT1 2AB', 'buyer@harrow.example', 'Tel. 555 0101']);
-    expect(value(model.part, 'Your enquiry')).toBe('RFQ 2026/118');
+    expect(value(model.overview, 'Your enquiry')).toBe('RFQ 2026/118');
     const text = (await pdfText(await renderQuote(model))).all;
     for (const s of ['Attn. R. Okafor, purchasing', 'Demo Town DT1 2AB', 'Your enquiry RFQ 2026/118']) expect(text).toContain(s);
   });
@@ -73,23 +73,25 @@ describe('the quote in the trade\'s form', () => {
 
   it('marks the drawing\'s free length as a reference dimension when a force is specified', () => {
     // EN 15800 / DIN 2095 (from memory): with a force specified, L0 is the maker's to adjust and a reference dimension.
-    expect(value(quote(spec, settingsOf()).specification.fields, 'Free length L0')).toBe('60.00 mm (reference)');
+    expect(value(quote(spec, settingsOf()).lines[0]!.specification.fields, 'Free length L0')).toBe('60.00 mm (reference)');
     const noForce = specOf({ ...valveSpec, loads: [{ length: 45 }] });
-    expect(value(quote(noForce, settingsOf()).specification.fields, 'Free length L0')).toBe('60.00 mm');
+    expect(value(quote(noForce, settingsOf()).lines[0]!.specification.fields, 'Free length L0')).toBe('60.00 mm');
   });
 
   it('prints the price against quantity only when the shop turns it on for quotes', async () => {
-    expect(quote(spec, settingsOf()).priceCurve).toBeNull();
+    expect(quote(spec, settingsOf()).lines[0]!.priceCurve).toBeNull();
     const on = quote(spec, settingsOf({ quoteTerms: { ...terms, priceCurveOnQuote: true } }));
-    expect(on.priceCurve?.svg).toContain('<svg');
+    expect(on.lines[0]!.priceCurve?.svg).toContain('<svg');
     expect((await pdfText(await renderQuote(on))).all).toContain('Unit price (EUR) against quantity');
   });
 
   it('reads a snapshot issued before these fields with none of them', () => {
     const model = quote(spec, settingsOf());
-    const { commercial: _c, priceCurve: _p, signature: _s, ...older } = model;
-    const read = parseQuoteDocument(JSON.parse(JSON.stringify(older)));
-    expect(read.ok && { c: read.value.commercial, p: read.value.priceCurve, s: read.value.signature }).toEqual({ c: [], p: null, s: null });
+    // The one-job shape quotes were kept in before quotations had lines, and before these fields.
+    const { commercial: _c, signature: _s, overview: _o, items: _i, lines: [line], ...head } = model;
+    const { priceCurve: _p, item: _n, title: _t, ...part } = line!;
+    const read = parseQuoteDocument(JSON.parse(JSON.stringify({ ...head, ...part })));
+    expect(read.ok && { c: read.value.commercial, p: read.value.lines[0]!.priceCurve, s: read.value.signature }).toEqual({ c: [], p: null, s: null });
   });
 });
 

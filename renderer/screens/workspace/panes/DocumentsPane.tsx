@@ -12,6 +12,7 @@ import { parseNumber } from '../../../model/numbers';
 import type { FieldError } from '../../../../core/result';
 import { IssuedQuotes } from './IssuedQuotes';
 import { IssueDecision } from './IssueDecision';
+import { QuotationLines } from './QuotationLines';
 
 /** Quote and traveller for the saved job, and the quotes already issued with their dates. */
 export function DocumentsPane({ editor }: { editor: JobEditor }) {
@@ -55,6 +56,9 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
   const [quantityText, setQuantityText] = useState('');
   const [issued, setIssued] = useState(0);
   const [problems, setProblems] = useState<FieldError[] | null>(null);
+  const [chosen, setChosen] = useState<Set<number>>(() => new Set());
+  const lines = [job.id, ...[...chosen].sort((a, b) => a - b)];
+  const issueLabel = lines.length === 1 ? 'Issue and print quote (PDF)' : `Issue and print quote of ${lines.length} lines (PDF)`;
   const [customerOrder, setCustomerOrder] = useState('');
   const [terms, setTerms] = useState<QuoteTermsDraft>({});
   const shop = useShopData();
@@ -98,7 +102,9 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
         </section>
         <section className="panel" aria-labelledby="quote-title">
           <h3 id="quote-title" className="panel__title">Quotation</h3>
-          <p className="muted">Printing issues a new numbered quote: today’s prices for revision {job.revision} are kept with it and never change.</p>
+          <p className="muted">Printing issues a new numbered quote: today’s prices for revision {job.revision} are kept with it and never change.
+            Each job ticked below is a further line, priced on its own.</p>
+          <QuotationLines job={job} chosen={chosen} onChange={setChosen} disabled={off} refresh={issued} />
           <PlainInput label="Customer's enquiry reference" value={terms.enquiryReference ?? ''} onChange={(v) => setTerms({ ...terms, enquiryReference: v })} />
           <details className="quote-terms">
             <summary>Terms on this quote</summary>
@@ -111,7 +117,7 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
             <PlainInput label="Estimator" value={terms.estimator ?? ''} placeholder={shopTerms?.estimator} onChange={(v) => setTerms({ ...terms, estimator: v })} />
           </details>
           <button type="button" className="button button--primary" disabled={off}
-            onClick={() => void run('Issuing and printing the quote', () => printer.print('quote', job.id, undefined, undefined, quoteExtras))}>Issue and print quote (PDF)</button>
+            onClick={() => void run('Issuing and printing the quote', () => printer.quotation(lines, undefined, quoteExtras))}>{issueLabel}</button>
         </section>
       </div>
       {blocked ? <p className="muted">{blocked}</p> : null}
@@ -131,7 +137,7 @@ function JobDocuments({ job, pending }: { job: Job; pending: boolean }) {
       </Caution>
       <IssueDecision problems={problems} onCancel={() => setProblems(null)} onIssue={(reason) => {
         setProblems(null);
-        void run('Issuing and printing the quote', () => printer.print('quote', job.id, undefined, reason, quoteExtras));
+        void run('Issuing and printing the quote', () => printer.quotation(lines, reason, quoteExtras));
       }} />
       <IssuedQuotes job={job} refresh={issued} disabled={off} onReprint={(number) => void run(`Reprinting ${number}`, () => printer.reprint(number))} />
     </div>

@@ -5,6 +5,9 @@ import { Dialog } from '../../../components/Dialog';
 /** Shortest reason the service takes: a few words that a later reader can act on. */
 const MIN_REASON = 3;
 
+/** A gap in the price names the shop setting it lacks (`settings.…`, or `jobIds[1].settings.…` on a line of several). */
+const PRICE_PATH = /(^|\.)settings\./;
+
 /**
  * The quote has open errors or an incomplete price: each problem is named, and issuing needs the estimator's
  * reason, which the issued quote keeps. Cancel leaves nothing issued.
@@ -20,11 +23,11 @@ export function IssueDecision({ problems, onIssue, onCancel }: { problems: Field
         <button type="button" className="button" onClick={onCancel} autoFocus>Cancel</button>
       </>}
     >
-      <p>The quote would go out with these problems:</p>
+      <p>The quote would go out with these problems{(problems ?? []).some((p) => p.path.startsWith('jobIds')) ? ' (each named with its job)' : ''}:</p>
       <ul className="issue-problems">
         {(problems ?? []).map((p) => (
           <li key={`${p.code}-${p.path}`} data-code={p.code}>
-            <strong>{p.path.startsWith('settings.') ? 'Price incomplete' : 'Open error'}:</strong> {p.message}
+            <strong>{PRICE_PATH.test(p.path) ? 'Price incomplete' : 'Open error'}:</strong> {p.message}
           </li>
         ))}
       </ul>
