@@ -50,6 +50,28 @@ function runAsPostgres(bin: string, args: string[]): string {
   return execFileSync(file as string, all as string[], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
 }
 
+/**
+ * Starts the server on a free loopback port and checks that the port answers with this cluster: a server that
+ * cannot bind its TCP port still starts on its Unix socket, so two test files picking the same port at once
+ * would otherwise share one server, and the first to finish would stop the other's. Retries on a new port.
+ */
+async function listeningOn(bin: string, folder: string, data: string): Promise<number> {
+  for (let attempt = 1; ; attempt++) {
+    const port = await freePort();
+    const options = `-c listen_addresses=127.0.0.1 -c port=${port} -c unix_socket_directories=${folder} -c fsync=off -c full_page_writes=off -c max_connections=60`;
+    runAsPostgres(join(bin, 'pg_ctl'), ['-D', data, '-o', options, '-l', join(folder, 'server.log'), '-w', 'start']);
+    let answered = '';
+    try {
+      answered = runAsPostgres(join(bin, 'psql'), ['-h', '127.0.0.1', '-p', String(port), '-U', 'postgres', '-Atc', 'SHOW data_directory', 'postgres']).trim();
+    } catch {
+      answered = '';
+    }
+    if (answered === data) return port;
+    runAsPostgres(join(bin, 'pg_ctl'), ['-D', data, '-m', 'immediate', 'stop']);
+    if (attempt >= 5) throw new Error(`the throwaway PostgreSQL cluster could not get a loopback port of its own (last tried ${port})`);
+  }
+}
+
 export async function startPgCluster(): Promise<PgCluster> {
   const bin = pgBinaries();
   const folder = mkdtempSync(join(tmpdir(), 'cw-pg-'));
@@ -57,9 +79,7 @@ export async function startPgCluster(): Promise<PgCluster> {
   if (asRoot) execFileSync('chown', ['postgres:postgres', folder]);
   const data = join(folder, 'data');
   runAsPostgres(join(bin, 'initdb'), ['-D', data, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8', '--no-sync']);
-  const port = await freePort();
-  const options = `-c listen_addresses=127.0.0.1 -c port=${port} -c unix_socket_directories=${folder} -c fsync=off -c full_page_writes=off -c max_connections=60`;
-  runAsPostgres(join(bin, 'pg_ctl'), ['-D', data, '-o', options, '-l', join(folder, 'server.log'), '-w', 'start']);
+  const port = await listeningOn(bin, folder, data);
   const url = (database: string) => `postgres://postgres@127.0.0.1:${port}/${database}`;
   let stopped = false;
   return {

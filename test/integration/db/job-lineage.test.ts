@@ -1,31 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import type { DeletedJob, Job, JobPage, Quote, SimilarJob, TextHit } from '../../../core/api';
-import { createService, dispatch } from '../../../service/api';
-import { job, steppingClock, tempStore } from './helpers';
+import { job } from './helpers';
+import { pricedShop } from './priced-shop';
 
-/** An invented shop (demo data) that can price the helpers' 2 mm spring. */
-const demoShop = {
-  machines: [
-    { id: 'c1', name: 'Coiler (demo)', operation: 'coil', wireRange: { min: 0.5, max: 4 }, hourlyRate: 60, setupMinutes: 30,
-      speedModel: { feedMetresPerMinute: 60, maxPiecesPerMinute: 80 } },
-    { id: 'o1', name: 'Oven (demo)', operation: 'stress-relieve', wireRange: { min: 0, max: 20 }, hourlyRate: 30, setupMinutes: 0,
-      batch: { capacityPieces: 5000, cycleMinutes: 60 } },
-    { id: 'g1', name: 'Grinder (demo)', operation: 'grind', wireRange: { min: 0.5, max: 8 }, hourlyRate: 50, setupMinutes: 15, piecesPerHour: 1200 },
-  ],
-  materialPrices: [{ grade: 'en10270-1-sh', dMin: 1, dMax: 3, pricePerKg: 4, date: '2026-10-01', supplier: 'Demo Wire Co.' }],
-};
-
-async function shop() {
-  const service = createService(tempStore(steppingClock()));
-  const call = (name: string, input: unknown) => dispatch(service.handlers, name, input);
-  const must = async <T>(name: string, input: unknown): Promise<T> => {
-    const r = await call(name, input);
-    if (!r.ok) throw new Error(JSON.stringify(r.error));
-    return r.value as T;
-  };
-  await must('saveSettings', { settings: demoShop });
-  return { service, call, must };
-}
+const shop = () => pricedShop();
 
 describe('a new job from a past one', () => {
   it('takes a new number, copies spec and order fields, and links both jobs', async () => {
