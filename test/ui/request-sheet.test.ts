@@ -1,4 +1,6 @@
+import { readFileSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { PDFParse } from 'pdf-parse';
 import type { Page } from 'playwright-core';
 import { DEMO_CUSTOMER, requestCsv, requestRows, requestXlsx } from '../support/request-sheets';
 import { UI_TEST_TIMEOUT, field, screenshot, shopSession, unnamedControls } from './support';
@@ -50,6 +52,28 @@ describe('importing a customer\'s request sheet', { timeout: UI_TEST_TIMEOUT * 2
     const csv = requestCsv(requestRows(10, { decimalMark: ',', badRow: 6 }), ';');
     await importSheet(page, { name: 'halden-rfq-118.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) }, 'RFQ-118', 'request-sheet-csv', true);
     expect((await unnamedControls(page)).unnamed).toEqual([]);
+    expect(errors).toEqual([]);
+  });
+
+  it('quotes the enquiry as one quotation of ten lines, in sheet order', async () => {
+    const quoteDownload = page.waitForEvent('download');
+    await page.getByRole('button', { name: 'Quote enquiry RFQ-118 (10)' }).click();
+    // Draft jobs from a sheet may carry open findings or an unpriced operation: the estimator states why they go out.
+    const decision = page.getByRole('dialog', { name: 'Issue this quote with its problems?' });
+    const asked = await Promise.race([decision.waitFor().then(() => true), quoteDownload.then(() => false)]);
+    if (asked) {
+      await decision.getByLabel('Reason for accepting them').fill('budget prices for the customer\'s enquiry; drawings to follow');
+      await decision.getByRole('button', { name: 'Accept and issue' }).click();
+    }
+    const download = await quoteDownload;
+    const parser = new PDFParse({ data: new Uint8Array(readFileSync(await download.path())) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    expect(text).toContain('Item 1: HV-1000');
+    expect(text.indexOf('Item 10: HV-1009')).toBeGreaterThan(text.indexOf('Item 1: HV-1000'));
+    await page.getByRole('status').filter({ hasText: '10 lines' }).waitFor();
+    const jobs = page.getByRole('table', { name: 'Jobs of enquiry RFQ-118' });
+    await expect.poll(() => jobs.locator('tbody tr').filter({ hasText: 'quoted' }).count(), { timeout: 10_000 }).toBe(10);
     expect(errors).toEqual([]);
   });
 

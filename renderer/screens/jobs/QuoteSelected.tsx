@@ -9,7 +9,7 @@ import { IssueDecision } from '../workspace/panes/IssueDecision';
  * One quotation for the selected jobs of one customer, a line each in the order they were ticked. Open
  * problems on any line ask for the estimator's reason; jobs of different customers are refused by name.
  */
-export function QuoteSelected({ selected, onDone }: { selected: ReadonlySet<number>; onDone(): void }) {
+export function QuoteSelected({ selected, onDone, label = 'Quote selected' }: { selected: ReadonlySet<number>; onDone(): void; label?: string }) {
   const printer = usePrinter();
   const platform = usePlatform();
   const [busy, setBusy] = useState(false);
@@ -38,7 +38,7 @@ export function QuoteSelected({ selected, onDone }: { selected: ReadonlySet<numb
     <>
       <button type="button" className="button" disabled={selected.size === 0 || busy} onClick={() => void issue()}
         title={selected.size === 0 ? 'Select jobs of one customer in the list first' : 'One quotation, a line for each selected job'}>
-        Quote selected{selected.size > 0 ? ` (${selected.size})` : ''}
+        {label}{selected.size > 0 ? ` (${selected.size})` : ''}
       </button>
       {outcome ? <span className={outcome.ok ? 'ok-text' : 'error-text'} role={outcome.ok ? 'status' : 'alert'}>{outcome.text}</span> : null}
       <IssueDecision problems={problems} onCancel={() => setProblems(null)} onIssue={(reason) => {

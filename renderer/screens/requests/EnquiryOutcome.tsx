@@ -4,6 +4,7 @@ import { kindLabel } from '../../../core/vocabulary';
 import { useApi } from '../../api';
 import { useNavigation } from '../../hooks/navigation';
 import { useQuery } from '../../hooks/useQuery';
+import { QuoteSelected } from '../jobs/QuoteSelected';
 
 /** An enquiry's jobs as the store lists them now, in sheet order, each one click from its workspace. */
 export function EnquiryJobsTable({ enquiry }: { enquiry: Enquiry }) {
@@ -12,8 +13,13 @@ export function EnquiryJobsTable({ enquiry }: { enquiry: Enquiry }) {
   const jobs = useQuery<EnquiryJobs>(`enquiry-${enquiry.id}`, () => api.enquiryJobs({ id: enquiry.id }));
   if (jobs.error) return <p className="error-text" role="alert">{jobs.error.message}</p>;
   if (!jobs.value) return null;
+  // The enquiry's jobs not yet ordered, in sheet order: one quotation, a line each.
+  const open = new Set(jobs.value.jobs.filter((j) => j.status === 'draft' || j.status === 'quoted').map((j) => j.id));
   return (
     <div className="table-wrap">
+      <div className="toolbar">
+        <QuoteSelected selected={open} label={`Quote enquiry ${enquiry.reference}`} onDone={jobs.reload} />
+      </div>
       <table className="table table--compact" aria-label={`Jobs of enquiry ${enquiry.reference}`}>
         <thead><tr><th>Sheet row</th><th>Job</th><th>Part</th><th>Drawing</th><th>Kind</th><th>Status</th></tr></thead>
         <tbody>
