@@ -43,17 +43,11 @@ export function openShopStore(file: string, options: OpenOptions = {}):
   const store = opened.value;
   // A read-only store is shown as it is: the demo shop cannot be written into it.
   if (store.readOnly) return { ok: true, value: { store, demoJobs: 0, notice: readOnlyNotice(store.file, store.readOnly) } };
-  if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
-  const demo = createDemoShop(store);
-  if (!demo.ok) {
-    store.close();
-    return demo;
-  }
-  return { ok: true, value: { store, demoJobs: demo.value.jobs } };
+  return withDemo(store);
 }
 
 /** A pristine store of any backend gets the demo shop, as a new file does. */
-function withDemo(store: Store): { ok: true; value: { store: Store; demoJobs: number } } | { ok: false; error: ApiError } {
+function withDemo<S extends Store>(store: S): { ok: true; value: { store: S; demoJobs: number } } | { ok: false; error: ApiError } {
   if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
   const demo = createDemoShop(store);
   if (!demo.ok) {
