@@ -252,6 +252,9 @@ export const signInSchema = z.object({ name: z.string().trim().min(1, 'type the 
  * host (command line, desktop dialogs), never named through the contract. The string is used to connect and
  * then forgotten; it is never written to the store, a log or an export.
  */
+/** The next start opens the program's own store file again (the server store stays open until then). */
+export const forgetServerStoreSchema = z.object({}).strict();
+
 export const openServerStoreSchema = z.object({
   connection: z.string().trim().max(2000).regex(/^postgres(ql)?:\/\//i, 'a connection string starts with postgres:// (for example postgres://user@host:5432/shop)'),
 }).strict();

@@ -274,4 +274,10 @@ export interface StoreInfo {
   readOnly: string | null;
   /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
   changeMark: string;
+  /**
+   * The server store the next start of this program opens, as chosen on the Data screen and saved in the
+   * program's own settings file (the connection string without its password); null when the next start opens
+   * the program's own file, or the program does not remember a choice (the command line).
+   */
+  nextStart: { location: string; passwordLeftOut: boolean } | null;
 }
