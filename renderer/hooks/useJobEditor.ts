@@ -5,6 +5,7 @@ import type { JobJudgementInput } from '../../core/quoting/judgement';
 import type { Settings } from '../../core/settings/schema';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
+import { deskId } from './desk';
 import type { FormError } from '../model/errors';
 import { friendlyError } from '../model/errors';
 import type { Evaluation } from '../model/evaluate';
@@ -27,12 +28,6 @@ export interface Drafts {
   spec: SpecDraft;
 }
 
-/**
- * This editor's own name for its working copy: a job's working session belongs to the desk that autosaved first,
- * and the store refuses another desk's saves while it is open (`edited-elsewhere`).
- */
-const newDesk = (): string => `desk-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 10)}`;
-
 const draftsOf = (job: Job): Drafts => ({ job: jobDraftOf(job), spec: draftFromSpec(job.spec) });
 
 export interface EditorDefaults {
@@ -45,7 +40,7 @@ export interface EditorDefaults {
 /** The job being edited: drafts, live evaluation, autosave into revisions, undo and redo over them. */
 export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onCreated: (job: Job) => void) {
   const api = useApi();
-  const desk = useRef(newDesk()).current;
+  const desk = useRef(deskId()).current;
   const [job, setJob] = useState<Job | null>(null);
   const [drafts, setDrafts] = useState<Drafts>(() => ({ job: emptyJobDraft(), spec: emptySpecDraft(defaults.units, defaults.toleranceGrade) }));
   const [loadError, setLoadError] = useState<ApiError | null>(null);

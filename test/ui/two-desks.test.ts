@@ -78,4 +78,28 @@ describe('two desks editing one job', { timeout: UI_TEST_TIMEOUT }, () => {
     await other.page.close();
     expect([...errors, ...other.errors].filter((e) => !/409|stale/.test(e))).toEqual([]);
   });
+
+  it('the same desk after a restart goes on in the working copy it left open', async () => {
+    const { page, shop, errors } = session;
+    const listed = await fetch(`http://127.0.0.1:${shop.web.port}/api/listJobs`, {
+      method: 'POST', headers: { 'content-type': 'application/json', cookie: `cw_token=${shop.web.token}` }, body: JSON.stringify({ limit: 1, status: 'draft', sort: 'number', direction: 'desc' }),
+    }).then((r) => r.json()) as { value: { jobs: { number: string; revision: number }[] } };
+    const target = listed.value.jobs[0]!;
+    const open = async () => {
+      await page.getByRole('navigation', { name: 'Screens' }).getByRole('button', { name: /^Jobs/ }).click();
+      await page.getByRole('button', { name: `Open job ${target.number}` }).click();
+      await page.locator('[data-save="ok"]').waitFor();
+    };
+    await open();
+    await field(page, 'Part number').fill('RESTART-1 (demo)');
+    await page.locator('[data-save="ok"]').filter({ hasText: `working on revision ${target.revision + 1}` }).waitFor();
+    // The window goes away with the working copy still open (no "leaving the job"), and comes back.
+    await page.goto(shop.web.url);
+    await open();
+    await expect(page.getByTestId('editing-elsewhere').count()).resolves.toBe(0);
+    await field(page, 'Part number').fill('RESTART-2 (demo)');
+    await page.locator('[data-save="ok"]').filter({ hasText: `working on revision ${target.revision + 1}` }).waitFor();
+    await expect(page.getByTestId('saved-elsewhere').count()).resolves.toBe(0);
+    expect(errors.filter((e) => !/409|stale/.test(e))).toEqual([]);
+  });
 });
