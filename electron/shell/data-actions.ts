@@ -50,6 +50,7 @@ const failedTitle: Record<FileActionName, string> = {
 const formatOf = (file: string): 'json' | 'csv' => (path.extname(file).toLowerCase() === '.csv' ? 'csv' : 'json');
 const notStarted = (message: string): DataActionOutcome => ({ outcome: 'not-started', message });
 const isCancellable = (name: DataActionName): name is CancellableDataAction => name !== 'restore';
+const actionWords: Record<DataActionName, string> = { backup: 'backup', restore: 'restore', importJobs: 'import', exportJobs: 'export' };
 
 /** One data action at a time: the AbortController of the one running, so the window's Cancel can reach it. */
 class RunningAction {
@@ -121,8 +122,7 @@ export function createDataActions(deps: DataActionDeps) {
   const { dialogs } = deps;
   const running = new RunningAction();
 
-  async function call<T>(step: Step<T>): Promise<DataActionOutcome> {
-    const signal = running.start(step.name);
+  async function call<T>(step: Step<T>, signal: AbortSignal): Promise<DataActionOutcome> {
     let ending: Ending;
     try {
       ending = endingOf(step, await deps.call(step.name, step.input, longRunFor(deps, step.name, step.from, signal)));
@@ -131,7 +131,6 @@ export function createDataActions(deps: DataActionDeps) {
       deps.report?.({ action: step.name, from: step.from, state: 'ended', outcome: 'failed', message: (e as Error).message });
       throw e;
     } finally {
-      running.end();
       deps.progress?.(null);
     }
     deps.report?.({ action: step.name, from: step.from, state: 'ended', ...ending.outcome });
@@ -139,52 +138,53 @@ export function createDataActions(deps: DataActionDeps) {
     return ending.outcome;
   }
 
-  /** A second action while one runs would race it for the store and the dialogs: it is refused before any dialog. */
-  const refusedWhileBusy = async (name: DataActionName): Promise<DataActionOutcome | null> => {
+  /**
+   * One action at a time, from its first dialog to its end: a second one (the menu's while the Data screen's
+   * runs) would race it for the store and the dialogs, so it is refused before any dialog.
+   */
+  async function exclusive(name: DataActionName, body: (signal: AbortSignal) => Promise<DataActionOutcome>): Promise<DataActionOutcome> {
     const busy = running.busy();
-    if (busy === null) return null;
-    const message = `Another data action (${busy}) is still running: wait for it to end, or cancel it, before the ${name}.`;
-    await dialogs.tell('warning', failedTitle[name], message);
-    return notStarted(message);
-  };
+    if (busy !== null) {
+      const message = `The ${actionWords[busy]} is still running: wait for it to end, or cancel it, before the ${actionWords[name]}.`;
+      await dialogs.tell('warning', failedTitle[name], message);
+      return notStarted(message);
+    }
+    try {
+      return await body(running.start(name));
+    } finally {
+      running.end();
+    }
+  }
 
   const actions: Record<DataActionName, DataActionRun> = {
-    async backup(request = {}) {
-      const busy = await refusedWhileBusy('backup');
-      if (busy) return busy;
+    backup: (request = {}) => exclusive('backup', async (signal) => {
       const defaultPath = path.join(deps.documentsDir, `coilwright-backup-${deps.today()}.db`);
       const file = await dialogs.saveFile({ title: 'Back up the job store', defaultPath, filters: [backupFilter] });
       if (file === null) return notStarted('No file was chosen.');
       return call<BackupResult>({ name: 'backup', input: { file }, from: request.from ?? 'menu',
-        done: (v) => ['Backup saved', `${v.file} (${Math.ceil(v.bytes / 1024)} kB)`] });
-    },
-    async restore(request = {}) {
-      const busy = await refusedWhileBusy('restore');
-      if (busy) return busy;
+        done: (v) => ['Backup saved', `${v.file} (${Math.ceil(v.bytes / 1024)} kB)`] }, signal);
+    }),
+    restore: (request = {}) => exclusive('restore', async (signal) => {
       const file = await dialogs.openFile({ title: 'Restore from a backup', filters: [backupFilter] });
       if (file === null) return notStarted('No file was chosen.');
       const sure = await dialogs.confirm('Replace every job and setting with the backup?',
         `${file}\n\nThe store as it is now is kept beside it, so this can be undone by restoring that file.`, 'Restore');
       if (!sure) return notStarted('The store was left as it is.');
       const outcome = await call<RestoreResult>({ name: 'restore', input: { file }, from: request.from ?? 'menu',
-        done: (v) => ['Backup restored', v.previousKeptAs ? `The previous store was kept as ${v.previousKeptAs}` : `Restored from ${v.restoredFrom}`] });
+        done: (v) => ['Backup restored', v.previousKeptAs ? `The previous store was kept as ${v.previousKeptAs}` : `Restored from ${v.restoredFrom}`] }, signal);
       if (outcome.outcome === 'done') deps.notify('data-changed');
       return outcome;
-    },
-    async importJobs(request = {}) {
-      const busy = await refusedWhileBusy('importJobs');
-      if (busy) return busy;
+    }),
+    importJobs: (request = {}) => exclusive('importJobs', async (signal) => {
       const file = await dialogs.openFile({ title: 'Import jobs', filters: [jsonFilter, csvFilter] });
       if (file === null) return notStarted('No file was chosen.');
       const input = { file, format: formatOf(file), ...(request.renumber !== undefined ? { renumber: request.renumber } : {}) };
       const outcome = await call<ImportResult>({ name: 'importJobs', input, from: request.from ?? 'menu',
-        done: (v) => [`Imported ${v.imported.length} job${v.imported.length === 1 ? '' : 's'}`, file] });
+        done: (v) => [`Imported ${v.imported.length} job${v.imported.length === 1 ? '' : 's'}`, file] }, signal);
       if (outcome.outcome === 'done') deps.notify('data-changed');
       return outcome;
-    },
-    async exportJobs(request = {}) {
-      const busy = await refusedWhileBusy('exportJobs');
-      if (busy) return busy;
+    }),
+    exportJobs: (request = {}) => exclusive('exportJobs', async (signal) => {
       const csv = request.format === 'csv';
       const defaultPath = path.join(deps.documentsDir, `coilwright-jobs-${deps.today()}.${csv ? 'csv' : 'json'}`);
       const file = await dialogs.saveFile({ title: 'Export jobs', defaultPath, filters: csv ? [csvFilter, jsonFilter] : [jsonFilter, csvFilter] });
@@ -193,8 +193,8 @@ export function createDataActions(deps: DataActionDeps) {
       const input = { format: formatOf(file), file, force: true, ...(request.status ? { status: request.status } : {}) };
       return call<ExportResult>({ name: 'exportJobs', input, from: request.from ?? 'menu',
         done: (v) => [`Exported ${v.count} job${v.count === 1 ? '' : 's'}`,
-          [file, ...(v.problems ?? []).map((p) => `Exported as stored, to be put right: ${p.message}`)].join('\n')] });
-    },
+          [file, ...(v.problems ?? []).map((p) => `Exported as stored, to be put right: ${p.message}`)].join('\n')] }, signal);
+    }),
   };
   return { ...actions, cancel: (name: DataActionName): boolean => running.cancel(name) };
 }

@@ -84,6 +84,21 @@ describe('File menu data actions', () => {
     ]);
   });
 
+  it('refuses a second action while one runs, even while the first one’s dialog is still open', async () => {
+    let choose!: (file: string | null) => void;
+    const dialogs = { saveFile: vi.fn(() => new Promise<string | null>((resolve) => { choose = resolve; })), openFile: vi.fn(async () => '/in/j.json'), confirm: vi.fn(async () => true), tell: vi.fn(async () => undefined) };
+    const call = vi.fn(async () => ({ ok: true as const, value: { restoredFrom: '/in/j.json', previousKeptAs: null, version: 3 } }));
+    const actions = createDataActions({ dialogs, call, notify: vi.fn(), documentsDir: '/d', today: () => '2026-05-06' });
+    const first = actions.backup();
+    await vi.waitFor(() => expect(dialogs.saveFile).toHaveBeenCalled());
+    expect(await actions.restore()).toMatchObject({ outcome: 'not-started' });
+    expect(dialogs.openFile).not.toHaveBeenCalled();
+    choose(null);
+    expect(await first).toEqual({ outcome: 'not-started', message: 'No file was chosen.' });
+    // Over (here: dismissed), it no longer stands in the way.
+    expect(await actions.restore()).toMatchObject({ outcome: 'done' });
+  });
+
   it('refuses a second action while one runs, before any dialog', async () => {
     let finish!: () => void;
     const call = vi.fn(() => new Promise<{ ok: true; value: unknown }>((resolve) => { finish = () => resolve({ ok: true, value: { format: 'json', count: 0, file: '/o/j.json' } }); }));
@@ -91,7 +106,7 @@ describe('File menu data actions', () => {
     const actions = createDataActions({ dialogs, call, notify: vi.fn(), documentsDir: '/d', today: () => '2026-05-06' });
     const first = actions.exportJobs();
     await vi.waitFor(() => expect(call).toHaveBeenCalledTimes(1));
-    expect(await actions.importJobs()).toMatchObject({ outcome: 'not-started', message: expect.stringContaining('Another data action (exportJobs) is still running') });
+    expect(await actions.importJobs()).toMatchObject({ outcome: 'not-started', message: 'The export is still running: wait for it to end, or cancel it, before the import.' });
     expect(dialogs.openFile).not.toHaveBeenCalled();
     finish();
     expect(await first).toMatchObject({ outcome: 'done' });

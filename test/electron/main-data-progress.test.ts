@@ -107,6 +107,16 @@ describe('a data action started from the window', () => {
     expect(window.webContents.send).toHaveBeenCalledWith('menu-command', 'data-changed');
   });
 
+  it('stops a backup on Cancel and leaves no file beside the chosen name', async () => {
+    const file = path.join(out, 'shop-backup.db');
+    electron.dialog.showSaveDialog.mockResolvedValueOnce({ canceled: false, filePath: file });
+    const answers = cancelOnFirst('backup', (e) => e.state === 'running');
+    const result = await invoke('data:action', 'backup');
+    expect(await answers[0]).toEqual({ ok: true, value: { cancelled: true } });
+    expect(result).toMatchObject({ ok: true, value: { outcome: 'cancelled', message: 'Backup cancelled: nothing was saved.' } });
+    expect(readdirSync(out).filter((f) => f.startsWith('shop-backup'))).toEqual([]);
+  });
+
   it('says Cancel has nothing to stop once the action is over, and refuses to cancel a restore', async () => {
     expect(await invoke('data:cancel', 'exportJobs')).toEqual({ ok: true, value: { cancelled: false } });
     expect(await invoke('data:cancel', 'restore')).toMatchObject({ ok: false, error: { code: 'not-cancellable', path: 'name' } });
