@@ -90,7 +90,7 @@ function Shell() {
       <div className="shell">
         <Header route={route} jobLabel={lastJob?.label ?? null} onJob={() => bus.publish('job')} onShortcuts={() => setHelp(true)} />
         <main id="main" className="shell__main" tabIndex={-1}>
-          <MenuDataProgress />
+          <MenuDataProgress andTheWindows={route.screen !== 'data'} />
           {route.screen === 'jobs' ? <JobsScreen /> : null}
           {route.screen === 'job' ? <Workspace key={route.key} jobId={route.id} /> : null}
           {route.screen === 'settings' ? <SettingsScreen /> : null}

@@ -104,17 +104,35 @@ describe('Data actions in the desktop app', { timeout: UI_TEST_TIMEOUT }, () => 
     await page.getByText('Exporting… — 30 %').waitFor();
     expect(await bar.evaluate((b) => [(b as HTMLProgressElement).value, (b as HTMLProgressElement).max])).toEqual([120, 400]);
     // Started from the screen, it shows in its panel only, not in the File menu's bar as well.
-    expect(await page.getByRole('region', { name: 'File menu action' }).count()).toBe(0);
+    expect(await page.getByRole('region', { name: 'Data action' }).count()).toBe(0);
     await page.getByRole('heading', { name: 'Export jobs' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'desktop-export-progress');
 
+    // Left while it runs, the Data screen's export shows in the bar above the screen, Cancel included.
+    await page.keyboard.press('Alt+1');
+    await emit(page, { action: 'exportJobs', from: 'window', state: 'running', done: 200, total: 400, cancellable: true });
+    const strip = page.getByRole('region', { name: 'Data action' });
+    await strip.getByText('Exporting… — 50 %').waitFor();
+    await page.keyboard.press('Alt+4');
+    await strip.waitFor({ state: 'detached' });
+    await finish(page, { finished: 'exportJobs', outcome: 'done', message: 'Exported 4 jobs: /home/shop/quoted.csv' });
+    await page.getByRole('button', { name: 'Export…' }).click();
+    await emit(page, { action: 'exportJobs', from: 'window', state: 'running', done: 120, total: 400, cancellable: true });
     await page.getByRole('button', { name: 'Cancel' }).click();
     expect(await shell(page, (f) => f.cancels)).toEqual(['exportJobs']);
     await finish(page, { finished: 'exportJobs', outcome: 'cancelled', message: 'Export cancelled: nothing was saved.' });
+    await emit(page, { action: 'exportJobs', from: 'window', state: 'ended', outcome: 'cancelled', message: 'Export cancelled: nothing was saved.' });
     await page.getByRole('alert').filter({ hasText: 'Export cancelled: nothing was saved.' }).waitFor();
     expect(await bar.count()).toBe(0);
     await expect(page.getByRole('button', { name: 'Export…' }).isEnabled()).resolves.toBe(true);
     expect(errors).toEqual([]);
+  });
+
+  it('does not bring the Data screen\'s finished action back in the bar on another screen', async () => {
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('heading', { name: 'Jobs', level: 1 }).waitFor();
+    expect(await page.getByRole('region', { name: 'Data action' }).count()).toBe(0);
+    await page.keyboard.press('Alt+4');
   });
 
   it('imports through main\'s open dialog with the renumber choice, and says what main did', async () => {
@@ -131,7 +149,7 @@ describe('Data actions in the desktop app', { timeout: UI_TEST_TIMEOUT }, () => 
   it('shows an action started from the File menu on any screen, with Cancel, and a restore without one', async () => {
     await page.keyboard.press('Alt+1');
     await page.getByRole('heading', { name: 'Jobs', level: 1 }).waitFor();
-    const strip = page.getByRole('region', { name: 'File menu action' });
+    const strip = page.getByRole('region', { name: 'Data action' });
     await emit(page, { action: 'backup', from: 'menu', state: 'running', done: 50, total: 200, cancellable: true });
     await strip.getByText('Backing up… — 25 %').waitFor();
     await screenshot(page, 'desktop-menu-backup-progress');

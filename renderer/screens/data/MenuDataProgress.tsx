@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import type { DataActionEvent } from '../../../core/api/method-names';
 import { usePlatform } from '../../api';
 import { CallOutcome } from './BackupPanels';
@@ -15,20 +15,23 @@ function callOf(event: DataActionEvent): CallState<never> | null {
 
 /**
  * The bar of a backup, restore, import or export started from the File menu, on whatever screen is open
- * (the desktop app only): how far it is, with Cancel where the action can be stopped.
+ * (the desktop app only): how far it is, with Cancel where the action can be stopped. `andTheWindows`: also
+ * the Data screen's own, once that screen (which shows them in its panels) has been left while one runs.
  */
-export function MenuDataProgress() {
+export function MenuDataProgress({ andTheWindows }: { andTheWindows: boolean }) {
   const { storeFiles } = usePlatform();
   const shell = storeFiles.shell;
   const [event, setEvent] = useState<DataActionEvent | null>(null);
-  useEffect(() => shell?.onEvent((e) => {
-    if (e.from === 'menu') setEvent(e);
-  }), [shell]);
-  const call = shell && event ? callOf(event) : null;
-  if (!shell || !event || !call) return null;
+  const windowsShown = useRef(andTheWindows);
+  windowsShown.current = andTheWindows;
+  // The Data screen's own action that ends while the screen shows it has been told there: nothing left to show.
+  useEffect(() => shell?.onEvent((e) => setEvent(e.from === 'window' && e.state === 'ended' && !windowsShown.current ? null : e)), [shell]);
+  const shown = event && (event.from === 'menu' || andTheWindows) ? event : null;
+  const call = shell && shown ? callOf(shown) : null;
+  if (!shell || !shown || !call) return null;
   return (
-    <div className="menu-data-progress" role="region" aria-label="File menu action">
-      <CallOutcome call={call} done={() => ''} cancel={() => { if (event.action !== 'restore') shell.cancel(event.action); }} />
+    <div className="menu-data-progress" role="region" aria-label="Data action">
+      <CallOutcome call={call} done={() => ''} cancel={() => { if (shown.action !== 'restore') shell.cancel(shown.action); }} />
       {call.state === 'failed' ? <button type="button" className="button" onClick={() => setEvent(null)}>Close</button> : null}
     </div>
   );
