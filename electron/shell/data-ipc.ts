@@ -35,8 +35,8 @@ export function registerDataActionIpc(ipcMain: IpcMainLike, actions: DataActionR
     }
     const chosen = optionsSchema.safeParse(extra ?? {});
     if (!chosen.success) {
-      const issue = chosen.error.issues[0]!;
-      return refused('invalid-data-action-options', `the ${raw} choices take format, status and renumber only: ${issue.message}`, ['options', ...issue.path.map(String)].join('.'));
+      const wrong = chosen.error.issues[0]!;
+      return refused('invalid-data-action-options', `the ${raw} choices take format, status and renumber only: ${wrong.message}`, ['options', ...wrong.path.map(String)].join('.'));
     }
     const outcome = await actions[raw]({ ...(chosen.data as DataActionOptions), from: 'window' });
     return { ok: true, value: { finished: raw, ...outcome } };
