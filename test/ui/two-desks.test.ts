@@ -74,7 +74,8 @@ describe('two desks editing one job', { timeout: UI_TEST_TIMEOUT }, () => {
     await expect(stale.getAttribute('data-code')).resolves.toBe('stale-revision');
     await expect(stale.textContent()).resolves.toContain('partNumber: saved: "DESK-B-2 (demo)"; yours: "DESK-A-3 (demo)"');
     await stale.getByRole('button', { name: 'Take the saved version' }).click();
-    await expect(field(page, 'Part number').inputValue()).resolves.toBe('DESK-B-2 (demo)');
+    await expect.poll(() => field(page, 'Part number').inputValue()).toBe('DESK-B-2 (demo)');
+    await expect(page.getByTestId('saved-elsewhere').count()).resolves.toBe(0);
     await other.page.close();
     expect([...errors, ...other.errors].filter((e) => !/409|stale/.test(e))).toEqual([]);
   });
