@@ -149,28 +149,55 @@ export function withinBound(value: number, b: Bound, units: UnitSystem): boolean
 
 type Issue = { path: PropertyKey[]; message: string };
 
-function walk(value: unknown, map: BoundName | BoundsMap, path: PropertyKey[], units: UnitSystem, out: Issue[]): void {
+/** A bounds map with its nested maps as Map lookups, built once per map: specs are checked on every parse. */
+type CompiledBounds = Map<string, BoundName | CompiledBounds>;
+
+const compiledMaps = new WeakMap<BoundsMap, CompiledBounds>();
+
+function compiled(map: BoundsMap): CompiledBounds {
+  let c = compiledMaps.get(map);
+  if (!c) {
+    c = new Map(Object.keys(map).map((key) => {
+      const sub = map[key]!;
+      return [key, typeof sub === 'string' ? sub : compiled(sub)] as const;
+    }));
+    compiledMaps.set(map, c);
+  }
+  return c;
+}
+
+/** Walks `value` with the path so far on `path` (pushed and popped, copied only for an issue). */
+function walk(value: unknown, map: BoundName | CompiledBounds, path: PropertyKey[], units: UnitSystem, out: Issue[]): void {
   if (value === null || value === undefined) return;
   if (Array.isArray(value)) {
-    value.forEach((item, i) => walk(item, map, [...path, i], units, out));
+    for (let i = 0; i < value.length; i++) {
+      path.push(i);
+      walk(value[i], map, path, units, out);
+      path.pop();
+    }
     return;
   }
   if (typeof map === 'string') {
     const b: Bound = specBounds[map];
-    if (typeof value === 'number' && !withinBound(value, b, units)) out.push({ path, message: outsideMessage(b, units) });
+    if (typeof value === 'number' && !withinBound(value, b, units)) out.push({ path: path.slice(), message: outsideMessage(b, units) });
     return;
   }
   if (typeof value !== 'object') return;
-  for (const [key, inner] of Object.entries(value as Record<string, unknown>)) {
-    const sub = map[key];
-    if (sub !== undefined) walk(inner, sub, [...path, key], units, out);
+  const object = value as Record<string, unknown>;
+  const keys = Object.keys(object);
+  for (let i = 0; i < keys.length; i++) {
+    const sub = map.get(keys[i]!);
+    if (sub === undefined) continue;
+    path.push(keys[i]!);
+    walk(object[keys[i]!], sub, path, units, out);
+    path.pop();
   }
 }
 
 /** Every number of `spec` outside its bound, with its path. */
 export function boundsIssues(spec: { units: UnitSystem }, map: BoundsMap): Issue[] {
   const out: Issue[] = [];
-  walk(spec, map, [], spec.units, out);
+  walk(spec, compiled(map), [], spec.units, out);
   return out;
 }
 
