@@ -1,3 +1,5 @@
+import { generatedFunction, literal } from './generated-code';
+
 /**
  * Unit systems. Internally everything is mm, N, MPa, N/mm, N·mm, degrees, seconds, kg, kg/dm³ (= g/cm³)
  * and °C. A spec carries its own system; values convert on the way in and on the way out, nowhere else.
@@ -155,12 +157,51 @@ function leafWalker(m: Quantity | typeof OWN, units: UnitSystem, direction: Dire
   return walk;
 }
 
+/** One number's conversion written out (`x` the number, factor C[i] and offset D[i]), the same arithmetic as converter. */
+const convertCode = (direction: Direction, i: number): string => (direction === 'in' ? `(x + D[${i}]) * C[${i}]` : `x / C[${i}] - D[${i}]`);
+
+/** Factor and offset of each field of a map, for generated code (1 and 0 where a field is not a fixed quantity). */
+function fixedConstants(map: QuantityMap, keys: string[], units: UnitSystem): { C: number[]; D: number[] } {
+  const fixed = keys.map((key) => {
+    const m = map[key]!;
+    return typeof m === 'string' && m !== OWN ? systems[units][m] : { factor: 1, offset: 0 };
+  });
+  return { C: fixed.map((d) => d.factor), D: fixed.map((d) => d.offset ?? 0) };
+}
+
+/**
+ * objectWalker's walk written out for one map: its own copy (so the copy is made for the few shapes this map
+ * meets, not for every shape every map meets) and each fixed number converted by name. Same output.
+ */
+function generatedWalker(map: QuantityMap, inner: Walker[], units: UnitSystem, direction: Direction): Walker | undefined {
+  const keys = Object.keys(map);
+  const lines = keys.map((key, i) => {
+    const k = literal(key);
+    const m = map[key]!;
+    const value = typeof m === 'string' && m !== OWN ? `typeof x === "number" ? ${convertCode(direction, i)} : W[${i}](x, object)` : `W[${i}](x, object)`;
+    return `  x = object[${k}];\n  if (x !== undefined) out[${k}] = ${value};`;
+  });
+  return generatedFunction<Walker>({ W: inner, ...fixedConstants(map, keys, units) }, [
+    'return function walk(object, parent) {',
+    '  if (object === null || object === undefined) return object;',
+    '  if (Array.isArray(object)) return object.map((item) => walk(item, parent));',
+    '  if (typeof object !== "object") return object;',
+    '  const out = { ...object };',
+    '  let x;',
+    ...lines,
+    '  return out;',
+    '};',
+  ].join('\n'));
+}
+
 /** An object (or list of objects) the map describes: a copy with the declared fields converted. */
 function objectWalker(map: QuantityMap, units: UnitSystem, direction: Direction): Walker {
   const fields = Object.keys(map).map((key) => {
     const m = map[key]!;
     return [key, typeof m === 'string' ? leafWalker(m, units, direction) : objectWalker(m, units, direction)] as const;
   });
+  const generated = generatedWalker(map, fields.map(([, inner]) => inner), units, direction);
+  if (generated) return generated;
   const walk: Walker = (v, parent) => {
     if (v === null || v === undefined) return v;
     if (Array.isArray(v)) return v.map((item) => walk(item, parent));
@@ -218,6 +259,8 @@ function placeEach(value: unknown, place: Placer): void {
   else if (typeof value === 'object' && value !== null) place(value as Record<string, unknown>);
 }
 
+interface PlaceField { key: string; inner: Placer | undefined; fixed: ((x: number) => number) | undefined; def: UnitDef | undefined }
+
 /** Whether converting this quantity leaves every number exactly as it was (x / 1 − 0 is x, even −0; x + 0 is not). */
 const unchangedBy = (m: Quantity | typeof OWN, units: UnitSystem, direction: Direction): boolean =>
   m !== OWN && direction === 'out' && systems[units][m].factor === 1 && (systems[units][m].offset ?? 0) === 0;
@@ -227,17 +270,20 @@ const unchangedBy = (m: Quantity | typeof OWN, units: UnitSystem, direction: Dir
  * changes nothing are left out (a metric report converts only its mass), and so are nested maps left empty.
  */
 function placer(map: QuantityMap, units: UnitSystem, direction: Direction): Placer | undefined {
-  const fields: { key: string; inner: Placer | undefined; fixed: ((x: number) => number) | undefined }[] = [];
+  const fields: PlaceField[] = [];
   for (const key of Object.keys(map)) {
     const m = map[key]!;
     if (typeof m !== 'string') {
       const inner = placer(m, units, direction);
-      if (inner) fields.push({ key, inner, fixed: undefined });
+      if (inner) fields.push({ key, inner, fixed: undefined, def: undefined });
     } else if (!unchangedBy(m, units, direction)) {
-      fields.push({ key, inner: undefined, fixed: m === OWN ? undefined : converter(systems[units][m], direction) });
+      const def = m === OWN ? undefined : systems[units][m];
+      fields.push({ key, inner: undefined, fixed: def ? converter(def, direction) : undefined, def });
     }
   }
   if (fields.length === 0) return undefined;
+  const generated = generatedPlacer(fields, direction);
+  if (generated) return generated;
   return (object) => {
     for (let i = 0; i < fields.length; i++) {
       const f = fields[i]!;
@@ -254,6 +300,22 @@ function placer(map: QuantityMap, units: UnitSystem, direction: Direction): Plac
       else if (Array.isArray(value)) placeNumbers(value, convert);
     }
   };
+}
+
+/** placer's function written out for its fields (only fixed quantities and nested maps; OWN keeps the walk). */
+function generatedPlacer(fields: PlaceField[], direction: Direction): Placer | undefined {
+  if (fields.some((f) => !f.inner && !f.fixed)) return undefined;
+  const defs = fields.map((f) => (f.fixed ? f.def! : { factor: 1, offset: 0 }));
+  const lines = fields.map((f, i) => {
+    const k = literal(f.key);
+    return f.inner
+      ? `  x = object[${k}];\n  if (x !== null && x !== undefined) placeEach(x, P[${i}]);`
+      : `  x = object[${k}];\n  if (typeof x === "number") object[${k}] = ${convertCode(direction, i)};\n  else if (Array.isArray(x)) placeNumbers(x, V[${i}]);`;
+  });
+  return generatedFunction<Placer>({
+    P: fields.map((f) => f.inner), V: fields.map((f) => f.fixed), C: defs.map((d) => d.factor), D: defs.map((d) => d.offset ?? 0),
+    placeEach, placeNumbers,
+  }, ['return function place(object) {', '  let x;', ...lines, '};'].join('\n'));
 }
 
 const placers = new WeakMap<QuantityMap, Map<string, Placer | undefined>>();
