@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { Store } from '../../../db';
-import { createJob, findJobs, updateJob } from '../../../db';
+import { copyStore, createJob, findJobs, updateJob } from '../../../db';
+import { PG_RANKED_MATCHES } from '../../../db/search/text';
+import { fillWithJobs } from '../../../bench/suites/store-data';
 import { matchExpression, tsQueryText, tsWords } from '../../../db/search/match';
 import { usePgCluster } from '../../support/pg-stores';
 import { job, tempStore, value } from './helpers';
@@ -83,6 +85,23 @@ describe('text search on PostgreSQL', () => {
     expect(ids('spreader')).toEqual([later.id]);
     expect(ids('sprue')).toEqual([]);
   });
+
+  it('ranks only the newest matches of a word most jobs hold', () => {
+    const lite = tempStore();
+    fillWithJobs(lite, PG_RANKED_MATCHES + 150, 7);
+    // The oldest job mentions the word most: SQLite, which ranks up to RANKED_MATCHES, puts it first;
+    // PostgreSQL ranks the newest PG_RANKED_MATCHES only, so it stays out.
+    value(updateJob(lite, { id: 1, notes: 'bench bench bench' }));
+    const server = pg.freshStore();
+    value(copyStore(lite, server));
+    expect(value(findJobs(lite, { text: 'bench', limit: 5 }))[0]!.job.id).toBe(1);
+    const ids = (server.sql('SELECT id FROM jobs ORDER BY id DESC').all() as { id: number }[]).map((r) => r.id);
+    const hits = value(findJobs(server, { text: 'bench', limit: 50 }));
+    expect(hits).toHaveLength(50);
+    for (const h of hits) expect(h.job.id).toBeGreaterThanOrEqual(ids[PG_RANKED_MATCHES - 1]!);
+    value(updateJob(server, { id: ids[PG_RANKED_MATCHES - 1]!, notes: 'bench bench bench' }));
+    expect(value(findJobs(server, { text: 'bench', limit: 5 }))[0]!.job.id).toBe(ids[PG_RANKED_MATCHES - 1]);
+  }, 60_000);
 
   it('writes a short list of whole words in place of a prefix, and a word typed twice once', () => {
     const words = wordsOf('Valv DA-100 x x');
