@@ -6,7 +6,7 @@ import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session, shell } f
 import { existsSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
+import { DATA_PROGRESS_CHANNEL, MENU_COMMAND_CHANNEL } from '../core/api/method-names';
 import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
 import { createService, dispatch } from '../service/api';
@@ -88,17 +88,18 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
     dialogs: electronDialogs(liveMainWindow),
     call: (name, input, long) => service.files.run(name, input as never, long),
     progress: (fraction) => liveMainWindow()?.setProgressBar(fraction ?? -1),
+    report: (event) => liveMainWindow()?.webContents.send(DATA_PROGRESS_CHANNEL, event),
     notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
     documentsDir: app.getPath('documents'),
     today: () => new Date().toISOString().slice(0, 10),
   });
-  const guard = (name: string, action: () => Promise<void>) => () => void action().catch((e: unknown) => faults.report(name, e));
+  const guard = (name: string, action: () => Promise<unknown>) => () => void action().catch((e: unknown) => faults.report(name, e));
   const template = applicationMenu({ platform: process.platform, isDev: !app.isPackaged, appName: app.name }, {
     command: (command, window) => sendCommand(previews, command, window?.id),
-    backup: guard('backup', data.backup),
-    restore: guard('restore', data.restore),
-    importJobs: guard('import', data.importJobs),
-    exportJobs: guard('export', data.exportJobs),
+    backup: guard('backup', () => data.backup()),
+    restore: guard('restore', () => data.restore()),
+    importJobs: guard('import', () => data.importJobs()),
+    exportJobs: guard('export', () => data.exportJobs()),
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   registerDataActionIpc(ipcMain, data, { onUnexpected: (context, e) => faults.report(context, e) });

@@ -19,11 +19,15 @@ export const RANKED_MATCHES = 2000;
 /** The rowid of the RANKED_MATCHES-th newest match, or nothing when there are fewer matches. */
 export const NEWEST_BOUND_SQL = `SELECT rowid FROM job_text WHERE job_text MATCH ? ORDER BY rowid DESC LIMIT 1 OFFSET ${RANKED_MATCHES - 1}`;
 
-/** The FTS query: best bm25 rank first (the table's rank is bm25 with per-column weights). */
+/**
+ * The FTS query: best bm25 rank first (the table's rank is bm25 with per-column weights), newest first
+ * among equals. `+rank` keeps FTS5 off its own rank-sorted plan, which reads every match of the word
+ * whatever the rowid bound (100 ms for a common two-letter prefix in 100 000 jobs, against 6 ms so).
+ */
 export const FIND_SQL = `SELECT ${SUMMARY_COLUMNS}, t.rank AS text_rank
-  FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? AND rowid >= ? ORDER BY rank LIMIT ?) t
+  FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? AND rowid >= ? ORDER BY +rank, rowid DESC LIMIT ?) t
   JOIN jobs j ON j.id = t.rowid LEFT JOIN customers c ON c.id = j.customer_id
-  ORDER BY t.rank`;
+  ORDER BY t.rank, j.id DESC`;
 
 /**
  * How many matches PostgreSQL ranks at most. Fewer than SQLite's RANKED_MATCHES: FTS5 walks doclists kept

@@ -106,9 +106,13 @@ export async function startShop(): Promise<Shop> {
 
 export const launch = (): Promise<Browser> => chromium.launch({ executablePath: '/usr/bin/chromium', args: chromiumArgs });
 
-/** A page at 1440 × 900 whose console errors and uncaught errors are kept in `errors`. */
-export async function openPage(browser: Browser, url: string): Promise<{ page: Page; errors: string[] }> {
+/**
+ * A page at 1440 × 900 whose console errors and uncaught errors are kept in `errors`. `beforeApp` runs in
+ * the page before the app's own scripts (a stand-in for the desktop preload's bridge, for one).
+ */
+export async function openPage(browser: Browser, url: string, beforeApp?: () => void): Promise<{ page: Page; errors: string[] }> {
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+  if (beforeApp) await page.addInitScript(beforeApp);
   const errors: string[] = [];
   page.on('console', (m) => { if (m.type() === 'error') errors.push(`console: ${m.text()}`); });
   page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
