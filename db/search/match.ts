@@ -58,9 +58,3 @@ export function tsQueryText(words: readonly TsWord[], expanded: ReadonlyMap<stri
 /** The prefix runs of a search: the runs the store may expand into whole words. */
 export const prefixRuns = (words: readonly TsWord[]): string[] =>
   [...new Set(words.filter((w) => w.prefix && w.runs.length > 0).map((w) => w.runs[w.runs.length - 1]!))];
-
-/** The search as a tsquery with every prefix left as `run:*`. */
-export function tsQueryExpression(text: string): Result<string> {
-  const words = tsWords(text);
-  return words.ok ? ok(tsQueryText(words.value)) : words;
-}

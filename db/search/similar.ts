@@ -44,15 +44,17 @@ export const boxSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} F
   WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
     AND ${GEOMETRY_SQL} <= ?`;
 
+/** The jobs table's column of each shape dimension (PostgreSQL reads the jobs table through its index). */
+const PG_COLUMNS: Record<(typeof BOX_DIMENSIONS)[number][1], string> = {
+  wireDiameter: 'd', meanDiameter: 'mean_diameter', freeLength: 'free_length', activeCoils: 'active_coils', rate: 'rate',
+};
+const PG_GEOMETRY_SQL = BOX_DIMENSIONS.map(([, key]) => `${WEIGHTS[key]} * abs(ln(${PG_COLUMNS[key]} / ?))`).join(' + ');
+
 /**
  * The same box on PostgreSQL, through the kind's GiST index (migration 0016) on (ln d, ln rate) and
  * (ln D, ln L0): the two points are the index's own expressions, so the planner reads the index alone
  * (it carries every number scored); the coils range and the geometric distance filter inside it.
  */
-const PG_COLUMNS: Record<(typeof BOX_DIMENSIONS)[number][1], string> = {
-  wireDiameter: 'd', meanDiameter: 'mean_diameter', freeLength: 'free_length', activeCoils: 'active_coils', rate: 'rate',
-};
-const PG_GEOMETRY_SQL = BOX_DIMENSIONS.map(([, key]) => `${WEIGHTS[key]} * abs(ln(${PG_COLUMNS[key]} / ?))`).join(' + ');
 export const pgBoxSql = (kind: Spec['kind']): string => `SELECT id, d AS "wireDiameter", mean_diameter AS "meanDiameter",
     free_length AS "freeLength", active_coils AS "activeCoils", rate, material, material_family AS "materialFamily"
   FROM jobs WHERE kind = '${kind}'
