@@ -12,7 +12,7 @@ export const apiMethodNames = [
   'calculate', 'listGrades',
   'createJob', 'updateJob', 'getJob', 'listJobs', 'findJobs', 'similarJobs', 'jobRevisions', 'restoreRevision', 'keepWorkingRevision',
   'setJobStatus', 'copyJob', 'archiveJob', 'deleteJob', 'undoDeleteJob', 'listCustomers', 'saveCustomer', 'getSettings', 'saveSettings', 'issueQuote', 'listQuotes', 'getQuote',
-  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'storeInfo', 'signIn', 'openServerStore',
+  'addAttachment', 'listAttachments', 'getAttachment', 'exportJobs', 'importJobs', 'reindexJobs', 'storeInfo', 'signIn', 'openServerStore', 'forgetServerStore',
   'manufacturingPlan', 'costEstimate', 'jobCostChanges', 'acceptJobCost', 'printTraveller', 'printQuote', 'reprintQuote',
   'recordFirstOff', 'listFirstOff', 'setCalibration',
   'designSprings', 'adoptDesign', 'jobRequirement',

@@ -6,10 +6,30 @@ import { fail, fieldError, ok } from '../../core/result';
  * quoted phrase with a prefix star, so "spr" finds "spring" and "CS-10" finds "CS-1042"; the words
  * are ANDed. Quoting means operators (AND, NEAR, column filters, brackets) in user text are plain text.
  * A single letter or digit is matched as a whole word ("rev B", "A 2"): as a prefix it would match most
- * of a large store and tell the estimator nothing; the index keeps prefixes of two and three characters.
+ * of a large store and tell the estimator nothing; the index keeps prefixes of two to eight characters.
  * A decimal value ("1.6", "0,063") is a dimension: matched whole, so 1.6 does not find 1.65.
  */
 const DECIMAL = /^\d*[.,]\d+$/;
+
+/**
+ * The longest prefix the text index keeps (migration 0018): a longer last word is searched by its first
+ * PREFIX_KEPT characters, which the index reads newest-first; "regulators" finds "regulator" too.
+ */
+export const PREFIX_KEPT = 8;
+
+/** The word's letter and digit runs, the last cut to PREFIX_KEPT characters, or null when none is longer. */
+function cutRuns(word: string): string[] | null {
+  const runs = word.match(/[\p{L}\p{N}]+/gu) ?? [];
+  const last = [...(runs[runs.length - 1] ?? '')];
+  if (last.length <= PREFIX_KEPT) return null;
+  return [...runs.slice(0, -1), last.slice(0, PREFIX_KEPT).join('')];
+}
+
+function ftsWord(w: string): string {
+  if ([...w].length <= 1 || DECIMAL.test(w)) return `"${w.replace(/"/g, '""')}"`;
+  const cut = cutRuns(w);
+  return `"${cut ? cut.join(' ') : w.replace(/"/g, '""')}"*`;
+}
 
 export function matchExpression(text: string): Result<string> {
   const words = text
@@ -19,7 +39,7 @@ export function matchExpression(text: string): Result<string> {
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok(words.map((w) => `"${w.replace(/"/g, '""')}"${[...w].length > 1 && !DECIMAL.test(w) ? '*' : ''}`).join(' '));
+  return ok(words.map(ftsWord).join(' '));
 }
 
 /** One typed word as PostgreSQL reads it: its letter and digit runs, the last one a prefix or not. */
@@ -27,7 +47,8 @@ export interface TsWord { runs: string[]; prefix: boolean }
 
 /**
  * The words of a search as PostgreSQL reads them: each word's letter and digit runs (lower case, as the
- * 'simple' configuration stores them), the last run a prefix unless the word is a single character.
+ * 'simple' configuration stores them), the last run a prefix unless the word is a single character, cut
+ * to PREFIX_KEPT characters as SQLite cuts it.
  * A word typed twice adds nothing to the match; to the planner it would look twice as selective.
  */
 export function tsWords(text: string): Result<TsWord[]> {
@@ -35,7 +56,10 @@ export function tsWords(text: string): Result<TsWord[]> {
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok([...new Set(words)].map((w) => ({ runs: w.match(/[\p{L}\p{N}]+/gu) ?? [], prefix: [...w].length > 1 })));
+  return ok([...new Set(words)].map((w) => ({
+    runs: (([...w].length > 1 && cutRuns(w)) || w.match(/[\p{L}\p{N}]+/gu)) ?? [],
+    prefix: [...w].length > 1,
+  })));
 }
 
 const quoted = (lexeme: string): string => `'${lexeme.replace(/'/g, "''")}'`;

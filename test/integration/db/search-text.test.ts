@@ -3,7 +3,7 @@ import type { Store } from '../../../db';
 import { copyStore, createJob, findJobs, updateJob } from '../../../db';
 import { PG_RANKED_MATCHES } from '../../../db/search/text';
 import { fillWithJobs } from '../../../bench/suites/store-data';
-import { matchExpression, tsQueryText, tsWords } from '../../../db/search/match';
+import { PREFIX_KEPT, matchExpression, tsQueryText, tsWords } from '../../../db/search/match';
 import { usePgCluster } from '../../support/pg-stores';
 import { job, tempStore, value } from './helpers';
 
@@ -45,6 +45,14 @@ describe('text search', () => {
     expect(parts(store, 'spring OR pump')).toEqual([]);
     expect(matchExpression('say "hi" now*')).toEqual({ ok: true, value: '"say"* """hi"""* "now"*' });
     expect(findJobs(store, { text: ' *** ' })).toMatchObject({ ok: false, error: { code: 'empty-search', path: 'text' } });
+  });
+
+  it('searches a word longer than the kept prefixes by its first eight characters, on both stores', () => {
+    expect(PREFIX_KEPT).toBe(8);
+    expect(matchExpression('counterweights CS-10420000000 ab')).toEqual({ ok: true, value: '"counterw"* "CS 10420000"* "ab"*' });
+    expect(tsQueryText(wordsOf('counterweights CS-10420000000'))).toBe("'counterw':* & 'cs' <-> '10420000':*");
+    // Up to eight characters the word is its own prefix, quoted as typed.
+    expect(matchExpression('governor')).toEqual({ ok: true, value: '"governor"*' });
   });
 });
 
