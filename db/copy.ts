@@ -53,6 +53,12 @@ function inDependencyOrder(list: TableInfo[]): TableInfo[] {
 
 const PAGE = 400;
 
+/**
+ * Values one INSERT carries at most: a page of jobs goes in one statement (the server's per-statement
+ * triggers then count and index the page at once); PostgreSQL takes 65 535 parameters, SQLite 32 766.
+ */
+const MAX_PARAMETERS = 30_000;
+
 /** Every row of a table in primary-key order, a page at a time (keyset on an id, else the whole small table). */
 function* rowsOf(store: Store, t: TableInfo): Generator<Record<string, unknown>[]> {
   const cols = t.columns.map((c) => `"${c}"`).join(', ');
@@ -132,8 +138,9 @@ export function copyStore(source: Store, target: Store): StoreResult<{ tables: T
       const out: TableCopy[] = [];
       for (const t of from) {
         const columns = t.columns.filter((c) => to.get(t.name)!.columns.includes(c));
+        const perStatement = Math.max(1, Math.floor(MAX_PARAMETERS / columns.length));
         for (const page of rowsOf(source, t)) {
-          for (let i = 0; i < page.length; i += 100) insertPage(target, t.name, columns, page.slice(i, i + 100));
+          for (let i = 0; i < page.length; i += perStatement) insertPage(target, t.name, columns, page.slice(i, i + perStatement));
         }
         const before = summary(source, t, columns);
         const after = summary(target, { ...t, key: to.get(t.name)!.key }, columns);

@@ -42,18 +42,43 @@ export function matchExpression(text: string): Result<string> {
   return ok(words.map(ftsWord).join(' '));
 }
 
+/** One typed word as PostgreSQL reads it: its letter and digit runs, the last one a prefix or not. */
+export interface TsWord { runs: string[]; prefix: boolean }
+
 /**
- * The same search as a PostgreSQL tsquery: each word's letter and digit runs in sequence (`<->`, as FTS5
- * reads a quoted phrase), the last run a prefix unless the word is a single character; the words ANDed.
+ * The words of a search as PostgreSQL reads them: each word's letter and digit runs (lower case, as the
+ * 'simple' configuration stores them), the last run a prefix unless the word is a single character, cut
+ * to PREFIX_KEPT characters as SQLite cuts it.
+ * A word typed twice adds nothing to the match; to the planner it would look twice as selective.
  */
-export function tsQueryExpression(text: string): Result<string> {
+export function tsWords(text: string): Result<TsWord[]> {
   const words = text.split(/\s+/).map((w) => w.replace(/\*+$/, '').toLowerCase()).filter((w) => /[\p{L}\p{N}]/u.test(w));
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok(words.map((w) => {
-    const runs = (([...w].length > 1 && cutRuns(w)) || w.match(/[\p{L}\p{N}]+/gu)) ?? [];
-    const prefix = [...w].length > 1 ? ':*' : '';
-    return runs.map((r, i) => `'${r}'${i === runs.length - 1 ? prefix : ''}`).join(' <-> ');
-  }).join(' & '));
+  return ok([...new Set(words)].map((w) => ({
+    runs: (([...w].length > 1 && cutRuns(w)) || w.match(/[\p{L}\p{N}]+/gu)) ?? [],
+    prefix: [...w].length > 1,
+  })));
 }
+
+const quoted = (lexeme: string): string => `'${lexeme.replace(/'/g, "''")}'`;
+
+/**
+ * The search as a tsquery: each word's runs in sequence (`<->`, as FTS5 reads a quoted phrase), the words
+ * ANDed. A prefix run is written as the words it stands for when `expanded` lists them (the same match,
+ * which the GIN index answers from each word's own list instead of gathering every word under the prefix),
+ * else as `run:*`.
+ */
+export function tsQueryText(words: readonly TsWord[], expanded: ReadonlyMap<string, readonly string[]> = new Map()): string {
+  return words.map((w) => w.runs.map((r, i) => {
+    if (i < w.runs.length - 1 || !w.prefix) return quoted(r);
+    const full = expanded.get(r);
+    if (full === undefined || full.length === 0) return `${quoted(r)}:*`;
+    return full.length === 1 ? quoted(full[0]!) : `(${full.map(quoted).join(' | ')})`;
+  }).join(' <-> ')).join(' & ');
+}
+
+/** The prefix runs of a search: the runs the store may expand into whole words. */
+export const prefixRuns = (words: readonly TsWord[]): string[] =>
+  [...new Set(words.filter((w) => w.prefix && w.runs.length > 0).map((w) => w.runs[w.runs.length - 1]!))];
