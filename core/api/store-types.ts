@@ -270,4 +270,17 @@ export interface StoreInfo {
   readOnly: string | null;
   /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
   changeMark: string;
+  /** The file's damage check (PRAGMA quick_check); null for a server store, whose server keeps its own pages. */
+  damageCheck: DamageCheckInfo | null;
 }
+
+/**
+ * Where a store file's damage check stands. Small stores are checked before they open (passed at the open);
+ * large ones open first and are checked while the program works; a failed check makes the store read-only.
+ * Times are ISO 8601.
+ */
+export type DamageCheckInfo =
+  | { state: 'running'; since: string }
+  | { state: 'passed'; at: string }
+  | { state: 'failed'; at: string; problem: string }
+  | { state: 'not-checked'; reason: string };

@@ -3,7 +3,7 @@ import type { ApiResult, Contract, MethodOutput } from '../../core/api';
 import type { StoreInfo, storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import {
-  addAttachment, createJob, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
+  addAttachment, createJob, isSqliteStore, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob,
 } from '../../db';
@@ -25,7 +25,10 @@ export interface StoreContext {
 const success = <T>(value: T): ApiResult<T> => ({ ok: true, value });
 
 export function storeInfo(store: Store): StoreInfo {
-  return { backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark() };
+  return {
+    backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark(),
+    damageCheck: isSqliteStore(store) ? store.damageCheck.state() : null,
+  };
 }
 
 export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName> {
