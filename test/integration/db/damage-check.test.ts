@@ -29,7 +29,7 @@ function damagedFile(): string {
 
 async function storeInfoOf(store: SqliteStore): Promise<StoreInfo> {
   const service = createService(store);
-  return value(await dispatch(service.handlers, 'storeInfo', {}));
+  return value(await dispatch(service.handlers, 'storeInfo', {})) as StoreInfo;
 }
 
 describe('the size rule of the damage check', () => {
