@@ -5,6 +5,7 @@ import type { ApiError } from '../../core/api';
 import { dispatch } from '../api/dispatch';
 import { createService } from '../api';
 import type { Service } from '../api';
+import type { OpenOptions } from '../../db';
 import { openShopStoreAt } from '../host/first-run';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
@@ -28,6 +29,8 @@ export interface WebServerOptions {
   onNotice?: (text: string) => void;
   /** Where unexpected failures go; stderr by default. */
   onUnexpected?: (context: string, error: unknown) => void;
+  /** How the store opens, over the app's defaults (tests lower the damage check's size rule). */
+  openOptions?: OpenOptions;
 }
 
 export interface WebServer {
@@ -141,8 +144,8 @@ function listen(server: Server, port: number): Promise<number> {
   });
 }
 
-function openService(dbFile: string, onNotice: (text: string) => void): Service {
-  const opened = openShopStoreAt(dbFile);
+function openService(dbFile: string, onNotice: (text: string) => void, openOptions?: OpenOptions): Service {
+  const opened = openShopStoreAt(dbFile, openOptions);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
   return createService(opened.value.store);
@@ -153,7 +156,7 @@ function openService(dbFile: string, onNotice: (text: string) => void): Service 
  * per-run token. Every API outcome is an ApiResult value, as over IPC.
  */
 export async function startWebServer(options: WebServerOptions): Promise<WebServer> {
-  const service = openService(options.dbFile, options.onNotice ?? ((text) => console.warn(text)));
+  const service = openService(options.dbFile, options.onNotice ?? ((text) => console.warn(text)), options.openOptions);
   let port = 0;
   const ctx: Context = {
     service,
