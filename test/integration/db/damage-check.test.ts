@@ -1,10 +1,13 @@
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { StoreInfo } from '../../../core/api';
-import { createJob, inTransaction, openStore, tryOpenStore } from '../../../db';
+import { backupStore, createJob, inTransaction, openStore, tryOpenStore } from '../../../db';
 import type { OpenOptions, SqliteStore } from '../../../db';
 import { createService, dispatch } from '../../../service/api';
 import { openShopStore } from '../../../service/host/first-run';
+import { parseArgs } from '../../../service/cli/io';
+import { runCli } from '../../../service/cli/main';
+import { cliOpenOptions } from '../../../service/cli/store-session';
 import { damageIndexPage } from '../../support/damage';
 import { job, sha256, tempDir, track, value } from './helpers';
 
@@ -111,5 +114,48 @@ describe('the size rule of the damage check', () => {
     expect(opened.value.demoJobs).toBe(0);
     await store.damageCheck.settled();
     expect((await storeInfoOf(store)).damageCheck).toMatchObject({ state: 'failed' });
+  });
+});
+
+describe('the command line and the damage check', () => {
+  const cliStore = (file: string, ...argv: string[]) =>
+    track(openStore(file, { ...cliOpenOptions(parseArgs(['jobs', 'list', '--db', file, ...argv])), checkBeforeOpenMaxBytes: 1 }));
+
+  it('opens a large store for reading without the check, and --no-check never runs it', () => {
+    const file = damagedFile();
+    const store = cliStore(file);
+    expect(store.damageCheck.state().state).toBe('not-checked');
+    expect(cliOpenOptions(parseArgs(['jobs', 'add', 'job.json', '--no-check', '--db', file]))).toEqual({ check: 'none' });
+    const unchecked = cliStore(file, '--no-check');
+    expect(unchecked.damageCheck.state()).toEqual({ state: 'not-checked', reason: 'not asked for' });
+  });
+
+  it('refuses a restore into a large damaged store as damaged, which db restore answers by putting the backup in its place', async () => {
+    const dir = tempDir();
+    const file = join(dir, 'shop.db');
+    storeWithJobs(file);
+    const backup = join(dir, 'monday.db');
+    const seed = openStore(file);
+    value(await backupStore(seed, backup));
+    damageIndexPage(seed);
+    const service = createService(cliStore(file));
+    const restored = await service.files.run('restore', { file: backup });
+    expect(restored).toMatchObject({ ok: false, error: { code: 'store-corrupt' } });
+  });
+
+  it('db check runs the full check: a healthy store passes, a damaged one exits 2 with the way to restore', async () => {
+    const healthy = join(tempDir(), 'shop.db');
+    storeWithJobs(healthy, 5);
+    const out: string[] = [];
+    const err: string[] = [];
+    expect(await runCli(['db', 'check', '--db', healthy], (t) => out.push(t), (t) => err.push(t))).toBe(0);
+    expect(JSON.parse(out[0]!)).toMatchObject({ file: healthy, check: 'integrity_check', result: 'ok' });
+    const damaged = damagedFile();
+    expect(await runCli(['db', 'check', '--db', damaged], (t) => out.push(t), (t) => err.push(t))).toBe(2);
+    expect(JSON.parse(err.at(-1)!).errors[0]).toMatchObject({
+      code: 'store-corrupt', path: '--db', message: expect.stringMatching(/is damaged \([\s\S]+\) and was not opened\. Restore your latest backup/),
+    });
+    expect(await runCli(['db', 'check', '--db', join(tempDir(), 'none.db')], (t) => out.push(t), (t) => err.push(t))).toBe(2);
+    expect(JSON.parse(err.at(-1)!).errors[0]).toMatchObject({ code: 'store-missing' });
   });
 });
