@@ -35,9 +35,9 @@ export function storeBytes(file: string): number {
 type CheckAnswer = { lines: string[] } | { error: { code: string; message: string } };
 
 /**
- * The worker is plain JavaScript loading better-sqlite3 by its resolved path, with the native addon this
- * thread already loaded (the Electron build inside the app, the Node build elsewhere), so it runs the same
- * from the sources, the CLI bundle and the app bundle.
+ * The worker is plain JavaScript loading the better-sqlite3 this thread loaded, by its path, with the same
+ * native addon (the Electron build inside the app, the Node build elsewhere), so it runs the same from the
+ * sources, the CLI bundle and the app bundle.
  */
 const WORKER_SOURCE = `
 const { workerData, parentPort } = require('node:worker_threads');
@@ -54,7 +54,14 @@ try {
 }
 `;
 
-const loadedAddon = (): string | undefined => Object.keys(require.cache).find((name) => /better_sqlite3\.node$/.test(name));
+/** Where this thread's better-sqlite3 and its native addon were loaded from; undefined when they were not. */
+function loadedSqlite(): { sqlitePath: string; nativeBinding?: string } | undefined {
+  const loaded = Object.keys(require.cache);
+  const sqlitePath = loaded.find((name) => /better-sqlite3[\\/]lib[\\/]index\.js$/.test(name));
+  const nativeBinding = loaded.find((name) => /better_sqlite3\.node$/.test(name));
+  if (sqlitePath === undefined) return undefined;
+  return nativeBinding === undefined ? { sqlitePath } : { sqlitePath, nativeBinding };
+}
 
 function quickCheckNow(file: string): CheckAnswer {
   let db: Database.Database | undefined;
@@ -106,12 +113,10 @@ export class DamageCheck {
 
   /** Starts the check on its own read-only connection in a worker thread; WAL lets it read while the store works. */
   static inBackground(file: string, clock: () => Date): DamageCheck {
+    const sqlite = loadedSqlite();
+    if (sqlite === undefined) return DamageCheck.notChecked(file, clock, 'the damage check could not find SQLite to run in the background');
     const check = new DamageCheck(file, clock, { state: 'running', since: clock().toISOString() });
-    const addon = loadedAddon();
-    const worker = new Worker(WORKER_SOURCE, {
-      eval: true,
-      workerData: { file, sqlitePath: require.resolve('better-sqlite3'), ...(addon ? { nativeBinding: addon } : {}) },
-    });
+    const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: { file, ...sqlite } });
     check.worker = worker;
     worker.unref();
     worker.once('message', (answer: CheckAnswer) => check.settle(stateOf(answer, clock().toISOString())));
