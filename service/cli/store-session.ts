@@ -48,8 +48,8 @@ export const storeCheckHelp = [
   '  one opens after the quick checks of its header and schema, so commands that only read (jobs list, find and',
   '  show, db export, a print that keeps nothing) start at once; a command that saves (jobs add, jobs status, db import, print quote',
   '  of stored jobs, which keeps the quotation, …) runs the check just before its first save, about 3 s a GB, with a',
-  '  note on a terminal, and saves nothing into a damaged store. --no-check skips quick_check (the header and schema',
-  '  are still checked); db check runs the full check (integrity_check) on its own.',
+  '  note on a terminal, and saves nothing into a damaged store. --no-check (given last, or before another option)',
+  '  skips quick_check, the header and schema still checked; db check runs the full check (integrity_check) on its own.',
 ].join('\n');
 
 export function openService(args: ParsedArgs): Service {
