@@ -104,11 +104,16 @@ function listCases(store: Store): Array<[string, ListJobsInput]> {
     ['all', {}], ['status', { status: 'quoted' }], ['rarest kind', { kind: 'torsion' }],
     ['material', { material: 'en10270-1-dh' }], ['kind + material', { kind: 'compression', material: 'astm-a228' }],
     ...(customerId === undefined ? [] : [['customer', { customerId }] as [string, ListJobsInput]]),
+    ['updated since a date', { dates: { field: 'updated', from: '2000-01-01' } }],
+    ['created in a date range', { dates: { field: 'created', from: '2000-01-01', to: '2099-12-31' } }],
+    ['status + updated since a date', { status: 'quoted', dates: { field: 'updated', from: '2000-01-01' } }],
+    ['archived', { archived: true }],
   ];
   const cases: Array<[string, ListJobsInput]> = [];
   for (const [name, filter] of filters) {
     for (const sort of ['updated', 'number', 'customer'] as const) cases.push([`${name}, by ${sort}`, { ...filter, sort }]);
   }
+  cases.push(['all, by updated, oldest first', { sort: 'updated', direction: 'asc' }], ['all, by number, descending', { sort: 'number', direction: 'desc' }]);
   return cases;
 }
 

@@ -109,6 +109,11 @@ export interface LastQuotedPrice {
 export interface JobPage {
   jobs: JobSummary[];
   total: number;
+  /**
+   * True when `total` is a lower bound: a date range is counted only up to a cap (db/search/list.ts
+   * COUNT_CAP), since an exact count would read every job in the range of a large store.
+   */
+  totalAtLeast: boolean;
   limit: number;
   offset: number;
   /** Pass as `after` for the page that follows; null on the last page. */
