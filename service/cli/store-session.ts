@@ -44,12 +44,13 @@ export function cliOpenOptions(args: ParsedArgs): OpenOptions {
 
 /** The help's words for cliOpenOptions. */
 export const storeCheckHelp = [
-  `Damage check: a store file up to ${CHECK_BEFORE_OPEN_MAX_BYTES / 2 ** 20} MB is checked (PRAGMA quick_check) before it opens. A larger`,
-  '  one opens after the quick checks of its header and schema, so commands that only read (jobs list, find and',
-  '  show, db export, a print that keeps nothing) start at once; a command that saves (jobs add, jobs status, db import, print quote',
-  '  of stored jobs, which keeps the quotation, …) runs the check just before its first save, about 3 s a GB, with a',
-  '  note on a terminal, and saves nothing into a damaged store. --no-check (given last, or before another option)',
-  '  skips quick_check, the header and schema still checked; db check runs the full check (integrity_check) on its own.',
+  `Damage check: a store file up to ${CHECK_BEFORE_OPEN_MAX_BYTES / 2 ** 20} MB is checked (PRAGMA quick_check) before it opens. A larger one`,
+  '  opens after the quick checks of its header and schema, so commands that only read (jobs list, find and show,',
+  '  db export, a print that keeps nothing) start at once; a command that saves (jobs add, jobs status, db import,',
+  '  print quote of stored jobs, which keeps the quotation, …) runs the check just before its first save, about 3 s',
+  '  a GB, with a note on a terminal, and saves nothing into a damaged store. --no-check (given last, or before',
+  '  another option) skips quick_check, the header and schema still checked. db check runs the full check',
+  '  (integrity_check) on its own.',
 ].join('\n');
 
 export function openService(args: ParsedArgs): Service {
