@@ -7,6 +7,8 @@ import { createService } from '../api';
 import type { Service } from '../api';
 import type { OpenOptions } from '../../db';
 import { openShopStoreAt } from '../host/first-run';
+import { openStartingStore } from '../host/store-choice';
+import type { StoreChoiceKeeper } from '../host/store-choice';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
 import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
@@ -29,6 +31,16 @@ export interface WebServerOptions {
   onNotice?: (text: string) => void;
   /** Where unexpected failures go; stderr by default. */
   onUnexpected?: (context: string, error: unknown) => void;
+  /**
+   * Where a server store opened on the Data screen is remembered for the next start (the program's settings
+   * file; never its password). Without it nothing is remembered.
+   */
+  choice?: StoreChoiceKeeper;
+  /**
+   * false when `dbFile` is only the program's own file (no --db, --store or COILWRIGHT_STORE): then the store
+   * remembered in `choice` is opened instead, falling back to `dbFile` with a notice. True unless given.
+   */
+  named?: boolean;
   /** How the store opens, over the app's defaults (tests lower the damage check's size rule). */
   openOptions?: OpenOptions;
 }
@@ -144,11 +156,13 @@ function listen(server: Server, port: number): Promise<number> {
   });
 }
 
-function openService(dbFile: string, onNotice: (text: string) => void, openOptions?: OpenOptions): Service {
-  const opened = openShopStoreAt(dbFile, openOptions);
+function openService(options: WebServerOptions, onNotice: (text: string) => void): Service {
+  const opened = options.choice && options.named === false
+    ? openStartingStore(undefined, options.choice, options.dbFile, options.openOptions)
+    : openShopStoreAt(options.dbFile, options.openOptions);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
-  return createService(opened.value.store);
+  return createService(opened.value.store, {}, options.choice);
 }
 
 /**
@@ -156,7 +170,7 @@ function openService(dbFile: string, onNotice: (text: string) => void, openOptio
  * per-run token. Every API outcome is an ApiResult value, as over IPC.
  */
 export async function startWebServer(options: WebServerOptions): Promise<WebServer> {
-  const service = openService(options.dbFile, options.onNotice ?? ((text) => console.warn(text)), options.openOptions);
+  const service = openService(options, options.onNotice ?? ((text) => console.warn(text)));
   let port = 0;
   const ctx: Context = {
     service,
