@@ -11,7 +11,7 @@ import { INCOMING } from './recover';
 import { prepareIncoming, removeStoreFiles } from './restore-copy';
 import { replaceRows } from './restore-into';
 import type { SqliteStore as Store } from './store';
-import { readOnlyError, writeFailure } from './store';
+import { writeFailure, writeRefusal } from './store';
 
 function asFailure(e: unknown): { ok: false; error: { code: string; message: string; path: string } } {
   if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
@@ -132,7 +132,8 @@ async function keepAndReplace(store: Store, options: RestoreOptions): Promise<st
  */
 export async function restoreStore(store: Store, from: string, options: RestoreOptions = {}): Promise<RestoreOutcome> {
   if (sameFile(from, store.file)) return { result: failure('same-file', 'restore from a backup, not from the store itself', 'file'), store };
-  if (store.readOnly) return { result: { ok: false, error: readOnlyError(store, store.readOnly).toApiError() }, store };
+  const refused = writeRefusal(store);
+  if (refused) return { result: { ok: false, error: refused.toApiError() }, store };
   const verified = verifyBackup(from);
   if (!verified.ok) return { result: verified, store };
   const incoming = `${store.file}${INCOMING}${process.pid}`;

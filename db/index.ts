@@ -1,6 +1,8 @@
 /** The job store: better-sqlite3 underneath, values (`{ ok, value } | { ok: false, error }`) on top. */
 export { openStore, tryOpenStore } from './open';
 export type { OpenOptions } from './open';
+export { CHECK_BEFORE_OPEN_MAX_BYTES, storeBytes } from './damage-check';
+export type { CheckProgress, DamageCheck } from './damage-check';
 export type { Store, SqliteStore, Statement } from './store';
 export { inTransaction, isSqliteStore } from './store';
 export { StoreError } from './errors';

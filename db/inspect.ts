@@ -50,7 +50,8 @@ function readPragmas(file: string, check: StoreCheck): { applicationId: number; 
 
 /**
  * Looks at a file without writing to it: the SQLite header, then (read-only) the application id and
- * schema version, and the check asked for (quick_check on every open, integrity_check for backups). Throws StoreError for anything that is not a
+ * schema version, reading sqlite_schema, and the check asked for (quick_check before opening a store within the
+ * size rule, see db/damage-check.ts; integrity_check for backups). Throws StoreError for anything that is not a
  * Coilwright store this version can open.
  */
 export function inspectStoreFile(file: string, { check = 'none' as StoreCheck } = {}): StoreFileInfo {

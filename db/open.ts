@@ -1,6 +1,8 @@
 import Database from 'better-sqlite3';
 import { accessSync, constants, existsSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import type { CheckProgress, DeferredCheck } from './damage-check';
+import { CHECK_BEFORE_OPEN_MAX_BYTES, DamageCheck, storeBytes } from './damage-check';
 import { StoreError } from './errors';
 import { inspectStoreFile } from './inspect';
 import { LATEST_VERSION, migrate, schemaVersion } from './migrations';
@@ -15,10 +17,17 @@ export interface OpenOptions {
   /** The clock writes are stamped with (tests pin it). */
   clock?: () => Date;
   /**
-   * The damage check before opening: PRAGMA quick_check (the default; it reads every page, about 1-3 s
-   * at 100 000 jobs, see `npm run bench -- store`), or none (the bench's baseline only).
+   * The damage check, PRAGMA quick_check, which reads every page (see CHECK_BEFORE_OPEN_MAX_BYTES):
+   * 'quick' before opening (the default); 'by-size' before opening up to the size rule and after it above
+   * (`deferredCheck` says where); 'none' (the bench's baseline and second connections to a checked store).
    */
-  check?: 'quick' | 'none';
+  check?: 'quick' | 'none' | 'by-size';
+  /** Where a store over the size rule is checked when `check` is 'by-size' (the default: 'background'). */
+  deferredCheck?: DeferredCheck;
+  /** The size rule's limit in bytes (CHECK_BEFORE_OPEN_MAX_BYTES unless a test lowers it). */
+  checkBeforeOpenMaxBytes?: number;
+  /** Told when a check deferred to the first save starts and ends. */
+  onCheck?: CheckProgress;
   /** Who saves through this store (the signed-in name); by default COILWRIGHT_USER or the computer's account. */
   author?: string;
 }
@@ -60,16 +69,34 @@ function connect(file: string, readOnly: boolean, options: OpenOptions): Databas
   }
 }
 
+/** Whether quick_check runs before opening, or after it (and where), by the option and the size rule. */
+function checkPlan(file: string, options: OpenOptions): { before: 'quick' | 'none'; after?: DeferredCheck } {
+  const check = options.check ?? 'quick';
+  if (check !== 'by-size') return { before: check };
+  if (storeBytes(file) <= (options.checkBeforeOpenMaxBytes ?? CHECK_BEFORE_OPEN_MAX_BYTES)) return { before: 'quick' };
+  return { before: 'none', after: options.deferredCheck ?? 'background' };
+}
+
+function damageCheckOf(file: string, plan: ReturnType<typeof checkPlan>, options: OpenOptions): DamageCheck {
+  const clock = options.clock ?? (() => new Date());
+  if (plan.after === 'background') return DamageCheck.inBackground(file, clock);
+  if (plan.after === 'first-save') return DamageCheck.beforeFirstSave(file, clock, options.onCheck);
+  return plan.before === 'quick' ? DamageCheck.passedAtOpen(file, clock) : DamageCheck.notChecked(file, clock, 'not asked for');
+}
+
 /**
  * Opens (or creates) a job store. A restore interrupted half way is finished or rolled back first. The
  * file is then inspected read-only: anything that is not a Coilwright store, fails PRAGMA quick_check, or
- * comes from a newer version is refused with a StoreError and left exactly as it was. A store that cannot
+ * comes from a newer version is refused with a StoreError and left exactly as it was. With check 'by-size'
+ * a store over the size rule gets only the cheap checks here and its quick_check after opening: when that
+ * finds damage, the store turns read-only and every save answers how to restore it. A store that cannot
  * be written (read-only file or folder) opens read-only: reads work, saves say why they cannot. Pending
  * migrations apply in one transaction.
  */
 export function openStore(file: string, options: OpenOptions = {}): SqliteStore {
   finishInterruptedRestore(file);
-  const info = inspectStoreFile(file, { check: options.check ?? 'quick' });
+  const plan = checkPlan(file, options);
+  const info = inspectStoreFile(file, { check: plan.before });
   const readOnly = readOnlyReason(file);
   if (readOnly && info.state === 'new') throw new StoreError('store-unopenable', `${file} cannot be created: ${readOnly}`);
   const db = connect(file, readOnly !== undefined, options);
@@ -85,7 +112,8 @@ export function openStore(file: string, options: OpenOptions = {}): SqliteStore 
     if (e instanceof StoreError) throw e;
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
-  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly, options.author);
+  // Started once migrations are done, so the check reads the store as it will be worked on.
+  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly, options.author, damageCheckOf(file, plan, options));
 }
 
 /** openStore as a value: `{ ok: false, error }` instead of an exception. */

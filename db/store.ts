@@ -1,5 +1,6 @@
 import Database from 'better-sqlite3';
 import { userInfo } from 'node:os';
+import { DamageCheck } from './damage-check';
 import { StoreError } from './errors';
 
 /** One SQL statement of either backend: `?` placeholders, rows as plain objects. */
@@ -41,6 +42,8 @@ export interface Store {
 export interface SqliteStore extends Store {
   readonly dialect: 'sqlite';
   readonly db: Database.Database;
+  /** The file's damage check: passed before opening, or running, waiting or done after it (db/damage-check.ts). */
+  readonly damageCheck: DamageCheck;
   sql(text: string): Database.Statement;
 }
 
@@ -57,13 +60,18 @@ export function defaultAuthor(): string {
   }
 }
 
-export function makeStore(db: Database.Database, file: string, clock: () => Date, readOnly?: string, author = defaultAuthor()): SqliteStore {
+export function makeStore(db: Database.Database, file: string, clock: () => Date, readOnlyFile?: string, author = defaultAuthor(),
+  damageCheck = DamageCheck.notChecked(file, clock, 'not asked for')): SqliteStore {
   const cache = new Map<string, Database.Statement>();
   return {
     dialect: 'sqlite',
     db,
     file,
-    readOnly,
+    // A check that finds damage after opening makes the store read-only for as long as it stays open.
+    get readOnly() {
+      return readOnlyFile ?? damageCheck.damage();
+    },
+    damageCheck,
     author,
     transaction: (fn) => db.transaction(fn).immediate(),
     changeMark: () => `sqlite:${String(db.pragma('data_version', { simple: true }))}`,
@@ -78,9 +86,10 @@ export function makeStore(db: Database.Database, file: string, clock: () => Date
     now: clock,
     close() {
       cache.clear();
+      damageCheck.close();
       if (db.open) {
         // Best effort: on a full disk or a file made read-only meanwhile the statistics simply stay as they were.
-        if (!readOnly) {
+        if (!(readOnlyFile ?? damageCheck.damage())) {
           try {
             db.pragma('optimize');
           } catch {
@@ -118,9 +127,21 @@ export function writeFailure(store: Store, e: unknown): unknown {
   return e;
 }
 
+/**
+ * Why a save is refused now, or undefined: damage found by the store's check (its own answer), a read-only
+ * file or folder, or damage found by a check that waited for the first save and runs now.
+ */
+export function writeRefusal(store: Store): StoreError | undefined {
+  const damaged = isSqliteStore(store) ? store.damageCheck.refusal() : undefined;
+  if (damaged) return damaged;
+  if (store.readOnly) return readOnlyError(store, store.readOnly);
+  return isSqliteStore(store) ? store.damageCheck.beforeSave() : undefined;
+}
+
 /** Runs fn in one transaction (a savepoint when already inside one): all of it is written, or none. */
 export function inTransaction<T>(store: Store, fn: () => T): T {
-  if (store.readOnly) throw readOnlyError(store, store.readOnly);
+  const refused = writeRefusal(store);
+  if (refused) throw refused;
   try {
     return store.transaction(fn);
   } catch (e) {

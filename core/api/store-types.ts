@@ -279,6 +279,8 @@ export interface StoreInfo {
   readOnly: string | null;
   /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
   changeMark: string;
+  /** The file's damage check (PRAGMA quick_check); null for a server store, whose server keeps its own pages. */
+  damageCheck: DamageCheckInfo | null;
   /**
    * The server store the next start of this program opens, as chosen on the Data screen and saved in the
    * program's own settings file (the connection string without its password); null when the next start opens
@@ -286,3 +288,14 @@ export interface StoreInfo {
    */
   nextStart: { location: string; passwordLeftOut: boolean } | null;
 }
+
+/**
+ * Where a store file's damage check stands. Small stores are checked before they open (passed at the open);
+ * large ones open first and are checked while the program works; a failed check makes the store read-only.
+ * Times are ISO 8601.
+ */
+export type DamageCheckInfo =
+  | { state: 'running'; since: string }
+  | { state: 'passed'; at: string }
+  | { state: 'failed'; at: string; problem: string }
+  | { state: 'not-checked'; reason: string };

@@ -10,7 +10,7 @@ import type { LongRun } from '../long-run';
 import { cancelled } from '../long-run';
 import { openStore } from '../open';
 import type { SqliteStore, Store } from '../store';
-import { inTransaction, isSqliteStore, readOnlyError, writeFailure } from '../store';
+import { inTransaction, isSqliteStore, writeFailure, writeRefusal } from '../store';
 import { CsvSyntaxError, csvRecords, parseCsv } from './csv';
 import { WholeFileError, csvTaker, detectFormat, headerError, jsonTaker } from './import-formats';
 import { ImportRun } from './import-run';
@@ -124,7 +124,8 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
   // A store without a file of its own (in memory) cannot be opened twice: it imports on its own connection.
   // A server store imports in one transaction of its own connection, the server keeping others' reads consistent.
   if (file === undefined || !isSqliteStore(store) || store.file === ':memory:' || store.file === '') return importJobs(store, parsed.value);
-  if (store.readOnly) return { ok: false, error: readOnlyError(store, store.readOnly).toApiError() };
+  const refused = writeRefusal(store);
+  if (refused) return { ok: false, error: refused.toApiError() };
   let total: number;
   let start: string;
   try {

@@ -7,6 +7,24 @@ import { useCommandBus } from './commands';
 export const storeLabel = (info: StoreInfo): string =>
   info.backend === 'postgres' ? `PostgreSQL ${info.name}` : info.name;
 
+/** The store's damage check as the status line says it: quietly while it runs, a warning once it failed. */
+export function damageCheckStatus(info: StoreInfo): { tone: 'quiet' | 'warning'; text: string; detail: string } | null {
+  const check = info.damageCheck;
+  if (check?.state === 'running') {
+    return { tone: 'quiet', text: 'checking the store…', detail: `A damage check of the store is running (since ${check.since}); work goes on meanwhile.` };
+  }
+  if (check?.state !== 'failed') return null;
+  return {
+    tone: 'warning',
+    text: 'Store damaged: read-only, restore a backup',
+    detail: `The damage check found damage (${check.problem}). Nothing more can be saved while it is open: `
+      + 'export what you need, close Coilwright, and restore your latest backup over it (Data & backups shows how).',
+  };
+}
+
+/** How often the status line asks again while the store's damage check runs. */
+const CHECK_POLL_MS = 2000;
+
 /** The store open now, read again whenever data changes (another store opened, a restore); names the window after it. */
 export function useStoreInfo(): StoreInfo | null {
   const api = useApi();
@@ -14,6 +32,12 @@ export function useStoreInfo(): StoreInfo | null {
   const [info, setInfo] = useState<StoreInfo | null>(null);
   const [tick, setTick] = useState(0);
   useEffect(() => bus.subscribe('data-changed', () => setTick((t) => t + 1)), [bus]);
+  const checking = info?.damageCheck?.state === 'running';
+  useEffect(() => {
+    if (!checking) return undefined;
+    const timer = setTimeout(() => setTick((t) => t + 1), CHECK_POLL_MS);
+    return () => clearTimeout(timer);
+  }, [checking, tick]);
   useEffect(() => {
     let live = true;
     void api.storeInfo({}).then((r) => {

@@ -1,6 +1,6 @@
 import type { Route } from '../hooks/navigation';
 import { useNavigation } from '../hooks/navigation';
-import { storeLabel, useStoreInfo } from '../hooks/store-info';
+import { damageCheckStatus, storeLabel, useStoreInfo } from '../hooks/store-info';
 
 interface HeaderProps {
   route: Route;
@@ -15,6 +15,7 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
   const nav = useNavigation();
   const store = useStoreInfo();
   const current = (screen: Route['screen']) => (route.screen === screen ? 'page' : undefined);
+  const check = store ? damageCheckStatus(store) : null;
   return (
     <header className="topbar">
       <div className="topbar__mark" aria-hidden="true">
@@ -47,6 +48,12 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
       {store && (
         <span className="topbar__store" data-testid="store-name" title={`Saves are recorded as by ${store.author || 'no one named'}`}>
           {storeLabel(store)}
+        </span>
+      )}
+      {check && (
+        <span className={`topbar__check topbar__check--${check.tone}`} data-testid="store-check" title={check.detail}
+          role={check.tone === 'warning' ? 'alert' : 'status'}>
+          {check.text}
         </span>
       )}
       <div className="topbar__tools">

@@ -4,7 +4,7 @@ import type { StoreInfo, storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
 import type { StoreChoiceKeeper } from '../host/store-choice';
 import {
-  addAttachment, createJob, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
+  addAttachment, createJob, isSqliteStore, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
   saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob, StoreError,
 } from '../../db';
@@ -31,6 +31,7 @@ export function storeInfo(store: Store, choice?: StoreChoiceKeeper): StoreInfo {
   return {
     backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark(),
     nextStart: choice?.remembered() ?? null,
+    damageCheck: isSqliteStore(store) ? store.damageCheck.state() : null,
   };
 }
 

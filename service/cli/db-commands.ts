@@ -5,10 +5,12 @@ import { InputError, requireOption, toJson } from './io';
 import type { ApiResult } from '../../core/api';
 import type { FileActions } from '../api';
 import type { Caller } from './store-session';
-import { positional, raise, withStore } from './store-session';
-import { StoreError, copyStore, createDemoShop, openStoreAt, restoreDamagedStore, writeExport } from '../../db';
+import { positional, raise, storeOption, withStore } from './store-session';
+import {
+  StoreError, copyStore, createDemoShop, inspectStoreFile, isPostgresLocation, openStoreAt, restoreDamagedStore, storeBytes, writeExport,
+} from '../../db';
 import type { Store } from '../../db';
-import { bytesRead, withProgress } from './progress';
+import { bytesRead, checkNotice, withProgress } from './progress';
 
 type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller, store: Store) => Promise<void>;
 
@@ -62,12 +64,15 @@ export const dbCommand: Command = {
     '                                  an existing FILE is replaced only with --force',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
     '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
+    '  db check --db DB                the full damage check of a store file (PRAGMA integrity_check, every page and index',
+    '                                  entry; it opens nothing for writing); exit 2 with the way to restore when damaged',
     '  db copy --from STORE --to STORE every job, revision, quote, attachment, setting and record into an empty store, in one',
     '                                  transaction, counts and checksums verified; STORE is a file or a postgres:// connection string',
   ].join('\n'),
   async run(args, out) {
     const name = args.positional[0];
     if (name === 'copy') return copyBetween(args, out);
+    if (name === 'check') return checkStoreFile(args, out);
     const sub = subcommandOf('db', args, subcommands);
     try {
       await withStore(args, (call, service) => sub(args, service.files, out, call, service.store()));
@@ -101,6 +106,27 @@ async function copyBetween(args: ParsedArgs, out: (text: string) => void): Promi
     }
   } finally {
     source.close();
+  }
+}
+
+/** `db check`: reads the file only, as the checks before opening do, with integrity_check instead of quick_check. */
+function checkStoreFile(args: ParsedArgs, out: (text: string) => void): void {
+  const { location, path } = storeOption(args);
+  if (isPostgresLocation(location)) {
+    throw new InputError([{ code: 'not-a-file', path, message: 'db check reads a store file; a PostgreSQL server checks its own pages' }]);
+  }
+  const notice = checkNotice('checking the store for damage');
+  const bytes = storeBytes(location);
+  notice('start', bytes);
+  try {
+    const { state, version } = inspectStoreFile(location, { check: 'full' });
+    if (state === 'new') throw new InputError([{ code: 'store-missing', path, message: `there is no store at ${location}` }]);
+    out(toJson({ file: location, version, bytes, check: 'integrity_check', result: 'ok' }));
+  } catch (e) {
+    if (e instanceof StoreError) throw new InputError([{ code: e.code, message: e.message, path }]);
+    throw e;
+  } finally {
+    notice('end', bytes);
   }
 }
 

@@ -22,7 +22,8 @@ const commands: Record<string, () => Promise<Command>> = {
 
 async function usage(): Promise<string> {
   const all = await Promise.all(Object.values(commands).map((load) => load()));
-  return ['usage: npm run -s cli -- <command> …', ...all.map((c) => `  ${c.usage}`)].join('\n');
+  const { storeCheckHelp } = await import('./store-session');
+  return ['usage: npm run -s cli -- <command> …', ...all.map((c) => `  ${c.usage}`), '', storeCheckHelp].join('\n');
 }
 
 /** Runs one command line; returns the exit code. Output and errors go through the given writers. */

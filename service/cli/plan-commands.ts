@@ -8,7 +8,7 @@ import { StoreError, getSettings, openStore } from '../../db';
 import type { Command } from './commands';
 import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
-import { intOption, positional, withStore } from './store-session';
+import { cliOpenOptions, intOption, positional, withStore } from './store-session';
 import { runBatch } from './batch';
 import type { SetCalibration } from '../../core/process/set-calibration';
 import { sheetCalibration } from './first-off-commands';
@@ -28,7 +28,7 @@ export function settingsFor(args: ParsedArgs, required: boolean): Settings {
     return defaultSettings();
   }
   try {
-    const store = openStore(file);
+    const store = openStore(file, cliOpenOptions(args));
     try {
       const settings = getSettings(store);
       if (!settings.ok) throw new InputError([{ code: settings.error.code, message: settings.error.message, path: '--db' }]);

@@ -1,4 +1,4 @@
-import type { LongRun } from '../../db';
+import type { CheckProgress, LongRun } from '../../db';
 
 /** How often the progress line is redrawn at most. */
 const REDRAW_MS = 100;
@@ -51,3 +51,12 @@ export async function withProgress<T>(label: string, fn: (progress: LongRun) => 
     progress.done();
   }
 }
+
+/**
+ * A damage check (it cannot report how far it is): one line on standard error while it runs, only when
+ * standard error is a terminal, removed when it ends.
+ */
+export const checkNotice = (label: string): CheckProgress => (event, bytes) => {
+  if (process.stderr.isTTY !== true) return;
+  process.stderr.write(event === 'start' ? `${label} (${megabytes(bytes)})…` : '\r\x1b[K');
+};

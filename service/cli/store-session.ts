@@ -1,10 +1,12 @@
 import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '../../core/api';
-import { STORE_VARIABLE, StoreError, openStoreAt, readOnlyNotice } from '../../db';
+import { CHECK_BEFORE_OPEN_MAX_BYTES, STORE_VARIABLE, StoreError, openStoreAt, readOnlyNotice } from '../../db';
+import type { OpenOptions } from '../../db';
 import { chosenStore } from '../host/first-run';
 import { createService, dispatch } from '../api';
 import type { Service } from '../api';
 import type { ParsedArgs } from './io';
 import { InputError } from './io';
+import { checkNotice } from './progress';
 
 /** Bad input becomes exit 2 with every field error; anything unexpected is exit 1. */
 export function raise(error: ApiError): never {
@@ -29,10 +31,32 @@ export function storeOption(args: ParsedArgs): { location: string; path: string 
   return { location, path: given('store') !== undefined ? '--store' : given('db') !== undefined ? '--db' : STORE_VARIABLE };
 }
 
+/**
+ * How the command line opens a store file: within the size rule (db/damage-check.ts) the damage check runs
+ * before opening, as always; a larger store opens after the cheap checks, so a command that only reads (list,
+ * find, export, print) starts at once, and its check runs just before the first save. --no-check skips
+ * quick_check altogether (the header, application id and schema version are still checked).
+ */
+export function cliOpenOptions(args: ParsedArgs): OpenOptions {
+  if (args.options.has('no-check')) return { check: 'none' };
+  return { check: 'by-size', deferredCheck: 'first-save', onCheck: checkNotice('checking the store for damage before saving') };
+}
+
+/** The help's words for cliOpenOptions. */
+export const storeCheckHelp = [
+  `Damage check: a store file up to ${CHECK_BEFORE_OPEN_MAX_BYTES / 2 ** 20} MB is checked (PRAGMA quick_check) before it opens. A larger one`,
+  '  opens after the quick checks of its header and schema, so commands that only read (jobs list, find and show,',
+  '  db export, a print that keeps nothing) start at once; a command that saves (jobs add, jobs status, db import,',
+  '  print quote of stored jobs, which keeps the quotation, …) runs the check just before its first save, about 3 s',
+  '  a GB, with a note on a terminal, and saves nothing into a damaged store. --no-check (given last, or before',
+  '  another option) skips quick_check, the header and schema still checked. db check runs the full check',
+  '  (integrity_check) on its own.',
+].join('\n');
+
 export function openService(args: ParsedArgs): Service {
   const { location, path } = storeOption(args);
   try {
-    const store = openStoreAt(location);
+    const store = openStoreAt(location, cliOpenOptions(args));
     if (store.readOnly) process.stderr.write(`${readOnlyNotice(store.file, store.readOnly)}\n`);
     return createService(store);
   } catch (e) {

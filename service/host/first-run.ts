@@ -38,7 +38,8 @@ export function openShopStore(file: string, options: OpenOptions = {}):
   } catch (e) {
     return { ok: false, error: { code: 'store-folder', message: `cannot create ${path.dirname(file)}: ${(e as Error).message}`, path: file } };
   }
-  const opened = openQuietly(file, options);
+  // A large store opens at once and is checked for damage in the background (db/damage-check.ts).
+  const opened = openQuietly(file, { check: 'by-size', deferredCheck: 'background', ...options });
   if (!opened.ok) return opened;
   const store = opened.value;
   // A read-only store is shown as it is: the demo shop cannot be written into it.

@@ -5,6 +5,7 @@ import type { ApiError } from '../../core/api';
 import { dispatch } from '../api/dispatch';
 import { createService } from '../api';
 import type { Service } from '../api';
+import type { OpenOptions } from '../../db';
 import { openShopStoreAt } from '../host/first-run';
 import { openStartingStore } from '../host/store-choice';
 import type { StoreChoiceKeeper } from '../host/store-choice';
@@ -40,6 +41,8 @@ export interface WebServerOptions {
    * remembered in `choice` is opened instead, falling back to `dbFile` with a notice. True unless given.
    */
   named?: boolean;
+  /** How the store opens, over the app's defaults (tests lower the damage check's size rule). */
+  openOptions?: OpenOptions;
 }
 
 export interface WebServer {
@@ -155,8 +158,8 @@ function listen(server: Server, port: number): Promise<number> {
 
 function openService(options: WebServerOptions, onNotice: (text: string) => void): Service {
   const opened = options.choice && options.named === false
-    ? openStartingStore(undefined, options.choice, options.dbFile)
-    : openShopStoreAt(options.dbFile);
+    ? openStartingStore(undefined, options.choice, options.dbFile, options.openOptions)
+    : openShopStoreAt(options.dbFile, options.openOptions);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
   return createService(opened.value.store, {}, options.choice);
