@@ -17,24 +17,22 @@ const INSERT_SELECT = /^\s*INSERT\s+INTO\s+\w+\s+SELECT\s/i;
 /** Clauses whose meaning one statement over many jobs would not keep. */
 const NOT_FILLED = /\b(ON\s+CONFLICT|RETURNING|FROM|GROUP\s+BY|ORDER\s+BY|LIMIT)\b/i;
 
-/** Where each character of the SQL sits: -1 inside quoted text, else its depth of parentheses. */
-function depths(sql: string): number[] {
-  const out: number[] = [];
+/**
+ * The SQL with its quoted and parenthesised parts blanked, at the same places: only the statement's own
+ * clauses and separators are left to look at.
+ */
+function topLevel(sql: string): string {
+  let out = '';
   let depth = 0;
   let quoted = false;
-  for (const c of sql) {
+  for (let i = 0; i < sql.length; i++) {
+    const c = sql[i]!;
     if (c === "'") quoted = !quoted;
     if (!quoted && c === ')') depth--;
-    out.push(quoted || c === "'" ? -1 : depth);
+    out += quoted || c === "'" || depth > 0 ? ' ' : c;
     if (!quoted && c === '(') depth++;
   }
   return out;
-}
-
-/** The SQL with its parenthesised and quoted parts blanked: its own clauses only, at the same places. */
-function topLevel(sql: string): string {
-  const at = depths(sql);
-  return [...sql].map((c, i) => (at[i] === 0 ? c : ' ')).join('');
 }
 
 /** A trigger body's statements: split at the semicolons outside quotes and parentheses. */

@@ -27,10 +27,10 @@ export interface NumberSequence {
 export function numberSequence(store: Store, sequence: 'jobs' | 'quotes'): NumberSequence {
   const numbering = readSetting(store, 'numbering');
   const seq = sequence === 'jobs' ? numbering : numbering.quotes;
-  const now = store.now();
   let next = seq.next;
   return {
     take() {
+      const now = store.now();
       let number = formatNumber(seq.prefix, seq.width, next, now);
       while (store.sql(taken[sequence]).get(number) !== undefined) {
         next += 1;
