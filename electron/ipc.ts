@@ -33,15 +33,18 @@ export interface GuardOptions {
   onUnexpected?: (context: string, error: unknown) => void;
 }
 
-/** Registers one channel whose every call is sender-checked and whose every outcome is a value. */
+/**
+ * Registers one channel whose every call is sender-checked and whose every outcome is a value. `extra` is
+ * the call's second argument, for the channels that take one; the handler checks it as it checks `raw`.
+ */
 export function handleGuarded(
-  ipcMain: IpcMainLike, channel: string, run: (raw: unknown) => Promise<ApiResult<unknown>>, options: GuardOptions = {},
+  ipcMain: IpcMainLike, channel: string, run: (raw: unknown, extra?: unknown) => Promise<ApiResult<unknown>>, options: GuardOptions = {},
 ): void {
   const trusted = options.isTrustedSender ?? isTrustedSender;
-  ipcMain.handle(channel, async (event, raw) => {
+  ipcMain.handle(channel, async (event, raw, extra) => {
     if (!trusted(event)) return untrustedSender(channel);
     try {
-      return await run(raw);
+      return await run(raw, extra);
     } catch (e) {
       options.onUnexpected?.(channel, e);
       return { ok: false, error: { code: 'unexpected', message: `${channel} failed: ${(e as Error).message}`, path: '' } };

@@ -6,7 +6,7 @@ import { BrowserWindow, Menu, app, dialog, ipcMain, protocol, session, shell } f
 import { existsSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { MENU_COMMAND_CHANNEL } from '../core/api/method-names';
+import { DATA_PROGRESS_CHANNEL, MENU_COMMAND_CHANNEL } from '../core/api/method-names';
 import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
 import { createService, dispatch } from '../service/api';
@@ -18,7 +18,8 @@ import { offerRestoreOfDamagedStore } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
-import { chosenStore, openShopStoreAt } from '../service/host/first-run';
+import { chosenStore } from '../service/host/first-run';
+import { fileStoreChoice, openStartingStore } from '../service/host/store-choice';
 import { createLog } from './shell/logging';
 import type { Log } from './shell/logging';
 import { applicationMenu } from './shell/menu';
@@ -57,13 +58,19 @@ function openService(log: Log): Service | { code: string; message: string } {
     electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
   });
   if (!binding.ok) return binding.error;
-  // COILWRIGHT_STORE (a file or a postgres:// connection string) names another store than the user's own file.
-  const opened = openShopStoreAt(chosenStore({}) ?? userFile('coilwright.db'));
+  // COILWRIGHT_STORE (a file or a postgres:// connection string) names another store than the user's own file;
+  // without it, the server store last opened on the Data screen (app-settings.json, never its password).
+  const choice = fileStoreChoice(userFile('app-settings.json'));
+  const opened = openStartingStore(chosenStore({}), choice, userFile('coilwright.db'));
   if (!opened.ok) return opened.error;
   if (opened.value.demoJobs > 0) log.info('first-run', `demo shop created with ${opened.value.demoJobs} jobs`);
-  const { notice } = opened.value;
-  if (notice) void dialog.showMessageBox({ type: 'info', title: 'Coilwright', message: 'The job store is open read-only', detail: notice });
-  return createService(opened.value.store);
+  const { notice, store } = opened.value;
+  if (notice) {
+    log.info('store', notice);
+    const message = store.readOnly ? 'The job store is open read-only' : 'The job store chosen last time is not open';
+    void dialog.showMessageBox({ type: 'info', title: 'Coilwright', message, detail: notice });
+  }
+  return createService(store, {}, choice);
 }
 
 function showMainWindow(log: Log, faults: FaultReporter): void {
@@ -88,17 +95,18 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
     dialogs: electronDialogs(liveMainWindow),
     call: (name, input, long) => service.files.run(name, input as never, long),
     progress: (fraction) => liveMainWindow()?.setProgressBar(fraction ?? -1),
+    report: (event) => liveMainWindow()?.webContents.send(DATA_PROGRESS_CHANNEL, event),
     notify: (command) => liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command),
     documentsDir: app.getPath('documents'),
     today: () => new Date().toISOString().slice(0, 10),
   });
-  const guard = (name: string, action: () => Promise<void>) => () => void action().catch((e: unknown) => faults.report(name, e));
+  const guard = (name: string, action: () => Promise<unknown>) => () => void action().catch((e: unknown) => faults.report(name, e));
   const template = applicationMenu({ platform: process.platform, isDev: !app.isPackaged, appName: app.name }, {
     command: (command, window) => sendCommand(previews, command, window?.id),
-    backup: guard('backup', data.backup),
-    restore: guard('restore', data.restore),
-    importJobs: guard('import', data.importJobs),
-    exportJobs: guard('export', data.exportJobs),
+    backup: guard('backup', () => data.backup()),
+    restore: guard('restore', () => data.restore()),
+    importJobs: guard('import', () => data.importJobs()),
+    exportJobs: guard('export', () => data.exportJobs()),
   });
   Menu.setApplicationMenu(Menu.buildFromTemplate(template));
   registerDataActionIpc(ipcMain, data, { onUnexpected: (context, e) => faults.report(context, e) });

@@ -55,7 +55,9 @@ async function startInBrowser(reason) {
   await buildWebServer();
   const args = process.argv.slice(2);
   const named = args.includes('--db') || args.includes('--store') || Boolean(process.env.COILWRIGHT_STORE?.trim());
-  const withDb = named ? args : ['--db', desktopStoreFile(), ...args];
+  // Not named: the desktop app's own folder, so the browser start opens the store it would (its file, or the
+  // server store last chosen on the Data screen, kept in app-settings.json there).
+  const withDb = named ? args : ['--app-dir', path.dirname(desktopStoreFile()), ...args];
   const server = spawn(process.execPath, [path.join(root, 'dist', 'web', 'web-server.cjs'), ...withDb], {
     cwd: root, stdio: ['ignore', 'pipe', 'inherit'],
   });

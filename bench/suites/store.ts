@@ -1,5 +1,5 @@
 import Database from 'better-sqlite3';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { JobShape, ListJobsInput } from '../../core/api/store';
@@ -12,7 +12,7 @@ import { distance } from '../../db/search/similarity';
 import type { BenchRow, BenchSuite } from '../harness';
 import { latencies } from '../harness';
 import { exchangeRows } from './exchange';
-import { benchQueries, compressionSpec, extensionSpec, fillWithJobs, lcg, oneWordQueries, torsionSpec } from './store-data';
+import { GENERATION_BATCH, benchQueries, compressionSpec, extensionSpec, fillWithJobs, lcg, oneWordQueries, torsionSpec } from './store-data';
 
 const makers = { compression: compressionSpec, extension: extensionSpec, torsion: torsionSpec };
 
@@ -103,11 +103,16 @@ function listCases(store: Store): Array<[string, ListJobsInput]> {
     ['all', {}], ['status', { status: 'quoted' }], ['rarest kind', { kind: 'torsion' }],
     ['material', { material: 'en10270-1-dh' }], ['kind + material', { kind: 'compression', material: 'astm-a228' }],
     ...(customerId === undefined ? [] : [['customer', { customerId }] as [string, ListJobsInput]]),
+    ['updated since a date', { dates: { field: 'updated', from: '2000-01-01' } }],
+    ['created in a date range', { dates: { field: 'created', from: '2000-01-01', to: '2099-12-31' } }],
+    ['status + updated since a date', { status: 'quoted', dates: { field: 'updated', from: '2000-01-01' } }],
+    ['archived', { archived: true }],
   ];
   const cases: Array<[string, ListJobsInput]> = [];
   for (const [name, filter] of filters) {
     for (const sort of ['updated', 'number', 'customer'] as const) cases.push([`${name}, by ${sort}`, { ...filter, sort }]);
   }
+  cases.push(['all, by updated, oldest first', { sort: 'updated', direction: 'asc' }], ['all, by number, descending', { sort: 'number', direction: 'desc' }]);
   return cases;
 }
 
@@ -162,6 +167,30 @@ function openRows(file: string, row: Row): BenchRow[] {
   ];
 }
 
+/**
+ * Where the generated store lives. With COILWRIGHT_BENCH_KEEP=<folder> it is kept there between runs
+ * (store-<jobs>.db) and generated only when missing, so the measurements of a million-job store can be
+ * repeated without its generation; otherwise it is generated afresh into a temporary folder.
+ */
+function generatedStore(dir: string, jobs: number, row: Row): { file: string; rows: BenchRow[] } {
+  const keep = process.env.COILWRIGHT_BENCH_KEEP;
+  const file = keep ? join(keep, `store-${jobs}.db`) : join(dir, 'bench.db');
+  if (keep && existsSync(file)) {
+    const store = openStore(file, { check: 'none' });
+    const n = (store.sql('SELECT count(*) AS n FROM jobs').get() as { n: number }).n;
+    store.close();
+    if (n !== jobs) throw new Error(`${file} holds ${n} jobs, not ${jobs}: remove it to generate it again`);
+    return { file, rows: [] };
+  }
+  if (keep) mkdirSync(keep, { recursive: true });
+  const writer = openStore(file);
+  const t0 = performance.now();
+  fillWithJobs(writer, jobs, 20260301);
+  const generation = (performance.now() - t0) / 1000;
+  writer.close();
+  return { file, rows: [row(`generate ${jobs} jobs (${GENERATION_BATCH} a commit)`, generation, 's')] };
+}
+
 /** The store suite at one size: generated through the store's own write path, then measured afresh. */
 export function storeSuiteOf(name: string, jobs: number, onlyWhenAsked = false): BenchSuite {
   const row = rowMaker(name);
@@ -170,15 +199,10 @@ export function storeSuiteOf(name: string, jobs: number, onlyWhenAsked = false):
     onlyWhenAsked,
     async run(): Promise<BenchRow[]> {
       const dir = mkdtempSync(join(tmpdir(), 'coilwright-bench-'));
-      const file = join(dir, 'bench.db');
       try {
-        const writer = openStore(file);
-        const t0 = performance.now();
-        fillWithJobs(writer, jobs, 20260301);
-        const generation = (performance.now() - t0) / 1000;
-        writer.close();
+        const { file, rows } = generatedStore(dir, jobs, row);
         // Measured as the app meets it: a store opened afresh, not the connection that just wrote it.
-        const rows = [row(`generate ${jobs} jobs (one transaction)`, generation, 's'), ...checkRows(file, jobs, row), ...openRows(file, row)];
+        rows.push(...checkRows(file, jobs, row), ...openRows(file, row));
         const store = openStore(file);
         rows.push(...listRows(store, row), ...textRows(store, row), ...similarRows(store, row));
         store.close();

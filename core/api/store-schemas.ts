@@ -64,6 +64,9 @@ export type JobFields = z.output<typeof jobInputSchema>;
 export const jobChangeSchema = z.enum(['drawing-revision', 'correction']);
 export type JobChange = z.infer<typeof jobChangeSchema>;
 
+/** One open job editor: letters, digits, '-' and '_'. */
+const deskSchema = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, 'a desk is 1 to 64 letters, digits, "-" or "_"');
+
 /** A save: only the fields given change; `expectedRevision` refuses the save if someone saved since. */
 export const jobPatchSchema = z.object({
   id,
@@ -87,6 +90,12 @@ export const jobPatchSchema = z.object({
    * until the session closes (keepWorkingRevision, a deliberate save, a drawing revision, a restore or an issue).
    */
   working: z.boolean().optional(),
+  /**
+   * The job editor (desk) the save comes from: one id per open editor, made up by the editor. A job's working
+   * session belongs to the desk that opened it; an autosave or a save from another desk is refused
+   * (`edited-elsewhere`) while it is open, so no desk types over another's working copy.
+   */
+  desk: deskSchema.optional(),
 }).strict();
 export type JobPatch = z.input<typeof jobPatchSchema>;
 
@@ -138,7 +147,12 @@ export const archiveJobSchema = z.object({ id, archived: z.boolean() }).strict()
 /** A job by its id or by the shop's job number. */
 export const jobRefSchema = z.union([z.object({ id }).strict(), z.object({ number: z.string().trim().min(1) }).strict()]);
 /** Ends a job's working session as one permanent revision; `reason` says what closed it. */
-export const keepWorkingRevisionSchema = z.object({ id, reason: z.enum(['saved', 'left the job', 'issued']).optional() }).strict();
+export const keepWorkingRevisionSchema = z.object({
+  id,
+  reason: z.enum(['saved', 'left the job', 'issued']).optional(),
+  /** Close only this desk's session (leaving the job leaves another desk's working copy open); without it, whichever is open. */
+  desk: deskSchema.optional(),
+}).strict();
 
 export const restoreRevisionSchema = z.object({ id, revision: z.number().int().positive() }).strict();
 export const setJobStatusSchema = z.object({ id, status: jobStatusSchema, expectedRevision: z.number().int().positive().optional() }).strict();
@@ -238,6 +252,9 @@ export const signInSchema = z.object({ name: z.string().trim().min(1, 'type the 
  * host (command line, desktop dialogs), never named through the contract. The string is used to connect and
  * then forgotten; it is never written to the store, a log or an export.
  */
+/** The next start opens the program's own store file again (the server store stays open until then). */
+export const forgetServerStoreSchema = z.object({}).strict();
+
 export const openServerStoreSchema = z.object({
   connection: z.string().trim().max(2000).regex(/^postgres(ql)?:\/\//i, 'a connection string starts with postgres:// (for example postgres://user@host:5432/shop)'),
 }).strict();

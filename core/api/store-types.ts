@@ -81,8 +81,12 @@ export interface JobLink {
 
 export interface Job extends JobSummary {
   spec: Spec;
-  /** Present while a working session is open: its autosaves are in the job, and become one revision when it closes. */
-  working?: { baseRevision: number; openedAt: string; savedAt: string; saves: number };
+  /**
+   * Present while a working session is open: its autosaves are in the job, and become one revision when it closes.
+   * `desk` is the editor that owns it (the one that autosaved first) and `by` who is typing there ('' when not
+   * recorded): another desk sees who is editing, and its own autosaves are refused until the session closes.
+   */
+  working?: { baseRevision: number; openedAt: string; savedAt: string; saves: number; desk: string; by: string };
   /** The past job this one was made from, and the jobs made from this one. */
   lineage: { copiedFrom: JobLink | null; copiedTo: JobLink[] };
 }
@@ -109,6 +113,11 @@ export interface LastQuotedPrice {
 export interface JobPage {
   jobs: JobSummary[];
   total: number;
+  /**
+   * True when `total` is a lower bound: a date range is counted only up to a cap (db/search/list.ts
+   * COUNT_CAP), since an exact count would read every job in the range of a large store.
+   */
+  totalAtLeast: boolean;
   limit: number;
   offset: number;
   /** Pass as `after` for the page that follows; null on the last page. */
@@ -270,4 +279,10 @@ export interface StoreInfo {
   readOnly: string | null;
   /** Moves when another desk (or program) commits a change: an open job list reads again when it does. */
   changeMark: string;
+  /**
+   * The server store the next start of this program opens, as chosen on the Data screen and saved in the
+   * program's own settings file (the connection string without its password); null when the next start opens
+   * the program's own file, or the program does not remember a choice (the command line).
+   */
+  nextStart: { location: string; passwordLeftOut: boolean } | null;
 }

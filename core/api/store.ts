@@ -44,4 +44,5 @@ export const storeMethods = {
   storeInfo: method<typeof none, t.StoreInfo>(none),
   signIn: method<typeof s.signInSchema, t.StoreInfo>(s.signInSchema),
   openServerStore: method<typeof s.openServerStoreSchema, t.StoreInfo>(s.openServerStoreSchema),
+  forgetServerStore: method<typeof s.forgetServerStoreSchema, t.StoreInfo>(s.forgetServerStoreSchema),
 };

@@ -34,7 +34,10 @@ export function jobRead(store: Store, id: number): JobRead | undefined {
 export function jobOfRead({ row, open, lineage }: JobRead): StoreResult<Job> {
   const job = toJob(row, lineage);
   if (!job.ok || !open) return job;
-  return success({ ...job.value, working: { baseRevision: open.base_revision, openedAt: open.opened_at, savedAt: open.saved_at, saves: open.saves } });
+  const working = {
+    baseRevision: Number(open.base_revision), openedAt: open.opened_at, savedAt: open.saved_at, saves: Number(open.saves), desk: open.desk, by: open.made_by,
+  };
+  return success({ ...job.value, working });
 }
 
 const LINK_SQL = {

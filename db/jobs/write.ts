@@ -18,9 +18,9 @@ import type { JobRow } from './rows';
 import { storedSpecOf } from './rows';
 import type { JobState } from './state';
 import { ROW_COLUMNS, ROW_PLACEHOLDERS, rowValues, stateOfRow } from './state';
-import { addRevision, closeWorking, dropWorking, markWorkingSave } from './working';
+import { addRevision, closeWorking, dropWorking, markWorkingSave, workingRow } from './working';
 import { judgementOf } from './rows';
-import { staleSave } from './conflict';
+import { editedElsewhere, staleSave } from './conflict';
 
 export interface NewJobOptions {
   /** Keep this number (import) instead of taking the next from the sequence. */
@@ -88,7 +88,7 @@ export class NewJobWriter {
     const specText = JSON.stringify(checked.spec);
     const result = store.sql(INSERT_JOB).run(number, ...rowValues(state, specText), customer?.key ?? '', created, options.updatedAt ?? created);
     const id = Number(result.lastInsertRowid);
-    addRevision(store, id, 1, options.reason ?? 'created', state, now, { customerName: customer?.name ?? null, specText });
+    addRevision(store, id, 1, options.reason ?? 'created', state, now, store.author, { customerName: customer?.name ?? null, specText });
     return { id, number };
   }
 
@@ -137,10 +137,10 @@ function saveState(store: Store, id: number, current: number, next: JobState, re
 }
 
 /** An autosave: the job's current state is replaced in place and the working session notes it; no revision yet. */
-function saveWorking(store: Store, id: number, current: number, next: JobState): void {
+function saveWorking(store: Store, id: number, current: number, next: JobState, desk: string): void {
   const now = store.now().toISOString();
   store.sql(`UPDATE jobs SET ${SETTERS}, updated_at = ? WHERE id = ?`).run(...rowValues(next), now, id);
-  markWorkingSave(store, id, current, now);
+  markWorkingSave(store, id, current, now, desk);
 }
 
 /** Closes an open working session as one permanent revision (reason: what closed it). Inside a transaction. */
@@ -155,10 +155,12 @@ function closeSession(store: Store, id: number, reason: string): boolean {
  * Ends the job's working session: what its autosaves left becomes one permanent revision. Nothing is written
  * when no session is open. `reason` says what closed it (a deliberate save, leaving the job, an issue).
  */
-export function keepWorkingRevision(store: Store, input: { id: number; reason?: string }): StoreResult<Job> {
+export function keepWorkingRevision(store: Store, input: { id: number; reason?: string; desk?: string | undefined }): StoreResult<Job> {
   return attempt(() => savedJob(inTransaction(store, () => {
     if (!jobRow(store, input.id)) throw new StoreError('not-found', `no job with id ${input.id}`, 'id');
-    closeSession(store, input.id, input.reason ?? 'saved');
+    const open = workingRow(store, input.id);
+    // A desk leaving the job closes its own working copy only: another desk may still be typing in theirs.
+    if (input.desk === undefined || open?.desk === input.desk) closeSession(store, input.id, input.reason ?? 'saved');
     return jobRead(store, input.id);
   })));
 }
@@ -175,7 +177,7 @@ const COMMITTED: ReadonlySet<JobStatus> = new Set(['quoted', 'ordered', 'in-prod
 
 /** Whether a save changes what the part is (anything but its status, notes and the estimator's pricing judgement). */
 const editsContent = (patch: Record<string, unknown>): boolean =>
-  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change', 'working'].includes(k));
+  Object.entries(patch).some(([k, v]) => v !== undefined && !['id', 'expectedRevision', 'status', 'notes', 'judgement', 'change', 'working', 'desk'].includes(k));
 
 /**
  * A done job is never edited in place; a quoted, ordered or in-production one only as a new drawing revision
@@ -210,11 +212,35 @@ function refuseUnreadable(row: JobRow): void {
   }
 }
 
+/**
+ * Who may write while a job has an open working copy. The rule: one working copy per job, owned by the desk
+ * whose autosave opened it, until it closes (a deliberate save there, leaving the job, an issue, a restore).
+ * - The owner's autosaves and saves go on as before.
+ * - Another desk's autosave or save (it names its desk) is refused with `edited-elsewhere`, naming who is typing
+ *   and listing both versions: two estimators never type over each other, and the second to start is told
+ *   who the first is. That desk keeps what it typed; to save it anyway, it keeps their working copy first
+ *   (keepWorkingRevision without a desk: their revision, by their name) and saves on top as the next one; the
+ *   owner's next autosave is then refused as stale, with both versions, so neither side is lost.
+ * - A save naming no desk (the command line, a status change from the job list) changes only the fields it
+ *   gives, so it does not type over anyone: the working copy is kept first as its author's revision and the
+ *   save goes on top.
+ * There is no lock timeout: a working copy left open by a desk that stopped is closed by the next desk that
+ * chooses to save on top, and says whose it was. Returns the row to save on (re-read when a copy was kept).
+ */
+function heldRow(store: Store, row: JobRow, patch: JobPatchValue, rawSpec: unknown): JobRow {
+  const open = workingRow(store, row.id);
+  const desk = patch.desk ?? '';
+  if (!open || open.desk === desk) return row;
+  if (patch.desk !== undefined || patch.working === true) throw editedElsewhere(row, open, { ...patch, spec: rawSpec });
+  closeSession(store, row.id, 'saved');
+  return jobRow(store, row.id)!;
+}
+
 /** A save: the fields given replace the current ones; a new revision records the result. */
 export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreResult<Job> {
   const patch = parseWith(jobPatchSchema, raw);
   if (!patch.ok) return invalid(patch.errors);
-  const { id, expectedRevision, spec: rawSpec, customer, customerId, change, working, ...fields } = patch.value;
+  const { id, expectedRevision, spec: rawSpec, customer, customerId, change, working, desk, ...fields } = patch.value;
   const checked = rawSpec === undefined ? undefined : checkSpec(rawSpec, ['spec']);
   if (checked && !checked.ok) return invalid(checked.errors);
   if (customer && customerId !== undefined) {
@@ -222,7 +248,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
   }
   return attempt(() => {
     return savedJob(inTransaction(store, () => {
-      const row = loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec });
+      const row = heldRow(store, loadForSave(store, id, expectedRevision, { ...patch.value, spec: rawSpec }), patch.value, rawSpec);
       const why = changeReason(row, patch.value, reason);
       const current = stateOfRow(row);
       if (checked === undefined) refuseUnreadable(row);
@@ -232,7 +258,7 @@ export function updateJob(store: Store, raw: unknown, reason = 'saved'): StoreRe
       const resolved = resolveCustomer(store, { customer, customerId });
       if (resolved !== undefined) next.customerId = resolved;
       // A correction or a drawing revision is never folded into a working session: it is its own revision.
-      if (working === true && why === reason) saveWorking(store, id, row.revision, next);
+      if (working === true && why === reason) saveWorking(store, id, row.revision, next, desk ?? '');
       else saveState(store, id, row.revision, next, why);
       return jobRead(store, id);
     }));

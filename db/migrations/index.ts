@@ -15,6 +15,8 @@ import { updateToVersion0012 } from './0012-enquiries';
 import { updateToVersion0013 } from './0013-working-revisions';
 import { updateToVersion0014 } from './0014-job-lineage-and-archive';
 import { updateToVersion0015 } from './0015-who-made-it';
+import { updateToVersion0017 } from './0017-working-copy-desk';
+import { updateToVersion0018 } from './0018-text-prefixes';
 
 export interface Migration {
   version: number;
@@ -39,6 +41,8 @@ export const migrations: readonly Migration[] = [
   { version: 13, name: 'working revisions', update: updateToVersion0013 },
   { version: 14, name: 'job lineage, archive and spring words', update: updateToVersion0014 },
   { version: 15, name: 'who made it', update: updateToVersion0015 },
+  { version: 17, name: 'working copy desk', update: updateToVersion0017 },
+  { version: 18, name: 'text prefixes', update: updateToVersion0018 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

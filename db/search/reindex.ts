@@ -14,8 +14,11 @@ interface IndexRow { id: number; number: string; spec: string; d: number; mean_d
 
 const SHAPE_NUMBERS = ['d', 'mean_diameter', 'free_length', 'active_coils', 'rate'] as const;
 
-/** Jobs whose search numbers came from another engine version, or from before versions were recorded. */
-const STALE = 'shape_engine IS NOT ?';
+/**
+ * Jobs whose search numbers came from another engine version, or from before versions were recorded. Written
+ * without `IS NOT ?`, which SQLite reads and PostgreSQL does not (it takes IS NOT only before NULL, TRUE, FALSE).
+ */
+const STALE = '(shape_engine IS NULL OR shape_engine <> ?)';
 
 export function staleJobCount(store: Store): number {
   return (store.sql(`SELECT count(*) AS n FROM jobs WHERE ${STALE}`).get(ENGINE_VERSION) as { n: number }).n;

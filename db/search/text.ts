@@ -15,14 +15,16 @@ import { matchExpression, tsQueryExpression } from './match';
  */
 export const RANKED_MATCHES = 2000;
 
-/** The rowid of the RANKED_MATCHES-th newest match, or nothing when there are fewer matches. */
-export const NEWEST_BOUND_SQL = `SELECT rowid FROM job_text WHERE job_text MATCH ? ORDER BY rowid DESC LIMIT 1 OFFSET ${RANKED_MATCHES - 1}`;
-
-/** The FTS query: best bm25 rank first (the table's rank is bm25 with per-column weights). */
+/**
+ * The FTS query: of the RANKED_MATCHES newest matches (FTS5 reads a kept prefix newest-first and stops
+ * there), the best bm25 rank first (the table's rank is bm25 with per-column weights), newest first among
+ * equals. Asking FTS5 itself for rank order instead reads every match of the word, whatever the bound.
+ */
 export const FIND_SQL = `SELECT ${SUMMARY_COLUMNS}, t.rank AS text_rank
-  FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? AND rowid >= ? ORDER BY rank LIMIT ?) t
+  FROM (SELECT rowid, rank FROM (SELECT rowid, rank FROM job_text WHERE job_text MATCH ? ORDER BY rowid DESC LIMIT ${RANKED_MATCHES})
+        ORDER BY rank, rowid DESC LIMIT ?) t
   JOIN jobs j ON j.id = t.rowid LEFT JOIN customers c ON c.id = j.customer_id
-  ORDER BY t.rank`;
+  ORDER BY t.rank, j.id DESC`;
 
 /** The same two queries on PostgreSQL: job_text's weighted tsvector through its GIN index (migration 0002). */
 const PG_NEWEST_BOUND_SQL = `SELECT id AS rowid FROM job_text WHERE document @@ to_tsquery('simple', ?)
@@ -40,8 +42,7 @@ export function findJobs(store: Store, raw: unknown): StoreResult<TextHit[]> {
   if (store.dialect === 'postgres') return findOnServer(store, parsed.value.text, parsed.value.limit);
   const match = matchExpression(parsed.value.text);
   if (!match.ok) return invalid(match.errors);
-  const bound = store.sql(NEWEST_BOUND_SQL).get(match.value) as { rowid: number } | undefined;
-  const rows = store.sql(FIND_SQL).all(match.value, bound?.rowid ?? 0, parsed.value.limit) as (JobRow & { text_rank: number })[];
+  const rows = store.sql(FIND_SQL).all(match.value, parsed.value.limit) as (JobRow & { text_rank: number })[];
   return success(rows.map((row) => ({ job: toSummary(row), rank: row.text_rank })));
 }
 

@@ -1,4 +1,6 @@
 import type { ApiResult, ImportResult, RestoreResult } from '../../core/api';
+import { dataActionCancelled } from '../../core/api/method-names';
+import type { CancellableDataAction, DataActionEvent, DataActionName, DataActionOptions } from '../../core/api/method-names';
 import type { ShellBridge } from './bridge';
 import { isApiResult, transportFailure } from './result';
 
@@ -11,7 +13,14 @@ export interface LongAction {
   signal?: AbortSignal;
 }
 
-const cancelledOutcome = (what: string): StoreFileOutcome => ({ ok: false, error: { code: 'cancelled', message: `${what} cancelled: nothing was saved.`, path: '' } });
+const cancelledOutcome = (action: CancellableDataAction): StoreFileOutcome => ({ ok: false, error: { code: 'cancelled', message: dataActionCancelled[action], path: '' } });
+
+/** The desktop shell's data actions as they run in main: their progress and end, and the way to stop one. */
+export interface ShellDataActivity {
+  /** Every progress and end message of main's data actions, the File menu's included. Returns the remover. */
+  onEvent(listener: (event: DataActionEvent) => void): () => void;
+  cancel(name: CancellableDataAction): void;
+}
 
 /**
  * Backup and restore without a path ever leaving or entering the page. In the app, main runs its own
@@ -23,14 +32,19 @@ export interface StoreFiles {
   backup(long?: LongAction): Promise<StoreFileOutcome>;
   /**
    * A browser downloads the export as the service writes it, a chunk of jobs at a time, reporting jobs
-   * received of the whole; undefined in the app, whose shell exports through its own save dialog.
+   * received of the whole; the app's shell asks where with its own save dialog and writes the file, reporting
+   * jobs written. Both stop on the signal and leave nothing behind.
    */
-  exportJobs?: (input: { format: 'json' | 'csv'; status?: string | undefined }, long?: LongAction) => Promise<StoreFileOutcome>;
+  exportJobs(input: { format: 'json' | 'csv'; status?: DataActionOptions['status'] | undefined }, long?: LongAction): Promise<StoreFileOutcome>;
   /**
    * A browser uploads the picked file and the service imports it streamed, all or nothing, reporting bytes
-   * imported of the file's size; undefined in the app, which sends the file's text through the API.
+   * imported of the file's size; undefined in the app, where importChosen runs instead.
    */
   importJobs?: (file: File, options: { renumber: boolean }, long?: LongAction) => Promise<ApiResult<ImportResult>>;
+  /** The app's shell asks for the file with its own open dialog and imports it, all or nothing; undefined in a browser. */
+  importChosen?: (options: { renumber: boolean }, long?: LongAction) => Promise<StoreFileOutcome>;
+  /** What main is doing with files (the app only): how the File menu's actions show in the window. */
+  shell?: ShellDataActivity;
   /** `file` is the backup picked in the page (browser only); the app's shell asks with its own dialog. */
   restore(file: File | null): Promise<StoreFileOutcome>;
   /** Whether the shell shows the dialogs (so the page shows no file picker or confirmation of its own). */
@@ -104,7 +118,7 @@ function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles 
         if (!response.ok) return resultOf(response);
         return await importAnswer(response, long);
       } catch (e) {
-        if (long.signal?.aborted) return { ok: false, error: { code: 'cancelled', message: 'Import cancelled: nothing was imported.', path: '' } };
+        if (long.signal?.aborted) return { ok: false, error: { code: 'cancelled', message: dataActionCancelled.importJobs, path: '' } };
         return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
       }
     },
@@ -117,7 +131,7 @@ function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles 
         download(await received(response, (piece) => piece.length, Number(response.headers.get('content-length') ?? 0), long), name);
         return { ok: true, value: { message: `Backup downloaded as ${name}.` } };
       } catch (e) {
-        if (long.signal?.aborted) return cancelledOutcome('Backup');
+        if (long.signal?.aborted) return cancelledOutcome('backup');
         return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
       }
     },
@@ -132,7 +146,7 @@ function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles 
         download(await received(response, lineBreaks, total, long), name);
         return { ok: true, value: { message: `${total} job${total === 1 ? '' : 's'} exported, downloaded as ${name}.` } };
       } catch (e) {
-        if (long.signal?.aborted) return cancelledOutcome('Export');
+        if (long.signal?.aborted) return cancelledOutcome('exportJobs');
         return transportFailure(`No answer from the Coilwright service (${(e as Error).message}).`);
       }
     },
@@ -152,12 +166,44 @@ function browserFiles(download: (blob: Blob, name: string) => void): StoreFiles 
   };
 }
 
-function shellFiles(bridge: ShellBridge): StoreFiles {
-  const run = async (name: 'backup' | 'restore'): Promise<StoreFileOutcome> => {
-    const r = await bridge.runDataAction(name);
-    return r.ok ? { ok: true, value: { message: 'Finished: the outcome was shown in the dialog.' } } : r;
+/**
+ * One data action run by main: its progress (for this window's own start, not the File menu's) goes to the
+ * caller, the caller's Cancel goes to main, and main's outcome becomes the Data screen's.
+ */
+async function inShell(bridge: ShellBridge, name: DataActionName, options: DataActionOptions, long: LongAction = {}): Promise<StoreFileOutcome> {
+  const stop = bridge.onDataProgress((event) => {
+    if (event.action === name && event.from === 'window' && event.state === 'running') long.onProgress?.(event.done, event.total);
+  });
+  const cancel = () => {
+    if (name !== 'restore') void bridge.cancelDataAction(name);
   };
-  return { shellDialogs: true, backup: () => run('backup'), restore: () => run('restore') };
+  long.signal?.addEventListener('abort', cancel, { once: true });
+  try {
+    const r = await bridge.runDataAction(name, options);
+    if (!r.ok) return r;
+    const { outcome, message } = r.value;
+    if (outcome === 'cancelled' || outcome === 'failed') return { ok: false, error: { code: outcome, message, path: '' } };
+    return { ok: true, value: { message } };
+  } catch (e) {
+    return transportFailure(`The desktop shell did not run the ${name}: ${(e as Error).message}`);
+  } finally {
+    stop();
+    long.signal?.removeEventListener('abort', cancel);
+  }
+}
+
+function shellFiles(bridge: ShellBridge): StoreFiles {
+  return {
+    shellDialogs: true,
+    backup: (long) => inShell(bridge, 'backup', {}, long),
+    restore: () => inShell(bridge, 'restore', {}),
+    exportJobs: (input, long) => inShell(bridge, 'exportJobs', { format: input.format, ...(input.status ? { status: input.status } : {}) }, long),
+    importChosen: (options, long) => inShell(bridge, 'importJobs', options, long),
+    shell: {
+      onEvent: (listener) => bridge.onDataProgress(listener),
+      cancel: (name) => void bridge.cancelDataAction(name),
+    },
+  };
 }
 
 export function createStoreFiles(bridge: ShellBridge | undefined, download: (blob: Blob, name: string) => void): StoreFiles {

@@ -5,6 +5,7 @@ import type { JobJudgementInput } from '../../core/quoting/judgement';
 import type { Settings } from '../../core/settings/schema';
 import type { UnitSystem } from '../../core/units';
 import { useApi } from '../api';
+import { deskId } from './desk';
 import type { FormError } from '../model/errors';
 import { friendlyError } from '../model/errors';
 import type { Evaluation } from '../model/evaluate';
@@ -39,6 +40,7 @@ export interface EditorDefaults {
 /** The job being edited: drafts, live evaluation, autosave into revisions, undo and redo over them. */
 export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onCreated: (job: Job) => void) {
   const api = useApi();
+  const desk = useRef(deskId()).current;
   const [job, setJob] = useState<Job | null>(null);
   const [drafts, setDrafts] = useState<Drafts>(() => ({ job: emptyJobDraft(), spec: emptySpecDraft(defaults.units, defaults.toleranceGrade) }));
   const [loadError, setLoadError] = useState<ApiError | null>(null);
@@ -129,7 +131,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     }
     setSaving(true);
     const r = s.job
-      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input, ...(s.change ? { change: s.change } : {}), ...(working ? { working } : {}) })
+      ? await api.updateJob({ id: s.job.id, expectedRevision: s.job.revision, ...input, ...(s.change ? { change: s.change } : {}), ...(working ? { working } : {}), desk })
       : await api.createJob(input);
     setSaving(false);
     if (!r.ok) { setSaveError(r.error); return false; }
@@ -140,7 +142,7 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
     if (created) onCreated(r.value);
     await loadRevisions(r.value.id);
     return whole;
-  }, [api, adopt, loadRevisions, onCreated, defaults.settings]);
+  }, [api, adopt, loadRevisions, onCreated, defaults.settings, desk]);
 
   /** Saves now if there is anything to save; saves never overlap. */
   const queue = useCallback(async <T,>(work: () => Promise<T>): Promise<T> => {
@@ -159,12 +161,13 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   /** Closes the job's working session as one permanent revision (nothing happens when none is open). */
   const closeSession = useCallback(async (reason: 'saved' | 'left the job'): Promise<void> => {
     const j = live.current.job;
-    if (!j?.working) return;
-    const r = await api.keepWorkingRevision({ id: j.id, reason });
+    // Another desk's working copy stays open when this desk saves or leaves: they may still be typing.
+    if (!j?.working || j.working.desk !== desk) return;
+    const r = await api.keepWorkingRevision({ id: j.id, reason, desk });
     if (!r.ok) { setSaveError(r.error); return; }
     adopt(r.value, false);
     await loadRevisions(j.id);
-  }, [api, adopt, loadRevisions]);
+  }, [api, adopt, loadRevisions, desk]);
 
   /** A deliberate save: what is pending and the open session become one permanent revision. */
   const save = useCallback((): Promise<boolean> => queue(async () => {
@@ -188,31 +191,34 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   }, [save]);
 
   /**
-   * Someone else saved the job since it was opened here (stale-revision): keep what was typed here as the
-   * next revision on top of theirs, or take theirs and drop it. Their revision stays in the history either way.
+   * Someone else saved the job since it was opened here (stale-revision), or is typing in it at another desk
+   * (edited-elsewhere): keep what was typed here as the next revision on top of theirs, or take theirs and drop
+   * it. Their version stays in the history either way: keeping mine first keeps their working copy as their
+   * revision (by their name), then saves this desk's on top.
    */
   const resolveSavedElsewhere = useCallback(async (keep: 'mine' | 'saved'): Promise<boolean> => {
     const j = live.current.job;
     if (!j) return false;
-    const r = await api.getJob({ id: j.id });
+    let r = await api.getJob({ id: j.id });
+    if (r.ok && keep === 'mine' && r.value.working && r.value.working.desk !== desk) r = await api.keepWorkingRevision({ id: j.id, reason: 'saved' });
     if (!r.ok) { setSaveError(r.error); return false; }
     adopt(r.value, keep === 'saved');
     setSaveError(null);
     await loadRevisions(j.id);
     return keep === 'mine' ? save() : true;
-  }, [api, adopt, loadRevisions, save]);
+  }, [api, adopt, loadRevisions, save, desk]);
 
   /** Saves the estimator's routing and price overrides of the saved job; the error, or null when saved. */
   const saveJudgement = useCallback(async (judgement: JobJudgementInput): Promise<ApiError | null> => {
     while (inFlight.current) await inFlight.current;
     const j = live.current.job;
     if (!j) return null;
-    const r = await api.updateJob({ id: j.id, expectedRevision: j.revision, judgement });
+    const r = await api.updateJob({ id: j.id, expectedRevision: j.revision, judgement, desk });
     if (!r.ok) return r.error;
     adopt(r.value, false);
     await loadRevisions(j.id);
     return null;
-  }, [api, adopt, loadRevisions]);
+  }, [api, adopt, loadRevisions, desk]);
 
   const dirty = version !== savedVersion;
   useEffect(() => {
@@ -262,6 +268,8 @@ export function useJobEditor(jobId: number | null, defaults: EditorDefaults, onC
   return {
     job, drafts, edit, version, evaluation, jobCheck, valid, complete, dirty, saving, saveError, serverErrors, loading, loadError,
     revisions, save, revert, restore, setChange, saveJudgement, resolveSavedElsewhere,
+    /** Another desk's open working copy of this job (who is typing there, since when), or null. */
+    elsewhere: job?.working && job.working.desk !== desk ? job.working : null,
     /** Takes the stored job back after a change that leaves its fields alone (archiving). */
     adoptStored: (j: Job) => adopt(j, false),
     undo: () => step(undoTarget), redo: () => step(redoTarget),

@@ -10,6 +10,7 @@ import { JobsScreen } from './jobs/JobsScreen';
 import { Workspace } from './workspace/Workspace';
 import { SettingsScreen } from './settings/SettingsScreen';
 import { DataScreen } from './data/DataScreen';
+import { MenuDataProgress } from './data/MenuDataProgress';
 import { CustomersScreen } from './customers/CustomersScreen';
 import { DesignScreen } from './design/DesignScreen';
 import { RequestSheetScreen } from './requests/RequestSheetScreen';
@@ -89,6 +90,7 @@ function Shell() {
       <div className="shell">
         <Header route={route} jobLabel={lastJob?.label ?? null} onJob={() => bus.publish('job')} onShortcuts={() => setHelp(true)} />
         <main id="main" className="shell__main" tabIndex={-1}>
+          <MenuDataProgress andTheWindows={route.screen !== 'data'} />
           {route.screen === 'jobs' ? <JobsScreen /> : null}
           {route.screen === 'job' ? <Workspace key={route.key} jobId={route.id} /> : null}
           {route.screen === 'settings' ? <SettingsScreen /> : null}

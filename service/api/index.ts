@@ -1,4 +1,5 @@
 import type { OpenOptions, Store } from '../../db';
+import type { StoreChoiceKeeper } from '../host/store-choice';
 import { readSettings } from '../../db';
 import type { Handlers } from './dispatch';
 import { engineHandlers } from './engine';
@@ -25,8 +26,9 @@ export interface Service {
   close(): void;
 }
 
-export function createService(store: Store, openOptions: OpenOptions = {}): Service {
-  const ctx: StoreContext = { store, openOptions };
+/** `choice`: where the desktop app or browser host remembers the store opened on the Data screen (none for the CLI). */
+export function createService(store: Store, openOptions: OpenOptions = {}, choice?: StoreChoiceKeeper): Service {
+  const ctx: StoreContext = { store, openOptions, choice };
   const handlers: TypedHandlers<keyof Handlers> = { ...engineHandlers(() => readSettings(ctx.store)), ...storeHandlers(ctx), ...shopHandlers(ctx), ...documentHandlers(ctx),
     ...firstOffHandlers(ctx), ...designHandlers(ctx), ...requestSheetHandlers(ctx) };
   return {

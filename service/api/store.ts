@@ -2,10 +2,11 @@ import type { z } from 'zod';
 import type { ApiResult, Contract, MethodOutput } from '../../core/api';
 import type { StoreInfo, storeMethods } from '../../core/api/store';
 import type { OpenOptions, Store } from '../../db';
+import type { StoreChoiceKeeper } from '../host/store-choice';
 import {
   addAttachment, createJob, openPgStore, exportJobs, findJobs, getAttachment, getJob, getQuote, getSettings,
   importJobs, jobRevisions, keepWorkingRevision, reindexJobs, listAttachments, listCustomers, listJobs, listQuotes, restoreRevision,
-  saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob,
+  saveCustomer, saveSettings, setJobStatus, similarJobs, updateJob, copyJob, archiveJob, deleteJob, undoDeleteJob, StoreError,
 } from '../../db';
 
 /** Issuing a quote prices the job: the document handlers answer it. */
@@ -20,12 +21,17 @@ export type TypedHandlers<K extends keyof Contract> = {
 export interface StoreContext {
   store: Store;
   openOptions?: OpenOptions;
+  /** Where the desktop app or the browser host remembers the store chosen on the Data screen; none on the command line. */
+  choice?: StoreChoiceKeeper | undefined;
 }
 
 const success = <T>(value: T): ApiResult<T> => ({ ok: true, value });
 
-export function storeInfo(store: Store): StoreInfo {
-  return { backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark() };
+export function storeInfo(store: Store, choice?: StoreChoiceKeeper): StoreInfo {
+  return {
+    backend: store.dialect, name: store.file, author: store.author, readOnly: store.readOnly ?? null, changeMark: store.changeMark(),
+    nextStart: choice?.remembered() ?? null,
+  };
 }
 
 export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName> {
@@ -56,16 +62,27 @@ export function storeHandlers(ctx: StoreContext): TypedHandlers<StoreMethodName>
     exportJobs: (input) => exportJobs(ctx.store, input),
     importJobs: (input) => importJobs(ctx.store, input),
     reindexJobs: (input) => reindexJobs(ctx.store, input),
-    storeInfo: () => success(storeInfo(ctx.store)),
+    storeInfo: () => success(storeInfo(ctx.store, ctx.choice)),
     signIn: (input) => {
       ctx.store.author = input.name;
-      return success(storeInfo(ctx.store));
+      return success(storeInfo(ctx.store, ctx.choice));
     },
     openServerStore: (input) => {
       const opened = openPgStore(input.connection, { author: ctx.store.author, ...(ctx.openOptions?.clock ? { clock: ctx.openOptions.clock } : {}) });
       ctx.store.close();
       ctx.store = opened;
-      return success(storeInfo(opened));
+      // Opened first, remembered after: a string that does not connect is never kept for the next start.
+      try {
+        ctx.choice?.remember(input.connection);
+      } catch (e) {
+        const why = e instanceof StoreError ? e.message : String(e);
+        return { ok: false, error: { code: 'store-choice-not-saved', message: `${opened.file} is open now, but the next start cannot open it again: ${why}`, path: 'connection' } };
+      }
+      return success(storeInfo(opened, ctx.choice));
+    },
+    forgetServerStore: () => {
+      ctx.choice?.forget();
+      return success(storeInfo(ctx.store, ctx.choice));
     },
   };
 }

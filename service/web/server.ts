@@ -6,6 +6,8 @@ import { dispatch } from '../api/dispatch';
 import { createService } from '../api';
 import type { Service } from '../api';
 import { openShopStoreAt } from '../host/first-run';
+import { openStartingStore } from '../host/store-choice';
+import type { StoreChoiceKeeper } from '../host/store-choice';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
 import { readJsonBody } from './body';
 import { BACKUP_ROUTE, RESTORE_ROUTE, receiveRestore, sendBackup } from './files';
@@ -28,6 +30,16 @@ export interface WebServerOptions {
   onNotice?: (text: string) => void;
   /** Where unexpected failures go; stderr by default. */
   onUnexpected?: (context: string, error: unknown) => void;
+  /**
+   * Where a server store opened on the Data screen is remembered for the next start (the program's settings
+   * file; never its password). Without it nothing is remembered.
+   */
+  choice?: StoreChoiceKeeper;
+  /**
+   * false when `dbFile` is only the program's own file (no --db, --store or COILWRIGHT_STORE): then the store
+   * remembered in `choice` is opened instead, falling back to `dbFile` with a notice. True unless given.
+   */
+  named?: boolean;
 }
 
 export interface WebServer {
@@ -141,11 +153,13 @@ function listen(server: Server, port: number): Promise<number> {
   });
 }
 
-function openService(dbFile: string, onNotice: (text: string) => void): Service {
-  const opened = openShopStoreAt(dbFile);
+function openService(options: WebServerOptions, onNotice: (text: string) => void): Service {
+  const opened = options.choice && options.named === false
+    ? openStartingStore(undefined, options.choice, options.dbFile)
+    : openShopStoreAt(options.dbFile);
   if (!opened.ok) throw Object.assign(new Error(opened.error.message), { code: opened.error.code });
   if (opened.value.notice) onNotice(opened.value.notice);
-  return createService(opened.value.store);
+  return createService(opened.value.store, {}, options.choice);
 }
 
 /**
@@ -153,7 +167,7 @@ function openService(dbFile: string, onNotice: (text: string) => void): Service 
  * per-run token. Every API outcome is an ApiResult value, as over IPC.
  */
 export async function startWebServer(options: WebServerOptions): Promise<WebServer> {
-  const service = openService(options.dbFile, options.onNotice ?? ((text) => console.warn(text)));
+  const service = openService(options, options.onNotice ?? ((text) => console.warn(text)));
   let port = 0;
   const ctx: Context = {
     service,

@@ -52,6 +52,7 @@ export class FakeBrowserWindow extends Emitter {
   focus = vi.fn();
   restore = vi.fn();
   reload = vi.fn();
+  setProgressBar = vi.fn();
   constructor(readonly options: Record<string, unknown>) {
     super();
     FakeBrowserWindow.all.push(this);

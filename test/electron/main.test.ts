@@ -74,7 +74,7 @@ describe('starting the shell', () => {
   });
 
   it('registers every API method, the two PDF channels, the data actions and the request-sheet dialog, all sender-checked', async () => {
-    expect([...captured.ipcMain.keys()].sort()).toEqual([...methodNames.map(apiChannel), 'pdf:preview', 'pdf:save', 'data:action', 'file:request-sheet'].sort());
+    expect([...captured.ipcMain.keys()].sort()).toEqual([...methodNames.map(apiChannel), 'pdf:preview', 'pdf:save', 'data:action', 'data:cancel', 'file:request-sheet'].sort());
     for (const channel of captured.ipcMain.keys()) {
       expect(await invoke(channel, ipcEvent('https://evil.example/'), {}), channel).toMatchObject({ ok: false, error: { code: 'untrusted-sender' } });
     }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { contract, methodNames } from '../../core/api';
-import { MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, apiChannel, apiMethodNames } from '../../core/api/method-names';
+import { DATA_ACTION_CHANNEL, DATA_CANCEL_CHANNEL, DATA_PROGRESS_CHANNEL, MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, apiChannel, apiMethodNames } from '../../core/api/method-names';
 
 describe('the preload method list', () => {
   it('is exactly the contract, in order', () => {
@@ -12,6 +12,6 @@ describe('the preload method list', () => {
     const channels = apiMethodNames.map(apiChannel);
     expect(new Set(channels).size).toBe(apiMethodNames.length);
     expect(channels.every((c) => c.startsWith('api:'))).toBe(true);
-    for (const shell of [MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL]) expect(channels).not.toContain(shell);
+    for (const shell of [MENU_COMMAND_CHANNEL, PDF_PREVIEW_CHANNEL, PDF_SAVE_CHANNEL, DATA_ACTION_CHANNEL, DATA_PROGRESS_CHANNEL, DATA_CANCEL_CHANNEL]) expect(channels).not.toContain(shell);
   });
 });

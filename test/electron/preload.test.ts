@@ -15,7 +15,7 @@ beforeAll(async () => {
 describe('the preload bridge', () => {
   it('exposes only window.coilwright, with exactly the api, menu and PDF functions', () => {
     expect([...captured.exposed.keys()]).toEqual(['coilwright']);
-    expect(Object.keys(bridge).sort()).toEqual(['api', 'onMenuCommand', 'openRequestSheet', 'previewPdf', 'runDataAction', 'savePdf']);
+    expect(Object.keys(bridge).sort()).toEqual(['api', 'cancelDataAction', 'onDataProgress', 'onMenuCommand', 'openRequestSheet', 'previewPdf', 'runDataAction', 'savePdf']);
     expect(Object.keys(bridge.api)).toEqual(Object.keys(contract));
   });
 
@@ -54,5 +54,30 @@ describe('the preload bridge', () => {
     expect(seen).toEqual([['new-job']]);
     stop();
     expect(electron.ipcRenderer.removeListener).toHaveBeenCalledWith('menu-command', listener);
+  });
+
+  it('asks main for a data action by name with the screen\'s choices, and cancels it by name', async () => {
+    await bridge.runDataAction('exportJobs', { format: 'csv', status: 'quoted' });
+    expect(electron.ipcRenderer.invoke).toHaveBeenLastCalledWith('data:action', 'exportJobs', { format: 'csv', status: 'quoted' });
+    await bridge.cancelDataAction('exportJobs');
+    expect(electron.ipcRenderer.invoke).toHaveBeenLastCalledWith('data:cancel', 'exportJobs');
+  });
+
+  it('passes data-action progress as a fresh plain copy, drops anything malformed and can stop listening', () => {
+    const seen: unknown[] = [];
+    const stop = bridge.onDataProgress((...args) => seen.push(args));
+    const [channel, listener] = electron.ipcRenderer.on.mock.calls.at(-1) as unknown as [string, (e: unknown, m: unknown) => void];
+    expect(channel).toBe('data:progress');
+    const running = { action: 'backup', from: 'window', state: 'running', done: 40, total: 400, cancellable: true, sender: electron.ipcRenderer };
+    listener({ sender: electron.ipcRenderer }, running);
+    listener({}, { action: 'importJobs', from: 'menu', state: 'ended', outcome: 'cancelled', message: 'Import cancelled: nothing was imported.' });
+    for (const bad of [null, 'backup', { ...running, done: Number.NaN }, { ...running, total: -1 }, { ...running, action: 'wipe' },
+      { ...running, from: 'elsewhere' }, { ...running, state: 'ended', outcome: 'exploded', message: 'x' }]) listener({}, bad);
+    expect(seen).toEqual([
+      [{ action: 'backup', from: 'window', state: 'running', done: 40, total: 400, cancellable: true }],
+      [{ action: 'importJobs', from: 'menu', state: 'ended', outcome: 'cancelled', message: 'Import cancelled: nothing was imported.' }],
+    ]);
+    stop();
+    expect(electron.ipcRenderer.removeListener).toHaveBeenCalledWith('data:progress', listener);
   });
 });

@@ -2,6 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path, { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { fileStoreChoice } from '../../service/host/store-choice';
 import { parseWebArgs } from '../../service/web/main';
 import { startWebServer } from '../../service/web/server';
 import { usePgCluster } from '../support/pg-stores';
@@ -19,6 +20,36 @@ describe('choosing the store', () => {
     expect(parseWebArgs(['--store', 'rel/shop.db'], defaults)).toMatchObject({ dbFile: path.resolve('rel/shop.db') });
     expect(parseWebArgs([], { ...defaults, env: { COILWRIGHT_STORE: url } })).toMatchObject({ dbFile: url });
     expect(parseWebArgs(['--db', '/data/a.db'], { ...defaults, env: { COILWRIGHT_STORE: url } })).toMatchObject({ dbFile: '/data/a.db' });
+    expect(parseWebArgs([], { ...defaults, env: { COILWRIGHT_STORE: url } })).toMatchObject({ named: true });
+    expect(parseWebArgs([], defaults)).toMatchObject({ named: false, dbFile: path.join('/home/shop', '.coilwright', 'coilwright.db') });
+  });
+
+  it('npm run web with no store named opens the server store chosen last time; one that cannot be opened falls back to its own file and says why', async () => {
+    const dir = tempDir();
+    const staticDir = join(dir, 'renderer');
+    mkdirSync(staticDir, { recursive: true });
+    writeFileSync(join(staticDir, 'index.html'), '<!doctype html><title>Coilwright</title>');
+    const ownFile = join(dir, 'coilwright.db');
+    const choice = fileStoreChoice(join(dir, 'app-settings.json'));
+    const chosen = pg.freshDatabase();
+    choice.remember(withPassword(chosen));
+    const notices: string[] = [];
+    const onServer = await startWebServer({ dbFile: ownFile, named: false, choice, staticDir, onNotice: (t) => notices.push(t) });
+    await onServer.close();
+    expect(onServer.storeName).toMatch(/^127\.0\.0\.1:\d+\/shop_\d+_\d+$/);
+    expect(notices).toEqual([]);
+    // Named on the command line: the remembered store is not opened.
+    const named = await startWebServer({ dbFile: ownFile, named: true, choice, staticDir });
+    await named.close();
+    expect(named.storeName).toBe(ownFile);
+
+    choice.remember(chosen.replace(/shop_\d+_\d+$/, 'no_such_database'));
+    const fallback = await startWebServer({ dbFile: ownFile, named: false, choice, staticDir, onNotice: (t) => notices.push(t) });
+    await fallback.close();
+    expect(fallback.storeName).toBe(ownFile);
+    expect(notices).toHaveLength(1);
+    expect(notices[0]).toMatch(/no_such_database chosen on the Data screen could not be opened .*works in .*coilwright\.db instead.*PGPASSWORD or ~\/\.pgpass/s);
+    expect(notices[0]).not.toContain('hunter2');
   });
 
   it('the web transport serves a PostgreSQL store and names it by host and database only', async () => {

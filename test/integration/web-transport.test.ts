@@ -323,8 +323,10 @@ describe('starting the web transport', () => {
   it('reads --port, --db and --static, defaulting to ~/.coilwright/coilwright.db and dist/renderer', () => {
     const defaults = { home: '/home/shop', cwd: '/src/coilwright' };
     expect(parseWebArgs([], defaults)).toEqual({
-      port: 0, dbFile: path.join('/home/shop', '.coilwright', 'coilwright.db'), staticDir: path.join('/src/coilwright', 'dist', 'renderer'),
+      port: 0, dbFile: path.join('/home/shop', '.coilwright', 'coilwright.db'), named: false, appDir: path.join('/home/shop', '.coilwright'),
+      staticDir: path.join('/src/coilwright', 'dist', 'renderer'),
     });
+    expect(parseWebArgs(['--app-dir', '/srv/desk'], defaults)).toMatchObject({ dbFile: path.resolve('/srv/desk/coilwright.db'), named: false });
     expect(parseWebArgs(['--port', '8123', '--db', '/data/shop.db'], defaults)).toMatchObject({ port: 8123, dbFile: path.resolve('/data/shop.db') });
     expect(parseWebArgs(['--port', '99999'], defaults)).toMatch(/bad option --port/);
     expect(parseWebArgs(['--port'], defaults)).toMatch(/--port needs a value/);

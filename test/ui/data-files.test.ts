@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { usePgCluster } from '../support/pg-stores';
-import { UI_TEST_TIMEOUT, screenshot, shopSession } from './support';
+import { join } from 'node:path';
+import { UI_TEST_TIMEOUT, screenshot, screenshotDir, shopSession } from './support';
 
 const pg = usePgCluster();
 
@@ -63,7 +64,19 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     await expect(page.getByLabel('Open a shared store on a PostgreSQL server').inputValue()).resolves.toBe('');
     await expect(page.title()).resolves.toMatch(/^Coilwright — PostgreSQL 127\.0\.0\.1:\d+\/shop_/);
     await expect(page.content()).resolves.not.toContain('pw-never-shown');
+    // Remembered for the next start in the program's settings file, without the password; the help says where it comes from.
+    await expect(page.getByRole('status').filter({ hasText: /^Now working in/ }).textContent()).resolves.toMatch(/The next start opens it again; its password was not saved, so give it in PGPASSWORD or ~\/\.pgpass\./);
+    await expect(page.getByTestId('store-help').textContent()).resolves.toMatch(/without the password\. The password comes from the PGPASSWORD environment variable or\s+the standard ~\/\.pgpass file/);
+    await page.getByTestId('store-next-start').filter({ hasText: /Next start: postgres:\/\/postgres@127\.0\.0\.1:\d+\/shop_\d+_\d+ \(password not saved\)/ }).waitFor();
+    const saved = readFileSync(join(session.shop.dir, 'app-settings.json'), 'utf8');
+    expect(saved).not.toContain('pw-never-shown');
+    expect(saved).toContain(url.replace('postgres:pw-never-shown@', 'postgres@'));
+    await page.getByTestId('store-panel').screenshot({ path: join(screenshotDir, 'data-store-panel.png') });
     await screenshot(page, 'data-store');
+    await page.getByRole('button', { name: 'Start in this computer\'s own store next time' }).click();
+    await page.getByRole('status').filter({ hasText: /^The next start opens this computer's own store file/ }).waitFor();
+    await expect(page.getByTestId('store-next-start').count()).resolves.toBe(0);
+    expect(JSON.parse(readFileSync(join(session.shop.dir, 'app-settings.json'), 'utf8'))).toEqual({});
     expect(errors).toEqual([]);
   });
 });

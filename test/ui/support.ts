@@ -10,6 +10,7 @@ import { chromium } from 'playwright-core';
 import type { Browser, Page } from 'playwright-core';
 import { startWebServer } from '../../service/web/server';
 import type { WebServer } from '../../service/web/server';
+import { fileStoreChoice } from '../../service/host/store-choice';
 
 /** Per test: a busy two-core machine runs several Chromiums at once, so steps take longer than alone. */
 export const UI_TEST_TIMEOUT = 60_000;
@@ -89,12 +90,14 @@ export async function startShop(): Promise<Shop> {
   const staticDir = await builtRenderer();
   const dir = mkdtempSync(join(tmpdir(), 'coilwright-ui-store-'));
   const dbFile = join(dir, 'shop.db');
+  // The program's settings file, where a server store opened on the Data screen is remembered (never its password).
+  const choice = fileStoreChoice(join(dir, 'app-settings.json'));
   const shop: Shop = {
     dir, dbFile, staticDir,
-    web: await startWebServer({ dbFile, staticDir }),
+    web: await startWebServer({ dbFile, staticDir, choice }),
     async restart() {
       await shop.web.close();
-      shop.web = await startWebServer({ dbFile, staticDir });
+      shop.web = await startWebServer({ dbFile, staticDir, choice });
     },
     async close() {
       await shop.web.close();
@@ -106,9 +109,13 @@ export async function startShop(): Promise<Shop> {
 
 export const launch = (): Promise<Browser> => chromium.launch({ executablePath: '/usr/bin/chromium', args: chromiumArgs });
 
-/** A page at 1440 × 900 whose console errors and uncaught errors are kept in `errors`. */
-export async function openPage(browser: Browser, url: string): Promise<{ page: Page; errors: string[] }> {
+/**
+ * A page at 1440 × 900 whose console errors and uncaught errors are kept in `errors`. `beforeApp` runs in
+ * the page before the app's own scripts (a stand-in for the desktop preload's bridge, for one).
+ */
+export async function openPage(browser: Browser, url: string, beforeApp?: () => void): Promise<{ page: Page; errors: string[] }> {
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+  if (beforeApp) await page.addInitScript(beforeApp);
   const errors: string[] = [];
   page.on('console', (m) => { if (m.type() === 'error') errors.push(`console: ${m.text()}`); });
   page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));

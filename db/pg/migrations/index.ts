@@ -14,6 +14,8 @@ import { version0013 } from './0013-working-revisions';
 import { fillSearchWords0014, version0014 } from './0014-job-lineage-and-archive';
 import type { SyncConnection } from '../connection';
 import { version0015 } from './0015-who-made-it';
+import { version0017 } from './0017-working-copy-desk';
+import { version0018 } from './0018-text-prefixes';
 
 /**
  * The PostgreSQL side of each numbered migration of db/migrations/index.ts: same numbers, same logical schema.
@@ -35,4 +37,6 @@ export const pgMigrations: readonly { version: number; sql: string; after?: (c: 
   { version: 13, sql: version0013 },
   { version: 14, sql: version0014, after: fillSearchWords0014 },
   { version: 15, sql: version0015 },
+  { version: 17, sql: version0017 },
+  { version: 18, sql: version0018 },
 ];

@@ -6,6 +6,7 @@ import { useCommandBus } from '../../hooks/commands';
 import { useShopData } from '../../hooks/shop-data';
 import { useLongCall } from './useLongCall';
 import type { CallState } from './useLongCall';
+import { runningLabels } from './wording';
 
 export function CallOutcome<T>({ call, done, cancel }: { call: CallState<T>; done(value: T): string; cancel?: () => void }) {
   if (call.state === 'running') {
@@ -30,7 +31,7 @@ export function BackupPanel() {
       <p className="muted">A consistent copy of every job, revision, quote and setting, taken while the store stays open.
         {storeFiles.shellDialogs ? ' You choose where to keep it.' : ' Your browser downloads it.'}</p>
       <button type="button" className="button button--primary" disabled={running}
-        onClick={() => void run('Backing up…', (control) => storeFiles.backup(control), !storeFiles.shellDialogs)}>{storeFiles.shellDialogs ? 'Back up…' : 'Download a backup'}</button>
+        onClick={() => void run(runningLabels.backup, (control) => storeFiles.backup(control), true)}>{storeFiles.shellDialogs ? 'Back up…' : 'Download a backup'}</button>
       <CallOutcome call={call} done={(v) => v.message} cancel={cancel} />
     </section>
   );
@@ -46,7 +47,7 @@ export function RestorePanel() {
   const { call, run, running } = useLongCall<{ message: string }>();
   const restore = async () => {
     setConfirm(false);
-    if (await run('Restoring…', () => storeFiles.restore(picked))) {
+    if (await run(runningLabels.restore, () => storeFiles.restore(picked))) {
       shop.refresh();
       bus.broadcast('data-changed');
     }

@@ -36,12 +36,17 @@ function useJobRows(text: string, filters: Filters, sort: Sort, after: string | 
   const found = useQuery(searching ? text.trim() : null, () => api.findJobs({ text: text.trim(), limit: 200 }), 120);
   if (searching) {
     const jobs = (found.value ?? []).map((h) => h.job).filter((j) => matches(j, filters));
-    return { searching, jobs, total: jobs.length, next: null, state: found.state, error: found.error, reload: found.reload };
+    return { searching, jobs, total: jobs.length, totalAtLeast: false, next: null, state: found.state, error: found.error, reload: found.reload };
   }
   return {
-    searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, next: list.value?.next ?? null,
+    searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, totalAtLeast: list.value?.totalAtLeast ?? false, next: list.value?.next ?? null,
     state: list.state, error: list.error, reload: list.reload,
   };
+}
+
+/** "1 job", "2041 jobs", or "10000+ jobs" when the store stopped counting a date range. */
+function jobCount(total: number, atLeast: boolean): string {
+  return `${total}${atLeast ? '+' : ''} job${total === 1 && !atLeast ? '' : 's'}`;
 }
 
 /** The job book: search by text, filter, sort, page, find similar springs, print travellers or quote a selection. */
@@ -103,7 +108,7 @@ export function JobsScreen() {
       <p className="listing-status" role="status" aria-live="polite">
         {rows.state === 'loading' && rows.jobs.length === 0 ? 'Loading jobs…'
           : rows.searching ? `${rows.total} job${rows.total === 1 ? '' : 's'} match “${text.trim()}”, best match first`
-            : `${rows.total} job${rows.total === 1 ? '' : 's'}`}
+            : `${jobCount(rows.total, rows.totalAtLeast)}`}
         {selected.size > 0 ? ` · ${selected.size} selected` : ''}
       </p>
       {rows.error ? <p className="error-text" role="alert">{rows.error.message}</p> : null}
@@ -117,7 +122,7 @@ export function JobsScreen() {
         />
         {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
       </div>
-      {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} hasNext={rows.next !== null}
+      {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} totalAtLeast={rows.totalAtLeast} hasNext={rows.next !== null}
         onPage={(to) => (to > page ? nextPage() : setPage(to))} />}
       <SimilarJobsDialog open={similar !== null} onClose={() => setSimilar(null)} spec={similar?.spec ?? null}
         excludeJobId={similar?.id} quantity={similar?.quantity ?? null} subject={`job ${similar?.number ?? ''}`} />

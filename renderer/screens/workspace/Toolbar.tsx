@@ -10,6 +10,7 @@ function saveStatus(e: JobEditor, problems: number): { text: string; tone: 'ok' 
     return { text: `Other edits saved; ${problems} field${problems === 1 ? '' : 's'} to correct (the saved value stands meanwhile)`, tone: 'warn' };
   }
   if (e.dirty) return { text: 'Saving shortly…', tone: 'busy' };
+  if (e.elsewhere) return { text: `Saved · revision ${e.job?.revision ?? ''} · ${e.elsewhere.by || 'someone'} is editing it at another desk`, tone: 'warn' };
   if (e.job?.working) return { text: `Saved · working on revision ${e.job.revision + 1} · ${e.job.updatedAt.slice(11, 16)} UTC`, tone: 'ok' };
   if (e.job) return { text: `Saved · revision ${e.job.revision} · ${e.job.updatedAt.slice(11, 16)} UTC`, tone: 'ok' };
   return { text: 'New job: it saves itself once the spring is complete', tone: 'warn' };

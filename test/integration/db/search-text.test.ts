@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createJob, findJobs } from '../../../db';
-import { matchExpression } from '../../../db/search/match';
+import { PREFIX_KEPT, matchExpression, tsQueryExpression } from '../../../db/search/match';
 import { job, tempStore, value } from './helpers';
 
 function seeded() {
@@ -40,5 +40,13 @@ describe('text search', () => {
     expect(parts(store, 'spring OR pump')).toEqual([]);
     expect(matchExpression('say "hi" now*')).toEqual({ ok: true, value: '"say"* """hi"""* "now"*' });
     expect(findJobs(store, { text: ' *** ' })).toMatchObject({ ok: false, error: { code: 'empty-search', path: 'text' } });
+  });
+
+  it('searches a word longer than the kept prefixes by its first eight characters, on both stores', () => {
+    expect(PREFIX_KEPT).toBe(8);
+    expect(matchExpression('counterweights CS-10420000000 ab')).toEqual({ ok: true, value: '"counterw"* "CS 10420000"* "ab"*' });
+    expect(tsQueryExpression('counterweights CS-10420000000')).toEqual({ ok: true, value: "'counterw':* & 'cs' <-> '10420000':*" });
+    // Up to eight characters the word is its own prefix, quoted as typed.
+    expect(matchExpression('governor')).toEqual({ ok: true, value: '"governor"*' });
   });
 });

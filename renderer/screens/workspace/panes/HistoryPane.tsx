@@ -58,7 +58,7 @@ export function HistoryPane({ editor }: { editor: JobEditor }) {
             <tr className="history__working">
               <td className="num">—</td>
               <td className="nowrap">{job.working.savedAt.slice(0, 16).replace('T', ' ')}</td>
-              <td>working, not kept yet ({job.working.saves} autosave{job.working.saves === 1 ? '' : 's'} since {job.working.openedAt.slice(11, 16)}); kept as one revision on save or when the job is left</td>
+              <td>working, not kept yet ({job.working.saves} autosave{job.working.saves === 1 ? '' : 's'} since {job.working.openedAt.slice(11, 16)}{editor.elsewhere ? `, by ${editor.elsewhere.by || 'someone'} at another desk` : ''}); kept as one revision on save or when the job is left</td>
               <td>{head ? <Changes changes={revisionChanges(head, currentState(job))} /> : null}</td>
               <td className="nowrap">{springText(job.spec)}</td>
               <td>{statusLabels[job.status]}</td>
