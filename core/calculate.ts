@@ -1,7 +1,7 @@
 import type { Finding, Result } from './result';
 import { parseSpec } from './spec';
 import type { CompressionSpec, ExtensionSpec, Spec, TorsionSpec } from './spec';
-import { convertFields } from './units';
+import { convertFields, convertOwnFields } from './units';
 import { kindEntryOf } from './kinds/registry';
 import type { SpringReport } from './kinds/types';
 import type { CompressionReport } from './springs/compression/report';
@@ -44,5 +44,7 @@ export function reportInSpecUnits<R extends SpringReport>(report: R): R {
 export function calculate(raw: unknown, settings?: Settings): Result<SpringReport> {
   const parsed = parseSpec(raw);
   if (!parsed.ok) return parsed;
-  return { ok: true, value: reportInSpecUnits(analyseSpec(parsed.value, settings)) };
+  // The report was made here and goes nowhere else in internal units: it converts where it is, no copy.
+  const report = analyseSpec(parsed.value, settings);
+  return { ok: true, value: convertOwnFields(report, kindEntryOf(report.kind).reportQuantities, report.units, 'out') };
 }

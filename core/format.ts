@@ -11,8 +11,9 @@ export function significant(value: number, digits = 3): string {
   if (Math.abs(value) >= 10 ** digits) return Math.round(value).toString();
   if (value === 0) return '0';
   // 999.5 rounds up to 1000 at three digits, which toPrecision writes as "1.00e+3".
-  const rounded = Number(value.toPrecision(digits));
-  return Math.abs(rounded) >= 10 ** digits ? rounded.toString() : value.toPrecision(digits);
+  const text = value.toPrecision(digits);
+  const rounded = Number(text);
+  return Math.abs(rounded) >= 10 ** digits ? rounded.toString() : text;
 }
 
 /** Formats an internal value in the spec's units with the trade's precision and the unit symbol. */

@@ -1,3 +1,5 @@
+import { generatedFunction, literal } from './generated-code';
+
 /**
  * Unit systems. Internally everything is mm, N, MPa, N/mm, N·mm, degrees, seconds, kg, kg/dm³ (= g/cm³)
  * and °C. A spec carries its own system; values convert on the way in and on the way out, nowhere else.
@@ -155,12 +157,51 @@ function leafWalker(m: Quantity | typeof OWN, units: UnitSystem, direction: Dire
   return walk;
 }
 
+/** One number's conversion written out (`x` the number, factor C[i] and offset D[i]), the same arithmetic as converter. */
+const convertCode = (direction: Direction, i: number): string => (direction === 'in' ? `(x + D[${i}]) * C[${i}]` : `x / C[${i}] - D[${i}]`);
+
+/** Factor and offset of each field of a map, for generated code (1 and 0 where a field is not a fixed quantity). */
+function fixedConstants(map: QuantityMap, keys: string[], units: UnitSystem): { C: number[]; D: number[] } {
+  const fixed = keys.map((key) => {
+    const m = map[key]!;
+    return typeof m === 'string' && m !== OWN ? systems[units][m] : { factor: 1, offset: 0 };
+  });
+  return { C: fixed.map((d) => d.factor), D: fixed.map((d) => d.offset ?? 0) };
+}
+
+/**
+ * objectWalker's walk written out for one map: its own copy (so the copy is made for the few shapes this map
+ * meets, not for every shape every map meets) and each fixed number converted by name. Same output.
+ */
+function generatedWalker(map: QuantityMap, inner: Walker[], units: UnitSystem, direction: Direction): Walker | undefined {
+  const keys = Object.keys(map);
+  const lines = keys.map((key, i) => {
+    const k = literal(key);
+    const m = map[key]!;
+    const value = typeof m === 'string' && m !== OWN ? `typeof x === "number" ? ${convertCode(direction, i)} : W[${i}](x, object)` : `W[${i}](x, object)`;
+    return `  x = object[${k}];\n  if (x !== undefined) out[${k}] = ${value};`;
+  });
+  return generatedFunction<Walker>({ W: inner, ...fixedConstants(map, keys, units) }, [
+    'return function walk(object, parent) {',
+    '  if (object === null || object === undefined) return object;',
+    '  if (Array.isArray(object)) return object.map((item) => walk(item, parent));',
+    '  if (typeof object !== "object") return object;',
+    '  const out = { ...object };',
+    '  let x;',
+    ...lines,
+    '  return out;',
+    '};',
+  ].join('\n'));
+}
+
 /** An object (or list of objects) the map describes: a copy with the declared fields converted. */
 function objectWalker(map: QuantityMap, units: UnitSystem, direction: Direction): Walker {
   const fields = Object.keys(map).map((key) => {
     const m = map[key]!;
     return [key, typeof m === 'string' ? leafWalker(m, units, direction) : objectWalker(m, units, direction)] as const;
   });
+  const generated = generatedWalker(map, fields.map(([, inner]) => inner), units, direction);
+  if (generated) return generated;
   const walk: Walker = (v, parent) => {
     if (v === null || v === undefined) return v;
     if (Array.isArray(v)) return v.map((item) => walk(item, parent));
@@ -199,6 +240,107 @@ function walkerFor(map: QuantityMap, units: UnitSystem, direction: Direction): W
 export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: Direction): T {
   if (isIdentity(map, units)) return value;
   return walkerFor(map, units, direction)(value, {}) as T;
+}
+
+type Placer = (object: Record<string, unknown>) => void;
+
+/** Converts the numbers of one declared field where they are: a number, or a list (of lists) of numbers. */
+function placeNumbers(list: unknown[], convert: (x: number) => number): void {
+  for (let i = 0; i < list.length; i++) {
+    const item = list[i];
+    if (typeof item === 'number') list[i] = convert(item);
+    else if (Array.isArray(item)) placeNumbers(item, convert);
+  }
+}
+
+/** Runs `place` on an object, or on every object of a list (of lists). */
+function placeEach(value: unknown, place: Placer): void {
+  if (Array.isArray(value)) for (const item of value) placeEach(item, place);
+  else if (typeof value === 'object' && value !== null) place(value as Record<string, unknown>);
+}
+
+interface PlaceField { key: string; inner: Placer | undefined; fixed: ((x: number) => number) | undefined; def: UnitDef | undefined }
+
+/** Whether converting this quantity leaves every number exactly as it was (x / 1 − 0 is x, even −0; x + 0 is not). */
+const unchangedBy = (m: Quantity | typeof OWN, units: UnitSystem, direction: Direction): boolean =>
+  m !== OWN && direction === 'out' && systems[units][m].factor === 1 && (systems[units][m].offset ?? 0) === 0;
+
+/**
+ * The in-place twin of objectWalker: same fields, same arithmetic, no copies. Fields whose conversion
+ * changes nothing are left out (a metric report converts only its mass), and so are nested maps left empty.
+ */
+function placer(map: QuantityMap, units: UnitSystem, direction: Direction): Placer | undefined {
+  const fields: PlaceField[] = [];
+  for (const key of Object.keys(map)) {
+    const m = map[key]!;
+    if (typeof m !== 'string') {
+      const inner = placer(m, units, direction);
+      if (inner) fields.push({ key, inner, fixed: undefined, def: undefined });
+    } else if (!unchangedBy(m, units, direction)) {
+      const def = m === OWN ? undefined : systems[units][m];
+      fields.push({ key, inner: undefined, fixed: def ? converter(def, direction) : undefined, def });
+    }
+  }
+  if (fields.length === 0) return undefined;
+  const generated = generatedPlacer(fields, direction);
+  if (generated) return generated;
+  return (object) => {
+    for (let i = 0; i < fields.length; i++) {
+      const f = fields[i]!;
+      const value = object[f.key];
+      if (value === null || value === undefined) continue;
+      if (f.inner) {
+        placeEach(value, f.inner);
+        continue;
+      }
+      const q = f.fixed ? undefined : declared(OWN, object);
+      const convert = f.fixed ?? (q === undefined ? undefined : converter(systems[units][q], direction));
+      if (!convert) continue;
+      if (typeof value === 'number') object[f.key] = convert(value);
+      else if (Array.isArray(value)) placeNumbers(value, convert);
+    }
+  };
+}
+
+/** placer's function written out for its fields (only fixed quantities and nested maps; OWN keeps the walk). */
+function generatedPlacer(fields: PlaceField[], direction: Direction): Placer | undefined {
+  if (fields.some((f) => !f.inner && !f.fixed)) return undefined;
+  const defs = fields.map((f) => (f.fixed ? f.def! : { factor: 1, offset: 0 }));
+  const lines = fields.map((f, i) => {
+    const k = literal(f.key);
+    return f.inner
+      ? `  x = object[${k}];\n  if (x !== null && x !== undefined) placeEach(x, P[${i}]);`
+      : `  x = object[${k}];\n  if (typeof x === "number") object[${k}] = ${convertCode(direction, i)};\n  else if (Array.isArray(x)) placeNumbers(x, V[${i}]);`;
+  });
+  return generatedFunction<Placer>({
+    P: fields.map((f) => f.inner), V: fields.map((f) => f.fixed), C: defs.map((d) => d.factor), D: defs.map((d) => d.offset ?? 0),
+    placeEach, placeNumbers,
+  }, ['return function place(object) {', '  let x;', ...lines, '};'].join('\n'));
+}
+
+const placers = new WeakMap<QuantityMap, Map<string, Placer | undefined>>();
+
+function placerFor(map: QuantityMap, units: UnitSystem, direction: Direction): Placer | undefined {
+  let byWay = placers.get(map);
+  if (!byWay) {
+    byWay = new Map();
+    placers.set(map, byWay);
+  }
+  const way = `${units} ${direction}`;
+  if (!byWay.has(way)) byWay.set(way, placer(map, units, direction));
+  return byWay.get(way);
+}
+
+/**
+ * convertFields for a value the caller has just built and nobody else holds (a fresh report on its way
+ * out): the declared fields are converted where they are instead of in a copy. Copying a report of some
+ * fifty fields and its nested objects costs more than its whole analysis; the numbers are the same.
+ * The value must not reach one object twice through declared fields (it would convert twice).
+ */
+export function convertOwnFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: Direction): T {
+  const place = isIdentity(map, units) ? undefined : placerFor(map, units, direction);
+  if (place) placeEach(value, place);
+  return value;
 }
 
 /**

@@ -76,7 +76,11 @@ export const cliOptions = {
   outfile: at('dist', 'cli', 'cli.cjs'),
   platform: 'node',
   target: 'node20',
-  external: mainExternals.filter((name) => name !== 'electron'),
+  // exceljs (with its zip and stream packages, most of the bundle) loads from node_modules when a command reads
+  // a spreadsheet, so the other commands do not parse it at every start.
+  external: [...mainExternals.filter((name) => name !== 'electron'), 'exceljs'],
+  // import() becomes a require: scripts/cli.mjs runs the bundle from V8's code cache, where import() fails.
+  supported: { 'dynamic-import': false },
 };
 
 /** Written beside and renamed into place, so a command starting meanwhile never reads half a bundle. */

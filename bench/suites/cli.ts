@@ -21,39 +21,56 @@ function timed(args: string[]): number {
   return ms;
 }
 
-/** 1 000 DEMO specs (invented parts), varied in size, grade and units, one JSON line each; every tenth is bad. */
-function batchOfSpecs(count: number): string {
+/** 1 000 DEMO specs (invented parts), varied in size, grade and units; every tenth is bad. */
+function batchOfSpecs(count: number): Record<string, unknown>[] {
   const grades = ['en10270-1-dh', 'astm-a228', 'en10270-1-sm', 'astm-a313-302'];
-  const lines: string[] = [];
+  const specs: Record<string, unknown>[] = [];
   for (let i = 0; i < count; i++) {
     const d = 0.6 + (i % 19) * 0.2;
     const inch = i % 3 === 0;
     const f = inch ? 1 / 25.4 : 1;
-    lines.push(JSON.stringify({
+    specs.push({
       kind: 'compression', units: inch ? 'inch' : 'metric', material: grades[i % grades.length],
       wireDiameter: d * f, outerDiameter: d * (6 + (i % 6)) * f, totalCoils: 6 + (i % 9), ends: 'closed-ground',
       freeLength: (i % 10 === 9 ? -1 : d * 30) * f, loads: [{ length: d * 24 * f }],
-    }));
+    });
   }
-  return `${lines.join('\n')}\n`;
+  return specs;
 }
+
+const CSV_FIELDS = ['kind', 'units', 'material', 'wireDiameter', 'outerDiameter', 'totalCoils', 'ends', 'freeLength'];
+
+/** The three forms `calc --batch` reads: a JSON list, JSON lines, and a CSV with field-path headers. */
+const batchForms: { form: string; file: string; text: (specs: Record<string, unknown>[]) => string }[] = [
+  { form: 'JSON lines', file: 'batch.jsonl', text: (specs) => `${specs.map((s) => JSON.stringify(s)).join('\n')}\n` },
+  { form: 'JSON list', file: 'batch.json', text: (specs) => JSON.stringify(specs) },
+  {
+    form: 'CSV, field-path headers', file: 'batch.csv',
+    text: (specs) => [[...CSV_FIELDS, 'loads[0].length'].join(','),
+      ...specs.map((s) => [...CSV_FIELDS.map((k) => String(s[k])), String((s.loads as { length: number }[])[0]!.length)].join(','))].join('\r\n'),
+  },
+];
 
 const BATCH = 1000;
 
-/** `calc --batch` over 1 000 specs in one process, through the launcher as a user runs it (median of 3). */
+/** `calc --batch` over 1 000 specs in one process, through the launcher as a user runs it (median of 3 per form). */
 function batchRows(dir: string): BenchRow[] {
-  const file = join(dir, 'batch.jsonl');
-  writeFileSync(file, batchOfSpecs(BATCH));
-  const times: number[] = [];
-  for (let i = 0; i < 3; i++) {
-    const t0 = performance.now();
-    const r = spawnSync(process.execPath, ['scripts/cli.mjs', 'calc', '--batch', file], { cwd: process.cwd(), encoding: 'utf8', maxBuffer: 1 << 28 });
-    times.push(performance.now() - t0);
-    const lines = r.stdout.trim().split('\n');
-    if (lines.length !== BATCH) throw new Error(`calc --batch wrote ${lines.length} lines for ${BATCH} specs: ${r.stderr}`);
-  }
-  const ms = median(times);
-  return [row(`calc --batch of ${BATCH} specs, one process (JSON lines; median of 3)`, ms, 'ms', '< 2 000 ms', ms < 2000)];
+  const specs = batchOfSpecs(BATCH);
+  return batchForms.map(({ form, file, text }) => {
+    const path = join(dir, file);
+    writeFileSync(path, text(specs));
+    const times: number[] = [];
+    for (let i = 0; i < 3; i++) {
+      const t0 = performance.now();
+      const r = spawnSync(process.execPath, ['scripts/cli.mjs', 'calc', '--batch', path], { cwd: process.cwd(), encoding: 'utf8', maxBuffer: 1 << 28 });
+      times.push(performance.now() - t0);
+      const lines = r.stdout.trim().split('\n');
+      const failed = lines.filter((l) => l.includes('"ok":false')).length;
+      if (lines.length !== BATCH || failed !== BATCH / 10) throw new Error(`calc --batch (${form}) wrote ${lines.length} lines, ${failed} failed, for ${BATCH} specs: ${r.stderr}`);
+    }
+    const ms = median(times);
+    return row(`calc --batch of ${BATCH} specs, one process (${form}; median of 3)`, ms, 'ms', '< 2 000 ms', ms < 2000);
+  });
 }
 
 const median = (xs: number[]): number => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;

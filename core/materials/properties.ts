@@ -27,7 +27,7 @@ interface Prepared {
 }
 
 const OVERRIDE_SOURCE = 'mill certificate (override)';
-const EDGE_TOLERANCE = 1e-9;
+export const EDGE_TOLERANCE = 1e-9;
 
 /** Up to four decimals, no trailing zeros. */
 const mm = (x: number): string => String(Number(x.toFixed(4)));

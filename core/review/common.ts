@@ -16,14 +16,13 @@ export const diameterPath = (x: CoilBody): string =>
   x.diameterGiven === 'outer' ? 'outerDiameter' : x.diameterGiven === 'inner' ? 'innerDiameter' : 'meanDiameter';
 
 export function reviewIndex(x: CoilBody, w: number, out: Sink): void {
-  const shown = significant(w);
   if (w > lim.makeableIndex.max) {
     add(out, 'error', 'index-not-makeable', diameterPath(x),
-      `spring index ${shown} is above ${lim.makeableIndex.max}: the coil will not hold its diameter`,
+      `spring index ${significant(w)} is above ${lim.makeableIndex.max}: the coil will not hold its diameter`,
       'use heavier wire or a smaller coil diameter');
   } else if (w < lim.preferredIndex.min || w > lim.preferredIndex.max) {
     add(out, 'warning', 'index-outside-preferred', diameterPath(x),
-      `spring index ${shown} is outside the preferred ${lim.preferredIndex.min}–${lim.preferredIndex.max}: ` +
+      `spring index ${significant(w)} is outside the preferred ${lim.preferredIndex.min}–${lim.preferredIndex.max}: ` +
       (w < lim.preferredIndex.min ? 'hard to coil, high curvature stress' : 'springs tangle and diameters wander'),
       'change wire or coil diameter towards an index of 6–10');
   }

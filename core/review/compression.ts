@@ -163,8 +163,8 @@ function fixedWords(free: ReadonlySet<FreeParameter>): string {
 }
 
 function reviewDetermination(x: CompressionDesign, out: Sink): void {
+  if (x.loads.every((l) => l.force === undefined)) return;
   const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
-  if (forced.length === 0) return;
   const free = new Set(x.freeParameters);
   // EN 15800 (from memory): one force with L0 fixed frees n and d; two forces free L0, n and d.
   const needed: FreeParameter[] = forced.length >= 2 ? ['freeLength', 'coils', 'wireDiameter']

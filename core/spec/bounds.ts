@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import type { Quantity, UnitSystem } from '../units';
 import { fromInternal, toInternal, unitSymbol } from '../units';
 import { significant } from '../format';
+import { generatedFunction, literal } from '../generated-code';
 
 /**
  * The plausible range of every number a spec carries, in internal units (mm, N, N·mm, MPa, g/cm³, °C,
@@ -149,28 +150,105 @@ export function withinBound(value: number, b: Bound, units: UnitSystem): boolean
 
 type Issue = { path: PropertyKey[]; message: string };
 
-function walk(value: unknown, map: BoundName | BoundsMap, path: PropertyKey[], units: UnitSystem, out: Issue[]): void {
+/** A bounds map with its nested maps as Map lookups, built once per map: specs are checked on every parse. */
+type CompiledBounds = Map<string, BoundName | CompiledBounds>;
+
+const compiledMaps = new WeakMap<BoundsMap, CompiledBounds>();
+
+function compiled(map: BoundsMap): CompiledBounds {
+  let c = compiledMaps.get(map);
+  if (!c) {
+    c = new Map(Object.keys(map).map((key) => {
+      const sub = map[key]!;
+      return [key, typeof sub === 'string' ? sub : compiled(sub)] as const;
+    }));
+    compiledMaps.set(map, c);
+  }
+  return c;
+}
+
+/** Walks `value` with the path so far on `path` (pushed and popped, copied only for an issue). */
+function walk(value: unknown, map: BoundName | CompiledBounds, path: PropertyKey[], units: UnitSystem, out: Issue[]): void {
   if (value === null || value === undefined) return;
   if (Array.isArray(value)) {
-    value.forEach((item, i) => walk(item, map, [...path, i], units, out));
+    for (let i = 0; i < value.length; i++) {
+      path.push(i);
+      walk(value[i], map, path, units, out);
+      path.pop();
+    }
     return;
   }
   if (typeof map === 'string') {
     const b: Bound = specBounds[map];
-    if (typeof value === 'number' && !withinBound(value, b, units)) out.push({ path, message: outsideMessage(b, units) });
+    if (typeof value === 'number' && !withinBound(value, b, units)) out.push({ path: path.slice(), message: outsideMessage(b, units) });
     return;
   }
   if (typeof value !== 'object') return;
-  for (const [key, inner] of Object.entries(value as Record<string, unknown>)) {
-    const sub = map[key];
-    if (sub !== undefined) walk(inner, sub, [...path, key], units, out);
+  const object = value as Record<string, unknown>;
+  const keys = Object.keys(object);
+  for (let i = 0; i < keys.length; i++) {
+    const sub = map.get(keys[i]!);
+    if (sub === undefined) continue;
+    path.push(keys[i]!);
+    walk(object[keys[i]!], sub, path, units, out);
+    path.pop();
   }
+}
+
+type WithinAll = (value: unknown) => boolean;
+
+/**
+ * Whether every number the map names is within its bound, written out per map and unit system (each field
+ * read by name); undefined where the runtime compiles no code. Only a spec with a value out of range then
+ * takes the walk that names the paths.
+ */
+function generatedWithin(map: BoundsMap, units: UnitSystem): WithinAll | undefined {
+  const keys = Object.keys(map);
+  const inner = keys.map((key) => {
+    const sub = map[key]!;
+    return typeof sub === 'string' ? undefined : withinAllFor(sub, units);
+  });
+  if (inner.some((f, i) => f === undefined && typeof map[keys[i]!] !== 'string')) return undefined;
+  const lines = keys.map((key, i) => {
+    // A list inside a list is left to the walk (it never passes the schema where a number is due).
+    const test = typeof map[key] === 'string' ? `(typeof x === "number" ? within(x, B[${i}], units) : !Array.isArray(x))` : `S[${i}](x)`;
+    return [
+      `  v = object[${literal(key)}];`,
+      '  if (v !== null && v !== undefined) {',
+      `    if (Array.isArray(v)) { for (let i = 0; i < v.length; i++) { const x = v[i]; if (x !== null && x !== undefined && !${test}) return false; } }`,
+      `    else { const x = v; if (!${test}) return false; }`,
+      '  }',
+    ].join('\n');
+  });
+  return generatedFunction<WithinAll>({
+    within: withinBound, units, S: inner, B: keys.map((key) => (typeof map[key] === 'string' ? specBounds[map[key] as BoundName] : undefined)),
+  }, [
+    'return function withinAll(object) {',
+    '  if (object === null || typeof object !== "object" || Array.isArray(object)) return true;',
+    '  let v;',
+    ...lines,
+    '  return true;',
+    '};',
+  ].join('\n'));
+}
+
+const withinAlls = new WeakMap<BoundsMap, Map<UnitSystem, WithinAll | undefined>>();
+
+function withinAllFor(map: BoundsMap, units: UnitSystem): WithinAll | undefined {
+  let byUnits = withinAlls.get(map);
+  if (!byUnits) {
+    byUnits = new Map();
+    withinAlls.set(map, byUnits);
+  }
+  if (!byUnits.has(units)) byUnits.set(units, generatedWithin(map, units));
+  return byUnits.get(units);
 }
 
 /** Every number of `spec` outside its bound, with its path. */
 export function boundsIssues(spec: { units: UnitSystem }, map: BoundsMap): Issue[] {
   const out: Issue[] = [];
-  walk(spec, map, [], spec.units, out);
+  if (withinAllFor(map, spec.units)?.(spec)) return out;
+  walk(spec, compiled(map), [], spec.units, out);
   return out;
 }
 

@@ -7,6 +7,7 @@ import { compressionSpecSchema } from './compression';
 import { extensionSpecSchema } from './extension';
 import { torsionSpecSchema } from './torsion';
 import { upgradeSpec } from './versions';
+import { compileSchema, REFUSED } from './compiled-schema';
 
 export * from './compression';
 export * from './extension';
@@ -34,6 +35,9 @@ function schemaErrors(error: z.ZodError): FieldError[] {
       : e);
 }
 
+/** The schema compiled once: a spec it certainly accepts is parsed without zod's general machinery. */
+const acceptedSpec = compileSchema(specSchema);
+
 /**
  * Validates raw input as a spec, after bringing an older version up by the declared steps. Never throws:
  * every problem comes back with the field it concerns.
@@ -44,9 +48,12 @@ export function parseSpec(raw: unknown): Result<Spec> {
   }
   const upgraded = upgradeSpec(raw as Record<string, unknown>);
   if (!upgraded.ok) return upgraded;
-  const parsed = specSchema.safeParse(upgraded.value);
-  if (!parsed.success) return fail(schemaErrors(parsed.error));
-  const spec = parsed.data;
+  let spec = acceptedSpec(upgraded.value);
+  if (spec === REFUSED) {
+    const parsed = specSchema.safeParse(upgraded.value);
+    if (!parsed.success) return fail(schemaErrors(parsed.error));
+    spec = parsed.data;
+  }
   const errors = kindEntryOf(spec.kind).specErrors(spec);
   return errors.length > 0 ? fail(errors) : ok(spec);
 }

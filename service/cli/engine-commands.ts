@@ -2,7 +2,6 @@ import { calculate } from '../../core/calculate';
 import { gradeSummaries } from '../../core/materials';
 import type { Command } from './commands';
 import { InputError, readJson, toJson } from './io';
-import { runBatch } from './batch';
 
 /** The report of one spec, or its field errors as an input error. */
 function reportOf(raw: unknown): unknown {
@@ -19,7 +18,7 @@ export const calcCommand: Command = {
     '                         one JSON line each, {spec, line?, ok, result} or {spec, line?, ok: false, errors}; exit 2 if any failed',
   ].join('\n'),
   run(args, out) {
-    if (args.options.has('batch')) return runBatch(args, out, reportOf);
+    if (args.options.has('batch')) return import('./batch').then(({ runBatch }) => runBatch(args, out, reportOf));
     const file = args.positional[0];
     if (!file) throw new InputError([{ code: 'missing-file', path: 'FILE', message: 'calc needs a spec file, or - for standard input' }]);
     out(toJson(reportOf(readJson(file))));

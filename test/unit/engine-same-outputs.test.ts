@@ -1,0 +1,3 @@
+import { sameOutputs } from './engine-same-outputs';
+
+sameOutputs('generated functions');
