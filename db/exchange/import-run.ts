@@ -6,8 +6,10 @@ import { failure } from '../errors';
 import type { StoreResult } from '../errors';
 import type { CheckedJob } from '../jobs/input';
 import { checkSpec } from '../jobs/input';
-import { writeNewJob } from '../jobs/write';
+import { NewJobWriter } from '../jobs/write';
 import type { Store } from '../store';
+import { isSqliteStore } from '../store';
+import { DeferredUpkeep } from './deferred-upkeep';
 import { importRecordSchema } from './document';
 import type { CheckedFirstOff } from './first-off';
 import { checkImportedFirstOff, writeImportedFirstOff } from './first-off';
@@ -43,6 +45,13 @@ function checkItem(item: ImportItem): Result<CheckedItem> {
 const KEPT_ERRORS = 1000;
 
 /**
+ * An import writes its first jobs with the search upkeep job by job (a small import never touches the
+ * schema), then sets it aside (DeferredUpkeep). It looks again each time the count doubles: once it has
+ * brought at least as many jobs as the store held, the job list's indexes are built afresh at the end.
+ */
+const FIRST_UPKEEP_LOOK = 1000;
+
+/**
  * One import: each record is checked as it arrives and, while every record so far was good, written at
  * once inside the caller's transaction. A bad record stops the writing (the caller rolls back) but not the
  * checking, so the answer names every bad record, as a check of the whole file first would.
@@ -52,8 +61,14 @@ export class ImportRun {
   private badRecords = 0;
   private readonly seen = new Map<string, string>();
   readonly imported: ImportResult['imported'] = [];
+  private readonly writer: NewJobWriter;
+  private upkeep: DeferredUpkeep | undefined;
+  private nextUpkeepLook = FIRST_UPKEEP_LOOK;
+  private jobsBefore: number | undefined;
 
-  constructor(private readonly store: Store, private readonly renumber: boolean) {}
+  constructor(private readonly store: Store, private readonly renumber: boolean) {
+    this.writer = new NewJobWriter(store);
+  }
 
   get failed(): boolean {
     return this.badRecords > 0;
@@ -83,11 +98,26 @@ export class ImportRun {
     if (clash) return this.reject([clash]);
     if (this.failed) return;
     const c = checked.value;
-    const id = writeNewJob(this.store, c, {
+    const written = this.writer.write(c, {
       number: this.renumber ? undefined : c.number, reason: 'imported', createdAt: c.createdAt, updatedAt: c.updatedAt,
     }, c.at);
-    writeImportedFirstOff(this.store, id, c.firstOff);
-    this.imported.push({ id, number: (this.store.sql('SELECT number FROM jobs WHERE id = ?').get(id) as { number: string }).number });
+    writeImportedFirstOff(this.store, written.id, c.firstOff);
+    this.imported.push(written);
+    if (this.imported.length === this.nextUpkeepLook) this.lookAtUpkeep();
+  }
+
+  private lookAtUpkeep(): void {
+    this.nextUpkeepLook *= 2;
+    if (!isSqliteStore(this.store) || this.upkeep?.listIndexesDropped) return;
+    this.upkeep ??= DeferredUpkeep.begin(this.store.db);
+    this.jobsBefore ??= (this.store.sql('SELECT count(*) AS n FROM jobs').get() as { n: number }).n - this.imported.length;
+    if (this.imported.length >= this.jobsBefore) this.upkeep.dropListIndexes();
+  }
+
+  /** What is left once every record was good (the number sequence, the search upkeep set aside); before the commit. */
+  finish(): void {
+    this.writer.finish();
+    this.upkeep?.finish();
   }
 
   refusal(): StoreResult<never> {

@@ -50,6 +50,7 @@ export function importJobs(store: Store, input: unknown): StoreResult<ImportResu
         if (wrong) throw new WholeFileError([wrong]);
       }
       if (run.failed) throw Refused;
+      run.finish();
     });
   } catch (e) {
     return answerOf(e, run, Refused);
@@ -144,6 +145,7 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
       rollback(writer);
       return run.refusal();
     }
+    run.finish();
     writer.db.exec('COMMIT');
     long.onProgress?.(total, total);
     return success({ imported: run.imported });

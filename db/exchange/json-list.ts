@@ -1,3 +1,9 @@
+/** Where `char` next occurs from `from` on, or the end of the text. */
+function indexOrEnd(text: string, char: string, from: number): number {
+  const at = text.indexOf(char, from);
+  return at < 0 ? text.length : at;
+}
+
 /**
  * Reads a JSON document in pieces and hands out the items of one top-level list ("jobs") one at a time,
  * as text, so a document of any length is never held whole. Everything else in the document is kept as
@@ -28,12 +34,21 @@ export class JsonListSplitter {
       this.itemParts = null;
       itemFrom = -1;
     };
+    // Inside a string only a quote or a backslash matters: the loop leaps to the next of either.
+    let nextQuote = -1;
+    let nextBackslash = -1;
     for (let i = 0; i < text.length; i++) {
-      const c = text.charCodeAt(i);
       if (this.inString) {
-        if (this.escaped) this.escaped = false;
-        else if (c === 92) this.escaped = true;
-        else if (c === 34) {
+        if (this.escaped) {
+          this.escaped = false;
+          continue;
+        }
+        if (nextQuote < i) nextQuote = indexOrEnd(text, '"', i);
+        if (nextBackslash < i) nextBackslash = indexOrEnd(text, '\\', i);
+        i = Math.min(nextQuote, nextBackslash);
+        if (i === text.length) break;
+        if (i === nextBackslash) this.escaped = true;
+        else {
           this.inString = false;
           if (keyFrom >= 0) {
             this.lastKey = this.keyParts!.join('') + text.slice(keyFrom, i);
@@ -43,6 +58,7 @@ export class JsonListSplitter {
         }
         continue;
       }
+      const c = text.charCodeAt(i);
       if (this.inList && this.depth === 2 && this.itemParts && !this.compound && (c === 44 || c === 93)) endItem(i);
       if (this.inList && this.depth === 2 && !this.itemParts && c > 32 && c !== 44 && c !== 93) {
         this.itemParts = [];

@@ -17,16 +17,36 @@ export interface CustomerRef {
   phone?: string | undefined;
 }
 
-/** Finds a customer by name or adds one. Call inside the write's transaction. */
-export function findOrAddCustomer(store: Store, ref: CustomerRef): number {
+/** A customer as filed: its id, its name as written and its sort key (jobs.customer_key). */
+export interface CustomerOnFile {
+  id: number;
+  name: string;
+  key: string;
+}
+
+/** Finds a customer by name or adds one, as filed. Call inside the write's transaction. */
+export function fileCustomer(store: Store, ref: CustomerRef): CustomerOnFile {
   const key = customerKey(ref.name);
-  const found = store.sql('SELECT id FROM customers WHERE name_key = ?').get(key) as { id: number } | undefined;
-  if (found) return found.id;
+  const found = store.sql('SELECT id, name FROM customers WHERE name_key = ?').get(key) as { id: number; name: string } | undefined;
+  if (found) return { ...found, key };
   const now = store.now().toISOString();
+  const name = ref.name.trim().replace(/\s+/g, ' ');
   const result = store.sql(`INSERT INTO customers (name, name_key, email, phone, created_at, updated_at)
                             VALUES (?, ?, ?, ?, ?, ?)`)
-    .run(ref.name.trim().replace(/\s+/g, ' '), key, ref.email ?? '', ref.phone ?? '', now, now);
-  return Number(result.lastInsertRowid);
+    .run(name, key, ref.email ?? '', ref.phone ?? '', now, now);
+  return { id: Number(result.lastInsertRowid), name, key };
+}
+
+/** Finds a customer by name or adds one. Call inside the write's transaction. */
+export function findOrAddCustomer(store: Store, ref: CustomerRef): number {
+  return fileCustomer(store, ref).id;
+}
+
+/** The customer with this id, as filed; a missing one is refused on `path`. */
+export function customerOnFile(store: Store, id: number, path: string): CustomerOnFile {
+  const row = store.sql('SELECT id, name, name_key FROM customers WHERE id = ?').get(id) as { id: number; name: string; name_key: string } | undefined;
+  if (row === undefined) throw new StoreError('not-found', `no customer with id ${id}`, path);
+  return { id: row.id, name: row.name, key: row.name_key };
 }
 
 export function requireCustomer(store: Store, id: number, path: string): number {

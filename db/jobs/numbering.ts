@@ -12,23 +12,45 @@ const taken = {
   quotes: 'SELECT 1 FROM quotes WHERE number = ?',
 } as const;
 
+/** A sequence read once and moved on in memory: many new jobs in one transaction (an import) share it. */
+export interface NumberSequence {
+  /** The next number not in use. */
+  take(): string;
+  /** Writes where the sequence stands; call before the transaction commits. */
+  keep(): void;
+}
+
 /**
- * Takes the next number of a sequence (jobs or quotes) and moves the sequence on. Numbers already in use
- * (typed in, imported) are skipped. Call inside the transaction that uses the number.
+ * The job or quote sequence inside the caller's transaction. Numbers already in use (typed in, imported)
+ * are skipped.
  */
-export function takeNumber(store: Store, sequence: 'jobs' | 'quotes'): string {
+export function numberSequence(store: Store, sequence: 'jobs' | 'quotes'): NumberSequence {
   const numbering = readSetting(store, 'numbering');
   const seq = sequence === 'jobs' ? numbering : numbering.quotes;
-  const now = store.now();
-  let n = seq.next;
-  let number = formatNumber(seq.prefix, seq.width, n, now);
-  while (store.sql(taken[sequence]).get(number) !== undefined) {
-    n += 1;
-    number = formatNumber(seq.prefix, seq.width, n, now);
-  }
-  const next = n + 1;
-  writeSetting(store, 'numbering', sequence === 'jobs'
-    ? { ...numbering, next }
-    : { ...numbering, quotes: { ...numbering.quotes, next } });
+  let next = seq.next;
+  return {
+    take() {
+      const now = store.now();
+      let number = formatNumber(seq.prefix, seq.width, next, now);
+      while (store.sql(taken[sequence]).get(number) !== undefined) {
+        next += 1;
+        number = formatNumber(seq.prefix, seq.width, next, now);
+      }
+      next += 1;
+      return number;
+    },
+    keep() {
+      writeSetting(store, 'numbering', sequence === 'jobs'
+        ? { ...numbering, next }
+        : { ...numbering, quotes: { ...numbering.quotes, next } });
+    },
+  };
+}
+
+/** Takes the next number of a sequence (jobs or quotes) and moves the sequence on. Call inside the transaction that uses the number. */
+export function takeNumber(store: Store, sequence: 'jobs' | 'quotes'): string {
+  const numbers = numberSequence(store, sequence);
+  const number = numbers.take();
+  numbers.keep();
   return number;
 }

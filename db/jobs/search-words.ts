@@ -17,6 +17,20 @@ function typed(value: number, units: UnitSystem): string {
 /** Every job is a spring: the word in a grade's name ("Spring steel wire SH") would find every job. */
 const nameWords = (name: string): string => name.split(/[\s-]+/).filter((w) => w.toLowerCase() !== 'spring').join(' ');
 
+/** A grade's words by its id, made once per grade (the grades are fixed while the program runs). */
+const wordsOfGrade = new Map<string, string>();
+
+function gradeWords(id: string): string {
+  let words = wordsOfGrade.get(id);
+  if (words === undefined) {
+    const grade = findGrade(id);
+    words = [id, ...(grade ? [nameWords(grade.name), grade.standard] : [])].join(' ');
+    // An unknown id is the spec's own text: it is not kept, so the table stays as small as the catalogue.
+    if (grade) wordsOfGrade.set(id, words);
+  }
+  return words;
+}
+
 export interface WordsShape {
   units: UnitSystem;
   /** Internal mm, as the jobs row holds it. */
@@ -32,10 +46,7 @@ export function searchWords(spec: unknown, shape: WordsShape): string {
   if (typeof spec !== 'object' || spec === null) return '';
   const s = spec as Record<string, unknown>;
   const words: string[] = [];
-  if (typeof s.material === 'string') {
-    const grade = findGrade(s.material);
-    words.push(s.material, ...(grade ? [nameWords(grade.name), grade.standard] : []));
-  }
+  if (typeof s.material === 'string') words.push(gradeWords(s.material));
   for (const [field, symbol] of GIVEN_LENGTHS) {
     const v = s[field];
     if (typeof v === 'number' && Number.isFinite(v)) words.push(`${symbol} ${typed(v, shape.units)}`);

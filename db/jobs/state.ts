@@ -25,13 +25,13 @@ export function stateOfRow(row: JobRow): JobState {
   };
 }
 
-export function revisionFields(store: Store, state: JobState): RevisionFields {
-  const customer = state.customerId === null
-    ? undefined
-    : store.sql('SELECT name FROM customers WHERE id = ?').get(state.customerId) as { name: string } | undefined;
+/** `customerName`: the customer's name when the caller holds it already (undefined: read it). */
+export function revisionFields(store: Store, state: JobState, customerName?: string | null): RevisionFields {
+  const name = state.customerId === null ? null : customerName !== undefined ? customerName
+    : (store.sql('SELECT name FROM customers WHERE id = ?').get(state.customerId) as { name: string } | undefined)?.name ?? null;
   return {
     customerId: state.customerId,
-    customerName: customer?.name ?? null,
+    customerName: name,
     partNumber: state.partNumber,
     drawingNumber: state.drawingNumber,
     drawingRevision: state.drawingRevision,
@@ -44,12 +44,15 @@ export function revisionFields(store: Store, state: JobState): RevisionFields {
   };
 }
 
-/** The row values in column order shared by INSERT and UPDATE below. */
-export function rowValues(state: JobState): unknown[] {
+/**
+ * The row values in column order shared by INSERT and UPDATE below. `specText`: the spec as stored, when
+ * the caller made it already (a new job writes the same text into its first revision).
+ */
+export function rowValues(state: JobState, specText = JSON.stringify(state.spec)): unknown[] {
   const s = state.shape;
   return [
     state.customerId, state.partNumber, state.drawingNumber, state.drawingRevision, state.status,
-    JSON.stringify(state.spec), state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays, JSON.stringify(state.judgement),
+    specText, state.notes, state.dueDate, state.orderQuantity, state.leadTimeDays, JSON.stringify(state.judgement),
     s.kind, s.material, s.materialFamily, s.units, s.wireDiameter, s.meanDiameter, s.freeLength, s.activeCoils, s.rate,
     state.shapeEngine, searchWords(state.spec, s),
   ];

@@ -29,10 +29,18 @@ export function markWorkingSave(store: Store, jobId: number, baseRevision: numbe
     .run(jobId, baseRevision, at, at, desk, store.author);
 }
 
+/** What the caller of addRevision may hold already: the customer's name, the spec as stored. */
+export interface RevisionKnown {
+  customerName?: string | null;
+  specText?: string;
+}
+
 /** Writes one permanent revision; revisions are immutable (triggers), so this only ever inserts. */
-export function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string, author = store.author): void {
+export function addRevision(store: Store, jobId: number, revision: number, reason: string, state: JobState, at: string,
+  author = store.author, known: RevisionKnown = {}): void {
   store.sql('INSERT INTO job_revisions (job_id, revision, saved_at, reason, fields, spec, made_by) VALUES (?, ?, ?, ?, ?, ?, ?)')
-    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state)), JSON.stringify(state.spec), author);
+    .run(jobId, revision, at, reason, JSON.stringify(revisionFields(store, state, known.customerName)),
+      known.specText ?? JSON.stringify(state.spec), author);
 }
 
 /** Ends the session without a revision of its own: the save under way records its state. */

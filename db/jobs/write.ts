@@ -6,10 +6,12 @@ import type { StoreResult } from '../errors';
 import type { Store } from '../store';
 import { inTransaction } from '../store';
 import { parseWith } from '../../core/validation';
-import { resolveCustomer } from './customers';
+import type { CustomerOnFile } from './customers';
+import { customerKey, customerOnFile, fileCustomer, resolveCustomer } from './customers';
 import type { CheckedJob } from './input';
 import { checkNewJob, checkSpec } from './input';
-import { takeNumber } from './numbering';
+import type { NumberSequence } from './numbering';
+import { numberSequence } from './numbering';
 import { jobOfRead, jobRead, jobRow, revisionRow } from './read';
 import type { JobRead } from './read';
 import type { JobRow } from './rows';
@@ -31,21 +33,69 @@ export interface NewJobOptions {
 
 /** Writes a checked job and its first revision. Call inside a transaction. */
 export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOptions = {}, path = ''): number {
-  const { fields } = checked;
-  const customerId = resolveCustomer(store, fields, path === '' ? 'customerId' : `${path}.customerId`) ?? null;
-  const state: JobState = { ...fields, customerId, spec: checked.spec, shape: checked.shape, shapeEngine: checked.shapeEngine };
-  const number = options.number ?? takeNumber(store, 'jobs');
-  if (options.number !== undefined && store.sql('SELECT 1 FROM jobs WHERE number = ?').get(number) !== undefined) {
-    throw new StoreError('duplicate-number', `job number ${number} is already in this store`, path === '' ? 'number' : `${path}.number`);
-  }
-  const now = store.now().toISOString();
-  const created = options.createdAt ?? now;
-  const result = store.sql(`INSERT INTO jobs (number, ${ROW_COLUMNS}, revision, created_at, updated_at)
-                            VALUES (?, ${ROW_PLACEHOLDERS}, 1, ?, ?)`)
-    .run(number, ...rowValues(state), created, options.updatedAt ?? created);
-  const id = Number(result.lastInsertRowid);
-  addRevision(store, id, 1, options.reason ?? 'created', state, now);
+  const writer = new NewJobWriter(store);
+  const { id } = writer.write(checked, options, path);
+  writer.finish();
   return id;
+}
+
+const INSERT_JOB = `INSERT INTO jobs (number, ${ROW_COLUMNS}, customer_key, revision, created_at, updated_at)
+                    VALUES (?, ${ROW_PLACEHOLDERS}, ?, 1, ?, ?)`;
+
+/**
+ * New jobs written one after another inside one transaction (an import of many): the customers named and
+ * the job number sequence are read once and kept, and finish() writes where the sequence stands.
+ */
+export class NewJobWriter {
+  private readonly byName = new Map<string, CustomerOnFile>();
+  private readonly byKey = new Map<string, CustomerOnFile>();
+  private readonly byId = new Map<number, CustomerOnFile>();
+  private numbers: NumberSequence | undefined;
+
+  constructor(private readonly store: Store) {}
+
+  /** The job's customer: by id, by name (found or added), or none. */
+  private customerOf(fields: CheckedJob['fields'], path: string): CustomerOnFile | null {
+    if (fields.customerId !== undefined) {
+      const known = this.byId.get(fields.customerId) ?? customerOnFile(this.store, fields.customerId, path);
+      this.byId.set(known.id, known);
+      return known;
+    }
+    if (!fields.customer) return null;
+    const { name } = fields.customer;
+    const known = this.byName.get(name) ?? this.byKey.get(customerKey(name)) ?? fileCustomer(this.store, fields.customer);
+    this.byName.set(name, known);
+    this.byKey.set(known.key, known);
+    return known;
+  }
+
+  private nextNumber(): string {
+    this.numbers ??= numberSequence(this.store, 'jobs');
+    return this.numbers.take();
+  }
+
+  write(checked: CheckedJob, options: NewJobOptions = {}, path = ''): { id: number; number: string } {
+    const { store } = this;
+    const { fields } = checked;
+    const customer = this.customerOf(fields, path === '' ? 'customerId' : `${path}.customerId`);
+    const state: JobState = { ...fields, customerId: customer?.id ?? null, spec: checked.spec, shape: checked.shape, shapeEngine: checked.shapeEngine };
+    const number = options.number ?? this.nextNumber();
+    if (options.number !== undefined && store.sql('SELECT 1 FROM jobs WHERE number = ?').get(number) !== undefined) {
+      throw new StoreError('duplicate-number', `job number ${number} is already in this store`, path === '' ? 'number' : `${path}.number`);
+    }
+    const now = store.now().toISOString();
+    const created = options.createdAt ?? now;
+    const specText = JSON.stringify(checked.spec);
+    const result = store.sql(INSERT_JOB).run(number, ...rowValues(state, specText), customer?.key ?? '', created, options.updatedAt ?? created);
+    const id = Number(result.lastInsertRowid);
+    addRevision(store, id, 1, options.reason ?? 'created', state, now, store.author, { customerName: customer?.name ?? null, specText });
+    return { id, number };
+  }
+
+  /** Writes where the job number sequence stands; call before the transaction commits. */
+  finish(): void {
+    this.numbers?.keep();
+  }
 }
 
 /**

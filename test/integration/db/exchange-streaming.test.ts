@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { calculate } from '../../../core/calculate';
 import { findGrade } from '../../../core/materials/catalog';
 import { createJob, exportJobs, exportJobsToFile, importJobs, importJobsFromFile, openStore } from '../../../db';
-import type { Store } from '../../../db';
+import type { SqliteStore, Store } from '../../../db';
 import { parseCsv } from '../../../db/exchange/csv';
 import { JsonListSplitter } from '../../../db/exchange/json-list';
 import { job, tempDir, tempStore, value } from './helpers';
@@ -176,6 +176,11 @@ describe('an import killed half-way', () => {
     const store = openStore(storeFile);
     for (let i = 0; i < 3; i++) value(createJob(store, job({ partNumber: `KEEP-${i}` })));
     const numbers = store.db.prepare('SELECT number FROM jobs ORDER BY number').all();
+    // By the time it is killed the import has set its search upkeep aside (triggers and list indexes dropped
+    // inside its transaction): the schema must come back whole.
+    const schemaOf = (s: SqliteStore) =>
+      s.db.prepare("SELECT type, name, sql FROM sqlite_master WHERE name NOT LIKE 'sqlite_stat%' ORDER BY name").all();
+    const schema = schemaOf(store);
     store.close();
     const killedAt = await importAndKill(storeFile, file);
     expect(killedAt).toBeGreaterThan(0.2);
@@ -185,11 +190,14 @@ describe('an import killed half-way', () => {
       expect(after.db.prepare('SELECT number FROM jobs ORDER BY number').all()).toEqual(numbers);
       expect(jobCount(after)).toBe(3);
       expect((after.db.prepare('SELECT count(*) AS n FROM job_revisions').get() as { n: number }).n).toBe(3);
+      expect(schemaOf(after)).toEqual(schema);
+      expect((after.db.prepare("SELECT count(*) AS n FROM job_text WHERE job_text MATCH 'part_number : keep*'").get() as { n: number }).n).toBe(3);
       expect(existsSync(storeFile)).toBe(true);
       // The store takes the next import as if nothing had happened.
       const small = join(dir, 'small.json');
       writeFileSync(small, JSON.stringify({ ...doc, jobs: doc.jobs.slice(0, 2) }));
       expect(value(await importJobsFromFile(after, { file: small, renumber: true })).imported.map((j) => j.number)).toEqual(['J-26-0004', 'J-26-0005']);
+      expect((after.db.prepare("SELECT count(*) AS n FROM job_text WHERE job_text MATCH 'part_number : k*'").get() as { n: number }).n).toBe(5);
     } finally {
       after.close();
     }
