@@ -1,38 +1,14 @@
-import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Store } from '../../../db';
-import { createDemoShop, createJob, getJob, jobRevisions, openPgStore, openStore, updateJob } from '../../../db';
+import { createDemoShop, createJob, getJob, jobRevisions, updateJob } from '../../../db';
 import { createService, dispatch } from '../../../service/api';
+import { deskBackends } from '../../support/desk-backends';
 import { usePgCluster } from '../../support/pg-stores';
-import { job, tempDir, value } from './helpers';
+import { job, value } from './helpers';
 
 const pg = usePgCluster();
 
-/** Two desks on one store: each opens its own connection and signs in with its own name. */
-interface Backend { name: string; desks(a: string, b: string): [Store, Store] }
-
-const opened: Store[] = [];
-const keep = (s: Store) => (opened.push(s), s);
-afterEach(() => {
-  for (const s of opened.splice(0)) s.close();
-});
-
-const backends: Backend[] = [
-  {
-    name: 'SQLite',
-    desks: (a, b) => {
-      const file = join(tempDir(), 'shop.db');
-      return [keep(openStore(file, { author: a })), keep(openStore(file, { author: b }))];
-    },
-  },
-  {
-    name: 'PostgreSQL',
-    desks: (a, b) => {
-      const url = pg.freshDatabase();
-      return [keep(openPgStore(url, { author: a })), keep(openPgStore(url, { author: b }))];
-    },
-  },
-];
+const backends = deskBackends(pg);
 
 const refused = (store: Store, sql: string, ...params: unknown[]) => expect(() => store.sql(sql).run(...params), sql).toThrow();
 

@@ -1,37 +1,12 @@
-import { join } from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
-import type { Store } from '../../../db';
-import { createJob, getJob, jobRevisions, keepWorkingRevision, openPgStore, openStore, setJobStatus, updateJob } from '../../../db';
+import { describe, expect, it } from 'vitest';
+import { createJob, getJob, jobRevisions, keepWorkingRevision, setJobStatus, updateJob } from '../../../db';
+import { deskBackends } from '../../support/desk-backends';
 import { usePgCluster } from '../../support/pg-stores';
-import { job, spec, tempDir, value } from './helpers';
+import { job, spec, value } from './helpers';
 
 const pg = usePgCluster();
 
-/** Two desks on one store: each its own connection and its own signed-in name. */
-interface Backend { name: string; desks(a: string, b: string): [Store, Store] }
-
-const opened: Store[] = [];
-const keep = (s: Store) => (opened.push(s), s);
-afterEach(() => {
-  for (const s of opened.splice(0)) s.close();
-});
-
-const backends: Backend[] = [
-  {
-    name: 'SQLite',
-    desks: (a, b) => {
-      const file = join(tempDir(), 'shop.db');
-      return [keep(openStore(file, { author: a })), keep(openStore(file, { author: b }))];
-    },
-  },
-  {
-    name: 'PostgreSQL',
-    desks: (a, b) => {
-      const url = pg.freshDatabase();
-      return [keep(openPgStore(url, { author: a })), keep(openPgStore(url, { author: b }))];
-    },
-  },
-];
+const backends = deskBackends(pg);
 
 const freeLength = (s: unknown) => (s as { freeLength?: number }).freeLength;
 
