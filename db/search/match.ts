@@ -31,15 +31,18 @@ function ftsWord(w: string): string {
   return `"${cut ? cut.join(' ') : w.replace(/"/g, '""')}"*`;
 }
 
-export function matchExpression(text: string): Result<string> {
-  const words = text
-    .split(/\s+/)
-    .map((w) => w.replace(/\*+$/, ''))
-    .filter((w) => /[\p{L}\p{N}]/u.test(w));
+/** The words typed, trailing stars dropped, each holding a letter or digit; an error naming `text` when none does. */
+function typedWords(text: string): Result<string[]> {
+  const words = text.split(/\s+/).map((w) => w.replace(/\*+$/, '')).filter((w) => /[\p{L}\p{N}]/u.test(w));
   if (words.length === 0) {
     return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
   }
-  return ok(words.map(ftsWord).join(' '));
+  return ok(words);
+}
+
+export function matchExpression(text: string): Result<string> {
+  const words = typedWords(text);
+  return words.ok ? ok(words.value.map(ftsWord).join(' ')) : words;
 }
 
 /** One typed word as PostgreSQL reads it: its letter and digit runs, the last one a prefix or not. */
@@ -52,11 +55,9 @@ export interface TsWord { runs: string[]; prefix: boolean }
  * A word typed twice adds nothing to the match; to the planner it would look twice as selective.
  */
 export function tsWords(text: string): Result<TsWord[]> {
-  const words = text.split(/\s+/).map((w) => w.replace(/\*+$/, '').toLowerCase()).filter((w) => /[\p{L}\p{N}]/u.test(w));
-  if (words.length === 0) {
-    return fail([fieldError('empty-search', 'text', 'type a word, a part number or a customer name to search for')]);
-  }
-  return ok([...new Set(words)].map((w) => ({
+  const typed = typedWords(text);
+  if (!typed.ok) return typed;
+  return ok([...new Set(typed.value.map((w) => w.toLowerCase()))].map((w) => ({
     runs: (([...w].length > 1 && cutRuns(w)) || w.match(/[\p{L}\p{N}]+/gu)) ?? [],
     prefix: [...w].length > 1,
   })));
