@@ -77,8 +77,7 @@ function checkPlan(file: string, options: OpenOptions): { before: 'quick' | 'non
   return { before: 'none', after: options.deferredCheck ?? 'background' };
 }
 
-function damageCheckOf(file: string, plan: ReturnType<typeof checkPlan>, options: OpenOptions): DamageCheck {
-  const clock = options.clock ?? (() => new Date());
+function damageCheckOf(file: string, plan: ReturnType<typeof checkPlan>, options: OpenOptions, clock: () => Date): DamageCheck {
   if (plan.after === 'background') return DamageCheck.inBackground(file, clock);
   if (plan.after === 'first-save') return DamageCheck.beforeFirstSave(file, clock, options.onCheck);
   return plan.before === 'quick' ? DamageCheck.passedAtOpen(file, clock) : DamageCheck.notChecked(file, clock, 'not asked for');
@@ -113,7 +112,8 @@ export function openStore(file: string, options: OpenOptions = {}): SqliteStore 
     throw new StoreError('store-unopenable', `${file} cannot be opened (${(e as Error).message})`);
   }
   // Started once migrations are done, so the check reads the store as it will be worked on.
-  return makeStore(db, file, options.clock ?? (() => new Date()), readOnly, options.author, damageCheckOf(file, plan, options));
+  const clock = options.clock ?? (() => new Date());
+  return makeStore(db, file, clock, readOnly, options.author, damageCheckOf(file, plan, options, clock));
 }
 
 /** openStore as a value: `{ ok: false, error }` instead of an exception. */
