@@ -112,7 +112,7 @@ function pgBoxParams(a: JobShape, radius: number): unknown[] {
   const [lLo, lHi] = range('freeLength');
   const spread = Math.exp(reach / WEIGHTS.activeCoils);
   return [dLo, rLo, dHi, rHi, mLo, lLo, mHi, lHi, a.activeCoils / spread, a.activeCoils * spread,
-    ...BOX_DIMENSIONS.map(([, key]) => a[key]), radius + GEOMETRY_MARGIN];
+    ...BOX_DIMENSIONS.map(([, key]) => a[key]), reach];
 }
 
 /** Jobs of the kind within the box of `radius` around the asked spring, on either backend. */
