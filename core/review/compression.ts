@@ -101,20 +101,27 @@ function reviewSolidStress(x: CompressionDesign, r: CompressionReport, out: Sink
   }
 }
 
-function workingPoints(x: CompressionDesign): { length: number; path: string }[] {
-  const points = x.loads.map((l, i) => ({ length: l.length, path: `loads[${i}].length` }));
-  if (x.duty.type === 'cyclic') {
-    x.duty.between.forEach((length, i) => points.push({ length, path: `duty.between[${i}]` }));
+/** The shortest working length the drawing names (a load's or a cyclic duty's), with its field path. */
+function deepestWorkingPoint(x: CompressionDesign): { length: number; path: string } | undefined {
+  let length = Number.POSITIVE_INFINITY;
+  let at = -1;
+  for (let i = 0; i < x.loads.length; i++) {
+    if (x.loads[i]!.length < length) { length = x.loads[i]!.length; at = i; }
   }
-  return points;
+  let inDuty = false;
+  if (x.duty.type === 'cyclic') {
+    for (let i = 0; i < 2; i++) {
+      if (x.duty.between[i]! < length) { length = x.duty.between[i]!; at = i; inDuty = true; }
+    }
+  }
+  if (at < 0) return undefined;
+  return { length, path: inDuty ? `duty.between[${at}]` : `loads[${at}].length` };
 }
 
 function reviewWorkingLengths(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const u = x.units;
-  const points = workingPoints(x);
-  if (points.length === 0) return;
-  let deepest = points[0]!;
-  for (const p of points) if (p.length < deepest.length) deepest = p;
+  const deepest = deepestWorkingPoint(x);
+  if (deepest === undefined) return;
   if (deepest.length <= r.solidLength) {
     add(out, 'error', 'working-length-below-solid', deepest.path,
       `working length ${formatQuantity(deepest.length, 'length', u)} is at or below the solid length ${formatQuantity(r.solidLength, 'length', u)}`,
@@ -142,14 +149,15 @@ function reviewWorkingLengths(x: CompressionDesign, r: CompressionReport, out: S
 
 function reviewLoads(x: CompressionDesign, r: CompressionReport, out: Sink): void {
   const u = x.units;
-  r.loads.forEach((l, i) => {
-    if (l.withinTolerance !== false || l.specifiedForce === null) return;
+  for (let i = 0; i < r.loads.length; i++) {
+    const l = r.loads[i]!;
+    if (l.withinTolerance !== false || l.specifiedForce === null) continue;
     const freeLengthForForce = l.length + l.specifiedForce / r.rate;
     add(out, 'error', 'load-outside-tolerance', `loads[${i}].force`,
       `force at ${formatQuantity(l.length, 'length', u)} is ${formatQuantity(l.force, 'force', u)}; the drawing asks ` +
       `${formatQuantity(l.specifiedForce, 'force', u)} ±${l.tolerancePercent} %`,
       `a free length of ${formatQuantity(freeLengthForForce, 'length', u)} gives the force with these coils, or change the coil count`);
-  });
+  }
 }
 
 const freeParameterWords: Record<FreeParameter, string> = {
@@ -163,16 +171,22 @@ function fixedWords(free: ReadonlySet<FreeParameter>): string {
 }
 
 function reviewDetermination(x: CompressionDesign, out: Sink): void {
-  if (x.loads.every((l) => l.force === undefined)) return;
-  const forced = x.loads.map((l, i) => ({ l, i })).filter((e) => e.l.force !== undefined);
+  let first = -1;
+  let count = 0;
+  for (let i = 0; i < x.loads.length; i++) {
+    if (x.loads[i]!.force === undefined) continue;
+    if (first < 0) first = i;
+    count++;
+  }
+  if (count === 0) return;
   const free = new Set(x.freeParameters);
   // EN 15800 (from memory): one force with L0 fixed frees n and d; two forces free L0, n and d.
-  const needed: FreeParameter[] = forced.length >= 2 ? ['freeLength', 'coils', 'wireDiameter']
+  const needed: FreeParameter[] = count >= 2 ? ['freeLength', 'coils', 'wireDiameter']
     : free.has('freeLength') ? ['freeLength'] : ['coils', 'wireDiameter'];
   const missing = needed.filter((p) => !free.has(p));
   if (missing.length === 0) return;
-  add(out, 'warning', 'over-determined', `loads[${forced[0]!.i}].force`,
-    `the drawing fixes ${fixedWords(free)} and ${forced.length === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
+  add(out, 'warning', 'over-determined', `loads[${first}].force`,
+    `the drawing fixes ${fixedWords(free)} and ${count === 1 ? 'a toleranced force' : 'two toleranced forces'}: over-determined`,
     `per EN 15800 let the maker adjust the ${missing.map((m) => freeParameterWords[m]).join(' and ')} (free parameters), or accept a wider load tolerance`);
 }
 

@@ -5,7 +5,8 @@ import { coilBodyErrors } from './common-rules';
 
 /** Contradictions the extension schema cannot express. Loads against the free length are review findings. */
 export function extensionSpecErrors(s: ExtensionSpec): FieldError[] {
-  const errors = coilBodyErrors(s);
+  const errors: FieldError[] = [];
+  coilBodyErrors(s, errors);
   s.ends.forEach((end, i) => {
     const form = typeof end === 'string' ? end : end.form;
     const extension = typeof end === 'string' ? undefined : end.extension;

@@ -1,13 +1,15 @@
 import type { FieldError } from '../result';
 import { fieldError } from '../result';
 import type { TorsionSpec } from './torsion';
-import { coilBodyErrors, meanDiameterOf } from './common-rules';
+import { coilBodyErrors } from './common-rules';
+import { meanDiameterOf } from '../springs/coil-body';
 
 /** Contradictions the torsion schema cannot express. */
 export function torsionSpecErrors(s: TorsionSpec): FieldError[] {
-  const errors = coilBodyErrors(s);
+  const errors: FieldError[] = [];
+  coilBodyErrors(s, errors);
   if (errors.length > 0) return errors;
-  const inside = meanDiameterOf(s).D - s.wireDiameter;
+  const inside = meanDiameterOf(s) - s.wireDiameter;
   if (s.arborDiameter !== undefined && s.arborDiameter >= inside) {
     errors.push(fieldError('arbor-too-large', 'arborDiameter',
       `the arbor (${s.arborDiameter}) does not fit the free inside diameter (${inside.toPrecision(4)})`));

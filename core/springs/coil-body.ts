@@ -31,20 +31,23 @@ export interface CoilBody {
   wireFindings: Finding[];
 }
 
-function meanDiameter(spec: CoilBodySpec, d: number): { D: number; given: CoilBody['diameterGiven'] } {
-  if (spec.outerDiameter !== undefined) return { D: spec.outerDiameter - d, given: 'outer' };
-  if (spec.innerDiameter !== undefined) return { D: spec.innerDiameter + d, given: 'inner' };
-  return { D: spec.meanDiameter ?? Number.NaN, given: 'mean' };
+/** The mean coil diameter from whichever diameter the spec gives (in the spec's own units or internal ones). */
+export function meanDiameterOf(spec: CoilBodySpec): number {
+  if (spec.outerDiameter !== undefined) return spec.outerDiameter - spec.wireDiameter;
+  if (spec.innerDiameter !== undefined) return spec.innerDiameter + spec.wireDiameter;
+  return spec.meanDiameter ?? Number.NaN;
 }
+
+const diameterGiven = (spec: CoilBodySpec): CoilBody['diameterGiven'] =>
+  spec.outerDiameter !== undefined ? 'outer' : spec.innerDiameter !== undefined ? 'inner' : 'mean';
 
 /** Resolves wire and coil; undefined only for an unknown grade, which validation has already reported. */
 export function coilBody(spec: CoilBodySpec): CoilBody | undefined {
   const d = spec.wireDiameter;
-  const { D, given } = meanDiameter(spec, d);
   const resolved = wireProperties(spec.material, d, spec.materialOverrides, spec.units);
   if (!resolved) return undefined;
   return {
-    units: spec.units, d, D, diameterGiven: given, serviceTemperature: spec.serviceTemperature,
+    units: spec.units, d, D: meanDiameterOf(spec), diameterGiven: diameterGiven(spec), serviceTemperature: spec.serviceTemperature,
     wire: resolved.props, wireFindings: resolved.findings,
   };
 }

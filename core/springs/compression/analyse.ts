@@ -24,36 +24,25 @@ function loadResult(x: CompressionDesign, rate: number, perForce: number, k: num
   };
 }
 
-interface MethodLimits {
-  method: SetRemovalMethod;
-  basis: string;
-  /** Basis stress ÷ uncorrected stress 8FD/(πd³). */
-  factor: number;
-  before: number;
-  after: number;
-}
-
 /** What the set-removal decision reads of a design: the wire, the coils, the end form and the free length. */
 export type SetRemovalInput = Pick<CompressionDesign, 'wire' | 'd' | 'D' | 'na' | 'ends' | 'L0'>;
-
-function methodLimits(x: SetRemovalInput, c: number): [MethodLimits, MethodLimits] {
-  const Rm = x.wire.tensileStrength;
-  const f = x.wire.allowableStaticFraction;
-  return [
-    { method: 'handbook', basis: HANDBOOK_BASIS, factor: directShear(c), before: f.beforeSetRemoval * Rm, after: f.afterSetRemoval * Rm },
-    { method: 'en13906', basis: EN_BASIS, factor: 1, before: EN_COMPRESSION_SOLID_FRACTION * Rm, after: (4 / 3) * EN_COMPRESSION_SOLID_FRACTION * Rm },
-  ];
-}
 
 const HANDBOOK_BASIS = 'stress with the direct-shear factor Ks (Shigley 9e Eq. 10-2) against the before / after set-removal ' +
   'fractions of Shigley 9e Table 10-6; the set model yields on this stress';
 const EN_BASIS = `uncorrected stress 8FD/(πd³) against ${EN_COMPRESSION_SOLID_SOURCE}; the set model yields on this stress, ` +
   'and after presetting the limit is the fully plastic wire\'s 4/3 of it (derived: no EN limit after presetting is known)';
 
-function verdict(x: SetRemovalInput, m: MethodLimits, Ls: number, perDeflection: number): SetRemovalVerdict {
+/**
+ * One method's verdict: `factor` turns the uncorrected stress 8FD/(πd³) into the method's basis stress, and
+ * `before` / `after` are its allowables before and after set removal.
+ */
+function verdict(
+  x: SetRemovalInput, method: SetRemovalMethod, basis: string, factor: number, before: number, after: number,
+  Ls: number, perDeflection: number,
+): SetRemovalVerdict {
   const s0 = x.L0 - Ls;
-  const stressAtSolid = m.factor * perDeflection * s0;
-  const sY = m.before / (m.factor * perDeflection);
+  const stressAtSolid = factor * perDeflection * s0;
+  const sY = before / (factor * perDeflection);
   const required = s0 > sY;
   const coiledDeflection = coiledDeflectionFor(s0, sY);
   const reachable = !Number.isNaN(coiledDeflection);
@@ -64,13 +53,13 @@ function verdict(x: SetRemovalInput, m: MethodLimits, Ls: number, perDeflection:
     : expectedSet > coiledLimits.maximumSetPerFinishedDeflection * s0 ? 'set-over-deflection'
       : required && (coiledPitch ?? 0) > coiledLimits.maximumPitchPerMeanDiameter * x.D ? 'pitch-over-coiler' : null;
   return {
-    method: m.method, basis: m.basis, stressAtSolid, allowableBefore: m.before, allowableAfter: m.after,
-    required, ratio: stressAtSolid / m.before,
+    method, basis, stressAtSolid, allowableBefore: before, allowableAfter: after,
+    required, ratio: stressAtSolid / before,
     coiledFreeLength: bound === null ? coiled : null,
     expectedSet: reachable ? expectedSet : null,
     coiledPitch,
     setFraction: reachable && coiledDeflection > 0 ? expectedSet / coiledDeflection : null,
-    achievable: stressAtSolid <= m.after,
+    achievable: stressAtSolid <= after,
     bound,
   };
 }
@@ -87,9 +76,11 @@ function strictness(v: SetRemovalVerdict): number {
  * per mm of deflection (8·D·rate/(π·d³)). Exported so the design search screens with the same decision.
  */
 export function setRemoval(x: SetRemovalInput, Ls: number, perDeflection: number, c: number, governedBy: SetRemovalGoverning): SetRemovalResult {
-  const [hb, en] = methodLimits(x, c);
-  const handbook = verdict(x, hb, Ls, perDeflection);
-  const en13906 = verdict(x, en, Ls, perDeflection);
+  const Rm = x.wire.tensileStrength;
+  const f = x.wire.allowableStaticFraction;
+  const handbook = verdict(x, 'handbook', HANDBOOK_BASIS, directShear(c), f.beforeSetRemoval * Rm, f.afterSetRemoval * Rm, Ls, perDeflection);
+  const en13906 = verdict(x, 'en13906', EN_BASIS, 1, EN_COMPRESSION_SOLID_FRACTION * Rm,
+    (4 / 3) * EN_COMPRESSION_SOLID_FRACTION * Rm, Ls, perDeflection);
   const governing: SetRemovalMethod = governedBy !== 'stricter' ? governedBy
     : strictness(en13906) > strictness(handbook) ? 'en13906' : 'handbook';
   const v = governing === 'handbook' ? handbook : en13906;
