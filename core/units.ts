@@ -219,23 +219,27 @@ function objectWalker(map: QuantityMap, units: UnitSystem, direction: Direction)
   return walk;
 }
 
-/** Walkers built once per map, unit system and direction: specs convert on every analysis. */
-const walkers = new WeakMap<QuantityMap, Map<string, Walker>>();
+/** What is made once per map, unit system and direction (specs and reports convert on every analysis). */
+type ByWay<T> = Record<UnitSystem, Partial<Record<Direction, T>>>;
 
-function walkerFor(map: QuantityMap, units: UnitSystem, direction: Direction): Walker {
-  let byWay = walkers.get(map);
+function madeOnce<T>(
+  cache: WeakMap<QuantityMap, ByWay<T>>, map: QuantityMap, units: UnitSystem, direction: Direction,
+  make: (map: QuantityMap, units: UnitSystem, direction: Direction) => T,
+): T {
+  let byWay = cache.get(map);
   if (!byWay) {
-    byWay = new Map();
-    walkers.set(map, byWay);
+    byWay = { metric: {}, inch: {} };
+    cache.set(map, byWay);
   }
-  const way = `${units} ${direction}`;
-  let walker = byWay.get(way);
-  if (!walker) {
-    walker = objectWalker(map, units, direction);
-    byWay.set(way, walker);
-  }
-  return walker;
+  const ways = byWay[units];
+  if (!(direction in ways)) ways[direction] = make(map, units, direction);
+  return ways[direction] as T;
 }
+
+const walkers = new WeakMap<QuantityMap, ByWay<Walker>>();
+
+const walkerFor = (map: QuantityMap, units: UnitSystem, direction: Direction): Walker =>
+  madeOnce(walkers, map, units, direction, objectWalker);
 
 export function convertFields<T>(value: T, map: QuantityMap, units: UnitSystem, direction: Direction): T {
   if (isIdentity(map, units)) return value;
@@ -318,18 +322,10 @@ function generatedPlacer(fields: PlaceField[], direction: Direction): Placer | u
   }, ['return function place(object) {', '  let x;', ...lines, '};'].join('\n'));
 }
 
-const placers = new WeakMap<QuantityMap, Map<string, Placer | undefined>>();
+const placers = new WeakMap<QuantityMap, ByWay<Placer | undefined>>();
 
-function placerFor(map: QuantityMap, units: UnitSystem, direction: Direction): Placer | undefined {
-  let byWay = placers.get(map);
-  if (!byWay) {
-    byWay = new Map();
-    placers.set(map, byWay);
-  }
-  const way = `${units} ${direction}`;
-  if (!byWay.has(way)) byWay.set(way, placer(map, units, direction));
-  return byWay.get(way);
-}
+const placerFor = (map: QuantityMap, units: UnitSystem, direction: Direction): Placer | undefined =>
+  madeOnce(placers, map, units, direction, placer);
 
 /**
  * convertFields for a value the caller has just built and nobody else holds (a fresh report on its way

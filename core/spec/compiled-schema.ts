@@ -172,33 +172,34 @@ function generatedObject(fields: Field[]): Accept | undefined {
   }, body);
 }
 
+/**
+ * The accepted list, made by copying the input (`slice`) and writing each accepted item over its copy. An array
+ * literal here would be one allocation site for the lists of every schema: once some parsed lists are kept (a
+ * page of jobs), V8 allocates all of them in the old generation, the items of each short-lived list then outlive
+ * the young collections, and `calculate` ran at 4× its floor instead of 2.6× (npm run bench -- engine). Arrays a
+ * builtin makes carry no allocation site.
+ */
+function acceptedItems(value: unknown[], itemAt: (i: number) => Accept): unknown[] | typeof REFUSED {
+  const out = value.slice();
+  for (let i = 0; i < out.length; i++) {
+    const v = itemAt(i)(value[i]);
+    if (v === REFUSED) return REFUSED;
+    out[i] = v;
+  }
+  return out;
+}
+
 function arrayOf(def: Def): Accept {
   const element = compile(def.element!);
-  return (value) => {
-    if (!Array.isArray(value)) return REFUSED;
-    const out: unknown[] = [];
-    for (let i = 0; i < value.length; i++) {
-      const v = element(value[i]);
-      if (v === REFUSED) return REFUSED;
-      out.push(v);
-    }
-    return out;
-  };
+  const each = (): Accept => element;
+  return (value) => (Array.isArray(value) ? acceptedItems(value, each) : REFUSED);
 }
 
 function tupleOf(def: Def): Accept {
   if (def.rest) return never;
   const items = def.items!.map((item) => (item._zod.def.type === 'optional' ? never : compile(item)));
-  return (value) => {
-    if (!Array.isArray(value) || value.length !== items.length) return REFUSED;
-    const out: unknown[] = [];
-    for (let i = 0; i < items.length; i++) {
-      const v = items[i]!(value[i]);
-      if (v === REFUSED) return REFUSED;
-      out.push(v);
-    }
-    return out;
-  };
+  const at = (i: number): Accept => items[i]!;
+  return (value) => (Array.isArray(value) && value.length === items.length ? acceptedItems(value, at) : REFUSED);
 }
 
 /** A discriminated union picks its option by the discriminator; a plain union only of literals. */
