@@ -9,7 +9,7 @@ import { EDGE_TOLERANCE } from '../../core/materials/properties';
 import { specBounds } from '../../core/spec/bounds';
 import type { Bound } from '../../core/spec/bounds';
 import { bergstraesser, directShear, wahl } from '../../core/springs/factors';
-import { ENDURANCE_CYCLES, fatigueCriteria, finiteLife, gerberSafetyFactor, goodmanSafetyFactor, TORSIONAL_ULTIMATE_RATIO, zimmerli } from '../../core/springs/fatigue';
+import { ENDURANCE_CYCLES, finiteLife, infiniteLifeCheck, TORSIONAL_ULTIMATE_RATIO } from '../../core/springs/fatigue';
 import { DEFAULT_LOAD_TOLERANCE_PERCENT } from '../../core/springs/specified';
 import { coilWireLength, helicalRate, torsionStressPerForce, wireMass } from '../../core/springs/helix';
 import { bucklingDeflection, seatingCoefficient, slendernessLimit } from '../../core/springs/compression/buckling';
@@ -252,17 +252,14 @@ export function floorCalculate(raw: unknown, out: Float64Array, at: number): boo
     const a = k * perForce * rate * (L0 - ((duty.between as number[])[0]!) * f);
     const b = k * perForce * rate * (L0 - ((duty.between as number[])[1]!) * f);
     const peened = duty.peened === true;
-    const point = peened ? zimmerli.peened : zimmerli.unpeened;
     const ta = (Math.max(a, b) - Math.min(a, b)) / 2;
     const tm = (Math.max(a, b) + Math.min(a, b)) / 2;
-    const ssu = TORSIONAL_ULTIMATE_RATIO * Rm;
-    const goodman = goodmanSafetyFactor(ta, tm, point.alternating, point.mean, ssu);
-    const gerber = gerberSafetyFactor(ta, tm, point.alternating, point.mean, ssu);
-    out[o + 39] = Math.max(a, b); out[o + 40] = goodman; out[o + 41] = gerber;
+    const infinite = infiniteLifeCheck(ta, tm, peened, TORSIONAL_ULTIMATE_RATIO * Rm);
+    out[o + 39] = Math.max(a, b); out[o + 40] = infinite.goodman ?? Number.NaN; out[o + 41] = infinite.gerber ?? Number.NaN;
     const cycles = duty.cycles as number;
     const life = cycles < ENDURANCE_CYCLES ? finiteLife('compression', cycles, peened, Rm) : null;
     if (life) findings |= Math.max(a, b) <= life.limit ? 0 : bit('fatigue-fail');
-    else if (goodman < fatigueCriteria.goodmanPass) findings |= gerber >= fatigueCriteria.gerberFail ? bit('fatigue-marginal') : bit('fatigue-fail');
+    else if (infinite.verdict !== 'pass') findings |= bit(`fatigue-${infinite.verdict}`);
   } else {
     out[o + 39] = Number.NaN; out[o + 40] = Number.NaN; out[o + 41] = Number.NaN;
   }

@@ -98,8 +98,9 @@ function stressMisses(req: RequirementInternal, p: DesignPoint, wire: WireProper
     const f = fatigueCheck(k * perForce * rate * (p.L0 - a), k * perForce * rate * (p.L0 - b), wire.tensileStrength, p.peened, life);
     if (f.verdict === 'pass') return set.required;
     // Under the endurance cycles the verdict is the finite-life limit's, else Goodman's.
+    // No factor on a fail: the Zimmerli lines do not reach the wire, so no safety is shown (0).
     push(out, life ? overMax('fatigue-life', 'duty', 'stress', f.stressMax, life.limit)
-      : underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor, fatigueCriteria.goodmanPass));
+      : underMin('fatigue', 'duty', 'ratio', f.goodmanSafetyFactor ?? 0, fatigueCriteria.goodmanPass));
   }
   return set.required;
 }

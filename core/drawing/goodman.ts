@@ -5,6 +5,7 @@
  */
 import type { CompressionReport } from '../springs/compression/report';
 import type { FatigueResult } from '../springs/fatigue';
+import { zimmerliReaches } from '../springs/fatigue';
 import { significant } from '../format';
 import { fromInternal, unitSymbol } from '../units';
 import { linearScale } from './axes';
@@ -22,7 +23,7 @@ export function enduranceIntercepts(f: Pick<FatigueResult, 'enduranceAlternating
 
 /** The lines exist only while the Zimmerli mean stress is below the ultimate (not so for very soft wire). */
 function drawable(f: FatigueResult): boolean {
-  return f.enduranceMean < f.ultimateShear;
+  return zimmerliReaches(f.enduranceMean, f.ultimateShear);
 }
 
 const noLinesText = 'Zimmerli point beyond the ultimate strength';
@@ -69,7 +70,7 @@ function loadLine(c: Chart, s: (v: number) => number, f: FatigueResult): string 
 }
 
 function safetyText(f: FatigueResult): string {
-  const factor = (n: number) => (Number.isFinite(n) ? significant(n) : 'no limit');
+  const factor = (n: number | null) => (n === null ? 'no limit' : significant(n));
   return `nf = ${factor(f.goodmanSafetyFactor)} (Goodman), ${factor(f.gerberSafetyFactor)} (Gerber)`;
 }
 

@@ -32,6 +32,7 @@ const wording: Record<string, (spec: Spec) => string> = {
   'fatigue-fail': () => 'The fatigue life asked for is not expected from this design: springs may break before the cycles stated.',
   'initial-tension-too-high': () => 'The initial tension asked for is more than can be coiled into this wire and coil size: we coil the most that can be held.',
   'load-length-not-above-free-length': () => 'A working length on the drawing is not beyond the spring\'s free length: the spring carries no load there.',
+  'duty-length-not-above-free-length': () => 'An end of the working stroke on the drawing is not beyond the spring\'s free length: the spring carries no load there.',
   'binds-on-arbor': () => 'At its largest working angle the spring body closes onto the arbor.',
   'bending-stress-over-allowable': () => 'At its largest working angle the spring is stressed above what the wire allows: it may take a set in service.',
 };

@@ -3,6 +3,7 @@ import { formatQuantity, significant } from '../format';
 import type { CoilBody } from '../springs/coil-body';
 import { reviewLimits as lim } from './limits';
 import type { FatigueResult } from '../springs/fatigue';
+import { zimmerliReaches } from '../springs/fatigue';
 import type { UnitSystem } from '../units';
 
 /** Review rules every kind shares: index, service temperature, and the finding builder. */
@@ -65,6 +66,18 @@ export function fatigueWords(f: FatigueResult, u: UnitSystem): string {
       `${formatQuantity(f.stressMax, 'stress', u)} against ${formatQuantity(f.finiteLife.limit, 'stress', u)} ` +
       `(${significant(100 * f.finiteLife.fraction)} % of tensile strength, ${f.finiteLife.source})`;
   }
-  return `infinite-life check ${f.verdict}: Goodman safety factor ${significant(f.goodmanSafetyFactor)}, ` +
-    `Gerber ${significant(f.gerberSafetyFactor)} (Zimmerli data, ${f.peened ? 'peened' : 'not peened'})`;
+  if (!zimmerliReaches(f.enduranceMean, f.ultimateShear)) {
+    return `infinite-life check ${f.verdict}: the torsional ultimate strength ${formatQuantity(f.ultimateShear, 'stress', u)} ` +
+      `is not above the Zimmerli mean stress ${formatQuantity(f.enduranceMean, 'stress', u)}, so the endurance data ` +
+      'do not cover wire this soft and infinite life cannot be shown';
+  }
+  const factor = (n: number | null) => (n === null ? 'none (no stress in the cycle)' : significant(n));
+  return `infinite-life check ${f.verdict}: Goodman safety factor ${factor(f.goodmanSafetyFactor)}, ` +
+    `Gerber ${factor(f.gerberSafetyFactor)} (Zimmerli data, ${f.peened ? 'peened' : 'not peened'})`;
+}
+
+/** The remedy for a fatigue verdict short of a pass: stronger wire where the endurance data do not reach it. */
+export function fatigueFix(f: FatigueResult, strokeFix: string): string {
+  return !f.finiteLife && !zimmerliReaches(f.enduranceMean, f.ultimateShear)
+    ? 'choose a spring steel of higher tensile strength, or life-test the springs' : strokeFix;
 }

@@ -11,7 +11,7 @@ import type { UnitSystem } from '../units';
 import type { SetRemovalResult, SetRemovalVerdict } from '../springs/compression/report';
 import { coiledLimits } from '../springs/compression/set-removal';
 import type { CoiledBound, SetRemovalMethod } from '../springs/compression/set-removal';
-import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
+import { add, fatigueFix, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewServiceTemperature } from './common';
 import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
 import type { Settings } from '../settings/schema';
@@ -233,7 +233,7 @@ function reviewService(x: CompressionDesign, r: CompressionReport, out: Sink): v
   const f = r.fatigue;
   if (f && f.verdict !== 'pass') {
     add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', fatigueWords(f, x.units),
-      f.peened ? 'reduce the stroke stress: more coils or a larger coil diameter' : 'shot peen, or reduce the stroke stress');
+      fatigueFix(f, f.peened ? 'reduce the stroke stress: more coils or a larger coil diameter' : 'shot peen, or reduce the stroke stress'));
   }
 }
 

@@ -3,7 +3,7 @@ import { formatQuantity, significant } from '../format';
 import type { ExtensionDesign } from '../springs/extension/design';
 import type { ExtensionReport } from '../springs/extension/report';
 import { loopPositionTolerance } from '../tolerances';
-import { add, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
+import { add, fatigueFix, fatigueWords, NO_FATIGUE_DATA_FIX, noFatigueData, reviewIndex, reviewScope13906, reviewServiceTemperature } from './common';
 import { hasSteelFatigueData } from '../springs/fatigue';
 import type { Sink } from './common';
 import { reviewLimits as lim } from './limits';
@@ -65,6 +65,14 @@ function reviewGeometry(x: ExtensionDesign, r: ExtensionReport, out: Sink): void
         'adjust the body coils or the initial tension');
     }
   });
+  if (x.duty.type === 'cyclic') {
+    x.duty.between.forEach((length, i) => {
+      if (length > r.freeLength) return;
+      add(out, 'error', 'duty-length-not-above-free-length', `duty.between[${i}]`,
+        `working length ${formatQuantity(length, 'length', u)} is not longer than the free length inside the ends ${formatQuantity(r.freeLength, 'length', u)}: a close-wound spring does not cycle there`,
+        'give working lengths inside the ends, longer than the free length');
+    });
+  }
   if (r.specifiedFreeLength !== null && Math.abs(r.specifiedFreeLength - r.freeLength) > DRAWING_LENGTH_MATCH * r.freeLength) {
     add(out, 'warning', 'free-length-mismatch', 'freeLength',
       `the drawing's free length ${formatQuantity(r.specifiedFreeLength, 'length', u)} differs from the ${formatQuantity(r.freeLength, 'length', u)} the body and ends make`,
@@ -110,7 +118,7 @@ function reviewUse(x: ExtensionDesign, r: ExtensionReport, out: Sink): void {
     }
     const f = r.fatigue;
     if (f && f.verdict !== 'pass') {
-      add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', `body ${fatigueWords(f, x.units)}`);
+      add(out, f.verdict === 'fail' ? 'error' : 'warning', `fatigue-${f.verdict}`, 'duty', `body ${fatigueWords(f, x.units)}`, fatigueFix(f, ''));
     }
   }
 }

@@ -77,28 +77,69 @@ export interface FatigueResult {
   enduranceAlternating: number;
   enduranceMean: number;
   peened: boolean;
-  goodmanSafetyFactor: number;
-  gerberSafetyFactor: number;
+  /** Null when the Zimmerli lines do not reach the wire (see `zimmerliReaches`) or the cycle carries no stress. */
+  goodmanSafetyFactor: number | null;
+  gerberSafetyFactor: number | null;
   /** Set when the duty's cycles are fewer than the endurance data stand for: the verdict is then this check's. */
   finiteLife: FiniteLife | null;
   verdict: FatigueVerdict;
 }
 
-/** Goodman: Sse = Ssa/(1 − Ssm/Ssu); nf = 1/(τa/Sse + τm/Ssu). */
+/**
+ * Goodman: Sse = Ssa/(1 − Ssm/Ssu); nf = 1/(τa/Sse + |τm|/Ssu), for Ssm < Ssu. A shear stress's sign only gives
+ * its direction, so the mean enters by its size (as through the sign-free von Mises stress, Shigley 9e §6-14,
+ * from memory). With no alternating stress the load line runs along the mean axis: nf = Ssu/|τm|.
+ */
 export function goodmanSafetyFactor(ta: number, tm: number, ssa: number, ssm: number, ssu: number): number {
   const sse = ssa / (1 - ssm / ssu);
-  return 1 / (ta / sse + tm / ssu);
+  return 1 / (ta / sse + Math.abs(tm) / ssu);
 }
 
-/** Gerber: Sse = Ssa/(1 − (Ssm/Ssu)²); nf = ½(Ssu/τm)²(τa/Sse)[−1 + √(1 + (2τm·Sse/(Ssu·τa))²)]. */
+/**
+ * Gerber: Sse = Ssa/(1 − (Ssm/Ssu)²); nf = ½(Ssu/τm)²(τa/Sse)[−1 + √(1 + (2τm·Sse/(Ssu·τa))²)] (Shigley 9e §10-9),
+ * for Ssm < Ssu, worked in the equal form nf = 2/(a + √(a² + b²)), a = τa/Sse, b = 2τm/Ssu: no cancellation as
+ * τm → 0 (nf → Sse/τa) and no 0·∞ at τa = 0 (nf = Ssu/|τm|, as on the Goodman line).
+ */
 export function gerberSafetyFactor(ta: number, tm: number, ssa: number, ssm: number, ssu: number): number {
-  const sse = ssa / (1 - (ssm / ssu) ** 2);
-  if (tm === 0) return sse / ta;
-  const q = (2 * tm * sse) / (ssu * ta);
-  return 0.5 * (ssu / tm) ** 2 * (ta / sse) * (-1 + Math.sqrt(1 + q * q));
+  const a = ta / (ssa / (1 - (ssm / ssu) ** 2));
+  return 2 / (a + Math.hypot(a, (2 * tm) / ssu));
 }
 
-/** Corrected stresses at the two ends of the working stroke, tensile strength, surface condition, and the finite-life check if any. */
+/**
+ * The Goodman line and Gerber parabola run from the endurance intercept to Ssu through the Zimmerli point, so
+ * they exist only while the point's mean stress is below Ssu: not so for wire under about 566 MPa (797 MPa
+ * peened), softer than the spring steels the data were taken on.
+ */
+export const zimmerliReaches = (enduranceMean: number, ultimateShear: number): boolean => enduranceMean < ultimateShear;
+
+export interface InfiniteLifeCheck {
+  goodman: number | null;
+  gerber: number | null;
+  verdict: FatigueVerdict;
+}
+
+/** A factor with no bound (no stress anywhere in the cycle) has no number to show. */
+const bounded = (n: number): number | null => (Number.isFinite(n) ? n : null);
+
+/**
+ * The infinite-life check on the Zimmerli lines. Where the lines do not reach the wire, infinite life cannot be
+ * shown and the verdict is a fail with no factors; a cycle with no stress passes with none.
+ */
+export function infiniteLifeCheck(ta: number, tm: number, peened: boolean, ssu: number): InfiniteLifeCheck {
+  const point = peened ? zimmerli.peened : zimmerli.unpeened;
+  if (!zimmerliReaches(point.mean, ssu)) return { goodman: null, gerber: null, verdict: 'fail' };
+  const goodman = bounded(goodmanSafetyFactor(ta, tm, point.alternating, point.mean, ssu));
+  const gerber = bounded(gerberSafetyFactor(ta, tm, point.alternating, point.mean, ssu));
+  const verdict: FatigueVerdict = goodman === null || goodman >= fatigueCriteria.goodmanPass ? 'pass'
+    : gerber !== null && gerber >= fatigueCriteria.gerberFail ? 'marginal' : 'fail';
+  return { goodman, gerber, verdict };
+}
+
+/**
+ * Corrected stresses at the two ends of the working stroke, tensile strength, surface condition, and the
+ * finite-life check if any, which takes the larger stress of the cycle by its size (a shear stress's sign is
+ * only its direction).
+ */
 export function fatigueCheck(stressA: number, stressB: number, tensileStrength: number, peened: boolean, life: FiniteLife | null = null): FatigueResult {
   const stressMin = Math.min(stressA, stressB);
   const stressMax = Math.max(stressA, stressB);
@@ -106,14 +147,12 @@ export function fatigueCheck(stressA: number, stressB: number, tensileStrength: 
   const tm = (stressMax + stressMin) / 2;
   const point = peened ? zimmerli.peened : zimmerli.unpeened;
   const ssu = TORSIONAL_ULTIMATE_RATIO * tensileStrength;
-  const goodman = ta === 0 ? Number.POSITIVE_INFINITY : goodmanSafetyFactor(ta, tm, point.alternating, point.mean, ssu);
-  const gerber = ta === 0 ? Number.POSITIVE_INFINITY : gerberSafetyFactor(ta, tm, point.alternating, point.mean, ssu);
-  const verdict: FatigueVerdict = life ? (stressMax <= life.limit ? 'pass' : 'fail')
-    : goodman >= fatigueCriteria.goodmanPass ? 'pass' : gerber >= fatigueCriteria.gerberFail ? 'marginal' : 'fail';
+  const infinite = infiniteLifeCheck(ta, tm, peened, ssu);
   return {
     stressMin, stressMax, stressAlternating: ta, stressMean: tm, stressRange: stressMax - stressMin,
     ultimateShear: ssu, enduranceAlternating: point.alternating, enduranceMean: point.mean, peened,
-    goodmanSafetyFactor: goodman, gerberSafetyFactor: gerber, finiteLife: life, verdict,
+    goodmanSafetyFactor: infinite.goodman, gerberSafetyFactor: infinite.gerber, finiteLife: life,
+    verdict: life ? (Math.max(stressMax, -stressMin) <= life.limit ? 'pass' : 'fail') : infinite.verdict,
   };
 }
 

@@ -60,19 +60,27 @@ function bodyFields(b: { units: UnitSystem; material: string; d: number; index: 
   };
 }
 
+/**
+ * One cyclic duty in twenty has a hairline stroke: a second length a few units in the last place from the first,
+ * different as typed but not, after unit conversion and rounding, in stress (no alternating stress at all).
+ */
+const hairline = fc.nat({ max: 19 }).map((n) => n === 0);
+const strokeEnds = (first: number, other: () => number, hair: boolean): [number, number] =>
+  [first, hair ? first * (1 - 4 * Number.EPSILON) : other()];
+
 const cyclic = fc.record({ cycles: logBetween(1, 1e12), peened: fc.boolean(), frequency: fc.option(logBetween(1e-6, 20_000), { nil: undefined }) });
 
 const compression = fc.record({
   b: body, ends: fc.constantFrom('closed-ground', 'closed', 'open-ground', 'open'), nt: logBetween(3, 5000), stretch: logBetween(1.02, 8),
   loads: fc.array(fc.record({ at: share(), force: fc.option(logBetween(1e-3, 1e6), { nil: undefined }) }), { maxLength: 3 }),
-  duty: fc.option(fc.tuple(share(), share(), cyclic), { nil: undefined }), order: fc.constantFrom('metric', 'inch').chain((u) => orderFields(u as UnitSystem)),
+  duty: fc.option(fc.tuple(share(), share(), cyclic, hairline), { nil: undefined }), order: fc.constantFrom('metric', 'inch').chain((u) => orderFields(u as UnitSystem)),
 }).map(({ b, ends, nt, stretch, loads, duty, order }): Raw => {
   const o = out(b.units);
   const L0 = Math.min(20_000, (nt + 1) * b.d * stretch);
   return {
     kind: 'compression', ...bodyFields(b), ends, totalCoils: nt, freeLength: o(L0, 'length'),
     loads: loads.map((l) => ({ length: o(L0 * l.at, 'length'), ...(l.force ? { force: o(l.force, 'force') } : {}) })),
-    ...(duty ? { duty: { type: 'cyclic', between: [o(L0 * Math.max(duty[0], duty[1]), 'length'), o(L0 * Math.min(duty[0], duty[1]) * 0.99, 'length')], ...duty[2] } } : {}),
+    ...(duty ? { duty: { type: 'cyclic', between: strokeEnds(o(L0 * Math.max(duty[0], duty[1]), 'length'), () => o(L0 * Math.min(duty[0], duty[1]) * 0.99, 'length'), duty[3]), ...duty[2] } } : {}),
     ...order,
   };
 });
@@ -85,18 +93,19 @@ const extensionEnd = fc.oneof(
 const extension = fc.record({
   b: body, n: logBetween(1, 5000), ends: fc.tuple(extensionEnd, extensionEnd), it: fc.option(logBetween(1e-3, 1e5), { nil: undefined }),
   loads: fc.array(fc.record({ stretch: logBetween(1.001, 3), force: fc.option(logBetween(1e-3, 1e6), { nil: undefined }) }), { maxLength: 3 }),
-  duty: fc.option(fc.tuple(logBetween(1.001, 2), logBetween(1.001, 2), cyclic), { nil: undefined }),
+  duty: fc.option(fc.tuple(logBetween(1.001, 2), logBetween(1.001, 2), cyclic, hairline), { nil: undefined }),
   loopAngle: fc.option(fc.double({ min: 0, max: 360, noNaN: true }), { nil: undefined }),
   order: orderFields('metric'),
 }).map(({ b, n, ends, it, loads, duty, loopAngle, order }): Raw => {
   const o = out(b.units);
   const scale = (n + 1) * b.d + 2 * b.d * b.index;
   const end = (e: unknown) => (typeof e === 'string' ? e : { ...(e as Raw), extension: o((e as { extension: number }).extension * b.d, 'length') });
+  const between = duty && strokeEnds(o(Math.min(20_000, scale * duty[0]), 'length'), () => o(Math.min(20_000, scale * duty[1]), 'length'), duty[3]);
   return {
     kind: 'extension', ...bodyFields(b), bodyCoils: n, ends: [end(ends[0]), end(ends[1])],
     ...(it !== undefined ? { initialTension: o(it, 'force') } : {}),
     loads: loads.map((l) => ({ length: o(Math.min(20_000, scale * l.stretch), 'length'), ...(l.force ? { force: o(l.force, 'force') } : {}) })),
-    ...(duty && duty[0] !== duty[1] ? { duty: { type: 'cyclic', between: [o(Math.min(20_000, scale * duty[0]), 'length'), o(Math.min(20_000, scale * duty[1]), 'length')], ...duty[2] } } : {}),
+    ...(duty && between && between[0] !== between[1] ? { duty: { type: 'cyclic', between, ...duty[2] } } : {}),
     ...(loopAngle !== undefined ? { loopAngle } : {}),
     ...order,
   };
