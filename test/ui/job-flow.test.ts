@@ -76,17 +76,43 @@ describe('a job from an empty form to the store and back', { timeout: UI_TEST_TI
 
     await page.getByRole('button', { name: /^New job/ }).first().click();
     await page.getByLabel('Metric').check();
+    // As on a slow machine, the autosave first stores the new spring while the similar list is open, before the
+    // list's first search is answered: the store waits until the list asks, and that search until the job is stored.
+    let asking = (): void => undefined;
+    const asked = new Promise<void>((r) => { asking = r; });
+    const stored = page.waitForResponse((r) => r.url().endsWith('/api/createJob'));
+    const searches: unknown[] = [];
+    await page.route('**/api/createJob', async (route) => {
+      await asked;
+      await route.continue();
+    });
+    await page.route('**/api/similarJobs', async (route) => {
+      searches.push(route.request().postDataJSON());
+      if (searches.length === 1) {
+        asking();
+        await stored;
+      }
+      await route.continue();
+    });
+    await field(page, 'Order quantity (pcs)').fill('2500');
     await fillSpring(page, { grade: 'en10270-1-sh', d: '1.6', od: '14.4', coils: '9', l0: '35' });
     await page.locator('.results[data-state="ok"]').waitFor();
     await page.keyboard.press('Alt+S');
     const similar = page.getByRole('dialog', { name: 'Jobs like this spring' });
     await similar.waitFor();
+    await page.locator('[data-save="ok"]').waitFor();
+    const created = (await page.locator('.toolbar__number').textContent()) ?? '';
+    expect(created).toMatch(/^J-\d\d-\d{4}$/);
+    // The list keeps its name, prices at the quantity as typed from its first search, and leaves the new job out.
+    expect(searches[0]).toMatchObject({ quantity: 2500 });
     const row = similar.locator('tr', { has: page.getByRole('button', { name: number, exact: true }) });
     await row.waitFor();
+    await expect.poll(() => similar.getByRole('button', { name: created, exact: true }).count(), { timeout: 10_000 }).toBe(0);
     await expect(row.getByRole('list').getAttribute('aria-label')).resolves.toMatch(/^Differences: d same, OD −3 %, L0 \+9 %/);
+    await expect(similar.locator('.hint').textContent()).resolves.toContain('at the break nearest 2,500 pcs');
+    await page.unrouteAll();
     await screenshot(page, 'similar-jobs');
     await row.getByRole('button', { name: number, exact: true }).click();
-    // The new spring never saved as a job: it was left through the similar list, which saves first.
     await page.locator('.toolbar__number', { hasText: number }).waitFor();
     await expect(page.getByLabel('Inch').isChecked()).resolves.toBe(true);
     await page.getByRole('button', { name: 'Undo' }).click();

@@ -11,6 +11,7 @@ import { useCommand } from '../../hooks/commands';
 import { useNavigation } from '../../hooks/navigation';
 import { useShopData } from '../../hooks/shop-data';
 import { useJobEditor } from '../../hooks/useJobEditor';
+import type { JobEditor } from '../../hooks/useJobEditor';
 import { useStable } from '../../hooks/useStable';
 import { SimilarJobsDialog } from '../shared/SimilarJobs';
 import { useCopyJob } from '../shared/useCopyJob';
@@ -44,7 +45,9 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
   const onCreated = useCallback((job: Job) => nav.setJobLabel(job.number, job.id), [nav]);
   const editor = useJobEditor(jobId, { units: settings.defaults.units, toleranceGrade: null, settings }, onCreated);
   const [tab, setTab] = useState<Tab>('spec');
-  const [similar, setSimilar] = useState(false);
+  // The similar list's subject is named once as it opens: an autosave that first stores a new job while the list
+  // is open must not rename it under the reader (the list only re-asks, leaving the job itself out).
+  const [similarFor, setSimilarFor] = useState<string | null>(null);
   const form = useRef<FormHandle | null>(null);
   const pending = useRef(false);
   pending.current = editor.dirty || editor.saving;
@@ -94,7 +97,10 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
   useCommand('save', () => void save());
   useCommand('undo', () => void editor.undo());
   useCommand('redo', () => void editor.redo());
-  useCommand('find-similar', () => { if (editor.evaluation.spec) setSimilar(true); });
+  const openSimilar = () => {
+    if (editor.evaluation.spec) setSimilarFor(editor.job ? `job ${editor.job.number} as edited` : 'this spring');
+  };
+  useCommand('find-similar', openSimilar);
   useCommand('print-quote', () => setTab('documents'));
   useCommand('print-traveller', () => setTab('documents'));
 
@@ -104,7 +110,7 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
   return (
     <section className="screen screen--workspace" aria-labelledby="job-title">
       <ScreenHeading id="job-title" visuallyHidden>{editor.job ? `Job ${editor.job.number}` : 'New job'}</ScreenHeading>
-      <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={() => setSimilar(true)}
+      <Toolbar editor={editor} problems={errors.length} onSave={() => void save()} onSimilar={openSimilar}
         onCopy={() => { if (editor.job) void copier.copy(editor.job.id); }} onArchive={(on) => void archive(on)} />
       {copier.error ?? actionError ? <p className="error-text" role="alert">{(copier.error ?? actionError)?.message}</p> : null}
       <ChangeKind editor={editor} />
@@ -128,8 +134,14 @@ function JobWorkspace({ jobId, settings }: { jobId: number | null; settings: Set
           {tab === 'history' ? <TabPanel idPrefix="job" id="history"><HistoryPane editor={editor} /></TabPanel> : null}
         </div>
       ) : null}
-      <SimilarJobsDialog open={similar} onClose={() => setSimilar(false)} spec={editor.evaluation.spec}
-        excludeJobId={editor.job?.id} quantity={editor.job?.orderQuantity ?? null} subject={editor.job ? `job ${editor.job.number} as edited` : 'this spring'} />
+      <SimilarJobsDialog open={similarFor !== null} onClose={() => setSimilarFor(null)} spec={editor.evaluation.spec}
+        excludeJobId={editor.job?.id} quantity={askedQuantity(editor)} subject={similarFor ?? ''} />
     </section>
   );
+}
+
+/** The order quantity as typed (what the similar list prices at), or the stored one while the typed one does not read. */
+function askedQuantity(editor: JobEditor): number | null {
+  const unreadable = editor.jobCheck.errors.some((e) => e.path === 'orderQuantity');
+  return unreadable ? editor.job?.orderQuantity ?? null : editor.jobCheck.fields.orderQuantity;
 }
