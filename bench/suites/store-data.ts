@@ -1,5 +1,4 @@
 import type { JobStatus } from '../../core/api/store';
-import { jobStatuses } from '../../core/api/store';
 import type { SqliteStore as Store } from '../../db';
 import { checkNewJob } from '../../db/jobs/input';
 import { writeNewJob } from '../../db/jobs/write';
@@ -80,11 +79,12 @@ export interface BenchJob {
   drawingNumber: string;
   drawingRevision: string;
   status: JobStatus;
+  dueDate: string | null;
   notes: string;
   spec: Record<string, unknown>;
 }
 
-export function benchJob(i: number, random: () => number): BenchJob {
+export function benchJob(i: number, random: () => number, dated: JobTimes): BenchJob {
   const note = Array.from({ length: 3 + Math.floor(random() * 6) }, () => words[Math.floor(random() * words.length)]).join(' ');
   const prefix = String.fromCharCode(65 + (i % 26)) + String.fromCharCode(65 + Math.floor(i / 26) % 26);
   return {
@@ -92,10 +92,79 @@ export function benchJob(i: number, random: () => number): BenchJob {
     partNumber: `${prefix}-${String(10000 + i)}`,
     drawingNumber: `D${String(i * 7 % 1000003).padStart(7, '0')}`,
     drawingRevision: 'ABCDE'[i % 5]!,
-    status: jobStatuses[Math.floor(random() * jobStatuses.length)]!,
+    status: dated.status,
+    dueDate: dated.dueDate,
     notes: note,
     spec: benchSpec(random),
   };
+}
+
+/** The moment the generated shop's history ends: date ranges in the bench ("this month", "last year") count back from it. */
+export const BENCH_NOW = Date.UTC(2026, 2, 20, 12);
+/** Twenty years of jobs, the newest year three times as busy as the first. */
+export const BENCH_YEARS = 20;
+const DAY = 86_400_000;
+const SPAN = BENCH_YEARS * 365.25 * DAY;
+const GROWTH = Math.log(3) / SPAN;
+
+/** When a job and what happened to it: stamps as the store keeps them (ISO), the due date as YYYY-MM-DD. */
+export interface JobTimes {
+  createdAt: string;
+  updatedAt: string;
+  dueDate: string | null;
+  status: JobStatus;
+  /** When the shop archived it, or null (still listed). */
+  archivedAt: string | null;
+}
+
+/** Job `i` of `count` is created at the i-th quantile of a history growing exponentially: ids and numbers follow time. */
+function createdTime(i: number, count: number, random: () => number): number {
+  const u = (i + random()) / count;
+  return BENCH_NOW - SPAN + Math.log(1 + u * Math.expm1(GROWTH * SPAN)) / GROWTH;
+}
+
+/** A status as a shop's book shows it by age: recent jobs open, the rest done or lost (a few quotes never closed out). */
+function statusByAge(ageDays: number, r: number): JobStatus {
+  const table: [number, JobStatus][] = ageDays < 14
+    ? [[0.3, 'draft'], [0.75, 'quoted'], [0.9, 'ordered'], [0.95, 'in-production'], [1, 'lost']]
+    : ageDays < 90
+      ? [[0.03, 'draft'], [0.25, 'quoted'], [0.35, 'ordered'], [0.5, 'in-production'], [0.85, 'done'], [1, 'lost']]
+      : [[0.02, 'quoted'], [0.64, 'done'], [1, 'lost']];
+  return table.find(([upTo]) => r < upTo)![1];
+}
+
+/**
+ * The times of job `i` of `count`: created over BENCH_YEARS up to BENCH_NOW; last saved days after creation
+ * (one in twenty touched again at any later time, a repeat or a correction); due two to eight weeks after
+ * creation (none on one in seven); closed jobs older than three years archived by half, within a year.
+ */
+export function jobTimes(i: number, count: number, random: () => number): JobTimes {
+  const created = createdTime(i, count, random);
+  const age = BENCH_NOW - created;
+  const status = statusByAge(age / DAY, random());
+  const touched = random() < 0.05 ? created + random() * age : created + Math.min(age, -Math.log(1 - random()) * 10 * DAY);
+  const due = random() < 1 / 7 ? null : new Date(created + (14 + random() * 42) * DAY).toISOString().slice(0, 10);
+  const closed = status === 'done' || status === 'lost';
+  const archive = closed && age > 3 * 365.25 * DAY && random() < 0.5 ? created + (3 + random()) * 365.25 * DAY : null;
+  return {
+    createdAt: new Date(created).toISOString(),
+    updatedAt: new Date(Math.min(touched, BENCH_NOW)).toISOString(),
+    dueDate: due,
+    status,
+    archivedAt: archive === null ? null : new Date(Math.min(archive, BENCH_NOW)).toISOString(),
+  };
+}
+
+/** Numbers as the shop's default sequence gives them, by the year of creation: J-16-00412. */
+export class YearNumbers {
+  private year = '';
+  private n = 0;
+
+  next(createdAt: string): string {
+    const year = createdAt.slice(2, 4);
+    if (year !== this.year) [this.year, this.n] = [year, 0];
+    return `J-${year}-${String(++this.n).padStart(5, '0')}`;
+  }
 }
 
 /** Words a shop would type: part-number prefixes, customer names, note words. */
@@ -126,15 +195,24 @@ export function oneWordQueries(random: () => number, count: number): string[] {
  */
 export const GENERATION_BATCH = 20_000;
 
-/** Writes `count` generated jobs, GENERATION_BATCH a transaction, through the store's own checks and write path. */
+/**
+ * Writes `count` generated jobs, GENERATION_BATCH a transaction, through the store's own checks and write path,
+ * with the times of jobTimes (their own random stream, seeded from `seed`); the archived ones are archived
+ * in the same transaction.
+ */
 export function fillWithJobs(store: Store, count: number, seed: number, onBatch?: (written: number) => void): void {
   const random = lcg(seed);
+  const timeline = lcg(seed + 1);
+  const numbers = new YearNumbers();
+  const archive = store.sql('UPDATE jobs SET archived_at = ? WHERE id = ?');
   for (let from = 0; from < count; from += GENERATION_BATCH) {
     store.db.transaction(() => {
       for (let i = from; i < Math.min(count, from + GENERATION_BATCH); i++) {
-        const checked = checkNewJob(benchJob(i, random));
+        const times = jobTimes(i, count, timeline);
+        const checked = checkNewJob(benchJob(i, random, times));
         if (!checked.ok) throw new Error(`bench job ${i}: ${JSON.stringify(checked.errors)}`);
-        writeNewJob(store, checked.value);
+        const id = writeNewJob(store, checked.value, { number: numbers.next(times.createdAt), createdAt: times.createdAt, updatedAt: times.updatedAt });
+        if (times.archivedAt !== null) archive.run(times.archivedAt, id);
       }
     }).immediate();
     onBatch?.(Math.min(count, from + GENERATION_BATCH));

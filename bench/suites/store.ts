@@ -117,10 +117,48 @@ function listCases(store: Store): Array<[string, ListJobsInput]> {
   return cases;
 }
 
+/**
+ * Date ranges a user picks on a store of twenty years (BENCH_NOW is 2026-03-20): this month, last year, one
+ * month ten years back, a decade.
+ */
+const DATE_RANGES = [
+  ['this month', '2026-03-01', '2026-03-31'], ['last year', '2025-01-01', '2025-12-31'],
+  ['a month ten years ago', '2016-03-01', '2016-03-31'], ['a decade', '2010-01-01', '2019-12-31'],
+] as const;
+
+/**
+ * Each date range on each date field, with each sort in both directions; on the created date also with a
+ * status, the rarest kind, and on the archived list.
+ */
+function dateCases(): Array<[string, ListJobsInput]> {
+  const cases: Array<[string, ListJobsInput]> = [];
+  const filters: Array<[string, 'created' | 'updated' | 'due', ListJobsInput]> = [
+    ['created', 'created', {}], ['due', 'due', {}], ['updated', 'updated', {}],
+    ['status + created', 'created', { status: 'quoted' }], ['rarest kind + created', 'created', { kind: 'torsion' }],
+    ['archived + created', 'created', { archived: true }],
+  ];
+  for (const [name, field, filter] of filters) {
+    for (const [range, from, to] of DATE_RANGES) {
+      for (const sort of ['updated', 'number', 'customer'] as const) {
+        for (const direction of ['asc', 'desc'] as const) {
+          cases.push([`${name} ${range}, by ${sort} ${direction}`, { ...filter, dates: { field, from, to }, sort, direction }]);
+        }
+      }
+    }
+  }
+  return cases;
+}
+
+/** COILWRIGHT_BENCH_LIST=<words> keeps the list cases whose name holds them (e.g. "created a decade"). */
+function chosenCases(cases: Array<[string, ListJobsInput]>): Array<[string, ListJobsInput]> {
+  const only = process.env.COILWRIGHT_BENCH_LIST;
+  return only ? cases.filter(([name]) => name.includes(only)) : cases;
+}
+
 function listRows(store: Store, row: Row): BenchRow[] {
   let worst = { name: '', p95: 0 };
   const rows: BenchRow[] = [];
-  for (const [name, input] of listCases(store)) {
+  for (const [name, input] of chosenCases([...listCases(store), ...dateCases()])) {
     // The first page, then ten pages on by the keys each page hands back, as the screen pages.
     const t = latencies(() => {
       let after: string | undefined;
@@ -233,12 +271,15 @@ export function storeSuiteOf(name: string, jobs: number, onlyWhenAsked = false):
       const dir = mkdtempSync(join(tmpdir(), 'coilwright-bench-'));
       try {
         const { file, rows } = generatedStore(dir, jobs, row);
+        // COILWRIGHT_BENCH_ONLY=list measures the job list alone (with COILWRIGHT_BENCH_LIST, some of its cases).
+        const listOnly = process.env.COILWRIGHT_BENCH_ONLY === 'list';
         // Measured as the app meets it: a store opened afresh, not the connection that just wrote it.
-        rows.push(...checkRows(file, jobs, row), ...openRows(file, row), ...await appOpenRows(file, row));
+        if (!listOnly) rows.push(...checkRows(file, jobs, row), ...openRows(file, row), ...await appOpenRows(file, row));
         const store = openStore(file);
-        rows.push(...listRows(store, row), ...textRows(store, row), ...similarRows(store, row));
+        rows.push(...listRows(store, row));
+        if (!listOnly) rows.push(...textRows(store, row), ...similarRows(store, row));
         store.close();
-        rows.push(...await exchangeRows(file, dir, jobs, row));
+        if (!listOnly) rows.push(...await exchangeRows(file, dir, jobs, row));
         return rows;
       } finally {
         rmSync(dir, { recursive: true, force: true });
