@@ -18,6 +18,7 @@ import { updateToVersion0015 } from './0015-who-made-it';
 import { updateToVersion0016 } from './0016-search-at-scale';
 import { updateToVersion0017 } from './0017-working-copy-desk';
 import { updateToVersion0018 } from './0018-text-prefixes';
+import { updateToVersion0019 } from './0019-dated-list-indexes';
 
 export interface Migration {
   version: number;
@@ -45,6 +46,7 @@ export const migrations: readonly Migration[] = [
   { version: 16, name: 'search at scale', update: updateToVersion0016 },
   { version: 17, name: 'working copy desk', update: updateToVersion0017 },
   { version: 18, name: 'text prefixes', update: updateToVersion0018 },
+  { version: 19, name: 'dated list indexes', update: updateToVersion0019 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

@@ -17,9 +17,12 @@ type Filters = Pick<ListJobsQuery, 'status' | 'customerId' | 'kind' | 'material'
 
 const dateColumn = { created: 'created_at', updated: 'updated_at', due: 'due_date' } as const;
 
-/** Date bounds on ISO stamps: "to" includes the whole day. Due dates are plain YYYY-MM-DD. */
-function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, table: string): void {
-  const column = `${table}${dateColumn[dates.field]}`;
+/**
+ * Date bounds on ISO stamps: "to" includes the whole day. Due dates are plain YYYY-MM-DD. `indexed: false`
+ * writes the column as `+column`, which keeps SQLite from reading a date index for it (the sort's index is read).
+ */
+function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, table: string, indexed = true): void {
+  const column = `${indexed ? '' : '+'}${table}${dateColumn[dates.field]}`;
   if (dates.from) {
     where.clauses.push(`${column} >= ?`);
     where.params.push(dates.from);
@@ -31,7 +34,7 @@ function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, t
 }
 
 /** The filters as SQL on the jobs table; `table` is its alias with the dot ("j.") or "" for job_counts. */
-export function jobFilter(q: Filters, table = 'j.'): Where {
+export function jobFilter(q: Filters, table = 'j.', datesIndexed = true): Where {
   const where: Where = { clauses: [], params: [] };
   if (q.status !== undefined) {
     const statuses = Array.isArray(q.status) ? q.status : [q.status];
@@ -50,7 +53,7 @@ export function jobFilter(q: Filters, table = 'j.'): Where {
     where.clauses.push(`${table}material = ?`);
     where.params.push(q.material);
   }
-  if (q.dates) dateClauses(where, q.dates, table);
+  if (q.dates) dateClauses(where, q.dates, table, datesIndexed);
   return where;
 }
 
@@ -105,9 +108,30 @@ export interface ListSql {
   columns: readonly SortColumn[];
 }
 
-/** The page query: filters, then (for a following page) the keyset bound, in the sort's index order. */
-export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, dialect: Store['dialect'] = 'sqlite'): ListSql {
-  const where = jobFilter(q);
+/**
+ * The index of each date field that holds, beside the date, every column the list filters and sorts by
+ * (migration 0019): a range's jobs are filtered and ordered from it alone, and only the page's rows are read.
+ */
+export const DATED_INDEX = { created: 'jobs_dated_created', updated: 'jobs_dated_updated', due: 'jobs_dated_due' } as const;
+
+/**
+ * How a page is read. `sorted`: the sort's own index in order, each job's date checked on its row, stopping at
+ * the page's end: quick when the range's jobs come early in that order. `dated`: every job of the date range
+ * from the range's index alone, the page's jobs picked from them in the sort's order: quick when the range is
+ * not huge. Both give the same rows in the same order.
+ */
+export type ListRoute = 'sorted' | 'dated';
+
+interface ListParts {
+  where: Where;
+  order: string;
+  columns: readonly SortColumn[];
+  pinned: boolean;
+}
+
+/** Filters, the keyset bound of a following page and the order, as both routes use them. */
+function listParts(q: ListJobsQuery, after: unknown[] | null, dialect: Store['dialect'], datesIndexed: boolean): ListParts {
+  const where = jobFilter(q, 'j.', datesIndexed);
   where.clauses.push(q.archived ? ARCHIVED_CLAUSE.archived : ARCHIVED_CLAUSE.listed);
   const columns = sortColumns(q);
   const desc = descending(q);
@@ -116,17 +140,66 @@ export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, di
     where.clauses.push(columns.length === 1 ? `${tuple} ${desc ? '<' : '>'} ?` : `(${tuple}) ${desc ? '<' : '>'} (${columns.map(() => '?').join(', ')})`);
     where.params.push(...after);
   }
-  const clause = where.clauses.length > 0 ? `WHERE ${where.clauses.join(' AND ')}` : '';
   const order = columns.map((c) => `j.${c} ${desc ? 'DESC' : 'ASC'}`).join(', ');
   // Without statistics SQLite's planner would rather sort the archived jobs a status index finds; the partial
   // index is already in the order asked for. (PostgreSQL has no index hints; its statistics choose.)
-  const pinned = columns === SORT_KEYS.archived && dialect === 'sqlite';
+  return { where, order, columns, pinned: columns === SORT_KEYS.archived && dialect === 'sqlite' };
+}
+
+const whereOf = (where: Where): string => (where.clauses.length > 0 ? `WHERE ${where.clauses.join(' AND ')}` : '');
+
+/** Whether the date range is on the column the sort's index starts with: that index then reads the range in order. */
+function rangeInSortOrder(q: ListJobsQuery): boolean {
+  return q.dates !== undefined && sortColumns(q)[0] === dateColumn[q.dates.field];
+}
+
+/** A date range a customer's own index (a few hundred jobs) or the sort's index serves better than the range's. */
+function datedRouteApplies(q: ListJobsQuery): boolean {
+  return q.dates !== undefined && q.customerId === undefined && !rangeInSortOrder(q);
+}
+
+/** The page query: filters, then (for a following page) the keyset bound, in the sort's index order or the range's. */
+export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, dialect: Store['dialect'] = 'sqlite', route: ListRoute = 'sorted'): ListSql {
+  const dated = route === 'dated' && datedRouteApplies(q);
+  // On the sorted route a date range is checked on each row, never read through a date index (SQLite only: PostgreSQL has no `+column`).
+  const { where, order, columns, pinned } = listParts(q, after, dialect, dated || dialect !== 'sqlite' || !datedRouteApplies(q));
+  const select = `SELECT ${SUMMARY_COLUMNS}, j.customer_key`;
+  if (dated) {
+    const index = dialect === 'sqlite' ? `jobs j INDEXED BY ${DATED_INDEX[q.dates!.field]}` : 'jobs j';
+    const ids = `SELECT j.id FROM ${index} ${whereOf(where)} ORDER BY ${order} LIMIT ? OFFSET ?`;
+    return { sql: `${select} FROM ${JOB_FROM} WHERE j.id IN (${ids}) ORDER BY ${order}`, params: where.params, columns };
+  }
   const from = pinned ? JOB_FROM.replace('jobs j', 'jobs j INDEXED BY jobs_archived') : JOB_FROM;
-  return {
-    sql: `SELECT ${SUMMARY_COLUMNS}, j.customer_key FROM ${from} ${clause} ORDER BY ${order} LIMIT ? OFFSET ?`,
-    params: where.params,
-    columns,
-  };
+  return { sql: `${select} FROM ${from} ${whereOf(where)} ORDER BY ${order} LIMIT ? OFFSET ?`, params: where.params, columns };
+}
+
+/** Rows of the sort's index a page may read on the sorted route before the dated route is the shorter way. */
+export const PROBE_ROWS = 2_000;
+
+/**
+ * How many of the next PROBE_ROWS jobs of the sorted route (the same index, filters and keyset bound) fall in
+ * the date range: when the page is among them, the sorted route reads no more than PROBE_ROWS rows.
+ */
+export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Store['dialect'] = 'sqlite', rows = PROBE_ROWS): { sql: string; params: unknown[] } {
+  const { where, order, pinned } = listParts({ ...q, dates: undefined }, after, dialect, true);
+  const range = jobFilter({ dates: q.dates }, '');
+  const from = pinned ? 'jobs j INDEXED BY jobs_archived' : 'jobs j';
+  const column = dateColumn[q.dates!.field];
+  const next = `SELECT j.${column} FROM ${from} ${whereOf(where)} ORDER BY ${order} LIMIT ${rows}`;
+  return { sql: `SELECT count(*) AS n FROM (${next}) AS probe ${whereOf(range)}`, params: [...where.params, ...range.params] };
+}
+
+/**
+ * The route of a page (see ListRoute). The dated route when the range held no more than the count's cap (the
+ * count has just read all of it through the same index), or when the sorted route would pass more than
+ * PROBE_ROWS jobs before the page is full; else the sorted route.
+ */
+export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null, counted: { totalAtLeast: boolean }, probeRows = PROBE_ROWS): ListRoute {
+  if (!datedRouteApplies(q)) return 'sorted';
+  if (!counted.totalAtLeast) return 'dated';
+  const probe = probeSql(q, after, store.dialect, probeRows);
+  const { n } = store.sql(probe.sql).get(...probe.params) as { n: number };
+  return n > q.offset + q.limit ? 'sorted' : 'dated';
 }
 
 /**
@@ -145,8 +218,8 @@ export interface CountSql {
 
 /**
  * How many jobs match. Status, kind and material are summed from job_counts (a few hundred rows kept by
- * triggers); a customer counts through its own index; a date range counts through its index up to
- * COUNT_CAP + 1 jobs. Archived jobs (few) come through jobs_archived and are taken off the listed count.
+ * triggers); a customer counts through its own index, less its archived jobs; a date range counts the listed
+ * (or archived) jobs through the range's own index, which holds every other filter, up to COUNT_CAP + 1 jobs.
  */
 export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialect'] = 'sqlite'): CountSql {
   const archived = q.archived === true;
@@ -157,15 +230,17 @@ export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialec
   }
   const where = jobFilter(q);
   const all = where.clauses.join(' AND ');
-  // Without statistics SQLite may count the archived jobs of a date range by reading the whole range's rows;
-  // a customer's own index is the shorter way to its archived jobs.
-  const pinned = dialect === 'sqlite' && q.dates !== undefined && q.customerId === undefined;
-  const archivedFrom = pinned ? 'jobs j INDEXED BY jobs_archived' : 'jobs j';
-  const ofArchived = `SELECT count(*) FROM ${archivedFrom} WHERE ${all} AND ${ARCHIVED_CLAUSE.archived}`;
+  const shelf = archived ? ARCHIVED_CLAUSE.archived : ARCHIVED_CLAUSE.listed;
+  if (q.customerId === undefined) {
+    // A date range: the listed (or archived) jobs counted from the range's own index, which holds the filters.
+    const from = dialect === 'sqlite' ? `jobs j INDEXED BY ${DATED_INDEX[q.dates!.field]}` : 'jobs j';
+    return { sql: `SELECT count(*) AS n FROM (SELECT 1 FROM ${from} WHERE ${all} AND ${shelf} LIMIT ${cap + 1}) AS counted`, params: where.params, cap };
+  }
+  const ofArchived = `SELECT count(*) FROM jobs j WHERE ${all} AND ${ARCHIVED_CLAUSE.archived}`;
   if (archived) return { sql: `${ofArchived.replace('count(*)', 'count(*) AS n')}`, params: where.params };
   const capped = q.dates !== undefined;
-  const matching = capped ? `SELECT count(*) FROM (SELECT 1 FROM jobs j WHERE ${all} LIMIT ${cap + 1})` : `SELECT count(*) FROM jobs j WHERE ${all}`;
-  // All matching jobs through the filter's covering index, less the archived ones through jobs_archived.
+  const matching = capped ? `SELECT count(*) FROM (SELECT 1 FROM jobs j WHERE ${all} LIMIT ${cap + 1}) AS counted` : `SELECT count(*) FROM jobs j WHERE ${all}`;
+  // All the customer's matching jobs through its index, less the archived ones.
   return { sql: `SELECT (${matching}) AS n, (${ofArchived}) AS archived`, params: [...where.params, ...where.params], ...(capped ? { cap } : {}) };
 }
 
@@ -175,7 +250,8 @@ export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialec
  */
 export function countedTotal(count: CountSql, row: { n: number; archived?: number }): { total: number; totalAtLeast: boolean } {
   const atLeast = count.cap !== undefined && row.n > count.cap;
-  return { total: row.n - (row.archived ?? 0), totalAtLeast: atLeast };
+  const total = row.n - (row.archived ?? 0);
+  return { total: atLeast ? Math.min(total, count.cap!) : total, totalAtLeast: atLeast };
 }
 
 /** A page of the job list with the total that matches the filters and the key to the next page. */
@@ -187,12 +263,12 @@ export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
   if (q.after !== undefined && after === null) {
     return invalid([fieldError('bad-cursor', 'after', 'this page key is not from this list and sort: start again from the first page')]);
   }
-  const { sql, params, columns } = listJobsSql(q, after, store.dialect);
+  const count = countJobsSql(q, COUNT_CAP, store.dialect);
+  const totals = countedTotal(count, store.sql(count.sql).get(...count.params) as { n: number; archived?: number });
+  const { sql, params, columns } = listJobsSql(q, after, store.dialect, routeOf(store, q, after, totals));
   const rows = store.sql(sql).all(...params, q.limit + 1, q.offset) as (JobRow & { customer_key: string })[];
   const more = rows.length > q.limit;
   const page = more ? rows.slice(0, q.limit) : rows;
-  const count = countJobsSql(q, COUNT_CAP, store.dialect);
-  const totals = countedTotal(count, store.sql(count.sql).get(...count.params) as { n: number; archived?: number });
   const next = more ? cursorOf(page[page.length - 1] as unknown as Record<string, unknown>, columns) : null;
   return success({ jobs: page.map((r) => toSummary(r)), ...totals, limit: q.limit, offset: q.offset, next });
 }

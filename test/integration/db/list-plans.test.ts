@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { archiveJob, createJob, listJobs, setJobStatus } from '../../../db';
-import { COUNT_CAP, countJobsSql, countedTotal, listJobsSql } from '../../../db/search/list';
+import type { ListRoute } from '../../../db/search/list';
+import { COUNT_CAP, DATED_INDEX, countJobsSql, countedTotal, cursorOf, listJobsSql, probeSql, routeOf } from '../../../db/search/list';
 import { boxSql } from '../../../db/search/similar';
 import { FIND_SQL } from '../../../db/search/text';
+import type { ListJobsInput } from '../../../core/api/store';
 import { listJobsSchema } from '../../../core/api/store';
 import type { SqliteStore as Store } from '../../../db';
 import { job, steppingClock, tempStore, value } from './helpers';
@@ -199,14 +201,22 @@ describe('query plans', () => {
     const exact = value(listJobs(store, range));
     expect([exact.total, exact.totalAtLeast]).toEqual([8, false]);
     const count = countJobsSql(range, 3);
-    const row = store.db.prepare(count.sql).get(...count.params) as { n: number; archived: number };
-    // Stopped at 4 matches, one of the 9 archived: at least 3 listed jobs.
-    expect(row).toEqual({ n: 4, archived: 1 });
+    const row = store.db.prepare(count.sql).get(...count.params) as { n: number };
+    // Stopped at 4 listed matches (8 of the 9 are listed): at least 3 listed jobs, said as the cap.
+    expect(row).toEqual({ n: 4 });
     expect(countedTotal(count, row)).toEqual({ total: 3, totalAtLeast: true });
     expect(COUNT_CAP).toBeGreaterThanOrEqual(1000);
-    const detail = plan(store, countJobsSql(range).sql, countJobsSql(range).params);
-    expect(detail).toMatch(/SEARCH j USING COVERING INDEX jobs_by_updated \(updated_at>\?\)/);
-    expect(detail).toMatch(/SEARCH j USING INDEX jobs_archived/);
+    const archivedCount = countJobsSql({ ...range, archived: true }, 3);
+    expect(store.db.prepare(archivedCount.sql).get(...archivedCount.params)).toEqual({ n: 1 });
+    for (const [field, column] of [['updated', 'updated_at'], ['created', 'created_at'], ['due', 'due_date']] as const) {
+      for (const q of [{}, { status: 'quoted' as const, kind: 'compression' }, { archived: true }]) {
+        const counted = countJobsSql({ ...q, dates: { field, from: '2026-01-01', to: '2026-12-31' } });
+        const detail = plan(store, counted.sql, counted.params);
+        // The range's own index holds every filter: the count never reads a job's row.
+        expect(detail).toMatch(new RegExp(`SEARCH j USING COVERING INDEX ${DATED_INDEX[field]} \\(${column}>\\? AND ${column}<\\?\\)`));
+        expect(detail).not.toMatch(/SCAN j\b|jobs_archived|jobs_by_/);
+      }
+    }
     expect(value(listJobs(store, { status: 'quoted' })).totalAtLeast).toBe(false);
   });
 
@@ -226,5 +236,144 @@ describe('query plans', () => {
     expect(detail).toMatch(/SCAN job_text VIRTUAL TABLE INDEX 192:M/);
     expect(detail).toMatch(/USE TEMP B-TREE FOR ORDER BY/);
     expect(detail).toMatch(/SEARCH j USING INTEGER PRIMARY KEY/);
+  });
+});
+
+/**
+ * Jobs created over three years, two a month; last saved days later (out of created order, several saved at
+ * the same moment, so ties fall to the id); due three weeks on (none on one in five); one in four quoted, the
+ * rest done; one in six archived.
+ */
+function datedStore(): Store {
+  const store = tempStore(steppingClock(Date.parse('2026-03-20T00:00:00Z')));
+  const names = ['Cobb Valves', 'Abbey Locks', 'Brent Pumps'];
+  const day = 86_400_000;
+  for (let i = 0; i < 72; i++) {
+    const created = Date.UTC(2023, 3 + Math.floor(i / 2), 1 + (i % 2) * 14, 9);
+    const updated = i % 8 === 0 ? '2025-06-01T00:00:00.000Z' : new Date(created + ((i * 7) % 30) * day).toISOString();
+    const dueDate = i % 5 === 0 ? null : new Date(created + 21 * day).toISOString().slice(0, 10);
+    const fields = { customer: { name: names[i % 3] }, partNumber: `P-${i}`, status: i % 4 === 1 ? 'quoted' : 'done', dueDate };
+    const made = value(createJob(store, job(fields, { freeLength: 40 + (i % 9) }), { createdAt: new Date(created).toISOString(), updatedAt: updated }));
+    if (i % 6 === 0) value(archiveJob(store, { id: made.id, archived: true }));
+  }
+  return store;
+}
+
+const FIELDS = [['created', 'created_at'], ['due', 'due_date'], ['updated', 'updated_at']] as const;
+const RANGES = [{ from: '2023-06-01', to: '2024-05-31' }, { from: '2025-01-01', to: '2025-01-31' }, { from: '2024-11-01' }];
+const DATED_FILTERS: ListJobsInput[] = [{}, { status: 'quoted' }, { kind: 'compression', status: ['done', 'quoted'] }, { archived: true }];
+
+/** Every page of a query read by one route, four jobs a page, following each page's key. */
+function walk(store: Store, input: ListJobsInput, route: ListRoute): string[] {
+  const numbers: string[] = [];
+  let after: unknown[] | null = null;
+  for (;;) {
+    const { sql, params, columns } = listJobsSql(listJobsSchema.parse({ ...input, limit: 4 }), after, 'sqlite', route);
+    const rows = store.db.prepare(sql).all(...params, 5, 0) as Record<string, unknown>[];
+    numbers.push(...rows.slice(0, 4).map((r) => r.number as string));
+    if (rows.length <= 4) return numbers;
+    after = JSON.parse(Buffer.from(cursorOf(rows[3]!, columns), 'base64url').toString('utf8')) as unknown[];
+  }
+}
+
+describe('date ranges', () => {
+  it('gives the same pages, in the same order, by either route and through listJobs', () => {
+    const store = datedStore();
+    let found = 0;
+    for (const [field] of FIELDS) {
+      for (const range of RANGES) {
+        for (const filter of DATED_FILTERS) {
+          for (const sort of ['updated', 'number', 'customer'] as const) {
+            for (const direction of ['asc', 'desc'] as const) {
+              const input: ListJobsInput = { ...filter, dates: { field, ...range }, sort, direction };
+              const whole = value(listJobs(store, { ...input, limit: 500 }));
+              const expected = whole.jobs.map((j) => j.number);
+              const label = JSON.stringify(input);
+              if (expected.length > 0) found += 1;
+              expect(walk(store, input, 'sorted'), label).toEqual(expected);
+              expect(walk(store, input, 'dated'), label).toEqual(expected);
+              const walked: string[] = [];
+              let after: string | undefined;
+              do {
+                const page = value(listJobs(store, { ...input, limit: 3, ...(after ? { after } : {}) }));
+                expect(page.total, label).toBe(whole.total);
+                walked.push(...page.jobs.map((j) => j.number));
+                after = page.next ?? undefined;
+              } while (after !== undefined);
+              expect(walked, label).toEqual(expected);
+            }
+          }
+        }
+      }
+    }
+    // Quoted jobs in January 2025 are none; nearly every other case lists some.
+    expect(found).toBeGreaterThan(180);
+  });
+
+  it('reads the dated route from the range\'s own index and only the page\'s rows from the table, pages included', () => {
+    const store = datedStore();
+    for (const [field, column] of FIELDS) {
+      for (const filter of DATED_FILTERS) {
+        for (const sort of ['updated', 'number', 'customer'] as const) {
+          for (const direction of ['asc', 'desc'] as const) {
+            const q = listJobsSchema.parse({ ...filter, dates: { field, from: '2024-01-01', to: '2024-12-31' }, sort, direction });
+            const first = listJobsSql(q, null, 'sqlite', 'dated');
+            for (const page of [first, listJobsSql(q, first.columns.map(() => 'x'), 'sqlite', 'dated')]) {
+              const detail = plan(store, page.sql, [...page.params, 50, 0]);
+              if (field === 'updated' && sort === 'updated' && filter.archived !== true) {
+                // The range is on the sort's own key: its index reads the range in order, whatever the route.
+                expect(detail).toMatch(/SEARCH j USING INDEX jobs_by_(updated|status) \((status=\? AND )?updated_at>\? AND updated_at<\?\)|jobs_by_kind|jobs_by_status/);
+                expect(detail).not.toMatch(/TEMP B-TREE|jobs_dated/);
+                continue;
+              }
+              expect(detail, JSON.stringify(q)).toMatch(new RegExp(`SEARCH j USING COVERING INDEX ${DATED_INDEX[field]} \\(${column}>\\? AND ${column}<\\?\\)`));
+              expect(detail).toMatch(/SEARCH j USING INTEGER PRIMARY KEY \(rowid=\?\)/);
+              expect(detail).not.toMatch(/SCAN j\b/);
+            }
+          }
+        }
+      }
+    }
+  });
+
+  it('reads the sorted route through the sort\'s index as without a date range, the date checked on the row', () => {
+    const store = datedStore();
+    const sortIndex = { updated: /jobs_by_updated|jobs_by_status \(status=\?|jobs_by_kind \(kind=\?/, number: /sqlite_autoindex_jobs_1|jobs_by_status_number|jobs_by_kind_number/, customer: /jobs_by_customer_name|jobs_by_status_customer|jobs_by_kind_customer/ };
+    for (const [field] of FIELDS) {
+      for (const filter of [{}, { status: 'quoted' }, { kind: 'compression' }] as ListJobsInput[]) {
+        for (const sort of ['updated', 'number', 'customer'] as const) {
+          for (const direction of ['asc', 'desc'] as const) {
+            const q = listJobsSchema.parse({ ...filter, dates: { field, from: '2024-01-01', to: '2024-12-31' }, sort, direction });
+            const first = listJobsSql(q, null, 'sqlite', 'sorted');
+            for (const page of [first, listJobsSql(q, first.columns.map(() => 'x'), 'sqlite', 'sorted')]) {
+              const detail = plan(store, page.sql, [...page.params, 50, 0]);
+              expect(detail, JSON.stringify(q)).toMatch(sortIndex[sort]);
+              expect(detail).not.toMatch(/TEMP B-TREE|jobs_dated/);
+            }
+            const probe = probeSql(q, null);
+            const probed = plan(store, probe.sql, probe.params);
+            expect(probed, JSON.stringify(q)).toMatch(sortIndex[sort]);
+            expect(probed).not.toMatch(/TEMP B-TREE|jobs_dated/);
+          }
+        }
+      }
+    }
+  });
+
+  it('takes the dated route for a range the count read whole, or one far along the sort\'s order', () => {
+    const store = datedStore();
+    const q = (input: ListJobsInput) => listJobsSchema.parse({ ...input, limit: 5 });
+    const firstYear = { field: 'created' as const, from: '2023-01-01', to: '2023-12-31' };
+    // Ten rows of the sort's index probed: the route a store of thousands takes with PROBE_ROWS.
+    const route = (input: ListJobsInput, counted: boolean): ListRoute => routeOf(store, q(input), null, { totalAtLeast: counted }, 10);
+    expect(route({ dates: firstYear, sort: 'number' }, false)).toBe('dated');
+    // Past the cap, the sorted route is kept when its next rows hold the page: the oldest numbers first.
+    expect(route({ dates: firstYear, sort: 'number', direction: 'asc' }, true)).toBe('sorted');
+    expect(route({ dates: firstYear, sort: 'number', direction: 'desc' }, true)).toBe('dated');
+    expect(route({ dates: firstYear, sort: 'updated', direction: 'desc' }, true)).toBe('dated');
+    expect(route({ dates: { field: 'created', from: '2023-01-01' }, sort: 'customer' }, true)).toBe('sorted');
+    // A customer's own index and a range on the sort's key need no date index.
+    expect(route({ dates: firstYear, customerId: 1 }, false)).toBe('sorted');
+    expect(route({ dates: { field: 'updated', from: '2024-01-01' }, sort: 'updated' }, false)).toBe('sorted');
   });
 });
