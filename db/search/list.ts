@@ -19,10 +19,11 @@ const dateColumn = { created: 'created_at', updated: 'updated_at', due: 'due_dat
 
 /**
  * Date bounds on ISO stamps: "to" includes the whole day. Due dates are plain YYYY-MM-DD. `indexed: false`
- * writes the column as `+column`, which keeps SQLite from reading a date index for it (the sort's index is read).
+ * writes the column as `substr(column, 1)` (the same value, NULL kept): SQLite then neither reads a date index
+ * for the range nor counts the query among those its partial dated indexes serve, and reads the sort's index.
  */
 function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, table: string, indexed = true): void {
-  const column = `${indexed ? '' : '+'}${table}${dateColumn[dates.field]}`;
+  const column = indexed ? `${table}${dateColumn[dates.field]}` : `substr(${table}${dateColumn[dates.field]}, 1)`;
   if (dates.from) {
     where.clauses.push(`${column} >= ?`);
     where.params.push(dates.from);
@@ -153,9 +154,14 @@ function rangeInSortOrder(q: ListJobsQuery): boolean {
   return q.dates !== undefined && sortColumns(q)[0] === dateColumn[q.dates.field];
 }
 
+/** A date filter with at least one bound. */
+function ranged(q: Filters): q is Filters & { dates: NonNullable<Filters['dates']> } {
+  return q.dates !== undefined && (q.dates.from !== undefined || q.dates.to !== undefined);
+}
+
 /** A date range a customer's own index (a few hundred jobs) or the sort's index serves better than the range's. */
 function datedRouteApplies(q: ListJobsQuery): boolean {
-  return q.dates !== undefined && q.customerId === undefined && !rangeInSortOrder(q);
+  return ranged(q) && q.customerId === undefined && !rangeInSortOrder(q);
 }
 
 /** The page query: filters, then (for a following page) the keyset bound, in the sort's index order or the range's. */
@@ -174,7 +180,7 @@ export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, di
 }
 
 /** Rows of the sort's index a page may read on the sorted route before the dated route is the shorter way. */
-export const PROBE_ROWS = 2_000;
+export const PROBE_ROWS = 500;
 
 /**
  * How many of the next PROBE_ROWS jobs of the sorted route (the same index, filters and keyset bound) fall in
@@ -190,9 +196,9 @@ export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Sto
 }
 
 /**
- * The route of a page (see ListRoute). The dated route when the range held no more than the count's cap (the
- * count has just read all of it through the same index), or when the sorted route would pass more than
- * PROBE_ROWS jobs before the page is full; else the sorted route.
+ * The route of a page (see ListRoute). The dated route when the count read the whole range (it holds no more
+ * than RANGE_READ jobs), or when the sorted route would pass more than PROBE_ROWS jobs before the page is full;
+ * else the sorted route.
  */
 export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null, counted: { totalAtLeast: boolean }, probeRows = PROBE_ROWS): ListRoute {
   if (!datedRouteApplies(q)) return 'sorted';
@@ -203,42 +209,54 @@ export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null,
 }
 
 /**
- * Past this many jobs a date range stops counting: a date filter has no count kept by triggers, and an exact
- * count reads every job in its range (0.4 s for a range of a million jobs). The list says "10 000+ jobs"
- * and pages on by its keys, which cost the same on any page.
+ * Past this many jobs a customer's date range stops counting: a date filter has no count kept by triggers. The
+ * list says "10000+ jobs" and pages on by its keys, which cost the same on any page.
  */
 export const COUNT_CAP = 10_000;
+
+/**
+ * Past this many jobs of a date range (whatever the other filters) the range's count stops reading its index
+ * and gives the matches found so far as a lower bound: the count's time stays bounded however rare the other
+ * filters are (a rare kind over a decade), and a range read whole is counted exactly.
+ */
+export const RANGE_READ = 20_000;
 
 export interface CountSql {
   sql: string;
   params: unknown[];
-  /** The count stops at this many + 1 matches (a date range), or never (undefined). */
+  /** The count stops at this many + 1 matches (a customer's date range), or never (undefined). */
   cap?: number;
+  /** The count stops after this many + 1 jobs of the date range (the `read` column says how many it read). */
+  rangeRead?: number;
 }
 
 /**
  * How many jobs match. Status, kind and material are summed from job_counts (a few hundred rows kept by
- * triggers); a customer counts through its own index, less its archived jobs; a date range counts the listed
- * (or archived) jobs through the range's own index, which holds every other filter, up to COUNT_CAP + 1 jobs.
+ * triggers); a customer counts through its own index (up to COUNT_CAP + 1 within a date range), less its
+ * archived jobs; a date range reads up to RANGE_READ + 1 of its jobs from its own index, which holds every
+ * other filter, and counts the listed (or archived) ones among them.
  */
-export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialect'] = 'sqlite'): CountSql {
+export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialect'] = 'sqlite', rangeRead = RANGE_READ): CountSql {
   const archived = q.archived === true;
-  if (q.customerId === undefined && q.dates === undefined) {
-    const where = jobFilter(q, '');
+  if (q.customerId === undefined && !ranged(q)) {
+    const where = jobFilter({ ...q, dates: undefined }, '');
     const clause = [`archived = ${archived ? 1 : 0}`, ...where.clauses].join(' AND ');
     return { sql: `SELECT coalesce(sum(n), 0) AS n FROM job_counts WHERE ${clause}`, params: where.params };
   }
-  const where = jobFilter(q);
-  const all = where.clauses.join(' AND ');
   const shelf = archived ? ARCHIVED_CLAUSE.archived : ARCHIVED_CLAUSE.listed;
   if (q.customerId === undefined) {
-    // A date range: the listed (or archived) jobs counted from the range's own index, which holds the filters.
+    const range = jobFilter({ dates: q.dates });
+    const others = jobFilter({ ...q, dates: undefined });
+    const match = [...others.clauses, shelf].join(' AND ');
     const from = dialect === 'sqlite' ? `jobs j INDEXED BY ${DATED_INDEX[q.dates!.field]}` : 'jobs j';
-    return { sql: `SELECT count(*) AS n FROM (SELECT 1 FROM ${from} WHERE ${all} AND ${shelf} LIMIT ${cap + 1}) AS counted`, params: where.params, cap };
+    const read = `SELECT CASE WHEN ${match} THEN 1 ELSE 0 END AS m FROM ${from} WHERE ${range.clauses.join(' AND ')} LIMIT ${rangeRead + 1}`;
+    return { sql: `SELECT coalesce(sum(m), 0) AS n, count(*) AS "read" FROM (${read}) AS counted`, params: [...others.params, ...range.params], rangeRead };
   }
+  const where = jobFilter(q);
+  const all = where.clauses.join(' AND ');
   const ofArchived = `SELECT count(*) FROM jobs j WHERE ${all} AND ${ARCHIVED_CLAUSE.archived}`;
   if (archived) return { sql: `${ofArchived.replace('count(*)', 'count(*) AS n')}`, params: where.params };
-  const capped = q.dates !== undefined;
+  const capped = ranged(q);
   const matching = capped ? `SELECT count(*) FROM (SELECT 1 FROM jobs j WHERE ${all} LIMIT ${cap + 1}) AS counted` : `SELECT count(*) FROM jobs j WHERE ${all}`;
   // All the customer's matching jobs through its index, less the archived ones.
   return { sql: `SELECT (${matching}) AS n, (${ofArchived}) AS archived`, params: [...where.params, ...where.params], ...(capped ? { cap } : {}) };
@@ -246,9 +264,10 @@ export function countJobsSql(q: Filters, cap = COUNT_CAP, dialect: Store['dialec
 
 /**
  * The count's answer as the page's total. When the count stopped at the cap, at least (cap + 1 − archived)
- * listed jobs match: a lower bound, flagged so.
+ * listed jobs match, said as at least the cap; when it stopped reading a range, at least the matches it found.
  */
-export function countedTotal(count: CountSql, row: { n: number; archived?: number }): { total: number; totalAtLeast: boolean } {
+export function countedTotal(count: CountSql, row: { n: number; archived?: number; read?: number }): { total: number; totalAtLeast: boolean } {
+  if (count.rangeRead !== undefined) return { total: row.n, totalAtLeast: (row.read ?? 0) > count.rangeRead };
   const atLeast = count.cap !== undefined && row.n > count.cap;
   const total = row.n - (row.archived ?? 0);
   return { total: atLeast ? Math.min(total, count.cap!) : total, totalAtLeast: atLeast };
@@ -264,7 +283,7 @@ export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
     return invalid([fieldError('bad-cursor', 'after', 'this page key is not from this list and sort: start again from the first page')]);
   }
   const count = countJobsSql(q, COUNT_CAP, store.dialect);
-  const totals = countedTotal(count, store.sql(count.sql).get(...count.params) as { n: number; archived?: number });
+  const totals = countedTotal(count, store.sql(count.sql).get(...count.params) as { n: number; archived?: number; read?: number });
   const { sql, params, columns } = listJobsSql(q, after, store.dialect, routeOf(store, q, after, totals));
   const rows = store.sql(sql).all(...params, q.limit + 1, q.offset) as (JobRow & { customer_key: string })[];
   const more = rows.length > q.limit;

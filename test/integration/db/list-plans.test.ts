@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { archiveJob, createJob, listJobs, setJobStatus } from '../../../db';
 import type { ListRoute } from '../../../db/search/list';
-import { COUNT_CAP, DATED_INDEX, countJobsSql, countedTotal, cursorOf, listJobsSql, probeSql, routeOf } from '../../../db/search/list';
+import { COUNT_CAP, DATED_INDEX, RANGE_READ, countJobsSql, countedTotal, cursorOf, listJobsSql, probeSql, routeOf } from '../../../db/search/list';
 import { boxSql } from '../../../db/search/similar';
 import { FIND_SQL } from '../../../db/search/text';
 import type { ListJobsInput } from '../../../core/api/store';
@@ -157,6 +157,45 @@ describe('query plans', () => {
     }
   }
 
+  // sqlite_stat1 of the bench's million-job store (bench/suites/store-data.ts: twenty years, many due dates a
+  // day) after ANALYZE, as PRAGMA optimize leaves a shop's store: the plans must hold under statistics too.
+  const MILLION_STATS: [string, string][] = [
+    ['jobs_archived', '377800 1 1'], ['jobs_by_customer', '1000000 834 1 1'], ['jobs_by_customer_name', '1000000 834 1'],
+    ['jobs_by_customer_number', '1000000 834 1'], ['jobs_by_kind', '1000000 333334 1 1'], ['jobs_by_kind_customer', '1000000 333334 278 1'],
+    ['jobs_by_kind_d', '1000000 333334 21'], ['jobs_by_kind_number', '1000000 333334 1'], ['jobs_by_material', '1000000 200000 1 1'],
+    ['jobs_by_material_customer', '1000000 200000 167 1'], ['jobs_by_material_number', '1000000 200000 1'],
+    ['jobs_by_shape_engine', '1000000 1000000'], ['jobs_by_status', '1000000 166667 1 1'], ['jobs_by_status_customer', '1000000 166667 154 1'],
+    ['jobs_by_status_number', '1000000 166667 1'], ['jobs_by_updated', '1000000 1 1'], ['jobs_dated_created', '1000000 1 1 1 1 1 1 1 1 1'],
+    ['jobs_dated_due', '857060 117 3 3 3 3 1 1 1 1'], ['jobs_dated_updated', '1000000 1 1 1 1 1 1 1 1'], ['sqlite_autoindex_jobs_1', '1000000 1'],
+  ];
+
+  it('keeps every sort and filter on its index under a million-job store\'s statistics, dated indexes only for a range', () => {
+    const store = seeded();
+    store.db.exec('ANALYZE');
+    store.db.exec("DELETE FROM sqlite_stat1 WHERE tbl = 'jobs'");
+    const put = store.db.prepare("INSERT INTO sqlite_stat1 (tbl, idx, stat) VALUES ('jobs', ?, ?)");
+    for (const [idx, stat] of MILLION_STATS) put.run(idx, stat);
+    store.db.exec('ANALYZE sqlite_schema');
+    for (const [filter, sorts] of Object.entries(intended)) {
+      for (const [sort, index] of Object.entries(sorts)) {
+        for (const direction of ['asc', 'desc']) {
+          for (const dates of [undefined, { field: 'due', from: '2010-01-01', to: '2019-12-31' }, { field: 'created', from: '2025-01-01' }]) {
+            const q = listJobsSchema.parse({ ...filterOf[filter], sort, direction, ...(dates ? { dates } : {}) });
+            const first = listJobsSql(q, null, 'sqlite', 'sorted');
+            for (const page of [first, listJobsSql(q, first.columns.map(() => 'x'), 'sqlite', 'sorted')]) {
+              const detail = plan(store, page.sql, [...page.params, 50, 0]);
+              expect(detail, JSON.stringify(q)).toMatch(index);
+              expect(detail, JSON.stringify(q)).not.toMatch(/TEMP B-TREE|jobs_dated/);
+            }
+            if (dates === undefined || filter === 'customerId') continue;
+            const dated = listJobsSql(q, null, 'sqlite', 'dated');
+            expect(plan(store, dated.sql, [...dated.params, 50, 0])).toMatch(new RegExp(`SEARCH j USING COVERING INDEX ${DATED_INDEX[q.dates!.field]}`));
+          }
+        }
+      }
+    }
+  });
+
   it('lists the archived jobs newest archived first through their partial index, pages included', () => {
     const store = seeded();
     for (const direction of ['asc', 'desc']) {
@@ -200,14 +239,19 @@ describe('query plans', () => {
     const range = { dates: { field: 'updated' as const, from: '2026-01-01' } };
     const exact = value(listJobs(store, range));
     expect([exact.total, exact.totalAtLeast]).toEqual([8, false]);
-    const count = countJobsSql(range, 3);
-    const row = store.db.prepare(count.sql).get(...count.params) as { n: number };
-    // Stopped at 4 listed matches (8 of the 9 are listed): at least 3 listed jobs, said as the cap.
-    expect(row).toEqual({ n: 4 });
+    // Read 4 jobs of the range (up to RANGE_READ + 1, here 3 + 1): the archived one among them, 3 listed.
+    const count = countJobsSql(range, COUNT_CAP, 'sqlite', 3);
+    const row = store.db.prepare(count.sql).get(...count.params) as { n: number; read: number };
+    expect(row).toEqual({ n: 3, read: 4 });
     expect(countedTotal(count, row)).toEqual({ total: 3, totalAtLeast: true });
-    expect(COUNT_CAP).toBeGreaterThanOrEqual(1000);
-    const archivedCount = countJobsSql({ ...range, archived: true }, 3);
-    expect(store.db.prepare(archivedCount.sql).get(...archivedCount.params)).toEqual({ n: 1 });
+    expect(RANGE_READ).toBeGreaterThanOrEqual(COUNT_CAP);
+    const archivedCount = countJobsSql({ ...range, archived: true });
+    expect(store.db.prepare(archivedCount.sql).get(...archivedCount.params)).toEqual({ n: 1, read: 9 });
+    expect(value(listJobs(store, { ...range, archived: true }))).toMatchObject({ total: 1, totalAtLeast: false });
+    // A customer's range stops counting at the cap.
+    const customer = value(listJobs(store, { limit: 1 })).jobs[0]!.customer!.id;
+    const byCustomer = countJobsSql({ ...range, customerId: customer }, 1);
+    expect(countedTotal(byCustomer, store.db.prepare(byCustomer.sql).get(...byCustomer.params) as { n: number; archived: number })).toEqual({ total: 1, totalAtLeast: true });
     for (const [field, column] of [['updated', 'updated_at'], ['created', 'created_at'], ['due', 'due_date']] as const) {
       for (const q of [{}, { status: 'quoted' as const, kind: 'compression' }, { archived: true }]) {
         const counted = countJobsSql({ ...q, dates: { field, from: '2026-01-01', to: '2026-12-31' } });
