@@ -179,8 +179,14 @@ export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, di
   return { sql: `${select} FROM ${from} ${whereOf(where)} ORDER BY ${order} LIMIT ? OFFSET ?`, params: where.params, columns };
 }
 
-/** Rows of the sort's index a page may read on the sorted route before the dated route is the shorter way. */
+/** Rows of the sort's index the probe reads to see how densely the range's jobs lie in the sort's order. */
 export const PROBE_ROWS = 500;
+
+/**
+ * Rows of the sort's index a page may be expected to read on the sorted route (at the probe's density) before
+ * the dated route is the shorter way: a row costs about what fifty entries of a dated index do.
+ */
+export const SORTED_ROWS_MAX = 2_000;
 
 /**
  * How many of the next PROBE_ROWS jobs of the sorted route (the same index, filters and keyset bound) fall in
@@ -197,15 +203,15 @@ export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Sto
 
 /**
  * The route of a page (see ListRoute). The dated route when the count read the whole range (it holds no more
- * than RANGE_READ jobs), or when the sorted route would pass more than PROBE_ROWS jobs before the page is full;
- * else the sorted route.
+ * than RANGE_READ jobs), or when, at the density the probe found, the sorted route would read more than
+ * SORTED_ROWS_MAX rows before the page is full; else the sorted route.
  */
 export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null, counted: { totalAtLeast: boolean }, probeRows = PROBE_ROWS): ListRoute {
   if (!datedRouteApplies(q)) return 'sorted';
   if (!counted.totalAtLeast) return 'dated';
   const probe = probeSql(q, after, store.dialect, probeRows);
   const { n } = store.sql(probe.sql).get(...probe.params) as { n: number };
-  return n > q.offset + q.limit ? 'sorted' : 'dated';
+  return n * (SORTED_ROWS_MAX / probeRows) > q.offset + q.limit ? 'sorted' : 'dated';
 }
 
 /**

@@ -408,7 +408,8 @@ describe('date ranges', () => {
     const store = datedStore();
     const q = (input: ListJobsInput) => listJobsSchema.parse({ ...input, limit: 5 });
     const firstYear = { field: 'created' as const, from: '2023-01-01', to: '2023-12-31' };
-    // Ten rows of the sort's index probed: the route a store of thousands takes with PROBE_ROWS.
+    // Ten rows of the sort's index probed (the page expected within SORTED_ROWS_MAX rows at the density found): the route
+    // a store of many thousands takes with PROBE_ROWS.
     const route = (input: ListJobsInput, counted: boolean): ListRoute => routeOf(store, q(input), null, { totalAtLeast: counted }, 10);
     expect(route({ dates: firstYear, sort: 'number' }, false)).toBe('dated');
     // Past the cap, the sorted route is kept when its next rows hold the page: the oldest numbers first.
