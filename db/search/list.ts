@@ -179,20 +179,20 @@ export function listJobsSql(q: ListJobsQuery, after: unknown[] | null = null, di
   return { sql: `${select} FROM ${from} ${whereOf(where)} ORDER BY ${order} LIMIT ? OFFSET ?`, params: where.params, columns };
 }
 
-/** Rows of the sort's index the probe reads to see how densely the range's jobs lie in the sort's order. */
-export const PROBE_ROWS = 500;
+/**
+ * Rows of the sort's index the probe reads to see how densely the range's jobs lie in the sort's order: a
+ * short probe first, a longer one only when the short one found too few (a range far along the sort's order).
+ */
+export const PROBE_ROWS = [500, 5_000] as const;
 
 /**
- * Rows of the sort's index a page may be expected to read on the sorted route (at the probe's density) before
- * the dated route is the shorter way: a row costs about what fifty entries of a dated index do.
+ * The sorted route is taken when, at the density a probe found, the page lies within this many times the rows
+ * it read: a row of the table costs about what fifty entries of a dated index do, and a wide range has more.
  */
-export const SORTED_ROWS_MAX = 2_000;
+export const PROBE_REACH = 4;
 
-/**
- * How many of the next PROBE_ROWS jobs of the sorted route (the same index, filters and keyset bound) fall in
- * the date range: when the page is among them, the sorted route reads no more than PROBE_ROWS rows.
- */
-export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Store['dialect'] = 'sqlite', rows = PROBE_ROWS): { sql: string; params: unknown[] } {
+/** How many of the next `rows` jobs of the sorted route (the same index, filters and keyset bound) fall in the date range. */
+export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Store['dialect'] = 'sqlite', rows: number = PROBE_ROWS[0]): { sql: string; params: unknown[] } {
   const { where, order, pinned } = listParts({ ...q, dates: undefined }, after, dialect, true);
   const range = jobFilter({ dates: q.dates }, '');
   const from = pinned ? 'jobs j INDEXED BY jobs_archived' : 'jobs j';
@@ -203,15 +203,18 @@ export function probeSql(q: ListJobsQuery, after: unknown[] | null, dialect: Sto
 
 /**
  * The route of a page (see ListRoute). The dated route when the count read the whole range (it holds no more
- * than RANGE_READ jobs), or when, at the density the probe found, the sorted route would read more than
- * SORTED_ROWS_MAX rows before the page is full; else the sorted route.
+ * than RANGE_READ jobs) or when no probe puts the page within PROBE_REACH times its rows; else the sorted route.
  */
-export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null, counted: { totalAtLeast: boolean }, probeRows = PROBE_ROWS): ListRoute {
+export function routeOf(store: Store, q: ListJobsQuery, after: unknown[] | null, counted: { totalAtLeast: boolean },
+  probes: readonly number[] = PROBE_ROWS): ListRoute {
   if (!datedRouteApplies(q)) return 'sorted';
   if (!counted.totalAtLeast) return 'dated';
-  const probe = probeSql(q, after, store.dialect, probeRows);
-  const { n } = store.sql(probe.sql).get(...probe.params) as { n: number };
-  return n * (SORTED_ROWS_MAX / probeRows) > q.offset + q.limit ? 'sorted' : 'dated';
+  for (const rows of probes) {
+    const probe = probeSql(q, after, store.dialect, rows);
+    const { n } = store.sql(probe.sql).get(...probe.params) as { n: number };
+    if (n * PROBE_REACH > q.offset + q.limit) return 'sorted';
+  }
+  return 'dated';
 }
 
 /**

@@ -408,9 +408,9 @@ describe('date ranges', () => {
     const store = datedStore();
     const q = (input: ListJobsInput) => listJobsSchema.parse({ ...input, limit: 5 });
     const firstYear = { field: 'created' as const, from: '2023-01-01', to: '2023-12-31' };
-    // Ten rows of the sort's index probed (the page expected within SORTED_ROWS_MAX rows at the density found): the route
-    // a store of many thousands takes with PROBE_ROWS.
-    const route = (input: ListJobsInput, counted: boolean): ListRoute => routeOf(store, q(input), null, { totalAtLeast: counted }, 10);
+    // Four rows of the sort's index probed, then eight (the page of 5 expected within PROBE_REACH times the rows
+    // at the density found): the routes a store of many thousands takes with PROBE_ROWS.
+    const route = (input: ListJobsInput, counted: boolean): ListRoute => routeOf(store, q(input), null, { totalAtLeast: counted }, [4, 8]);
     expect(route({ dates: firstYear, sort: 'number' }, false)).toBe('dated');
     // Past the cap, the sorted route is kept when its next rows hold the page: the oldest numbers first.
     expect(route({ dates: firstYear, sort: 'number', direction: 'asc' }, true)).toBe('sorted');
