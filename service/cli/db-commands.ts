@@ -49,7 +49,7 @@ const subcommands: Record<string, Sub> = {
     const result = await must(withProgress('Importing', (p) => files.run('importJobs', {
       file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
     }, p), bytesRead));
-    out(toJson({ count: result.imported.length, imported: result.imported }));
+    out(toJson({ count: result.imported.length, imported: result.imported, ...(result.problems ? { problems: result.problems } : {}) }));
   },
   reindex: async (args, _files, out, call) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };

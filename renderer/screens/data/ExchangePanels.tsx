@@ -33,7 +33,8 @@ export function ExportPanel() {
 }
 
 const importedText = (v: ImportResult) =>
-  `${v.imported.length} job${v.imported.length === 1 ? '' : 's'} imported${v.imported.length > 0 ? `: ${v.imported.slice(0, 8).map((j) => j.number).join(', ')}${v.imported.length > 8 ? '…' : ''}` : ''}.`;
+  `${v.imported.length} job${v.imported.length === 1 ? '' : 's'} imported${v.imported.length > 0 ? `: ${v.imported.slice(0, 8).map((j) => j.number).join(', ')}${v.imported.length > 8 ? '…' : ''}` : ''}.`
+  + (v.problems ?? []).map((p) => ` ${p.path}: ${p.message}.`).join('');
 
 function RenumberChoice({ id, renumber, onChange }: { id: string; renumber: boolean; onChange(renumber: boolean): void }) {
   return (
