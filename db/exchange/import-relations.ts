@@ -93,7 +93,8 @@ export class ImportRelations {
       return true;
     }
     if (!last) return false;
-    const where = this.renumber ? 'is not in this file (with new numbers, the file\'s numbers name only its own jobs)' : 'is neither in this file nor in this store';
+    const where = this.renumber ? 'is not in this file (with new numbers, the file\'s numbers name only its own jobs)'
+      : 'is neither in this file nor in this store (import it first to keep the link)';
     this.problem(fieldError('unknown-job', path, `job ${from.number}, which this job was made from, ${where}: the link was not kept`));
     return true;
   }
