@@ -62,8 +62,10 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     // Kept numbers: the file's numbers are this store's, so the missing job is looked for here too.
     await page.getByLabel(/Give imported jobs new numbers/).uncheck();
     await page.getByRole('button', { name: 'Import', exact: true }).click();
-    const status = page.getByRole('status').filter({ hasText: /^1 job imported: DEMO-LINK-1\. jobs\[0\]\.copiedFrom\.number: job DEMO-GONE-9, which this job was made from, is neither in this file nor in this store/ });
-    await status.waitFor();
+    await page.getByRole('status').filter({ hasText: /^1 job imported: DEMO-LINK-1\.$/ }).waitFor();
+    const toPutRight = page.getByRole('list', { name: 'To put right' });
+    await toPutRight.getByText(/^jobs\[0\]\.copiedFrom\.number: job DEMO-GONE-9, which this job was made from, is neither in this file nor in this store/).waitFor();
+    await toPutRight.scrollIntoViewIfNeeded();
     await screenshot(page, 'data-import-link-not-kept');
     expect(errors).toEqual([]);
   });
