@@ -7,7 +7,8 @@ import type { StoreResult } from './errors';
 import { inspectStoreFile } from './inspect';
 import type { LongRun } from './long-run';
 import type { OpenOptions } from './open';
-import { INCOMING } from './recover';
+import { openStore } from './open';
+import { INCOMING, restoreDamagedStore } from './recover';
 import { prepareIncoming, removeStoreFiles } from './restore-copy';
 import { replaceRows } from './restore-into';
 import type { SqliteStore as Store } from './store';
@@ -124,6 +125,23 @@ async function keepAndReplace(store: Store, options: RestoreOptions): Promise<st
 }
 
 /**
+ * A store its damage check failed cannot take a backup's rows in place (its own pages are not to be trusted),
+ * so it is closed, kept beside as FILE.damaged-*, the verified backup is put in its place, and the store is
+ * opened again, as at the start of the program. A program that had it open goes on with the damaged file.
+ */
+async function restoreOverDamaged(store: Store, from: string, options: RestoreOptions): Promise<RestoreOutcome> {
+  const verified = verifyBackup(from);
+  if (!verified.ok) return { result: verified, store };
+  const { file, author } = store;
+  store.close();
+  const restored = await restoreDamagedStore(file, from);
+  const reopened = openStore(file, { ...options, author });
+  if (!restored.ok) return { result: restored, store: reopened };
+  const { restoredFrom, previousKeptAs, version } = restored.value;
+  return { result: success({ restoredFrom, previousKeptAs, version }), store: reopened };
+}
+
+/**
  * Restores a verified backup into the live store, while other programs (a second window, the web
  * transport, the command line) may have it open: the backup is copied beside the store and brought to
  * this version's schema, the store as it was is kept as FILE.before-restore-*, and the rows are replaced
@@ -132,6 +150,7 @@ async function keepAndReplace(store: Store, options: RestoreOptions): Promise<st
  */
 export async function restoreStore(store: Store, from: string, options: RestoreOptions = {}): Promise<RestoreOutcome> {
   if (sameFile(from, store.file)) return { result: failure('same-file', 'restore from a backup, not from the store itself', 'file'), store };
+  if (store.damageCheck.state().state === 'failed') return restoreOverDamaged(store, from, options);
   const refused = writeRefusal(store);
   if (refused) return { result: { ok: false, error: refused.toApiError() }, store };
   const verified = verifyBackup(from);

@@ -11,10 +11,11 @@ import type { MenuCommand } from '../core/api/method-names';
 import { registerIpc } from './ipc';
 import { createService, dispatch } from '../service/api';
 import type { Service } from '../service/api';
+import type { StoreInfo } from '../core/api';
 import { createDataActions } from './shell/data-actions';
 import { registerDataActionIpc } from './shell/data-ipc';
 import { registerRequestSheetIpc } from './shell/request-sheet-ipc';
-import { offerRestoreOfDamagedStore } from './shell/damaged-store';
+import { offerRestoreOfDamagedStore, offerRestoreWhenDamageFound } from './shell/damaged-store';
 import { electronDialogs } from './shell/dialogs';
 import { createFaultReporter } from './shell/faults';
 import type { FaultReporter } from './shell/faults';
@@ -90,7 +91,7 @@ function sendCommand(previews: PdfPreviews, command: MenuCommand, windowId: numb
   liveMainWindow()?.webContents.send(MENU_COMMAND_CHANNEL, command);
 }
 
-function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): void {
+function installMenu(service: Service, previews: PdfPreviews, faults: FaultReporter): ReturnType<typeof createDataActions> {
   const data = createDataActions({
     dialogs: electronDialogs(liveMainWindow),
     call: (name, input, long) => service.files.run(name, input as never, long),
@@ -115,6 +116,16 @@ function installMenu(service: Service, previews: PdfPreviews, faults: FaultRepor
     readFile: (file) => readFile(file),
     read: (input) => dispatch(service.handlers, 'readRequestSheet', input),
   }, { onUnexpected: (context, e) => faults.report(context, e) });
+  return data;
+}
+
+/** A large store's background damage check, followed to its answer; damage found offers File > Restore at once. */
+function watchDamageCheck(service: Service, restore: () => Promise<unknown>, faults: FaultReporter): void {
+  const damageCheck = async () => {
+    const info = await dispatch(service.handlers, 'storeInfo', {});
+    return info.ok ? (info.value as StoreInfo).damageCheck : null;
+  };
+  void offerRestoreWhenDamageFound(damageCheck, restore).catch((e: unknown) => faults.report('damage-check', e));
 }
 
 /** The PDF writer's fonts: shipped as resources when packaged, assets/fonts of the project otherwise. */
@@ -150,9 +161,10 @@ async function start(log: Log, faults: FaultReporter): Promise<void> {
   const onUnexpected = (context: string, e: unknown) => faults.report(context, e);
   registerIpc(ipcMain, service.handlers, { onUnexpected });
   registerPdfIpc(ipcMain, previews, liveMainWindow, { onUnexpected });
-  installMenu(service, previews, faults);
+  const data = installMenu(service, previews, faults);
   started = true;
   showMainWindow(log, faults);
+  watchDamageCheck(service, () => data.restore(), faults);
   app.on('activate', () => showMainWindow(log, faults));
 }
 

@@ -42,12 +42,36 @@ async function firstJobs(source: string, target: string, count: number): Promise
 const IMPORT_ROWS = 100_000;
 
 /**
+ * Ties the generated jobs together as a shop's are, so the export reads links and enquiries per chunk and
+ * the import restores them: every other job made from the one before it, and a fifth of the jobs asked for
+ * five at a time. Idempotent (a kept store gets them once); the list and search measurements do not read them.
+ */
+function tieJobs(storeFile: string): void {
+  const store = openStore(storeFile, { check: 'none' });
+  try {
+    store.db.transaction(() => {
+      store.db.exec(`INSERT OR IGNORE INTO job_copies (copy_id, source_id, copied_at)
+                       SELECT id, id - 1, updated_at FROM jobs WHERE id % 2 = 0`);
+      if ((store.db.prepare('SELECT count(*) AS n FROM enquiries').get() as { n: number }).n > 0) return;
+      const customer = (store.db.prepare('SELECT min(id) AS id FROM customers').get() as { id: number }).id;
+      store.db.exec(`INSERT INTO enquiries (id, customer_id, reference, source, received_at)
+                       SELECT id / 5, ${customer}, 'BENCH-RFQ-' || (id / 5), 'bench.csv', created_at FROM jobs WHERE id % 25 < 5 AND id % 5 = 0;
+                     INSERT INTO enquiry_jobs (enquiry_id, job_id, sheet_row)
+                       SELECT id / 5, id, id % 5 + 1 FROM jobs WHERE id % 25 < 5 AND id / 5 IN (SELECT id FROM enquiries)`);
+    })();
+  } finally {
+    store.close();
+  }
+}
+
+/**
  * Export of the whole store (JSON and CSV) and import of 100 000 of its jobs into an empty store, each in a
- * child process whose peak RSS is its own: the export holds one chunk of jobs at a time, the import one
- * record, so both stay flat however large the store or the file.
+ * child process whose peak RSS is its own: the export holds one chunk of jobs (and their links and
+ * enquiries) at a time, the import one record, so both stay flat however large the store or the file.
  */
 export async function exchangeRows(storeFile: string, dir: string, jobs: number, row: (name: string, value: number, unit: string, target?: string, pass?: boolean) => BenchRow): Promise<BenchRow[]> {
   const rows: BenchRow[] = [];
+  tieJobs(storeFile);
   const json = join(dir, 'export.json');
   for (const file of [json, join(dir, 'export.csv')]) {
     const format = file.endsWith('.csv') ? 'CSV' : 'JSON';

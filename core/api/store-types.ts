@@ -241,6 +241,11 @@ export interface ExportResult {
 
 export interface ImportResult {
   imported: { id: number; number: string }[];
+  /**
+   * What the imported jobs named but the import could not keep, e.g. a link to a job neither in the file
+   * nor in the store; the jobs themselves are imported. `path` names the field of the file.
+   */
+  problems?: StoredProblem[];
 }
 
 /** A re-index of the search numbers: how many jobs were looked at, recomputed, moved, and which could not be. */

@@ -11,7 +11,31 @@ import { importedFirstOffSchema } from './first-off';
 import { specColumnHeader, specColumns } from '../../core/spec/columns';
 
 export const EXCHANGE_FORMAT = 'coilwright-jobs';
-export const EXCHANGE_VERSION = 1;
+/**
+ * 2 added a job's archive state, the job it was made from and the enquiry it was quoted in. A version 1
+ * document is a version 2 document without them, so both import; a newer one is refused by name.
+ */
+export const EXCHANGE_VERSION = 2;
+export const READ_VERSIONS = [1, 2] as const;
+
+/** The job a job was made from ("new job from this one"), by its number in the file, and when. */
+export interface CopiedFromExport {
+  number: string;
+  at: string;
+}
+
+/**
+ * The enquiry a job was quoted in. `key` tells the file's enquiries apart (jobs with the same key were
+ * asked for together); the rest describe the enquiry, the same on each of its jobs.
+ */
+export interface EnquiryExport {
+  key: number;
+  customer: string;
+  reference: string;
+  source: string;
+  receivedAt: string;
+  sheetRow: number;
+}
 
 /** One job in an export file: its current state, the customer by name, the spec as saved. */
 export interface JobRecord extends JobDetails {
@@ -23,11 +47,15 @@ export interface JobRecord extends JobDetails {
   spec: unknown;
   /** The job's first-off records, when it has any. */
   firstOff?: FirstOffExport[];
+  /** When the job was archived (taken out of the default list); absent while it is listed. */
+  archivedAt?: string;
+  copiedFrom?: CopiedFromExport;
+  enquiry?: EnquiryExport;
 }
 
 export interface JobsDocument {
   format: typeof EXCHANGE_FORMAT;
-  version: typeof EXCHANGE_VERSION;
+  version: (typeof READ_VERSIONS)[number];
   exportedAt: string;
   jobs: JobRecord[];
 }
@@ -39,11 +67,31 @@ export const importRecordSchema = jobInputSchema.omit({ customerId: true }).exte
   createdAt: z.iso.datetime().optional(),
   updatedAt: z.iso.datetime().optional(),
   firstOff: importedFirstOffSchema,
+  archivedAt: z.iso.datetime().nullable().optional(),
+  copiedFrom: z.object({
+    number: z.string().trim().min(1).max(40),
+    at: z.iso.datetime(),
+  }).strict().optional(),
+  enquiry: z.object({
+    key: z.number().int().positive(),
+    customer: z.string().trim().min(1, 'an enquiry needs its customer').max(120),
+    reference: z.string().trim().min(1, 'the customer\'s enquiry reference').max(120),
+    source: z.string().max(400).default(''),
+    receivedAt: z.iso.datetime(),
+    sheetRow: z.number().int().min(1),
+  }).strict().optional(),
 }).strict();
+
+/** The versions this importer reads; a newer file is refused by name, so nothing it carries is lost unread. */
+const versionSchema = z.number().superRefine((v, ctx) => {
+  if ((READ_VERSIONS as readonly number[]).includes(v)) return;
+  const newer = v > EXCHANGE_VERSION ? ': a newer Coilwright wrote it, import it there or update this one' : '';
+  ctx.addIssue({ code: 'custom', params: { code: 'unknown-version' }, message: `version ${v} is not one this Coilwright reads (${READ_VERSIONS.join(' and ')})${newer}` });
+});
 
 export const documentHeadSchema = z.object({
   format: z.literal(EXCHANGE_FORMAT),
-  version: z.literal(EXCHANGE_VERSION),
+  version: versionSchema,
   exportedAt: z.string().optional(),
   jobs: z.array(z.unknown()),
 }).strict();
@@ -58,16 +106,17 @@ const rateHeader = `rate (${bothSystems('rate')}${springKinds.filter((k) => rate
  * says which; each header names the unit in both), numbers at the trade's precision, the grade's name
  * beside its id, and one column per spec field (spec-columns.ts). The last columns, spec (the spec as
  * JSON) and judgement, are what an import reads: the per-field columns are rounded for reading and are
- * ignored on import, so what the export writes imports back unchanged. To change a spec, change it in
- * the app, or edit the spec column.
+ * ignored on import, so what the export writes imports back unchanged. archivedAt (blank while the job is
+ * listed) tells a reader which jobs are live, since the list holds archived jobs too. To change a spec,
+ * change it in the app, or edit the spec column. Links and enquiries tie rows to rows: the JSON carries them.
  */
 export const CSV_COLUMNS: readonly string[] = [
   'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'kind', 'units', 'material', 'materialName',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'archivedAt', 'kind', 'units', 'material', 'materialName',
   ...specColumns.map((c) => `spec.${specColumnHeader(c)}`), rateHeader, 'spec', 'judgement',
 ];
 
 export const CSV_IMPORTED = new Set<string>([
   'number', 'customer', 'customerEmail', 'customerPhone', 'partNumber', 'drawingNumber', 'drawingRevision', 'status', 'notes', 'dueDate',
-  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'spec', 'judgement',
+  'orderQuantity', 'leadTimeDays', 'createdAt', 'updatedAt', 'archivedAt', 'spec', 'judgement',
 ]);

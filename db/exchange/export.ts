@@ -20,6 +20,8 @@ import type { JobRecord } from './document';
 import { CSV_COLUMNS, EXCHANGE_FORMAT, EXCHANGE_VERSION } from './document';
 import type { FirstOffExport } from './first-off';
 import { firstOffByJob } from './first-off';
+import type { JobRelations } from './relations';
+import { relationsByJob } from './relations';
 import type { LongRun, TextSink } from '../long-run';
 import { cancelled, fileSink, yieldToEvents } from '../long-run';
 import { specCells, tradeNumber } from '../../core/spec/columns';
@@ -60,7 +62,7 @@ function countJobs(store: Store, status: JobStatus | JobStatus[] | undefined): n
   return (store.sql(`SELECT count(*) AS n FROM jobs j ${clause}`).get(...where.params) as { n: number }).n;
 }
 
-function toRecord({ row, stored }: ReadRow, firstOff: FirstOffExport[] | undefined): JobRecord {
+function toRecord({ row, stored }: ReadRow, firstOff: FirstOffExport[] | undefined, relations: JobRelations | undefined): JobRecord {
   return {
     number: row.number,
     customer: row.customer_name === null ? null
@@ -70,6 +72,8 @@ function toRecord({ row, stored }: ReadRow, firstOff: FirstOffExport[] | undefin
     leadTimeDays: row.lead_time_days, createdAt: row.created_at, updatedAt: row.updated_at,
     judgement: judgementOf(row.judgement), spec: carriedSpec(stored),
     ...(firstOff ? { firstOff } : {}),
+    ...(row.archived_at !== null ? { archivedAt: row.archived_at } : {}),
+    ...relations,
   };
 }
 
@@ -82,15 +86,18 @@ interface ExportFormat {
 
 /**
  * The coilwright-jobs document, the lossless format: one job per line inside the jobs list, so an import
- * (and a person with a text editor) can take it a job at a time.
+ * (and a person with a text editor) can take it a job at a time. Each job carries what ties it to others
+ * (the job it was made from, its enquiry) by number and key, never by this store's ids.
  */
 function jsonFormat(store: Store): ExportFormat {
   return {
     head: () => `{\n  "format": ${JSON.stringify(EXCHANGE_FORMAT)},\n  "version": ${EXCHANGE_VERSION},\n`
       + `  "exportedAt": ${JSON.stringify(store.now().toISOString())},\n  "jobs": [`,
     chunk(rows, first) {
-      const firstOff = firstOffByJob(store, rows.map((r) => r.row.id));
-      return rows.map((r, i) => `${first && i === 0 ? '' : ','}\n    ${JSON.stringify(toRecord(r, firstOff.get(r.row.id)))}`).join('');
+      const ids = rows.map((r) => r.row.id);
+      const firstOff = firstOffByJob(store, ids);
+      const relations = relationsByJob(store, ids);
+      return rows.map((r, i) => `${first && i === 0 ? '' : ','}\n    ${JSON.stringify(toRecord(r, firstOff.get(r.row.id), relations.get(r.row.id)))}`).join('');
     },
     tail: () => '\n  ]\n}\n',
   };
@@ -108,8 +115,8 @@ function csvRow({ row, stored }: ReadRow): unknown[] {
   return [
     row.number, row.customer_name ?? '', row.customer_email ?? '', row.customer_phone ?? '', row.part_number, row.drawing_number,
     row.drawing_revision, row.status, row.notes, row.due_date, row.order_quantity, row.lead_time_days, row.created_at, row.updated_at,
-    row.kind, row.units, row.material, findGrade(row.material)?.name ?? '', ...specCells(spec, row.units as UnitSystem), shownRate(row),
-    JSON.stringify(spec), row.judgement,
+    row.archived_at ?? '', row.kind, row.units, row.material, findGrade(row.material)?.name ?? '', ...specCells(spec, row.units as UnitSystem),
+    shownRate(row), JSON.stringify(spec), row.judgement,
   ];
 }
 

@@ -41,7 +41,7 @@ function csvItem(header: string[], row: CsvRecord): ImportItem | FieldError[] {
   const raw: Record<string, unknown> = {};
   const errors: FieldError[] = [];
   header.forEach((column, i) => {
-    const blankOptional = (row.fields[i] ?? '') === '' && ['number', 'createdAt', 'updatedAt'].includes(column);
+    const blankOptional = (row.fields[i] ?? '') === '' && ['number', 'createdAt', 'updatedAt', 'archivedAt'].includes(column);
     if (!CSV_IMPORTED.has(column) || blankOptional) return;
     const value = csvValue(column, unguarded(row.fields[i] ?? ''), at);
     if (value.ok) raw[column] = value.value;

@@ -11,6 +11,8 @@ import type { Store } from '../store';
 import { isSqliteStore } from '../store';
 import { DeferredUpkeep } from './deferred-upkeep';
 import { importRecordSchema } from './document';
+import type { RecordRelations } from './import-relations';
+import { ImportRelations } from './import-relations';
 import type { CheckedFirstOff } from './first-off';
 import { checkImportedFirstOff, writeImportedFirstOff } from './first-off';
 
@@ -25,7 +27,9 @@ interface CheckedItem extends CheckedJob {
   number?: string | undefined;
   createdAt?: string | undefined;
   updatedAt?: string | undefined;
+  archivedAt?: string | null | undefined;
   firstOff: CheckedFirstOff[];
+  relations: RecordRelations;
 }
 
 function checkItem(item: ImportItem): Result<CheckedItem> {
@@ -35,10 +39,12 @@ function checkItem(item: ImportItem): Result<CheckedItem> {
   if (!parsed.success || !specCheck.ok) {
     return fail([...(parsed.success ? [] : zodErrors(parsed.error, item.at)), ...(specCheck.ok ? [] : specCheck.errors)]);
   }
-  const { number, createdAt, updatedAt, firstOff: rawFirstOff, ...fields } = parsed.data;
+  const { number, createdAt, updatedAt, archivedAt, copiedFrom, enquiry, firstOff: rawFirstOff, ...fields } = parsed.data;
   const firstOff = checkImportedFirstOff(rawFirstOff, specCheck.value.spec, item.at);
   if (!firstOff.ok) return firstOff;
-  return ok({ at: formatPath(item.at), fields, ...specCheck.value, number, createdAt, updatedAt, firstOff: firstOff.value });
+  return ok({
+    at: formatPath(item.at), fields, ...specCheck.value, number, createdAt, updatedAt, archivedAt, firstOff: firstOff.value, relations: { copiedFrom, enquiry },
+  });
 }
 
 /** Field errors kept for the answer; the count of bad records goes on past it. */
@@ -65,9 +71,16 @@ export class ImportRun {
   private upkeep: DeferredUpkeep | undefined;
   private nextUpkeepLook = FIRST_UPKEEP_LOOK;
   private jobsBefore: number | undefined;
+  private readonly relations: ImportRelations;
 
   constructor(private readonly store: Store, private readonly renumber: boolean) {
     this.writer = new NewJobWriter(store);
+    this.relations = new ImportRelations(store, this.writer, renumber);
+  }
+
+  /** Links the import could not keep (their jobs are imported); named by field path. */
+  get problems(): FieldError[] {
+    return this.relations.problems;
   }
 
   get failed(): boolean {
@@ -94,14 +107,15 @@ export class ImportRun {
   take(item: ImportItem): void {
     const checked = checkItem(item);
     if (!checked.ok) return this.reject(checked.errors);
-    const clash = this.numberError(checked.value);
+    const c = checked.value;
+    const clash = this.numberError(c) ?? this.relations.enquiryError(c.relations.enquiry, c.at);
     if (clash) return this.reject([clash]);
     if (this.failed) return;
-    const c = checked.value;
     const written = this.writer.write(c, {
-      number: this.renumber ? undefined : c.number, reason: 'imported', createdAt: c.createdAt, updatedAt: c.updatedAt,
+      number: this.renumber ? undefined : c.number, reason: 'imported', createdAt: c.createdAt, updatedAt: c.updatedAt, archivedAt: c.archivedAt,
     }, c.at);
     writeImportedFirstOff(this.store, written.id, c.firstOff);
+    this.relations.wrote(written.id, c.number, c.relations, c.at);
     this.imported.push(written);
     if (this.imported.length === this.nextUpkeepLook) this.lookAtUpkeep();
   }
@@ -114,10 +128,15 @@ export class ImportRun {
     if (this.imported.length >= this.jobsBefore) this.upkeep.dropListIndexes();
   }
 
-  /** What is left once every record was good (the number sequence, the search upkeep set aside); before the commit. */
+  /** What is left once every record was good (links to later jobs, the number sequence, the search upkeep set aside); before the commit. */
   finish(): void {
+    this.relations.finish();
     this.writer.finish();
     this.upkeep?.finish();
+  }
+
+  result(): ImportResult {
+    return { imported: this.imported, ...(this.problems.length > 0 ? { problems: this.problems } : {}) };
   }
 
   refusal(): StoreResult<never> {

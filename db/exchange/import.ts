@@ -55,7 +55,7 @@ export function importJobs(store: Store, input: unknown): StoreResult<ImportResu
   } catch (e) {
     return answerOf(e, run, Refused);
   }
-  return success({ imported: run.imported });
+  return success(run.result());
 }
 
 function answerOf(e: unknown, run: ImportRun, refused?: symbol): StoreResult<never> {
@@ -148,7 +148,7 @@ export async function importJobsFromFile(store: Store, input: unknown, long: Lon
     run.finish();
     writer.db.exec('COMMIT');
     long.onProgress?.(total, total);
-    return success({ imported: run.imported });
+    return success(run.result());
   } catch (e) {
     rollback(writer);
     return answerOf(e instanceof StoreError || e instanceof WholeFileError || e instanceof CsvSyntaxError ? e : writeFailure(writer, e), run);

@@ -29,6 +29,8 @@ export interface NewJobOptions {
   /** Keep these stamps (import); otherwise the store's clock. */
   createdAt?: string | undefined;
   updatedAt?: string | undefined;
+  /** Written archived (import); new jobs are listed. */
+  archivedAt?: string | null | undefined;
 }
 
 /** Writes a checked job and its first revision. Call inside a transaction. */
@@ -39,8 +41,8 @@ export function writeNewJob(store: Store, checked: CheckedJob, options: NewJobOp
   return id;
 }
 
-const INSERT_JOB = `INSERT INTO jobs (number, ${ROW_COLUMNS}, customer_key, revision, created_at, updated_at)
-                    VALUES (?, ${ROW_PLACEHOLDERS}, ?, 1, ?, ?)`;
+const INSERT_JOB = `INSERT INTO jobs (number, ${ROW_COLUMNS}, customer_key, revision, created_at, updated_at, archived_at)
+                    VALUES (?, ${ROW_PLACEHOLDERS}, ?, 1, ?, ?, ?)`;
 
 /**
  * New jobs written one after another inside one transaction (an import of many): the customers named and
@@ -54,6 +56,14 @@ export class NewJobWriter {
 
   constructor(private readonly store: Store) {}
 
+  /** A customer named in the import (an enquiry's): found or added once, as the jobs' customers are. */
+  customerNamed(ref: { name: string }): CustomerOnFile {
+    const known = this.byName.get(ref.name) ?? this.byKey.get(customerKey(ref.name)) ?? fileCustomer(this.store, ref);
+    this.byName.set(ref.name, known);
+    this.byKey.set(known.key, known);
+    return known;
+  }
+
   /** The job's customer: by id, by name (found or added), or none. */
   private customerOf(fields: CheckedJob['fields'], path: string): CustomerOnFile | null {
     if (fields.customerId !== undefined) {
@@ -61,12 +71,7 @@ export class NewJobWriter {
       this.byId.set(known.id, known);
       return known;
     }
-    if (!fields.customer) return null;
-    const { name } = fields.customer;
-    const known = this.byName.get(name) ?? this.byKey.get(customerKey(name)) ?? fileCustomer(this.store, fields.customer);
-    this.byName.set(name, known);
-    this.byKey.set(known.key, known);
-    return known;
+    return fields.customer ? this.customerNamed(fields.customer) : null;
   }
 
   private nextNumber(): string {
@@ -86,7 +91,7 @@ export class NewJobWriter {
     const now = store.now().toISOString();
     const created = options.createdAt ?? now;
     const specText = JSON.stringify(checked.spec);
-    const result = store.sql(INSERT_JOB).run(number, ...rowValues(state, specText), customer?.key ?? '', created, options.updatedAt ?? created);
+    const result = store.sql(INSERT_JOB).run(number, ...rowValues(state, specText), customer?.key ?? '', created, options.updatedAt ?? created, options.archivedAt ?? null);
     const id = Number(result.lastInsertRowid);
     addRevision(store, id, 1, options.reason ?? 'created', state, now, store.author, { customerName: customer?.name ?? null, specText });
     return { id, number };

@@ -1,3 +1,4 @@
+import type { DamageCheckInfo } from '../../core/api/store-types';
 import { dialog } from 'electron';
 import { restoreDamagedStore } from '../../db';
 
@@ -29,4 +30,32 @@ export async function offerRestoreOfDamagedStore(file: string, problem: string):
     detail: `Restored from ${from}. The damaged store was kept as ${restored.value.damagedKeptAs}.`, buttons: ['OK'],
   });
   return true;
+}
+
+/** How often main asks whether a large store's damage check, running in the background, has answered. */
+export const DAMAGE_CHECK_POLL_MS = 2000;
+
+const waitFor = (ms: number) => new Promise<void>((resolve) => { setTimeout(resolve, ms).unref(); });
+
+/**
+ * A large store opens before its damage check ends (db/damage-check.ts). When the check then finds damage,
+ * the desktop says so at once and offers to put a backup in its place (the damaged store is kept beside it);
+ * declined, the store stays open read-only and the status line keeps the warning.
+ */
+export async function offerRestoreWhenDamageFound(
+  damageCheck: () => Promise<DamageCheckInfo | null>, restore: () => Promise<unknown>, pollMs = DAMAGE_CHECK_POLL_MS,
+): Promise<void> {
+  let check = await damageCheck();
+  while (check?.state === 'running') {
+    await waitFor(pollMs);
+    check = await damageCheck();
+  }
+  if (check?.state !== 'failed') return;
+  const asked = await dialog.showMessageBox({
+    type: 'error', title: 'Coilwright', message: 'The job store is damaged',
+    detail: `The damage check found damage (${check.problem}). Nothing more can be saved to it; lists and prints still work `
+      + 'where the damage allows.\n\nPut your latest backup in its place now? The damaged store is kept beside it.',
+    buttons: ['Restore a backup…', 'Keep it open read-only'], defaultId: 0, cancelId: 1,
+  });
+  if (asked.response === 0) await restore();
 }

@@ -180,7 +180,8 @@ export function createDataActions(deps: DataActionDeps) {
       if (file === null) return notStarted('No file was chosen.');
       const input = { file, format: formatOf(file), ...(request.renumber !== undefined ? { renumber: request.renumber } : {}) };
       const outcome = await call<ImportResult>({ name: 'importJobs', input, from: request.from ?? 'menu',
-        done: (v) => [`Imported ${v.imported.length} job${v.imported.length === 1 ? '' : 's'}`, file] }, signal);
+        done: (v) => [`Imported ${v.imported.length} job${v.imported.length === 1 ? '' : 's'}`,
+          [file, ...(v.problems ?? []).map((p) => `${p.path}: ${p.message}`)].join('\n')] }, signal);
       if (outcome.outcome === 'done') deps.notify('data-changed');
       return outcome;
     }),

@@ -18,7 +18,7 @@ export function damageCheckStatus(info: StoreInfo): { tone: 'quiet' | 'warning';
     tone: 'warning',
     text: 'Store damaged: read-only, restore a backup',
     detail: `The damage check found damage (${check.problem}). Nothing more can be saved while it is open: `
-      + 'export what you need, close Coilwright, and restore your latest backup over it (Data & backups shows how).',
+      + 'restore your latest backup in its place (File > Restore, or Data & backups); the damaged store is kept beside it.',
   };
 }
 

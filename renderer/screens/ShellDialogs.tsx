@@ -26,9 +26,9 @@ export function LeaveDialog({ open, onStay, onDiscard }: { open: boolean; onStay
         <button type="button" className="button button--danger" onClick={onDiscard}>Discard the changes and leave</button>
       </>}
     >
-      <p>This screen has changes that are not saved: on a job, some fields are empty or hold a value the spec does not
-        accept yet; in the settings, the changes wait for “Save settings”. Keep editing to finish them (each field with
-        a problem shows its message), or leave and lose those changes.</p>
+      <p>This screen has changes that are not saved: on a job, fields to complete or correct, or a save the store
+        refused (the line under the job’s title says which); in the settings, the changes wait for “Save settings”.
+        Keep editing to finish them, or leave and lose those changes.</p>
     </Dialog>
   );
 }

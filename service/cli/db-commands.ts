@@ -10,6 +10,8 @@ import {
   StoreError, copyStore, createDemoShop, inspectStoreFile, isPostgresLocation, openStoreAt, restoreDamagedStore, storeBytes, writeExport,
 } from '../../db';
 import type { Store } from '../../db';
+import type { JobStatus } from '../../core/api/store';
+import { jobStatuses } from '../../core/api/store';
 import { bytesRead, checkNotice, withProgress } from './progress';
 
 type Sub = (args: ParsedArgs, files: FileActions, out: (text: string) => void, call: Caller, store: Store) => Promise<void>;
@@ -22,6 +24,16 @@ async function must<T>(result: Promise<ApiResult<T>>): Promise<T> {
   const r = await result;
   if (!r.ok) raise(r.error);
   return r.value;
+}
+
+/** --status S[,S]: the export's jobs by status (every job without it). */
+function statusOption(args: ParsedArgs): JobStatus[] | undefined {
+  const given = args.options.get('status');
+  if (given === undefined) return undefined;
+  const statuses = typeof given === 'string' ? given.split(',').map((s) => s.trim()) : [];
+  const unknown = statuses.length === 0 ? '' : statuses.find((s) => !(jobStatuses as readonly string[]).includes(s));
+  if (unknown !== undefined) throw new InputError([{ code: 'invalid-status', path: 'status', message: `--status takes ${jobStatuses.join(', ')} (several with commas), not "${unknown}"` }]);
+  return statuses as JobStatus[];
 }
 
 /** Standard output as the export's sink, waiting whenever the pipe is full. */
@@ -37,19 +49,20 @@ const subcommands: Record<string, Sub> = {
   export: async (args, files, out, _call, store) => {
     const file = args.options.get('out');
     const format = args.options.has('csv') ? 'csv' : 'json';
+    const status = statusOption(args);
     if (typeof file !== 'string') {
       // Straight to standard output, a chunk at a time, so a million jobs never sit in memory.
-      await withProgress('Exporting', (p) => writeExport(store, { format }, stdoutSink, p), jobsDone);
+      await withProgress('Exporting', (p) => writeExport(store, { format, status }, stdoutSink, p), jobsDone);
       return;
     }
-    const result = await must(withProgress('Exporting', (p) => files.run('exportJobs', { format, force: args.options.has('force'), file }, p), jobsDone));
+    const result = await must(withProgress('Exporting', (p) => files.run('exportJobs', { format, status, force: args.options.has('force'), file }, p), jobsDone));
     out(toJson({ format: result.format, count: result.count, file: result.file, ...(result.problems ? { problems: result.problems } : {}) }));
   },
   import: async (args, files, out) => {
     const result = await must(withProgress('Importing', (p) => files.run('importJobs', {
       file: positional(args, 1, 'FILE', 'db import'), renumber: args.options.has('renumber'),
     }, p), bytesRead));
-    out(toJson({ count: result.imported.length, imported: result.imported }));
+    out(toJson({ count: result.imported.length, imported: result.imported, ...(result.problems ? { problems: result.problems } : {}) }));
   },
   reindex: async (args, _files, out, call) => out(toJson(await call('reindexJobs', { all: args.options.has('all') }))),
 };
@@ -60,8 +73,9 @@ export const dbCommand: Command = {
     'db backup --db DB --out FILE     online backup of the store to a new file, verified',
     '  db restore --db DB --from FILE  replace the store\'s contents with a verified backup, also while other programs',
     '                                  have it open; the old store (or a damaged one) is kept beside it',
-    '  db export --db DB [--out FILE [--force]] [--csv]   jobs as a coilwright-jobs JSON document, or the job list as CSV;',
-    '                                  an existing FILE is replaced only with --force',
+    '  db export --db DB [--out FILE [--force]] [--csv] [--status S[,S]]   jobs as a coilwright-jobs JSON document (archive',
+    '                                  state, links and enquiries included), or the job list as CSV; an existing FILE is',
+    '                                  replaced only with --force; --status: only jobs of these statuses',
     '  db import FILE --db DB [--renumber]      add jobs from JSON or CSV: every record checked, all or nothing',
     '  db reindex --db DB [--all]      recompute the search numbers of jobs indexed by another engine version (--all: every job)',
     '  db check --db DB                the full damage check of a store file (PRAGMA integrity_check, every page and index',

@@ -3,7 +3,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { backupStore, createJob, listJobs, openStore, tryOpenStore } from '../../db';
-import { offerRestoreOfDamagedStore } from '../../electron/shell/damaged-store';
+import type { DamageCheckInfo } from '../../core/api/store-types';
+import { offerRestoreOfDamagedStore, offerRestoreWhenDamageFound } from '../../electron/shell/damaged-store';
 import { electron } from './electron-mock';
 import { damageIndexPage } from '../support/damage';
 
@@ -48,5 +49,56 @@ describe('a damaged store at start', () => {
     electron.dialog.showMessageBox.mockResolvedValueOnce({ response: 1 });
     expect(await offerRestoreOfDamagedStore(file, problem)).toBe(false);
     expect(tryOpenStore(file)).toMatchObject({ ok: false, error: { code: 'store-corrupt' } });
+  });
+});
+
+describe('a large store whose damage check fails after it opened', () => {
+  let large: ReturnType<typeof openStore> | undefined;
+  afterEach(() => large?.close());
+
+  /** The store opened as a large one (the size rule lowered to one byte): the check runs in the background. */
+  async function openedLarge(damaged: boolean): Promise<() => Promise<DamageCheckInfo | null>> {
+    const file = path.join(dir, 'coilwright.db');
+    const store = openStore(file);
+    createJob(store, { customer: { name: 'Wrenfield Pumps (demo)' }, partNumber: 'WP-8', spec: {
+      kind: 'compression', units: 'metric', material: 'en10270-1-sh', wireDiameter: 2, outerDiameter: 20, totalCoils: 10, ends: 'closed-ground', freeLength: 50,
+    } });
+    if (damaged) damageIndexPage(store);
+    else store.close();
+    const opened = openStore(file, { check: 'by-size', checkBeforeOpenMaxBytes: 1 });
+    large = opened;
+    return async () => opened.damageCheck.state();
+  }
+
+  beforeEach(() => {
+    electron.dialog.showMessageBox.mockReset();
+  });
+
+  it('says so once the check answers and runs the restore the user asks for', async () => {
+    const damageCheck = await openedLarge(true);
+    electron.dialog.showMessageBox.mockResolvedValueOnce({ response: 0 });
+    const restore = vi.fn(async () => undefined);
+    await offerRestoreWhenDamageFound(damageCheck, restore, 10);
+    expect(electron.dialog.showMessageBox).toHaveBeenCalledTimes(1);
+    expect(electron.dialog.showMessageBox).toHaveBeenCalledWith(expect.objectContaining({
+      message: 'The job store is damaged', detail: expect.stringMatching(/found damage \(quick_check: .+\)[\s\S]*kept beside it/),
+    }));
+    expect(restore).toHaveBeenCalledTimes(1);
+  });
+
+  it('keeps it open read-only when the user declines', async () => {
+    const damageCheck = await openedLarge(true);
+    electron.dialog.showMessageBox.mockResolvedValueOnce({ response: 1 });
+    const restore = vi.fn(async () => undefined);
+    await offerRestoreWhenDamageFound(damageCheck, restore, 10);
+    expect(restore).not.toHaveBeenCalled();
+  });
+
+  it('asks nothing of a store the check passes', async () => {
+    const damageCheck = await openedLarge(false);
+    const restore = vi.fn(async () => undefined);
+    await offerRestoreWhenDamageFound(damageCheck, restore, 10);
+    expect(electron.dialog.showMessageBox).not.toHaveBeenCalled();
+    expect(restore).not.toHaveBeenCalled();
   });
 });

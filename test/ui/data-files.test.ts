@@ -49,6 +49,27 @@ describe('Data & backups in a browser', { timeout: UI_TEST_TIMEOUT }, () => {
     expect(errors).toEqual([]);
   });
 
+  it('imports a job whose link cannot be kept, and says which field named the missing job', async () => {
+    const { page, errors } = session;
+    await page.keyboard.press('Alt+4');
+    await page.getByRole('heading', { name: 'Import jobs' }).waitFor();
+    const spec = { kind: 'compression', units: 'metric', material: 'en10270-1-sh', wireDiameter: 2, outerDiameter: 20, totalCoils: 10, ends: 'closed-ground', freeLength: 50 };
+    const doc = {
+      format: 'coilwright-jobs', version: 2,
+      jobs: [{ number: 'DEMO-LINK-1', partNumber: 'DEMO-LINKED', spec, archivedAt: '2026-03-01T10:00:00.000Z', copiedFrom: { number: 'DEMO-GONE-9', at: '2026-02-01T10:00:00.000Z' } }],
+    };
+    await page.getByLabel('File to import (JSON or CSV)').setInputFiles({ name: 'linked.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(doc)) });
+    // Kept numbers: the file's numbers are this store's, so the missing job is looked for here too.
+    await page.getByLabel(/Give imported jobs new numbers/).uncheck();
+    await page.getByRole('button', { name: 'Import', exact: true }).click();
+    await page.getByRole('status').filter({ hasText: /^1 job imported: DEMO-LINK-1\.$/ }).waitFor();
+    const toPutRight = page.getByRole('list', { name: 'To put right' });
+    await toPutRight.getByText(/^jobs\[0\]\.copiedFrom\.number: job DEMO-GONE-9, which this job was made from, is neither in this file nor in this store/).waitFor();
+    await toPutRight.scrollIntoViewIfNeeded();
+    await screenshot(page, 'data-import-link-not-kept');
+    expect(errors).toEqual([]);
+  });
+
   it('signs saves with a name, opens a shared PostgreSQL store by connection string and names it by host and database', async () => {
     const { page, errors } = session;
     await page.keyboard.press('Alt+4');

@@ -8,7 +8,13 @@ import { useLongCall } from './useLongCall';
 import type { CallState } from './useLongCall';
 import { runningLabels } from './wording';
 
-export function CallOutcome<T>({ call, done, cancel }: { call: CallState<T>; done(value: T): string; cancel?: () => void }) {
+/**
+ * How a long call stands: its progress while it runs, then its outcome; `notes` are what a call that succeeded
+ * still asks the user to put right (an import's links it could not keep), shown apart from the success.
+ */
+export function CallOutcome<T>({ call, done, notes, cancel }: {
+  call: CallState<T>; done(value: T): string; notes?: (value: T) => string[]; cancel?: () => void;
+}) {
   if (call.state === 'running') {
     return (
       <div className="long-call">
@@ -18,8 +24,16 @@ export function CallOutcome<T>({ call, done, cancel }: { call: CallState<T>; don
     );
   }
   if (call.state === 'failed') return <p className="error-text" role="alert">{call.message}</p>;
-  if (call.state === 'done') return <p className="ok-text" role="status">{done(call.value)}</p>;
-  return null;
+  if (call.state !== 'done') return null;
+  const toPutRight = notes?.(call.value) ?? [];
+  return (
+    <>
+      <p className="ok-text" role="status">{done(call.value)}</p>
+      {toPutRight.length > 0 ? (
+        <ul className="plain-list notice notice--warn" aria-label="To put right">{toPutRight.map((n) => <li key={n}>{n}</li>)}</ul>
+      ) : null}
+    </>
+  );
 }
 
 export function BackupPanel() {

@@ -35,6 +35,9 @@ export function ExportPanel() {
 const importedText = (v: ImportResult) =>
   `${v.imported.length} job${v.imported.length === 1 ? '' : 's'} imported${v.imported.length > 0 ? `: ${v.imported.slice(0, 8).map((j) => j.number).join(', ')}${v.imported.length > 8 ? '…' : ''}` : ''}.`;
 
+/** What the import kept without (a link to a job it could not find), by the file's field. */
+const importNotes = (v: ImportResult) => (v.problems ?? []).map((p) => `${p.path}: ${p.message}.`);
+
 function RenumberChoice({ id, renumber, onChange }: { id: string; renumber: boolean; onChange(renumber: boolean): void }) {
   return (
     <div className="field field--check">
@@ -108,7 +111,7 @@ function PageImport() {
       </div>
       <RenumberChoice id={`${fileId}-renumber`} renumber={renumber} onChange={setRenumber} />
       <button type="button" className="button button--primary" disabled={running || !picked} onClick={() => void go()}>Import</button>
-      <CallOutcome call={call} cancel={cancel} done={importedText} />
+      <CallOutcome call={call} cancel={cancel} done={importedText} notes={importNotes} />
     </>
   );
 }

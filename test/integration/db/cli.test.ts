@@ -41,6 +41,22 @@ describe('command line: jobs from past jobs, archive and delete', () => {
     expect((cli('jobs', 'undelete', String(deleted.jobId), '--db', db).json() as { number: string }).number).toBe('J-26-0002');
     expect((cli('jobs', 'archive', 'J-26-0001', '--undo', '--db', db).json() as { archivedAt: string | null }).archivedAt).toBeNull();
   });
+
+  it('exports jobs of one status with their archive state and links; the import names a link it cannot keep', { timeout: SEVERAL_PROCESSES }, () => {
+    const dir = tempDir();
+    const db = join(dir, 'shop.db');
+    expect(cli('jobs', 'add', jobFile(dir, 'a.json', { partNumber: 'CP-1', status: 'quoted' }), '--db', db).code).toBe(0);
+    expect(cli('jobs', 'copy', 'J-26-0001', '--db', db).code).toBe(0);
+    expect(cli('jobs', 'archive', 'J-26-0001', '--db', db).code).toBe(0);
+    const drafts = join(dir, 'drafts.json');
+    expect(cli('db', 'export', '--status', 'draft', '--db', db, '--out', drafts).json()).toMatchObject({ count: 1 });
+    expect(JSON.parse(readFileSync(drafts, 'utf8')).jobs).toMatchObject([{ number: 'J-26-0002', copiedFrom: { number: 'J-26-0001' } }]);
+    const all = cli('db', 'export', '--status', 'quoted,draft', '--db', db).out;
+    expect(JSON.parse(all).jobs).toMatchObject([{ number: 'J-26-0001', archivedAt: expect.any(String) }, { number: 'J-26-0002' }]);
+    expect(cli('db', 'export', '--status', 'shipped', '--db', db).errors()[0]).toMatchObject({ code: 'invalid-status', path: 'status' });
+    const imported = cli('db', 'import', drafts, '--db', join(dir, 'other.db')).json();
+    expect(imported).toMatchObject({ count: 1, problems: [{ code: 'unknown-job', path: 'jobs[0].copiedFrom.number' }] });
+  });
 });
 
 describe('command line: jobs', () => {

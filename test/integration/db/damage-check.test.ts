@@ -1,5 +1,6 @@
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { readdirSync } from 'node:fs';
+import { describe, expect, it, vi } from 'vitest';
 import type { StoreInfo } from '../../../core/api';
 import { backupStore, createJob, inTransaction, openStore, tryOpenStore } from '../../../db';
 import type { OpenOptions, SqliteStore } from '../../../db';
@@ -104,6 +105,28 @@ describe('the size rule of the damage check', () => {
     expect(events).toEqual(['start true', 'end true']);
     expect(createJob(store, job({ partNumber: 'DC-AGAIN' }))).toMatchObject({ ok: false, error: { code: 'store-corrupt' } });
     expect(events).toHaveLength(2);
+  });
+
+  it('restores a backup over a store its background check failed: the damaged file is kept beside, and saves go on', async () => {
+    const dir = tempDir();
+    const file = join(dir, 'shop.db');
+    storeWithJobs(file, 30);
+    const backup = join(dir, 'monday.db');
+    const seed = openStore(file);
+    value(await backupStore(seed, backup));
+    damageIndexPage(seed);
+    const service = createService(track(openStore(file, { ...overTheRule, author: 'Desk 2 (demo)' })), overTheRule);
+    const info = async () => value(await dispatch(service.handlers, 'storeInfo', {})) as StoreInfo;
+    await vi.waitFor(async () => expect((await info()).damageCheck?.state).toBe('failed'));
+    const restored = await service.files.run('restore', { file: backup });
+    expect(restored).toMatchObject({ ok: true, value: { restoredFrom: backup, previousKeptAs: expect.stringMatching(/shop\.db\.damaged-/) } });
+    expect(readdirSync(dir).some((name) => /^shop\.db\.damaged-.*Z$/.test(name))).toBe(true);
+    await vi.waitFor(async () => expect((await info()).damageCheck?.state).toBe('passed'));
+    expect((await info()).readOnly).toBeNull();
+    const saved = await dispatch(service.handlers, 'createJob', job({ partNumber: 'DC-AFTER-RESTORE' }));
+    expect(saved).toMatchObject({ ok: true });
+    const page = value(await dispatch(service.handlers, 'listJobs', {})) as { total: number };
+    expect(page.total).toBe(31);
   });
 
   it('opens the app\'s store over the rule without waiting, and the check reports through storeInfo', async () => {

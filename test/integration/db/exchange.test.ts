@@ -1,7 +1,7 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { createJob, exportJobs, importJobs, listJobs } from '../../../db';
+import { archiveJob, createJob, exportJobs, getJob, importJobs, listJobs } from '../../../db';
 import { csvField, parseCsv, unguarded } from '../../../db/exchange/csv';
 import type { SqliteStore as Store } from '../../../db';
 import { job, spec, tempDir, tempStore, value } from './helpers';
@@ -22,7 +22,7 @@ describe('export and import', () => {
     const source = seeded();
     const exported = value(exportJobs(source, {}));
     const doc = JSON.parse(exported.text!);
-    expect(doc).toMatchObject({ format: 'coilwright-jobs', version: 1 });
+    expect(doc).toMatchObject({ format: 'coilwright-jobs', version: 2 });
     expect(doc.jobs).toHaveLength(2);
     const target = tempStore();
     const result = value(importJobs(target, { text: exported.text! }));
@@ -74,10 +74,26 @@ describe('export and import', () => {
     expect(refused).toMatchObject({ ok: false, error: { path: 'lines[4].spec.wireDiameter' } });
   });
 
+  it('shows in the CSV which jobs are archived, and reads it back', () => {
+    const source = seeded();
+    const archived = value(archiveJob(source, { id: 2, archived: true }));
+    const csv = value(exportJobs(source, { format: 'csv' })).text!;
+    const [header, listed, gone] = parseCsv(csv).map((r) => r.fields);
+    const column = header!.indexOf('archivedAt');
+    expect(header!.slice(column - 2, column + 2)).toEqual(['createdAt', 'updatedAt', 'archivedAt', 'kind']);
+    expect([listed![column], gone![column]]).toEqual(['', archived.archivedAt]);
+    const target = tempStore();
+    value(importJobs(target, { text: csv, format: 'csv' }));
+    expect([value(getJob(target, { number: 'J-26-0001' })).archivedAt, value(getJob(target, { number: 'J-26-0002' })).archivedAt]).toEqual([null, archived.archivedAt]);
+  });
+
   it('names an unknown format or version', () => {
     const store = tempStore();
-    expect(importJobs(store, { text: JSON.stringify({ format: 'coilwright-jobs', version: 2, jobs: [] }) }))
-      .toMatchObject({ ok: false, error: { path: 'version' } });
+    const newer = importJobs(store, { text: JSON.stringify({ format: 'coilwright-jobs', version: 3, jobs: [] }) });
+    expect(newer).toMatchObject({ ok: false, error: { code: 'unknown-version', path: 'version' } });
+    expect(!newer.ok && newer.error.message).toMatch(/version 3 is not one this Coilwright reads \(1 and 2\): a newer Coilwright wrote it/);
+    expect(importJobs(store, { text: JSON.stringify({ format: 'coilwright-jobs', version: 0, jobs: [] }) }))
+      .toMatchObject({ ok: false, error: { code: 'unknown-version', path: 'version' } });
     expect(importJobs(store, { text: '{ nope' })).toMatchObject({ ok: false, error: { code: 'invalid-json' } });
     expect(importJobs(store, { text: JSON.stringify({ format: 'coilwright-jobs', version: 1, jobs: [{ spec: spec(), extra: 1 }] }) }))
       .toMatchObject({ ok: false, error: { code: 'unknown-field', path: 'jobs[0].extra' } });
