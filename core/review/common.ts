@@ -1,6 +1,7 @@
 import type { Finding, Severity } from '../result';
 import { formatQuantity, significant } from '../format';
 import type { CoilBody } from '../springs/coil-body';
+import { diameterField } from '../springs/coil-body';
 import { reviewLimits as lim } from './limits';
 import type { FatigueResult } from '../springs/fatigue';
 import { zimmerliReaches } from '../springs/fatigue';
@@ -13,8 +14,7 @@ export const add = (out: Sink, severity: Severity, code: string, path: string, m
   out.push({ code, severity, message, path, fix });
 };
 
-export const diameterPath = (x: CoilBody): string =>
-  x.diameterGiven === 'outer' ? 'outerDiameter' : x.diameterGiven === 'inner' ? 'innerDiameter' : 'meanDiameter';
+export const diameterPath = (x: CoilBody): string => diameterField[x.diameterGiven];
 
 export function reviewIndex(x: CoilBody, w: number, out: Sink): void {
   if (w > lim.makeableIndex.max) {

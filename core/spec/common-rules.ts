@@ -2,7 +2,7 @@ import type { FieldError } from '../result';
 import { fieldError } from '../result';
 import { findGrade } from '../materials';
 import type { CoilBodySpec } from '../springs/coil-body';
-import { meanDiameterOf } from '../springs/coil-body';
+import { diameterField, diameterGiven, meanDiameterOf } from '../springs/coil-body';
 import { wireProperties } from '../materials/properties';
 import { toInternal } from '../units';
 import { POISSON_RATIO } from './bounds';
@@ -20,10 +20,6 @@ function diameterErrors(s: CoilBodySpec, out: FieldError[]): void {
   out.push(fieldError('diameter-count', 'outerDiameter',
     `give exactly one of outerDiameter, innerDiameter, meanDiameter (${given} given)`));
 }
-
-/** The field the mean diameter comes from. */
-export const diameterPathOf = (s: CoilBodySpec): string =>
-  s.outerDiameter !== undefined ? 'outerDiameter' : s.innerDiameter !== undefined ? 'innerDiameter' : 'meanDiameter';
 
 /** A given shear or elastic modulus must pair with the other (given or the grade's) as a metal's moduli do. */
 function modulusPairErrors(s: CoilBodySpec, out: FieldError[]): void {
@@ -56,7 +52,7 @@ export function coilBodyErrors(s: CoilBodySpec, errors: FieldError[]): void {
   modulusPairErrors(s, errors);
   const D = meanDiameterOf(s);
   if (!(D / s.wireDiameter >= MINIMUM_INDEX)) {
-    errors.push(fieldError('index-too-small', diameterPathOf(s),
+    errors.push(fieldError('index-too-small', diameterField[diameterGiven(s)],
       `spring index D/d = ${(D / s.wireDiameter).toPrecision(3)} is below ${MINIMUM_INDEX}: the coil cannot be wound`));
   }
 }

@@ -38,8 +38,14 @@ export function meanDiameterOf(spec: CoilBodySpec): number {
   return spec.meanDiameter ?? Number.NaN;
 }
 
-const diameterGiven = (spec: CoilBodySpec): CoilBody['diameterGiven'] =>
+/** Which coil diameter the spec gives. */
+export const diameterGiven = (spec: CoilBodySpec): CoilBody['diameterGiven'] =>
   spec.outerDiameter !== undefined ? 'outer' : spec.innerDiameter !== undefined ? 'inner' : 'mean';
+
+/** The spec's field of each given coil diameter (the path findings and errors name). */
+export const diameterField: Record<CoilBody['diameterGiven'], string> = {
+  outer: 'outerDiameter', inner: 'innerDiameter', mean: 'meanDiameter',
+};
 
 /** Resolves wire and coil; undefined only for an unknown grade, which validation has already reported. */
 export function coilBody(spec: CoilBodySpec): CoilBody | undefined {
