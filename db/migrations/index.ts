@@ -19,6 +19,7 @@ import { updateToVersion0016 } from './0016-search-at-scale';
 import { updateToVersion0017 } from './0017-working-copy-desk';
 import { updateToVersion0018 } from './0018-text-prefixes';
 import { updateToVersion0019 } from './0019-dated-list-indexes';
+import { updateToVersion0020 } from './0020-mixed-shape-coordinates';
 
 export interface Migration {
   version: number;
@@ -47,6 +48,7 @@ export const migrations: readonly Migration[] = [
   { version: 17, name: 'working copy desk', update: updateToVersion0017 },
   { version: 18, name: 'text prefixes', update: updateToVersion0018 },
   { version: 19, name: 'dated list indexes', update: updateToVersion0019 },
+  { version: 20, name: 'mixed shape coordinates', update: updateToVersion0020 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

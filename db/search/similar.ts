@@ -13,6 +13,7 @@ import type { Weighted } from './similarity';
 import { WEIGHTS, describeDifferences, distance, matchInWords } from './similarity';
 import { lastQuotedPrice } from './last-quoted';
 import { SHAPE_POINTS } from '../pg/migrations/0016-search-at-scale';
+import { INDEX_WEIGHTS, MIX } from '../migrations/0020-mixed-shape-coordinates';
 
 interface Candidate extends ShapePoint {
   id: number;
@@ -26,29 +27,33 @@ const SHAPE_TABLES: Record<Spec['kind'], string> = {
   compression: 'job_shape_compression', extension: 'job_shape_extension', torsion: 'job_shape_torsion',
 };
 
-/** R*Tree coordinate names and the spec dimension each one holds. */
-const BOX_DIMENSIONS = [
-  ['d', 'wireDiameter'], ['dm', 'meanDiameter'], ['l0', 'freeLength'], ['na', 'activeCoils'], ['rate', 'rate'],
-] as const;
+/** The shape's numbers in the order of the R*Tree's mixed coordinates (migration 0020's SHAPE_COLUMNS). */
+const BOX_DIMENSIONS = ['wireDiameter', 'meanDiameter', 'freeLength', 'activeCoils', 'rate'] as const;
+
+/** Jobs inside the box around the asked spring: one range per mixed coordinate (migration 0020). */
+export const boxSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}
+  WHERE ${MIX.map((_, j) => `m${j + 1}_min <= ? AND m${j + 1}_max >= ?`).join(' AND ')}`;
 
 /**
- * The geometric part of the distance, computed by SQLite on the R*Tree's own coordinates so that only
- * jobs that can be near enough reach JavaScript. The coordinates are 32-bit floats (relative error
- * below 1.2e-7, so under 1e-6 on this sum); GEOMETRY_MARGIN keeps the filter a superset of the exact one.
+ * How far each mixed coordinate may lie from the asked spring's for a job within `radius`. With index weights
+ * v and search weights w, |Δm_j| ≤ Σ v_k·|Δln x_k| ≤ max(v_k/w_k)·Σ w_k·|Δln x_k|, so the box holds every job
+ * within the radius even if the search weights have changed since the index was made. The margin covers the
+ * last bits of ln in SQLite and here; the R*Tree rounds each stored coordinate outward by itself.
  */
-const GEOMETRY_SQL = BOX_DIMENSIONS.map(([c, key]) => `${WEIGHTS[key]} * abs(ln(${c}_min / ?))`).join(' + ');
-const GEOMETRY_MARGIN = 1e-5;
+export const indexStretch = (weights: Record<Weighted, number>): number =>
+  Math.max(...BOX_DIMENSIONS.map((key, k) => INDEX_WEIGHTS[k]! / weights[key]));
+const INDEX_STRETCH = indexStretch(WEIGHTS);
+const COORDINATE_MARGIN = 1e-6;
 
-/** Jobs inside the box around the asked spring (one range per coordinate) whose geometry is near enough. */
-export const boxSql = (kind: Spec['kind']): string => `SELECT ${SHAPE_COLUMNS} FROM ${SHAPE_TABLES[kind]}
-  WHERE ${BOX_DIMENSIONS.map(([c]) => `${c}_min <= ? AND ${c}_max >= ?`).join(' AND ')}
-    AND ${GEOMETRY_SQL} <= ?`;
+export function mixedCoordinates(a: JobShape): number[] {
+  return MIX.map((signs) => signs.reduce((sum, sign, k) => sum + sign * INDEX_WEIGHTS[k]! * Math.log(a[BOX_DIMENSIONS[k]!]), 0));
+}
 
 /** The jobs table's column of each shape dimension (PostgreSQL reads the jobs table through its index). */
-const PG_COLUMNS: Record<(typeof BOX_DIMENSIONS)[number][1], string> = {
+const PG_COLUMNS: Record<(typeof BOX_DIMENSIONS)[number], string> = {
   wireDiameter: 'd', meanDiameter: 'mean_diameter', freeLength: 'free_length', activeCoils: 'active_coils', rate: 'rate',
 };
-const PG_GEOMETRY_SQL = BOX_DIMENSIONS.map(([, key]) => `${WEIGHTS[key]} * abs(ln(${PG_COLUMNS[key]} / ?))`).join(' + ');
+const PG_GEOMETRY_SQL = BOX_DIMENSIONS.map((key) => `${WEIGHTS[key]} * abs(ln(${PG_COLUMNS[key]} / ?))`).join(' + ');
 
 /**
  * The same box on PostgreSQL, through the kind's GiST index (migration 0016) on (ln d, ln rate) and
@@ -73,12 +78,12 @@ const MAX_RADIUS = 6;
  * Where the search starts. Jobs within distance r grow about as N·r⁴ (four independent dimensions: the
  * rate follows from them), so a radius that finds about `limit` jobs among N of the kind scales as
  * (limit/N)^¼. DENSITY_RADIUS is that radius for one job per job of the kind, measured on the bench's
- * generated store: the tenth nearest job lies at a median distance of 0.67 among 94 000 compression jobs,
- * 0.67 among 5 000 extension and 0.95 among 1 000 torsion jobs (the material term keeps small kinds from
- * spreading as r⁴ says), so the start sits a little below those and one or two boxes answer. The search
- * stays exact whatever the start; only its cost depends on it.
+ * generated stores: the tenth nearest job lies at a median distance of 0.38 among 940 000 compression jobs
+ * and 0.67 among 94 000 (6.6 · (10/N)^¼ both), 0.67 among 5 000 extension and 0.95 among 1 000 torsion jobs
+ * (the material term keeps small kinds from spreading as r⁴ says), so the start sits a little below the
+ * median and one or two boxes answer. The search stays exact whatever the start; only its cost depends on it.
  */
-const DENSITY_RADIUS = 5;
+const DENSITY_RADIUS = 6;
 const START_RADIUS_RANGE = [0.05, 0.6] as const;
 
 export function startRadius(limit: number, jobsOfKind: number): number {
@@ -87,24 +92,15 @@ export function startRadius(limit: number, jobsOfKind: number): number {
   return Math.min(START_RADIUS_RANGE[1], Math.max(START_RADIUS_RANGE[0], r));
 }
 
-/**
- * A job at distance ≤ r has, in each dimension, w·|ln(p/a)| ≤ r, so p lies within a·e^(±r/w): the box.
- * Inside it, SQLite drops jobs whose geometric distance alone is already over r.
- */
-function boxParams(a: JobShape, radius: number): unknown[] {
-  const params: unknown[] = [];
-  for (const [, key] of BOX_DIMENSIONS) {
-    const spread = Math.exp(radius / WEIGHTS[key]);
-    params.push(a[key] * spread, a[key] / spread);
-  }
-  for (const [, key] of BOX_DIMENSIONS) params.push(a[key]);
-  params.push(radius + GEOMETRY_MARGIN);
-  return params;
+/** The box of `radius` around the asked spring in the mixed coordinates: a low and a high end for each. */
+function boxParams(a: JobShape, radius: number): number[] {
+  const reach = radius * INDEX_STRETCH + COORDINATE_MARGIN;
+  return mixedCoordinates(a).flatMap((m) => [m + reach, m - reach]);
 }
 
 /** The PostgreSQL box in log space: each point's coordinates within r/w of the asked spring's, w its weight. */
 function pgBoxParams(a: JobShape, radius: number): unknown[] {
-  const reach = radius + GEOMETRY_MARGIN;
+  const reach = radius + COORDINATE_MARGIN;
   const range = (key: Weighted) => [Math.log(a[key]) - reach / WEIGHTS[key], Math.log(a[key]) + reach / WEIGHTS[key]] as const;
   const [dLo, dHi] = range('wireDiameter');
   const [rLo, rHi] = range('rate');
@@ -112,7 +108,7 @@ function pgBoxParams(a: JobShape, radius: number): unknown[] {
   const [lLo, lHi] = range('freeLength');
   const spread = Math.exp(reach / WEIGHTS.activeCoils);
   return [dLo, rLo, dHi, rHi, mLo, lLo, mHi, lHi, a.activeCoils / spread, a.activeCoils * spread,
-    ...BOX_DIMENSIONS.map(([, key]) => a[key]), reach];
+    ...BOX_DIMENSIONS.map((key) => a[key]), reach];
 }
 
 /** Jobs of the kind within the box of `radius` around the asked spring, on either backend. */

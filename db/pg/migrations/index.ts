@@ -18,6 +18,7 @@ import { version0016 } from './0016-search-at-scale';
 import { version0017 } from './0017-working-copy-desk';
 import { version0018 } from './0018-text-prefixes';
 import { version0019 } from './0019-dated-list-indexes';
+import { version0020 } from './0020-mixed-shape-coordinates';
 
 /**
  * The PostgreSQL side of each numbered migration of db/migrations/index.ts: same numbers, same logical schema.
@@ -43,4 +44,5 @@ export const pgMigrations: readonly { version: number; sql: string; after?: (c: 
   { version: 17, sql: version0017 },
   { version: 18, sql: version0018 },
   { version: 19, sql: version0019 },
+  { version: 20, sql: version0020 },
 ];

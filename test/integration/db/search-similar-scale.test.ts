@@ -52,7 +52,8 @@ describe('similar jobs in a store of 10 000 jobs of three kinds', () => {
   }, 180_000);
 
   it('starts smaller as the kind grows, within its bounds', () => {
-    expect(startRadius(10, 100)).toBeGreaterThan(startRadius(10, 100_000));
+    expect(startRadius(10, 200_000)).toBeGreaterThan(startRadius(10, 1_000_000));
+    expect(startRadius(10, 100)).toBe(0.6);
     expect(startRadius(10, 1_000_000)).toBeGreaterThanOrEqual(0.05);
     expect(startRadius(10, 0)).toBe(0.6);
   });
