@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { closeSync, createReadStream, openSync, statSync, writeSync } from 'node:fs';
+import { closeSync, createReadStream, fsyncSync, openSync, rmSync, statSync, writeSync } from 'node:fs';
 import { createInterface } from 'node:readline';
 import { dirname, join } from 'node:path';
 import { openStore } from '../../db';
@@ -34,12 +34,21 @@ async function firstJobs(source: string, target: string, count: number): Promise
     }
     if (last !== undefined) writeSync(fd, `${last.replace(/,$/, '')}\n`);
     writeSync(fd, '  ]\n}\n');
+    // On the disk before the import is timed: its time is its own, not the writing out of this file.
+    fsyncSync(fd);
   } finally {
     closeSync(fd);
   }
 }
 
 const IMPORT_ROWS = 100_000;
+
+/**
+ * The import is timed three times, each into a new empty store, and the median kept: on this machine the
+ * same import has taken from 12.6 to 19.9 s (its CPU time steady at 11.3–11.7 s; the rest is the disk
+ * and the virtual machine), so one run says more about the moment than about the import.
+ */
+const IMPORT_RUNS = 3;
 
 /**
  * Ties the generated jobs together as a shop's are, so the export reads links and enquiries per chunk and
@@ -83,11 +92,22 @@ export async function exchangeRows(storeFile: string, dir: string, jobs: number,
   const slice = join(dir, 'import.json');
   const count = Math.min(IMPORT_ROWS, jobs);
   await firstJobs(json, slice, count);
-  const target = join(dir, 'import-target.db');
-  openStore(target).close();
-  const r = runChild(['import', target, slice]);
-  if (r.count !== count) throw new Error(`the import brought in ${r.count} jobs, not ${count}`);
-  rows.push(row(`JSON import of ${r.count} jobs into an empty store (one transaction): time`, r.seconds, 's', '< 15 s', r.seconds < 15));
-  rows.push(row(`JSON import of ${r.count} jobs: peak RSS of the process`, r.peakMegabytes, 'MB', '< 300 MB', r.peakMegabytes < 300));
+  const runs = Array.from({ length: IMPORT_RUNS }, (_, i) => {
+    const target = join(dir, `import-target-${i}.db`);
+    openStore(target).close();
+    const r = runChild(['import', target, slice]);
+    rmSync(target, { force: true });
+    rmSync(`${target}-wal`, { force: true });
+    rmSync(`${target}-shm`, { force: true });
+    if (r.count !== count) throw new Error(`the import brought in ${r.count} jobs, not ${count}`);
+    return r;
+  });
+  const seconds = runs.map((r) => r.seconds).sort((a, b) => a - b);
+  const median = seconds[Math.floor(IMPORT_RUNS / 2)]!;
+  const peak = Math.max(...runs.map((r) => r.peakMegabytes));
+  rows.push(row(`JSON import of ${count} jobs into an empty store (one transaction): time, median of ${IMPORT_RUNS}`, median, 's', '< 15 s', median < 15));
+  rows.push(row(`JSON import of ${count} jobs: fastest of ${IMPORT_RUNS}`, seconds[0]!, 's'));
+  rows.push(row(`JSON import of ${count} jobs: slowest of ${IMPORT_RUNS}`, seconds[IMPORT_RUNS - 1]!, 's'));
+  rows.push(row(`JSON import of ${count} jobs: peak RSS of the process, highest of ${IMPORT_RUNS}`, peak, 'MB', '< 300 MB', peak < 300));
   return rows;
 }
