@@ -67,6 +67,21 @@ export function finishInterruptedRestore(file: string): void {
 }
 
 /**
+ * A restore that failed after the damaged store was moved aside (the copy could not be put in its place):
+ * the damaged store goes back where it was and the copy is dropped, so the store is as before the attempt
+ * (still damaged, still refused for saves) and the next open neither finishes the failed restore nor finds
+ * no store. Should even this fail, the next open finds the copy or the damaged store (finishInterruptedRestore).
+ */
+function putBack(damagedKeptAs: string, file: string, ready: string): void {
+  try {
+    moveWithCompanions(damagedKeptAs, file);
+    removeStoreFiles(ready);
+  } catch {
+    // Left for the next open, which finishes the restore from the copy or refuses the damaged store.
+  }
+}
+
+/**
  * Restores a backup where the store cannot be opened because it is damaged (so nothing can have it
  * open through this program): the backup is copied and checked as FILE.restore-ready, the damaged file is
  * moved aside as FILE.damaged-*, and the copy takes its place. A crash at any point is finished by the
@@ -76,18 +91,23 @@ export async function restoreDamagedStore(file: string, from: string, pause?: (s
   Promise<StoreResult<RestoreResult & { damagedKeptAs: string }>> {
   const ready = `${file}${READY}`;
   const partial = `${file}${INCOMING}${process.pid}`;
+  const damagedKeptAs = `${file}.damaged-${stampNow()}`;
+  let movedAside = false;
   try {
     const { version } = inspectStoreFile(from, { check: 'full' });
     await prepareIncoming(from, partial);
     moveWithCompanions(partial, ready);
     await pause?.('ready');
-    const damagedKeptAs = `${file}.damaged-${stampNow()}`;
-    if (existsSync(file)) moveWithCompanions(file, damagedKeptAs);
+    if (existsSync(file)) {
+      moveWithCompanions(file, damagedKeptAs);
+      movedAside = true;
+    }
     await pause?.('moved');
     moveWithCompanions(ready, file);
     return success({ restoredFrom: from, previousKeptAs: damagedKeptAs, damagedKeptAs, version });
   } catch (e) {
     removeStoreFiles(partial);
+    if (movedAside && !existsSync(file)) putBack(damagedKeptAs, file, ready);
     if (e instanceof StoreError) return { ok: false, error: e.toApiError() };
     return failure('restore-failed', (e as Error).message, 'file');
   }

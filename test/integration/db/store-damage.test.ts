@@ -1,8 +1,8 @@
 import { spawnSync } from 'node:child_process';
-import { readdirSync } from 'node:fs';
+import { readdirSync, rmSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { backupStore, createJob, inTransaction, listJobs, openStore } from '../../../db';
+import { backupStore, createJob, inTransaction, listJobs, openStore, restoreDamagedStore } from '../../../db';
 import { job, sha256, tempDir, track, value } from './helpers';
 import { damageIndexPage } from '../../support/damage';
 
@@ -43,5 +43,20 @@ describe('a damaged store', () => {
     const store = track(openStore(file));
     expect(value(listJobs(store, { limit: 500 })).total).toBe(150);
     expect(store.db.pragma('integrity_check', { simple: true })).toBe('ok');
+  });
+
+  it('stays as it was when the backup cannot be put in its place after it was moved aside: no empty store, no half restore', async () => {
+    const { dir, file, backup } = await damagedStore();
+    const before = sha256(file);
+    // The checked copy disappears between the two moves, so putting it in place fails.
+    const outcome = await restoreDamagedStore(file, backup, async (stage) => {
+      if (stage === 'moved') rmSync(`${file}.restore-ready`);
+    });
+    expect(outcome.ok).toBe(false);
+    expect(!outcome.ok && outcome.error.code).toBe('restore-failed');
+    expect(sha256(file)).toBe(before);
+    expect(readdirSync(dir).filter((n) => n !== 'shop.db' && n !== 'friday.db' && !n.endsWith('-wal') && !n.endsWith('-shm'))).toEqual([]);
+    const listed = cli('jobs', 'list', '--db', file);
+    expect(listed.stderr).toMatch(/is damaged/);
   });
 });
