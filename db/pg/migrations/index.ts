@@ -19,6 +19,7 @@ import { version0017 } from './0017-working-copy-desk';
 import { version0018 } from './0018-text-prefixes';
 import { version0019 } from './0019-dated-list-indexes';
 import { version0020 } from './0020-mixed-shape-coordinates';
+import { version0021 } from './0021-job-change-notice-per-statement';
 
 /**
  * The PostgreSQL side of each numbered migration of db/migrations/index.ts: same numbers, same logical schema.
@@ -45,4 +46,5 @@ export const pgMigrations: readonly { version: number; sql: string; after?: (c: 
   { version: 18, sql: version0018 },
   { version: 19, sql: version0019 },
   { version: 20, sql: version0020 },
+  { version: 21, sql: version0021 },
 ];
