@@ -27,7 +27,7 @@ const SHOW_WAIT_MS = 3000;
  */
 export async function showUpdateNotice(pending: PendingUpdate): Promise<{ close(): void }> {
   const window = new BrowserWindow(secureWindowOptions({
-    width: 520, height: 220, resizable: false, minimizable: false, maximizable: false, fullscreenable: false,
+    width: 540, height: 270, resizable: false, minimizable: false, maximizable: false, fullscreenable: false,
     title: 'Coilwright: updating the job store', backgroundColor: '#f5f5f2',
   }));
   window.setMenu(null);
