@@ -4,13 +4,13 @@
  * a small window says what is happening, and it goes once the store is open and the main window shows.
  */
 import Database from 'better-sqlite3';
-import { randomBytes } from 'node:crypto';
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { LATEST_VERSION, addAttachment, schemaVersion, storeBytes } from '../../db';
+import { LATEST_VERSION, schemaVersion, storeBytes } from '../../db';
 import { openShopStore } from '../../service/host/first-run';
+import { attachScannedDrawings } from '../support/large-store';
 import { FakeBrowserWindow, captured, paths } from './electron-mock';
 import { updateNoticePage } from '../../electron/shell/store-update-notice';
 import { NOTICE_FROM_BYTES, pendingLargeUpdate } from '../../service/host/store-update';
@@ -30,10 +30,7 @@ function largeStoreOneVersionBehind(): void {
   if (!opened.ok) throw new Error(opened.error.message);
   const store = opened.value.store;
   const jobId = (store.db.prepare('SELECT id FROM jobs ORDER BY id LIMIT 1').get() as { id: number }).id;
-  for (const name of ['drawing-sheet-1.tif', 'drawing-sheet-2.tif']) {
-    const added = addAttachment(store, { jobId, name, mimeType: 'image/tiff', dataBase64: randomBytes(34 * 1024 * 1024).toString('base64') });
-    if (!added.ok) throw new Error(added.error.message);
-  }
+  attachScannedDrawings(store, jobId);
   store.close();
   // The last migration changes nothing on SQLite, so the version before it is this store with a lower number.
   const db = new Database(storeFile());
