@@ -21,6 +21,7 @@ import { updateToVersion0018 } from './0018-text-prefixes';
 import { updateToVersion0019 } from './0019-dated-list-indexes';
 import { updateToVersion0020 } from './0020-mixed-shape-coordinates';
 import { updateToVersion0021 } from './0021-job-change-notice-per-statement';
+import { updateToVersion0022 } from './0022-drop-wire-size-index';
 
 export interface Migration {
   version: number;
@@ -51,6 +52,7 @@ export const migrations: readonly Migration[] = [
   { version: 19, name: 'dated list indexes', update: updateToVersion0019 },
   { version: 20, name: 'mixed shape coordinates', update: updateToVersion0020 },
   { version: 21, name: 'job change notice per statement', update: updateToVersion0021 },
+  { version: 22, name: 'drop wire size index', update: updateToVersion0022 },
 ];
 
 /** "Coil" in ASCII: marks a SQLite file as a Coilwright store (PRAGMA application_id). */

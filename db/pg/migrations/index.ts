@@ -20,6 +20,7 @@ import { version0018 } from './0018-text-prefixes';
 import { version0019 } from './0019-dated-list-indexes';
 import { version0020 } from './0020-mixed-shape-coordinates';
 import { version0021 } from './0021-job-change-notice-per-statement';
+import { version0022 } from './0022-drop-wire-size-index';
 
 /**
  * The PostgreSQL side of each numbered migration of db/migrations/index.ts: same numbers, same logical schema.
@@ -47,4 +48,5 @@ export const pgMigrations: readonly { version: number; sql: string; after?: (c: 
   { version: 19, sql: version0019 },
   { version: 20, sql: version0020 },
   { version: 21, sql: version0021 },
+  { version: 22, sql: version0022 },
 ];
