@@ -4,8 +4,8 @@ import type { ParsedArgs } from './io';
 import { InputError } from './io';
 
 /** The help's words for the date range of `jobs list`. */
-export const dateRangeHelp = '[--created-from D] [--created-to D] | [--updated-from D] [--updated-to D] | [--due-from D] [--due-to D]'
-  + ' (D as YYYY-MM-DD, both days included; one of created, updated (last saved) or due)';
+export const dateRangeHelp = '[--created-from D] [--created-to D] | [--updated-from D] [--updated-to D] | [--due-from D] [--due-to D]\n'
+  + '  (a date range on one of created, updated (last saved) or due; D as YYYY-MM-DD, both days included)';
 
 const bad = (flag: string, message: string): never => {
   throw new InputError([{ code: 'invalid-option', path: flag, message }]);
