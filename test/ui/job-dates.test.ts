@@ -62,6 +62,11 @@ describe('the job list by a date range', { timeout: UI_TEST_TIMEOUT }, () => {
     await page.locator('table.jobs').getByRole('button', { name: 'Job', exact: true }).click();
     await expect.poll(() => numbers(page)).toEqual(store.numbers);
     await screenshot(page, 'jobs-created-range-quoted');
+    await page.locator('table.jobs').getByRole('button', { name: 'Customer', exact: true }).click();
+    const byCustomer = await storeList(page, { status: 'quoted', dates: { field: 'created', from: '2024-03-01', to: '2025-02-28' }, sort: 'customer', direction: 'asc' });
+    await expect.poll(() => numbers(page)).toEqual(byCustomer.numbers);
+    await page.locator('table.jobs').getByRole('button', { name: 'Job', exact: true }).click();
+    await expect.poll(() => numbers(page)).toEqual(store.numbers);
   });
 
   it('clears the range back to the whole list', async () => {
