@@ -32,6 +32,8 @@ import type { PdfPreviews } from './shell/pdf-preview';
 import { createPdfShelf } from './shell/pdf-shelf';
 import { appProtocolHandler, registerAppScheme } from './shell/protocol';
 import { denyPermissions, hardenWebContents } from './shell/security';
+import { showUpdateNotice } from './shell/store-update-notice';
+import { pendingLargeUpdate } from '../service/host/store-update';
 import { createMainWindow } from './shell/window';
 
 // Privileged schemes must be declared before the app is ready.
@@ -135,9 +137,29 @@ function locateFonts(): void {
     : path.join(app.getAppPath(), 'assets', 'fonts');
 }
 
+/** The store the desktop app opens first: COILWRIGHT_STORE, else the store chosen last time, else the user's own file. */
+function startingLocation(): string {
+  return chosenStore({}) ?? fileStoreChoice(userFile('app-settings.json')).remembered()?.location ?? userFile('coilwright.db');
+}
+
+/** Opens the service, telling the user first when a large store must be brought up to this version's schema. */
+async function openServiceTelling(log: Log): Promise<Service | { code: string; message: string }> {
+  const pending = pendingLargeUpdate(startingLocation());
+  if (!pending) return openService(log);
+  log.info('store', `updating ${pending.file} (${pending.bytes} bytes) from schema version ${pending.from} to ${pending.to}`);
+  const notice = await showUpdateNotice(pending);
+  const started = Date.now();
+  try {
+    return openService(log);
+  } finally {
+    notice.close();
+    log.info('store', `the update took ${((Date.now() - started) / 1000).toFixed(1)} s`);
+  }
+}
+
 /** Opens the store; a damaged one may be replaced by a backup the user chooses, then opened again. */
 async function openOrRestore(log: Log): Promise<Service | { code: string; message: string }> {
-  const service = openService(log);
+  const service = await openServiceTelling(log);
   if ('handlers' in service || service.code !== 'store-corrupt') return service;
   return (await offerRestoreOfDamagedStore(userFile('coilwright.db'), service.message)) ? openService(log) : service;
 }

@@ -2,6 +2,7 @@ import type { ApiError, MethodInput, MethodName, MethodOutput, Contract } from '
 import { CHECK_BEFORE_OPEN_MAX_BYTES, STORE_VARIABLE, StoreError, openStoreAt, readOnlyNotice } from '../../db';
 import type { OpenOptions } from '../../db';
 import { chosenStore } from '../host/first-run';
+import { pendingLargeUpdate, updateNoticeText } from '../host/store-update';
 import { createService, dispatch } from '../api';
 import type { Service } from '../api';
 import type { ParsedArgs } from './io';
@@ -53,8 +54,17 @@ export const storeCheckHelp = [
   '  (integrity_check) on its own.',
 ].join('\n');
 
+/** A large store brought up to this version's schema as it opens says so first (on standard error). */
+function tellLargeUpdate(location: string): void {
+  const pending = pendingLargeUpdate(location);
+  if (!pending) return;
+  const { headline, detail } = updateNoticeText(pending);
+  process.stderr.write(`${headline}: ${detail.join(' ')}\n`);
+}
+
 export function openService(args: ParsedArgs): Service {
   const { location, path } = storeOption(args);
+  tellLargeUpdate(location);
   try {
     const store = openStoreAt(location, cliOpenOptions(args));
     if (store.readOnly) process.stderr.write(`${readOnlyNotice(store.file, store.readOnly)}\n`);

@@ -7,6 +7,7 @@ import { createService } from '../api';
 import type { Service } from '../api';
 import type { OpenOptions } from '../../db';
 import { openShopStoreAt } from '../host/first-run';
+import { pendingLargeUpdate, updateNoticeText } from '../host/store-update';
 import { openStartingStore } from '../host/store-choice';
 import type { StoreChoiceKeeper } from '../host/store-choice';
 import { isAuthorized, newToken, sameToken, sessionCookie } from './auth';
@@ -157,6 +158,12 @@ function listen(server: Server, port: number): Promise<number> {
 }
 
 function openService(options: WebServerOptions, onNotice: (text: string) => void): Service {
+  const pending = pendingLargeUpdate(options.choice && options.named === false
+    ? options.choice.remembered()?.location ?? options.dbFile : options.dbFile);
+  if (pending) {
+    const { headline, detail } = updateNoticeText(pending);
+    onNotice(`${headline}: ${detail.join(' ')}`);
+  }
   const opened = options.choice && options.named === false
     ? openStartingStore(undefined, options.choice, options.dbFile, options.openOptions)
     : openShopStoreAt(options.dbFile, options.openOptions);

@@ -3,15 +3,15 @@
  * made large by two drawings attached to a demo job) with one index page overwritten: the store opens at once,
  * the check fails in the background, main says so and restores the backup the user picks, and saves go on.
  */
-import { randomBytes } from 'node:crypto';
 import { mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import type { MessageBoxOptions } from 'electron';
 import { MENU_COMMAND_CHANNEL } from '../../core/api/method-names';
-import { CHECK_BEFORE_OPEN_MAX_BYTES, addAttachment, backupStore, storeBytes } from '../../db';
+import { CHECK_BEFORE_OPEN_MAX_BYTES, backupStore, storeBytes } from '../../db';
 import { openShopStore } from '../../service/host/first-run';
+import { attachScannedDrawings } from '../support/large-store';
 import { damageIndexPage } from '../support/damage';
 import { FakeBrowserWindow, captured, electron, ipcEvent, paths } from './electron-mock';
 
@@ -34,10 +34,7 @@ async function largeDamagedStore(): Promise<void> {
   if (!opened.ok) throw new Error(opened.error.message);
   const store = opened.value.store;
   const jobId = (store.db.prepare('SELECT id FROM jobs ORDER BY id LIMIT 1').get() as { id: number }).id;
-  for (const name of ['drawing-sheet-1.tif', 'drawing-sheet-2.tif']) {
-    const added = addAttachment(store, { jobId, name, mimeType: 'image/tiff', dataBase64: randomBytes(34 * 1024 * 1024).toString('base64') });
-    if (!added.ok) throw new Error(added.error.message);
-  }
+  attachScannedDrawings(store, jobId);
   const made = await backupStore(store, backup);
   if (!made.ok) throw new Error(made.error.message);
   damageIndexPage(store);

@@ -1,0 +1,59 @@
+// A large store written by the version before is brought up to this one's schema as the command line opens it,
+// and the command says so on standard error first, so a long pause is explained. A small store says nothing.
+import Database from 'better-sqlite3';
+import { spawnSync } from 'node:child_process';
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { LATEST_VERSION, createJob, schemaVersion, storeBytes } from '../../db';
+import { NOTICE_FROM_BYTES } from '../../service/host/store-update';
+import { job, tempStore, value } from './db/helpers';
+import { attachScannedDrawings } from '../support/large-store';
+
+const root = resolve(__dirname, '../..');
+const cli = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+
+/** A store with one demo job, made larger by `sheets` scanned drawing sheets of 34 MB, marked as written by the version before. */
+function storeOneVersionBehind(sheets: number): string {
+  const store = tempStore();
+  const made = value(createJob(store, job({ partNumber: 'QX-7 (demo)' })));
+  attachScannedDrawings(store, made.id, sheets);
+  const file = store.file;
+  store.close();
+  const db = new Database(file);
+  // The last migration changes nothing on SQLite: the version before it is this store with a lower number.
+  db.pragma(`user_version = ${LATEST_VERSION - 1}`);
+  db.close();
+  return file;
+}
+
+const versionOf = (file: string) => {
+  const db = new Database(file, { readonly: true });
+  try {
+    return schemaVersion(db);
+  } finally {
+    db.close();
+  }
+};
+
+describe('the command line on a store of the version before', () => {
+  it('says it is updating a large store, then does the command', () => {
+    const file = storeOneVersionBehind(2);
+    expect(storeBytes(file)).toBeGreaterThan(NOTICE_FROM_BYTES);
+    const listed = cli('jobs', 'list', '--db', file);
+    expect(listed.status, listed.stderr).toBe(0);
+    expect(listed.stderr).toContain('Updating the job store for this version of Coilwright:');
+    expect(listed.stderr).toContain(`from schema version ${LATEST_VERSION - 1} to ${LATEST_VERSION}`);
+    expect(listed.stdout).toContain('QX-7 (demo)');
+    expect(versionOf(file)).toBe(LATEST_VERSION);
+    expect(cli('jobs', 'list', '--db', file).stderr).not.toContain('Updating the job store');
+  });
+
+  it('updates a small store without a word', () => {
+    const file = storeOneVersionBehind(0);
+    const listed = cli('jobs', 'list', '--db', file);
+    expect(listed.status, listed.stderr).toBe(0);
+    expect(listed.stderr).toBe('');
+    expect(versionOf(file)).toBe(LATEST_VERSION);
+  });
+});
+
