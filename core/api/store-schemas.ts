@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { jobJudgementSchema, noJudgement } from '../quoting/judgement';
 import { specBounds } from '../spec/bounds';
 import { quoteTermsInputSchema } from '../documents/quote-terms';
+import { isBackwardsRange, jobDateFields } from './job-dates';
 
 /** Input shapes of the job store. Specs stay `unknown` here: the store validates them with parseSpec. */
 export const jobStatuses = ['draft', 'quoted', 'ordered', 'in-production', 'done', 'lost'] as const;
@@ -113,10 +114,10 @@ export const listJobsSchema = z.object({
   /** true lists the archived jobs instead (newest archived first unless sorted otherwise); search finds both. */
   archived: z.boolean().default(false),
   dates: z.object({
-    field: z.enum(['created', 'updated', 'due']).default('updated'),
+    field: z.enum(jobDateFields).default('updated'),
     from: isoDateSchema.optional(),
     to: isoDateSchema.optional(),
-  }).strict().optional(),
+  }).strict().refine((d) => !isBackwardsRange(d), { message: 'the from date is after the to date', path: ['from'] }).optional(),
   sort: jobSortSchema.default('updated'),
   direction: z.enum(['asc', 'desc']).optional(),
   limit: z.number().int().min(1).max(500).default(50),

@@ -5,6 +5,7 @@ import * as s from './store-schemas';
 import type * as t from './store-types';
 
 export * from './store-schemas';
+export * from './job-dates';
 export type * from './store-types';
 
 const none = z.object({}).strict();

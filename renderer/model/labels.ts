@@ -1,4 +1,4 @@
-import type { JobStatus } from '../../core/api';
+import type { JobDateField, JobStatus } from '../../core/api';
 import type { CompressionEnds, ExtensionEndForm, FreeParameter, LegForm, Seating } from '../../core/spec';
 import type { Term, Wind } from '../../core/vocabulary';
 import {
@@ -8,6 +8,9 @@ import {
 /** A select list's labels from the shared vocabulary's short terms. */
 const shortLabels = <K extends string>(terms: Record<K, Term>): Record<K, string> =>
   Object.fromEntries(Object.entries<Term>(terms).map(([k, t]) => [k, sentenceCase(t.short)])) as Record<K, string>;
+
+/** A job's dates as the list's date range names them. */
+export const jobDateLabels: Record<JobDateField, string> = { created: 'Created', updated: 'Last saved', due: 'Due' };
 
 export const statusLabels: Record<JobStatus, string> = {
   draft: 'Draft', quoted: 'Quoted', ordered: 'Ordered', 'in-production': 'In production', done: 'Done', lost: 'Lost',

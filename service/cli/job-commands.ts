@@ -5,6 +5,7 @@ import type { ParsedArgs } from './io';
 import { InputError, readJson, toJson } from './io';
 import type { Caller } from './store-session';
 import { intOption, jobRef, positional, withStore } from './store-session';
+import { dateRangeHelp, dateRangeOption } from './date-range-options';
 
 /** The job file of `jobs add` says "drawing" and "revision" for the drawing number and its revision. */
 function jobFileInput(raw: unknown): unknown {
@@ -36,7 +37,9 @@ const subcommands: Record<string, Sub> = {
   show: async (args, call) => call('getJob', jobRef(positional(args, 1, 'ID', 'jobs show'))),
   list: async (args, call) => {
     const status = args.options.get('status');
+    const dates = dateRangeOption(args);
     return call('listJobs', {
+      ...(dates ? { dates } : {}),
       ...(typeof status === 'string' ? { status: status.split(',') as JobStatus[] } : {}),
       ...(intOption(args, 'customer') !== undefined ? { customerId: intOption(args, 'customer') } : {}),
       ...(typeof args.options.get('kind') === 'string' ? { kind: args.options.get('kind') as string } : {}),
@@ -72,7 +75,8 @@ export const jobsCommand: Command = {
   usage: [
     'jobs add FILE --db DB       store a job ({"customer":{"name":…},"partNumber":…,"drawing":…,"revision":…,"notes":…,"spec":{…}})',
     '  jobs show ID|NUMBER --db DB, jobs list [--status S[,S]] [--customer ID] [--kind K] [--sort number|updated|customer]',
-    '  [--material ID] [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
+    `  [--material ID] ${dateRangeHelp}`,
+    '  [--limit N] [--offset N | --after NEXT] --db DB, jobs find TEXT --db DB, jobs similar SPECFILE [--limit N] --db DB,',
     '  jobs revisions ID --db DB, jobs status ID STATUS --db DB, jobs restore ID REVISION --db DB,',
     '  jobs copy ID|NUMBER --db DB (a new job from a past one), jobs archive ID|NUMBER [--undo] --db DB (jobs list --archived lists them),',
     '  jobs delete ID|NUMBER --db DB (a draft never quoted), jobs undelete ID --db DB (the id the deletion printed),',

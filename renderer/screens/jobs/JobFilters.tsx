@@ -5,6 +5,9 @@ import { PlainInput, PlainSelect } from '../../components/Plain';
 import { useShopData } from '../../hooks/shop-data';
 import { statusLabels } from '../../model/labels';
 import { kindLabel } from '../../../core/vocabulary';
+import type { DateRange } from '../../model/date-ranges';
+import { noDateRange } from '../../model/date-ranges';
+import { DateRangeFilter } from './DateRange';
 
 export interface Filters {
   status: string;
@@ -13,9 +16,10 @@ export interface Filters {
   customerId: string;
   /** '' lists the jobs in use; 'archived' the archived ones. A text search finds both. */
   shelf: '' | 'archived';
+  dates: DateRange;
 }
 
-export const noFilters: Filters = { status: '', kind: '', material: '', customerId: '', shelf: '' };
+export const noFilters: Filters = { status: '', kind: '', material: '', customerId: '', shelf: '', dates: noDateRange };
 
 interface FilterBarProps {
   text: string;
@@ -27,7 +31,7 @@ interface FilterBarProps {
 
 export function FilterBar({ text, onText, filters, onFilters, searchRef }: FilterBarProps) {
   const shop = useShopData();
-  const set = (key: keyof Filters) => (value: string) => onFilters({ ...filters, [key]: value });
+  const set = (key: Exclude<keyof Filters, 'dates'>) => (value: string) => onFilters({ ...filters, [key]: value });
   return (
     <div role="search" className="filterbar" aria-label="Find jobs">
       <div className="filterbar__search">
@@ -46,6 +50,7 @@ export function FilterBar({ text, onText, filters, onFilters, searchRef }: Filte
         choices={[{ value: '', label: 'Any customer' }, ...shop.customers.map((c) => ({ value: String(c.id), label: c.name }))]} />
       <PlainSelect label="List" value={filters.shelf} onChange={set('shelf')}
         choices={[{ value: '', label: 'Jobs in use' }, { value: 'archived', label: 'Archived jobs' }]} />
+      <DateRangeFilter range={filters.dates} onRange={(dates) => onFilters({ ...filters, dates })} />
     </div>
   );
 }

@@ -1,6 +1,6 @@
 import type { JobSummary } from '../../../core/api';
 import { formatQuantity } from '../../../core/format';
-import { statusLabels } from '../../model/labels';
+import { jobDateLabels, statusLabels } from '../../model/labels';
 import { kindLabel } from '../../../core/vocabulary';
 import { kindEntryOf } from '../../../core/kinds/registry';
 
@@ -24,6 +24,8 @@ interface JobTableProps {
   onDelete(job: JobSummary): void;
   /** The archived list: its newest-first sort is by the date each job was archived. */
   archived?: boolean;
+  /** A date range on the created or due date shows that date in its own column. */
+  rangeDate?: 'created' | 'due' | null;
 }
 
 function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sort: Sort | null; onSort(k: SortKey): void }) {
@@ -46,7 +48,7 @@ const day = (iso: string) => iso.slice(0, 10);
 const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
   [selected ? 'is-selected' : '', j.problem ? 'has-problem' : ''].filter(Boolean).join(' ') || undefined;
 
-export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete, archived = false }: JobTableProps) {
+export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, onOpen, onSimilar, onArchive, onDelete, archived = false, rangeDate = null }: JobTableProps) {
   const all = jobs.length > 0 && jobs.every((j) => selected.has(j.id));
   return (
     <table className="table jobs" aria-label="Jobs">
@@ -64,6 +66,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           <th scope="col" className="num">OD</th>
           <th scope="col" className="num">L0</th>
           <th scope="col" className="num">Rate</th>
+          {rangeDate ? <th scope="col">{jobDateLabels[rangeDate]}</th> : null}
           <SortHeader label={archived ? 'Archived' : 'Updated'} k="updated" sort={sort} onSort={onSort} />
           <th scope="col"><span className="sr-only">Actions</span></th>
         </tr>
@@ -89,6 +92,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
+              {rangeDate ? <td className="nowrap">{rangeDate === 'due' ? (j.dueDate ?? '—') : day(j.createdAt)}</td> : null}
               <td className="nowrap">{day(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
               <td className="row-actions">
                 <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>

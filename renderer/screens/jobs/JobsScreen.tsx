@@ -14,6 +14,8 @@ import { FilterBar, noFilters } from './JobFilters';
 import type { Sort, SortKey } from './JobTable';
 import { JobTable } from './JobTable';
 import { Pager } from './Pager';
+import { dateRangeProblem, isRangeSet, jobInRange, rangeInput } from '../../model/date-ranges';
+import { jobCount } from '../../model/job-count';
 import { QuoteSelected } from './QuoteSelected';
 import { ShelfNotice, useShelfActions } from './ShelfActions';
 
@@ -21,7 +23,8 @@ export const PAGE_SIZE = 50;
 
 const matches = (j: JobSummary, f: Filters): boolean =>
   (f.status === '' || j.status === f.status) && (f.kind === '' || j.shape.kind === f.kind)
-  && (f.material === '' || j.shape.material === f.material) && (f.customerId === '' || String(j.customer?.id) === f.customerId);
+  && (f.material === '' || j.shape.material === f.material) && (f.customerId === '' || String(j.customer?.id) === f.customerId)
+  && jobInRange(j, f.dates);
 
 /** Pages follow each other by the key the store hands back with each page (keyset paging). */
 function useJobRows(text: string, filters: Filters, sort: Sort, after: string | undefined) {
@@ -30,9 +33,12 @@ function useJobRows(text: string, filters: Filters, sort: Sort, after: string | 
   const input = {
     status: (filters.status || undefined) as JobStatus | undefined, kind: filters.kind || undefined,
     material: filters.material || undefined, customerId: filters.customerId ? Number(filters.customerId) : undefined,
-    archived: filters.shelf === 'archived', sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, after,
+    archived: filters.shelf === 'archived', dates: isRangeSet(filters.dates) ? rangeInput(filters.dates) : undefined,
+    sort: sort.key, direction: sort.direction, limit: PAGE_SIZE, after,
   };
-  const list = useQuery(searching ? null : JSON.stringify(input), () => api.listJobs(input));
+  // A backwards range is not asked for: the list stays as it was while the field says what is wrong.
+  const asked = !searching && dateRangeProblem(filters.dates) === null;
+  const list = useQuery(asked ? JSON.stringify(input) : null, () => api.listJobs(input));
   const found = useQuery(searching ? text.trim() : null, () => api.findJobs({ text: text.trim(), limit: 200 }), 120);
   if (searching) {
     const jobs = (found.value ?? []).map((h) => h.job).filter((j) => matches(j, filters));
@@ -42,11 +48,6 @@ function useJobRows(text: string, filters: Filters, sort: Sort, after: string | 
     searching, jobs: list.value?.jobs ?? [], total: list.value?.total ?? 0, totalAtLeast: list.value?.totalAtLeast ?? false, next: list.value?.next ?? null,
     state: list.state, error: list.error, reload: list.reload,
   };
-}
-
-/** "1 job", "2041 jobs", or "10000+ jobs" when the store stopped counting a date range. */
-function jobCount(total: number, atLeast: boolean): string {
-  return `${total}${atLeast ? '+' : ''} job${total === 1 && !atLeast ? '' : 's'}`;
 }
 
 /** The job book: search by text, filter, sort, page, find similar springs, print travellers or quote a selection. */
@@ -107,8 +108,8 @@ export function JobsScreen() {
         onFilters={(f) => { setFilters(f); setPage(0); }} searchRef={searchRef} />
       <p className="listing-status" role="status" aria-live="polite">
         {rows.state === 'loading' && rows.jobs.length === 0 ? 'Loading jobs…'
-          : rows.searching ? `${rows.total} job${rows.total === 1 ? '' : 's'} match “${text.trim()}”, best match first`
-            : `${jobCount(rows.total, rows.totalAtLeast)}`}
+          : rows.searching ? `${jobCount(rows.total)} match “${text.trim()}”, best match first`
+            : jobCount(rows.total, rows.totalAtLeast)}
         {selected.size > 0 ? ` · ${selected.size} selected` : ''}
       </p>
       {rows.error ? <p className="error-text" role="alert">{rows.error.message}</p> : null}
@@ -119,8 +120,9 @@ export function JobsScreen() {
           jobs={rows.jobs} sort={rows.searching ? null : sort} onSort={onSort} selected={selected} onSelect={select}
           onSelectAll={(on) => rows.jobs.forEach((j) => select(j.id, on))} onOpen={(id) => nav.openJob(id)} onSimilar={(j) => void openSimilar(j)}
           onArchive={(j, on) => void shelf.archive(j, on)} onDelete={(j) => void shelf.remove(j)} archived={!rows.searching && filters.shelf === 'archived'}
+          rangeDate={isRangeSet(filters.dates) && filters.dates.field !== 'updated' ? filters.dates.field : null}
         />
-        {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search or the filters, or start a new job.</p> : null}
+        {rows.state === 'ok' && rows.jobs.length === 0 ? <p className="empty">No job matches. Clear the search, the filters or the dates, or start a new job.</p> : null}
       </div>
       {rows.searching ? null : <Pager page={page} pageSize={PAGE_SIZE} total={rows.total} totalAtLeast={rows.totalAtLeast} hasNext={rows.next !== null}
         onPage={(to) => (to > page ? nextPage() : setPage(to))} />}
