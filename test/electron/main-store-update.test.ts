@@ -1,6 +1,6 @@
 /**
- * The shell booted against the mocked electron module on a store that is over the notice's size (made large by
- * two drawings attached to a demo job) and one schema version behind: before the update holds the main process
+ * The shell booted against the mocked electron module on a store that is over the notice's size (two scanned
+ * drawing sheets attached to a demo job) and one schema version behind: before the update holds the main process
  * a small window says what is happening, and it goes once the store is open and the main window shows.
  */
 import Database from 'better-sqlite3';
@@ -10,7 +10,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { LATEST_VERSION, schemaVersion, storeBytes } from '../../db';
 import { openShopStore } from '../../service/host/first-run';
-import { attachScannedDrawings } from '../support/large-store';
+import { writeStoreOneVersionBehind } from '../support/large-store';
 import { FakeBrowserWindow, captured, paths } from './electron-mock';
 import { updateNoticePage } from '../../electron/shell/store-update-notice';
 import { NOTICE_FROM_BYTES, pendingLargeUpdate } from '../../service/host/store-update';
@@ -23,28 +23,14 @@ const storeVariable = process.env.COILWRIGHT_STORE;
 const listenersBefore = process.listeners('uncaughtException');
 const rejectionsBefore = process.listeners('unhandledRejection');
 
-/** The demo shop with two scanned drawings (over the notice's size), marked as written by the version before. */
-function largeStoreOneVersionBehind(): void {
-  mkdirSync(paths.userData, { recursive: true });
-  const opened = openShopStore(storeFile());
-  if (!opened.ok) throw new Error(opened.error.message);
-  const store = opened.value.store;
-  const jobId = (store.db.prepare('SELECT id FROM jobs ORDER BY id LIMIT 1').get() as { id: number }).id;
-  attachScannedDrawings(store, jobId);
-  store.close();
-  // The last migration changes nothing on SQLite, so the version before it is this store with a lower number.
-  const db = new Database(storeFile());
-  db.pragma(`user_version = ${LATEST_VERSION - 1}`);
-  db.close();
-}
-
 beforeAll(async () => {
   delete process.env.COILWRIGHT_STORE;
   dir = mkdtempSync(path.join(os.tmpdir(), 'cw-main-update-'));
   Object.assign(paths, { userData: path.join(dir, 'user'), appPath: path.join(dir, 'app'), temp: path.join(dir, 'temp') });
   mkdirSync(path.join(paths.appPath, 'dist', 'renderer'), { recursive: true });
   writeFileSync(path.join(paths.appPath, 'dist', 'renderer', 'index.html'), '<!doctype html><title>Coilwright</title>');
-  largeStoreOneVersionBehind();
+  mkdirSync(paths.userData, { recursive: true });
+  writeStoreOneVersionBehind(storeFile(), 2);
   expect(storeBytes(storeFile())).toBeGreaterThan(NOTICE_FROM_BYTES);
   await import('../../electron/main');
   await vi.waitFor(() => expect(FakeBrowserWindow.all).toHaveLength(2), { timeout: 30_000, interval: 100 });

@@ -2,27 +2,19 @@
 // and the command says so on standard error first, so a long pause is explained. A small store says nothing.
 import Database from 'better-sqlite3';
 import { spawnSync } from 'node:child_process';
-import { resolve } from 'node:path';
+import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { LATEST_VERSION, createJob, schemaVersion, storeBytes } from '../../db';
+import { LATEST_VERSION, schemaVersion, storeBytes } from '../../db';
 import { NOTICE_FROM_BYTES } from '../../service/host/store-update';
-import { job, tempStore, value } from './db/helpers';
-import { attachScannedDrawings } from '../support/large-store';
+import { tempDir } from './db/helpers';
+import { writeStoreOneVersionBehind } from '../support/large-store';
 
 const root = resolve(__dirname, '../..');
 const cli = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
 
-/** A store with one demo job, made larger by `sheets` scanned drawing sheets of 34 MB, marked as written by the version before. */
 function storeOneVersionBehind(sheets: number): string {
-  const store = tempStore();
-  const made = value(createJob(store, job({ partNumber: 'QX-7 (demo)' })));
-  attachScannedDrawings(store, made.id, sheets);
-  const file = store.file;
-  store.close();
-  const db = new Database(file);
-  // The last migration changes nothing on SQLite: the version before it is this store with a lower number.
-  db.pragma(`user_version = ${LATEST_VERSION - 1}`);
-  db.close();
+  const file = join(tempDir(), 'shop.db');
+  writeStoreOneVersionBehind(file, sheets);
   return file;
 }
 
