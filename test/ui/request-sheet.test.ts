@@ -35,7 +35,12 @@ async function importSheet(page: Page, file: { name: string; mimeType: string; b
   await page.getByRole('button', { name: 'Import 10 jobs as one enquiry' }).click();
 
   const jobs = page.getByRole('table', { name: `Jobs of enquiry ${reference}` });
-  await jobs.waitFor();
+  await jobs.waitFor().catch(async (e: unknown) => {
+    // What the screen said instead (an error, a status), with a picture, so a rare failure names its cause.
+    await screenshot(page, `${shot}-not-imported`);
+    const said = await page.locator('[role=alert], [role=status], .panel__title').allInnerTexts();
+    throw new Error(`${(e as Error).message}\nthe screen said: ${said.join(' | ')}`);
+  });
   await expect.poll(() => jobs.locator('tbody tr').count(), { timeout: 10_000 }).toBe(10);
   await expect(jobs.locator('tbody tr').nth(6).textContent()).resolves.toMatch(/HV-1006.*Compression.*draft/);
   await jobs.scrollIntoViewIfNeeded();
