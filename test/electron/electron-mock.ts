@@ -118,3 +118,15 @@ export const navigationEvent = (url: string) => ({ url, preventDefault: vi.fn() 
 
 /** An IPC event from a frame at `url` (null: the frame is gone). */
 export const ipcEvent = (url: string | null) => ({ senderFrame: url === null ? null : { url } });
+
+/**
+ * Main's boot adds process-wide handlers (uncaught exceptions, unhandled rejections). Call at the top of a test
+ * file that imports main; the function it returns takes away every handler added since, for the next file.
+ */
+export function processHandlersRestorer(): () => void {
+  const kept = { uncaughtException: process.listeners('uncaughtException'), unhandledRejection: process.listeners('unhandledRejection') };
+  return () => {
+    for (const l of process.listeners('uncaughtException')) if (!kept.uncaughtException.includes(l)) process.off('uncaughtException', l);
+    for (const l of process.listeners('unhandledRejection')) if (!kept.unhandledRejection.includes(l)) process.off('unhandledRejection', l);
+  };
+}

@@ -13,7 +13,7 @@ import { CHECK_BEFORE_OPEN_MAX_BYTES, backupStore, storeBytes } from '../../db';
 import { openShopStore } from '../../service/host/first-run';
 import { attachScannedDrawings } from '../support/large-store';
 import { damageIndexPage } from '../support/damage';
-import { FakeBrowserWindow, captured, electron, ipcEvent, paths } from './electron-mock';
+import { FakeBrowserWindow, captured, electron, ipcEvent, paths, processHandlersRestorer } from './electron-mock';
 
 vi.mock('electron', async () => (await import('./electron-mock')).electron);
 
@@ -21,8 +21,7 @@ let dir: string;
 let backup: string;
 const storeFile = () => path.join(paths.userData, 'coilwright.db');
 const storeVariable = process.env.COILWRIGHT_STORE;
-const listenersBefore = process.listeners('uncaughtException');
-const rejectionsBefore = process.listeners('unhandledRejection');
+const restoreProcessHandlers = processHandlersRestorer();
 const trusted = ipcEvent('app://coilwright/index.html');
 const call = async (method: string, input: unknown) =>
   await captured.ipcMain.get(`api:${method}`)!(trusted, input) as { ok: boolean; value: Record<string, unknown>; error?: { code: string } };
@@ -58,8 +57,7 @@ beforeAll(async () => {
 
 afterAll(() => {
   captured.app.emit('will-quit');
-  for (const l of process.listeners('uncaughtException')) if (!listenersBefore.includes(l)) process.off('uncaughtException', l);
-  for (const l of process.listeners('unhandledRejection')) if (!rejectionsBefore.includes(l)) process.off('unhandledRejection', l);
+  restoreProcessHandlers();
   if (storeVariable !== undefined) process.env.COILWRIGHT_STORE = storeVariable;
   rmSync(dir, { recursive: true, force: true });
 });

@@ -7,15 +7,14 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { DataActionEvent } from '../../core/api/method-names';
-import { FakeBrowserWindow, captured, electron, ipcEvent, paths } from './electron-mock';
+import { FakeBrowserWindow, captured, electron, ipcEvent, paths, processHandlersRestorer } from './electron-mock';
 
 vi.mock('electron', async () => (await import('./electron-mock')).electron);
 
 let dir: string;
 let out: string;
 let window: FakeBrowserWindow;
-const listenersBefore = process.listeners('uncaughtException');
-const rejectionsBefore = process.listeners('unhandledRejection');
+const restoreProcessHandlers = processHandlersRestorer();
 const trusted = ipcEvent('app://coilwright/index.html');
 const invoke = (channel: string, ...args: unknown[]) => captured.ipcMain.get(channel)!(trusted, ...args);
 
@@ -33,8 +32,7 @@ beforeAll(async () => {
 
 afterAll(() => {
   captured.app.emit('will-quit');
-  for (const l of process.listeners('uncaughtException')) if (!listenersBefore.includes(l)) process.off('uncaughtException', l);
-  for (const l of process.listeners('unhandledRejection')) if (!rejectionsBefore.includes(l)) process.off('unhandledRejection', l);
+  restoreProcessHandlers();
   rmSync(dir, { recursive: true, force: true });
 });
 

@@ -3,13 +3,12 @@ import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'nod
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { FakeBrowserWindow, captured, electron, paths } from './electron-mock';
+import { FakeBrowserWindow, captured, electron, paths, processHandlersRestorer } from './electron-mock';
 
 vi.mock('electron', async () => (await import('./electron-mock')).electron);
 
 let dir: string;
-const listenersBefore = process.listeners('uncaughtException');
-const rejectionsBefore = process.listeners('unhandledRejection');
+const restoreProcessHandlers = processHandlersRestorer();
 
 beforeAll(async () => {
   dir = mkdtempSync(path.join(os.tmpdir(), 'cw-main-refused-'));
@@ -23,8 +22,7 @@ beforeAll(async () => {
 });
 
 afterAll(() => {
-  for (const l of process.listeners('uncaughtException')) if (!listenersBefore.includes(l)) process.off('uncaughtException', l);
-  for (const l of process.listeners('unhandledRejection')) if (!rejectionsBefore.includes(l)) process.off('unhandledRejection', l);
+  restoreProcessHandlers();
   rmSync(dir, { recursive: true, force: true });
 });
 

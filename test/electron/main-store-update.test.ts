@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { LATEST_VERSION, schemaVersion, storeBytes } from '../../db';
 import { openShopStore } from '../../service/host/first-run';
 import { writeStoreOneVersionBehind } from '../support/large-store';
-import { FakeBrowserWindow, captured, paths } from './electron-mock';
+import { FakeBrowserWindow, captured, paths, processHandlersRestorer } from './electron-mock';
 import { updateNoticePage } from '../../electron/shell/store-update-notice';
 import { NOTICE_FROM_BYTES, pendingLargeUpdate } from '../../service/host/store-update';
 
@@ -20,8 +20,7 @@ vi.mock('electron', async () => (await import('./electron-mock')).electron);
 let dir: string;
 const storeFile = () => path.join(paths.userData, 'coilwright.db');
 const storeVariable = process.env.COILWRIGHT_STORE;
-const listenersBefore = process.listeners('uncaughtException');
-const rejectionsBefore = process.listeners('unhandledRejection');
+const restoreProcessHandlers = processHandlersRestorer();
 
 beforeAll(async () => {
   delete process.env.COILWRIGHT_STORE;
@@ -38,8 +37,7 @@ beforeAll(async () => {
 
 afterAll(() => {
   captured.app.emit('will-quit');
-  for (const l of process.listeners('uncaughtException')) if (!listenersBefore.includes(l)) process.off('uncaughtException', l);
-  for (const l of process.listeners('unhandledRejection')) if (!rejectionsBefore.includes(l)) process.off('unhandledRejection', l);
+  restoreProcessHandlers();
   if (storeVariable !== undefined) process.env.COILWRIGHT_STORE = storeVariable;
   rmSync(dir, { recursive: true, force: true });
 });
