@@ -67,7 +67,7 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
           <th scope="col" className="num">L0</th>
           <th scope="col" className="num">Rate</th>
           {rangeDate ? <th scope="col">{jobDateLabels[rangeDate]}</th> : null}
-          <SortHeader label={archived ? 'Archived' : 'Updated'} k="updated" sort={sort} onSort={onSort} />
+          <SortHeader label={archived ? 'Archived' : jobDateLabels.updated} k="updated" sort={sort} onSort={onSort} />
           <th scope="col"><span className="sr-only">Actions</span></th>
         </tr>
       </thead>
