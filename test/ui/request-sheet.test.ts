@@ -10,8 +10,13 @@ async function importSheet(page: Page, file: { name: string; mimeType: string; b
   await page.getByRole('button', { name: 'Request sheets' }).click();
   await page.getByRole('heading', { name: 'Import a request sheet', level: 1 }).waitFor();
   await page.getByLabel('Request sheet (CSV or XLSX, one spring per row)').setInputFiles(file);
+  // As the estimator does: the sheet is read (and its reference proposed from the file name) before they type over it.
+  await page.getByRole('status').filter({ hasText: `${file.name}: ` }).filter({ hasText: 'rows read.' }).waitFor();
+  const referenceBox = page.getByRole('textbox', { name: 'Enquiry reference', exact: true });
+  await expect(referenceBox.inputValue()).resolves.toBe(file.name.replace(/\.[^.]+$/, ''));
   await field(page, 'Customer').fill(DEMO_CUSTOMER);
-  await page.getByRole('textbox', { name: 'Enquiry reference', exact: true }).fill(reference);
+  await referenceBox.fill(reference);
+  await expect(referenceBox.inputValue()).resolves.toBe(reference);
   const counts = page.getByRole('status').filter({ hasText: /rows? ready/ });
   await counts.waitFor();
   await page.getByRole('combobox', { name: 'Decimal mark' }).selectOption(decimalComma ? ',' : '.');
