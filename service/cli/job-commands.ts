@@ -26,48 +26,92 @@ function specOf(raw: unknown): unknown {
   return isJobFile ? (raw as { spec: unknown }).spec : raw;
 }
 
-async function jobId(call: Caller, text: string): Promise<number> {
-  return (await call('getJob', jobRef(text))).id;
+/**
+ * A subcommand in two steps: its arguments are read first, so a bad one is refused before the store opens (or is
+ * created); what it returns then runs against the store.
+ */
+type Sub = (args: ParsedArgs) => (call: Caller) => Promise<unknown>;
+
+const onJob = (args: ParsedArgs, name: string) => jobRef(positional(args, 1, 'ID', name));
+const jobId = async (call: Caller, ref: ReturnType<typeof jobRef>): Promise<number> => (await call('getJob', ref)).id;
+
+function listQuery(args: ParsedArgs) {
+  const status = args.options.get('status');
+  const dates = dateRangeOption(args);
+  return {
+    ...(dates ? { dates } : {}),
+    ...(typeof status === 'string' ? { status: status.split(',') as JobStatus[] } : {}),
+    ...(intOption(args, 'customer') !== undefined ? { customerId: intOption(args, 'customer') } : {}),
+    ...(typeof args.options.get('kind') === 'string' ? { kind: args.options.get('kind') as string } : {}),
+    ...(typeof args.options.get('sort') === 'string' ? { sort: args.options.get('sort') as never } : {}),
+    ...(typeof args.options.get('material') === 'string' ? { material: args.options.get('material') as string } : {}),
+    ...(typeof args.options.get('after') === 'string' ? { after: args.options.get('after') as string } : {}),
+    ...(args.options.has('archived') ? { archived: true } : {}),
+    limit: intOption(args, 'limit') ?? 50,
+    offset: intOption(args, 'offset') ?? 0,
+  };
 }
 
-type Sub = (args: ParsedArgs, call: Caller) => Promise<unknown>;
-
 const subcommands: Record<string, Sub> = {
-  add: async (args, call) => call('createJob', jobFileInput(readJson(positional(args, 1, 'FILE', 'jobs add'))) as never),
-  show: async (args, call) => call('getJob', jobRef(positional(args, 1, 'ID', 'jobs show'))),
-  list: async (args, call) => {
-    const status = args.options.get('status');
-    const dates = dateRangeOption(args);
-    return call('listJobs', {
-      ...(dates ? { dates } : {}),
-      ...(typeof status === 'string' ? { status: status.split(',') as JobStatus[] } : {}),
-      ...(intOption(args, 'customer') !== undefined ? { customerId: intOption(args, 'customer') } : {}),
-      ...(typeof args.options.get('kind') === 'string' ? { kind: args.options.get('kind') as string } : {}),
-      ...(typeof args.options.get('sort') === 'string' ? { sort: args.options.get('sort') as never } : {}),
-      ...(typeof args.options.get('material') === 'string' ? { material: args.options.get('material') as string } : {}),
-      ...(typeof args.options.get('after') === 'string' ? { after: args.options.get('after') as string } : {}),
-      ...(args.options.has('archived') ? { archived: true } : {}),
-      limit: intOption(args, 'limit') ?? 50,
-      offset: intOption(args, 'offset') ?? 0,
-    });
+  add: (args) => {
+    const input = jobFileInput(readJson(positional(args, 1, 'FILE', 'jobs add')));
+    return (call) => call('createJob', input as never);
   },
-  find: async (args, call) => call('findJobs', { text: args.positional.slice(1).join(' '), limit: intOption(args, 'limit') ?? 25 }),
-  similar: async (args, call) => {
-    const hits = await call('similarJobs', { spec: specOf(readJson(positional(args, 1, 'SPECFILE', 'jobs similar'))), limit: intOption(args, 'limit') ?? 10 });
-    return hits.map(({ job, ...hit }) => ({ ...hit, customer: job.customer?.name ?? null, partNumber: job.partNumber, status: job.status }));
+  show: (args) => {
+    const ref = onJob(args, 'jobs show');
+    return (call) => call('getJob', ref);
   },
-  revisions: async (args, call) => call('jobRevisions', { id: await jobId(call, positional(args, 1, 'ID', 'jobs revisions')) }),
-  quotes: async (args, call) => call('listQuotes', { jobId: await jobId(call, positional(args, 1, 'ID', 'jobs quotes')), limit: intOption(args, 'limit') ?? 50 }),
-  status: async (args, call) => call('setJobStatus', {
-    id: await jobId(call, positional(args, 1, 'ID', 'jobs status')), status: positional(args, 2, 'STATUS', 'jobs status') as JobStatus,
-  }),
-  copy: async (args, call) => call('copyJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs copy')) }),
-  archive: async (args, call) => call('archiveJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs archive')), archived: !args.options.has('undo') }),
-  delete: async (args, call) => call('deleteJob', { id: await jobId(call, positional(args, 1, 'ID', 'jobs delete')) }),
-  undelete: async (args, call) => call('undoDeleteJob', { id: Number(positional(args, 1, 'ID', 'jobs undelete')) }),
-  restore: async (args, call) => call('restoreRevision', {
-    id: await jobId(call, positional(args, 1, 'ID', 'jobs restore')), revision: Number(positional(args, 2, 'REVISION', 'jobs restore')),
-  }),
+  list: (args) => {
+    const query = listQuery(args);
+    return (call) => call('listJobs', query);
+  },
+  find: (args) => {
+    const input = { text: args.positional.slice(1).join(' '), limit: intOption(args, 'limit') ?? 25 };
+    return (call) => call('findJobs', input);
+  },
+  similar: (args) => {
+    const input = { spec: specOf(readJson(positional(args, 1, 'SPECFILE', 'jobs similar'))), limit: intOption(args, 'limit') ?? 10 };
+    return async (call) => {
+      const hits = await call('similarJobs', input);
+      return hits.map(({ job, ...hit }) => ({ ...hit, customer: job.customer?.name ?? null, partNumber: job.partNumber, status: job.status }));
+    };
+  },
+  revisions: (args) => {
+    const ref = onJob(args, 'jobs revisions');
+    return async (call) => call('jobRevisions', { id: await jobId(call, ref) });
+  },
+  quotes: (args) => {
+    const ref = onJob(args, 'jobs quotes');
+    const limit = intOption(args, 'limit') ?? 50;
+    return async (call) => call('listQuotes', { jobId: await jobId(call, ref), limit });
+  },
+  status: (args) => {
+    const ref = onJob(args, 'jobs status');
+    const status = positional(args, 2, 'STATUS', 'jobs status') as JobStatus;
+    return async (call) => call('setJobStatus', { id: await jobId(call, ref), status });
+  },
+  copy: (args) => {
+    const ref = onJob(args, 'jobs copy');
+    return async (call) => call('copyJob', { id: await jobId(call, ref) });
+  },
+  archive: (args) => {
+    const ref = onJob(args, 'jobs archive');
+    const archived = !args.options.has('undo');
+    return async (call) => call('archiveJob', { id: await jobId(call, ref), archived });
+  },
+  delete: (args) => {
+    const ref = onJob(args, 'jobs delete');
+    return async (call) => call('deleteJob', { id: await jobId(call, ref) });
+  },
+  undelete: (args) => {
+    const id = Number(positional(args, 1, 'ID', 'jobs undelete'));
+    return (call) => call('undoDeleteJob', { id });
+  },
+  restore: (args) => {
+    const ref = onJob(args, 'jobs restore');
+    const revision = Number(positional(args, 2, 'REVISION', 'jobs restore'));
+    return async (call) => call('restoreRevision', { id: await jobId(call, ref), revision });
+  },
 };
 
 export const jobsCommand: Command = {
@@ -83,7 +127,7 @@ export const jobsCommand: Command = {
     '  jobs quotes ID|NUMBER [--limit N] --db DB   every quotation the job is a line of, newest first, with its lines',
   ].join('\n'),
   async run(args, out) {
-    const sub = subcommandOf('jobs', args, subcommands);
-    out(toJson(await withStore(args, (call) => sub(args, call))));
+    const withArgs = subcommandOf('jobs', args, subcommands)(args);
+    out(toJson(await withStore(args, withArgs)));
   },
 };

@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -55,5 +55,9 @@ describe('command line: jobs list by a date range', () => {
     const backwards = cli('jobs', 'list', '--created-from', '2025-04-01', '--created-to', '2025-03-31', '--db', db);
     expect(backwards.errors()[0]).toMatchObject({ path: '--created-from', message: '--created-from 2025-04-01 is after --created-to 2025-03-31' });
     expect(cli('jobs', 'list', '--created-from', '2025-01-01', '--due-to', '2025-02-01', '--db', db).errors()[0]).toMatchObject({ path: '--due-to' });
+    // Refused before any store opens: a mistyped --db is not created as a new, empty store.
+    const typo = join(dir, 'shpo.db');
+    expect(cli('jobs', 'list', '--updated-to', '2025-13-01', '--db', typo).errors()[0]).toMatchObject({ path: '--updated-to' });
+    expect(existsSync(typo)).toBe(false);
   });
 });
