@@ -82,7 +82,7 @@ export default tseslint.config(
   room(['service/cli/**/*.ts', 'service/request-sheet/**/*.ts'], [noElectron, noSqlite, noPdf, noReact, noPg,
     fence('The Node side does not reach into the desktop shell or the screens.', into('electron', 'renderer'))]),
   room(['electron/**/*.ts'], [noPdf, noReact, noSqlite, noFileFormats, noPg, fence('The shell does not reach into the screens.', into('renderer'))]),
-  room(['electron/shell/sqlite-electron.ts'], [noPdf, noReact, noPg]),
+  room(['electron/shell/sqlite-electron.ts', 'electron/shell/sqlite-electron-worker.ts'], [noPdf, noReact, noPg]),
   room(['renderer/**/*.ts', 'renderer/**/*.tsx'], [noElectron, noPdf, noSqlite, noFileFormats, noPg,
     fence('renderer/ talks to the service through its injected Api; it imports only core/ and its own packages.',
       into('db', 'service', 'electron', 'test', 'bench', 'scripts')),

@@ -34,6 +34,8 @@ import { appProtocolHandler, registerAppScheme } from './shell/protocol';
 import { denyPermissions, hardenWebContents } from './shell/security';
 import { showUpdateNotice } from './shell/store-update-notice';
 import { pendingLargeUpdate } from '../service/host/store-update';
+import type { UpdateOutcome } from '../service/host/store-update';
+import { updateInWorkerThread } from './shell/store-update-thread';
 import { createMainWindow } from './shell/window';
 
 // Privileged schemes must be declared before the app is ready.
@@ -55,11 +57,20 @@ function stop(log: Log, title: string, message: string): void {
   app.quit();
 }
 
+const sqliteBinding = () => chooseSqliteBinding({
+  electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
+});
+
+/** A store's schema update in a worker thread, so the windows keep painting; openService finishes it if this cannot. */
+async function updateBesideTheWindows(file: string): Promise<UpdateOutcome> {
+  const binding = sqliteBinding();
+  if (!binding.ok) return { ok: false, ...binding.error };
+  return updateInWorkerThread({ workerFile: path.join(app.getAppPath(), 'dist', 'electron', 'store-update-worker.cjs'), file, nativeBinding: binding.value });
+}
+
 /** The store, or the reason there is none; the Electron build of better-sqlite3 is checked first. */
 function openService(log: Log): Service | { code: string; message: string } {
-  const binding = chooseSqliteBinding({
-    electronVersion: process.versions.electron, isPackaged: app.isPackaged, appPath: app.getAppPath(), exists: existsSync,
-  });
+  const binding = sqliteBinding();
   if (!binding.ok) return binding.error;
   // COILWRIGHT_STORE (a file or a postgres:// connection string) names another store than the user's own file;
   // without it, the server store last opened on the Data screen (app-settings.json, never its password).
@@ -150,6 +161,9 @@ async function openServiceTelling(log: Log): Promise<Service | { code: string; m
   const notice = await showUpdateNotice(pending);
   const started = Date.now();
   try {
+    const beside = await updateBesideTheWindows(pending.file);
+    if (beside.ok) log.info('store', 'updated in a worker thread');
+    else log.info('store', `the update could not run in a worker thread (${beside.code}: ${beside.message}); it runs as the store opens`);
     return openService(log);
   } finally {
     notice.close();

@@ -47,8 +47,30 @@ export const preloadOptions = {
   metafile: true,
 };
 
+/** The store-update worker gets better-sqlite3 through its own shim: a worker thread has no Electron `app`. */
+const workerSqlite = {
+  name: 'worker-sqlite',
+  setup(b) {
+    const shim = at('electron', 'shell', 'sqlite-electron-worker.ts');
+    b.onResolve({ filter: /^better-sqlite3$/ }, (args) =>
+      (args.importer === shim ? { path: 'better-sqlite3', external: true } : { path: shim }));
+  },
+};
+
+/** The worker thread main starts to update a large store's schema while the windows keep painting. */
+export const updateWorkerOptions = {
+  ...common,
+  entryPoints: [at('electron', 'shell', 'store-update-worker.ts')],
+  outfile: at('dist', 'electron', 'store-update-worker.cjs'),
+  platform: 'node',
+  target: 'node22',
+  external: mainExternals.filter((name) => name !== 'electron'),
+  plugins: [workerSqlite],
+};
+
 export async function buildMain() {
   await build(mainOptions);
+  await build(updateWorkerOptions);
 }
 
 export async function buildPreload() {

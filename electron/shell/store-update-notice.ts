@@ -23,7 +23,8 @@ const SHOW_WAIT_MS = 3000;
 
 /**
  * Shows the notice in a small window of its own and resolves once it is on screen (or after SHOW_WAIT_MS),
- * so it is painted before the update holds the main process; close() takes it away.
+ * so it is painted before the update starts (in a worker thread, or on the main process when that cannot run);
+ * close() takes it away.
  */
 export async function showUpdateNotice(pending: PendingUpdate): Promise<{ close(): void }> {
   const window = new BrowserWindow(secureWindowOptions({

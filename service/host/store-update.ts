@@ -1,4 +1,4 @@
-import { LATEST_VERSION, inspectStoreFile, isPostgresLocation, storeBytes } from '../../db';
+import { LATEST_VERSION, inspectStoreFile, isPostgresLocation, storeBytes, tryOpenStore } from '../../db';
 
 /**
  * From this size a store's update to a new schema can take long enough to look like a program that did not
@@ -40,4 +40,23 @@ export function updateNoticeText(pending: PendingUpdate): { headline: string; de
       'If the update stops part way, the store is left as it was.',
     ],
   };
+}
+
+export type UpdateOutcome = { ok: true } | { ok: false; code: string; message: string };
+
+/**
+ * Brings a store file to this version's schema and closes it again: the open's own path (an interrupted restore
+ * finished, the file inspected, pending migrations in one transaction), without the damage check, which the
+ * open that follows runs by its own rule. The desktop app runs this in a worker thread, so its windows keep
+ * answering while a large store updates.
+ */
+export function updateStoreFile(file: string): UpdateOutcome {
+  try {
+    const opened = tryOpenStore(file, { check: 'none' });
+    if (!opened.ok) return { ok: false, code: opened.error.code, message: opened.error.message };
+    opened.value.close();
+    return { ok: true };
+  } catch (e) {
+    return { ok: false, code: 'store-update-failed', message: (e as Error).message };
+  }
 }

@@ -7,7 +7,7 @@ import { pathToFileURL } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 
 const root = path.resolve(__dirname, '../..');
-let options: { mainOptions: BuildOptions; preloadOptions: BuildOptions };
+let options: { mainOptions: BuildOptions; preloadOptions: BuildOptions; updateWorkerOptions: BuildOptions };
 
 async function bundle(base: BuildOptions) {
   const result = await build({ ...base, write: false, metafile: true, logLevel: 'silent' });
@@ -32,6 +32,17 @@ describe('the main bundle', () => {
     const allowed = new Set(['electron', 'better-sqlite3', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit']);
     // Bundled packages (the spreadsheet reader among them) may require built-ins by their bare names.
     expect(required.filter((r) => !allowed.has(r) && !isBuiltin(r))).toEqual([]);
+  });
+});
+
+describe('the store-update worker bundle', () => {
+  it('hands db/ better-sqlite3 through the worker shim and requires no Electron (a worker thread has no app)', async () => {
+    const { inputs, required } = await bundle(options.updateWorkerOptions);
+    expect(inputs).toContain('electron/shell/sqlite-electron-worker.ts');
+    expect(inputs).not.toContain('electron/shell/sqlite-electron.ts');
+    expect(inputs).toContain('db/migrations/index.ts');
+    expect(required.filter((r) => r === 'better-sqlite3')).toHaveLength(1);
+    expect(required.filter((r) => r !== 'better-sqlite3' && !isBuiltin(r))).toEqual([]);
   });
 });
 
