@@ -7,6 +7,10 @@ import { useCommandBus } from './commands';
 export const storeLabel = (info: StoreInfo): string =>
   info.backend === 'postgres' ? `PostgreSQL ${info.name}` : info.name;
 
+/** The store as the header names it: a file by its name alone (the whole path is in the title and on the Data screen). */
+export const storeShortLabel = (info: StoreInfo): string =>
+  info.backend === 'postgres' ? storeLabel(info) : info.name.split(/[\\/]/).pop() || info.name;
+
 /** The store's damage check as the status line says it: quietly while it runs, a warning once it failed. */
 export function damageCheckStatus(info: StoreInfo): { tone: 'quiet' | 'warning'; text: string; detail: string } | null {
   const check = info.damageCheck;

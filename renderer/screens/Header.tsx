@@ -1,6 +1,6 @@
 import type { Route } from '../hooks/navigation';
 import { useNavigation } from '../hooks/navigation';
-import { damageCheckStatus, storeLabel, useStoreInfo } from '../hooks/store-info';
+import { damageCheckStatus, storeLabel, storeShortLabel, useStoreInfo } from '../hooks/store-info';
 
 interface HeaderProps {
   route: Route;
@@ -46,8 +46,8 @@ export function Header({ route, jobLabel, onJob, onShortcuts }: HeaderProps) {
         </button>
       </nav>
       {store && (
-        <span className="topbar__store" data-testid="store-name" title={`Saves are recorded as by ${store.author || 'no one named'}`}>
-          {storeLabel(store)}
+        <span className="topbar__store" data-testid="store-name" title={`${storeLabel(store)}: saves are recorded as by ${store.author || 'no one named'}`}>
+          {storeShortLabel(store)}
         </span>
       )}
       {check && (

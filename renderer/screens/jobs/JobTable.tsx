@@ -83,10 +83,12 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               </td>
               <td><button type="button" className="link" onClick={() => onOpen(j.id)} aria-label={`Open job ${j.number}`}>{j.number}</button></td>
               <td>{j.customer?.name ?? <span className="muted">—</span>}</td>
-              <td>{j.partNumber || <span className="muted">—</span>}<br /><span className="muted">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
+              {/* Part, drawing and material ids are identifiers: never broken at a hyphen or before their revision. */}
+              <td><span className="nowrap">{j.partNumber || <span className="muted">—</span>}</span><br />
+                <span className="muted nowrap">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span>
                 {j.archivedAt ? <><br /><span className="muted">archived {day(j.archivedAt)}</span></> : null}</td>
-              <td>{kindLabel(j.shape.kind)}<br /><span className="muted">{j.shape.material}</span>
+              <td>{kindLabel(j.shape.kind)}<br /><span className="muted nowrap">{j.shape.material}</span>
                 {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
@@ -94,14 +96,14 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
               {rangeDate ? <td className="nowrap">{rangeDate === 'due' ? (j.dueDate ?? '—') : day(j.createdAt)}</td> : null}
               <td className="nowrap">{day(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
-              <td className="row-actions">
+              <td><div className="row-actions">
                 <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>
                 <button type="button" className="button button--small button--quiet" onClick={() => onArchive(j, j.archivedAt === null)}
                   aria-label={`${j.archivedAt === null ? 'Archive' : 'Put back'} job ${j.number}`}>{j.archivedAt === null ? 'Archive' : 'Put back'}</button>
                 {j.status === 'draft' ? (
                   <button type="button" className="button button--small button--quiet" onClick={() => onDelete(j)} aria-label={`Delete draft ${j.number}`}>Delete</button>
                 ) : null}
-              </td>
+              </div></td>
             </tr>
           );
         })}
