@@ -5,7 +5,7 @@
 //   electron/  the thin desktop shell: the only room that imports 'electron'
 //   renderer/  the screens: core/ and their own packages only
 // Packages are fenced too: pdfkit and its helpers only in service/pdf, better-sqlite3 only in db/ and the
-// Electron binding shim, the PostgreSQL client (pg) only in db/pg.
+// Electron binding shims' shared constructor, the PostgreSQL client (pg) only in db/pg.
 import tseslint from 'typescript-eslint';
 
 /** Node's built-ins by exact name (a gitignore-style pattern 'http' would also match './http'). */
@@ -35,7 +35,7 @@ function room(files, fences, extra = {}) {
 
 const noElectron = fence('Only electron/ imports Electron; the Node side runs without it.', electron);
 const noPdf = fence('pdfkit, svg-to-pdfkit, fontkit and qrcode belong to the PDF writers in service/pdf.', pdfWriters);
-const noSqlite = fence('better-sqlite3 belongs to db/ (and the Electron binding shim).', sqlite);
+const noSqlite = fence('better-sqlite3 belongs to db/ (and electron/shell/sqlite-with-binding.ts, under the Electron binding shims).', sqlite);
 const noReact = fence('React belongs to renderer/.', react);
 const noFileFormats = fence('Spreadsheet and CSV libraries belong to the store\'s exchange (db/), the request-sheet reader (service/request-sheet) and the command line (service/cli); the screens send the file\'s bytes.', fileFormats);
 const noPg = { regex: postgres, message: 'The PostgreSQL client (pg) belongs to db/pg: everything else reaches a server store through the Store interface.' };
@@ -82,7 +82,7 @@ export default tseslint.config(
   room(['service/cli/**/*.ts', 'service/request-sheet/**/*.ts'], [noElectron, noSqlite, noPdf, noReact, noPg,
     fence('The Node side does not reach into the desktop shell or the screens.', into('electron', 'renderer'))]),
   room(['electron/**/*.ts'], [noPdf, noReact, noSqlite, noFileFormats, noPg, fence('The shell does not reach into the screens.', into('renderer'))]),
-  room(['electron/shell/sqlite-electron.ts', 'electron/shell/sqlite-electron-worker.ts'], [noPdf, noReact, noPg]),
+  room(['electron/shell/sqlite-with-binding.ts'], [noPdf, noReact, noPg]),
   room(['renderer/**/*.ts', 'renderer/**/*.tsx'], [noElectron, noPdf, noSqlite, noFileFormats, noPg,
     fence('renderer/ talks to the service through its injected Api; it imports only core/ and its own packages.',
       into('db', 'service', 'electron', 'test', 'bench', 'scripts')),

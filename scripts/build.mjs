@@ -14,15 +14,20 @@ const at = (...parts) => path.join(root, ...parts);
 /** Runtime packages main loads from node_modules (native code, or data files they read themselves). */
 const mainExternals = ['electron', 'better-sqlite3', 'pg', 'pdfkit', 'svg-to-pdfkit', 'qrcode', 'fontkit'];
 
-/** In the Electron main bundle, db/ gets better-sqlite3 through the shim that picks the Electron build. */
-const electronSqlite = {
-  name: 'electron-sqlite',
-  setup(b) {
-    const shim = at('electron', 'shell', 'sqlite-electron.ts');
-    b.onResolve({ filter: /^better-sqlite3$/ }, (args) =>
-      (args.importer === shim ? { path: 'better-sqlite3', external: true } : { path: shim }));
-  },
-};
+/**
+ * A bundle's imports of better-sqlite3 go to `shim`, which sets the native binding for its runtime; only the
+ * shims' shared constructor (electron/shell/sqlite-with-binding.ts) requires the real package.
+ */
+function sqliteThrough(shim) {
+  const real = at('electron', 'shell', 'sqlite-with-binding.ts');
+  return {
+    name: 'sqlite-through-shim',
+    setup(b) {
+      b.onResolve({ filter: /^better-sqlite3$/ }, (args) =>
+        (args.importer === real ? { path: 'better-sqlite3', external: true } : { path: at('electron', 'shell', shim) }));
+    },
+  };
+}
 
 const common = { bundle: true, format: 'cjs', logLevel: 'warning', absWorkingDir: root, legalComments: 'none' };
 
@@ -34,7 +39,8 @@ export const mainOptions = {
   platform: 'node',
   target: 'node22',
   external: mainExternals,
-  plugins: [electronSqlite],
+  // In the Electron main bundle, db/ gets better-sqlite3 through the shim that picks the Electron build.
+  plugins: [sqliteThrough('sqlite-electron.ts')],
 };
 
 export const preloadOptions = {
@@ -47,16 +53,6 @@ export const preloadOptions = {
   metafile: true,
 };
 
-/** The store-update worker gets better-sqlite3 through its own shim: a worker thread has no Electron `app`. */
-const workerSqlite = {
-  name: 'worker-sqlite',
-  setup(b) {
-    const shim = at('electron', 'shell', 'sqlite-electron-worker.ts');
-    b.onResolve({ filter: /^better-sqlite3$/ }, (args) =>
-      (args.importer === shim ? { path: 'better-sqlite3', external: true } : { path: shim }));
-  },
-};
-
 /** The worker thread main starts to update a large store's schema while the windows keep painting. */
 export const updateWorkerOptions = {
   ...common,
@@ -65,7 +61,8 @@ export const updateWorkerOptions = {
   platform: 'node',
   target: 'node22',
   external: mainExternals.filter((name) => name !== 'electron'),
-  plugins: [workerSqlite],
+  // A worker thread has no Electron `app`: its shim takes the binding main hands over.
+  plugins: [sqliteThrough('sqlite-electron-worker.ts')],
 };
 
 export async function buildMain() {

@@ -3,10 +3,10 @@
  * 'better-sqlite3' in that bundle here. It is the real constructor, with `nativeBinding` set to the
  * Electron-ABI build in unpackaged runs, so db/ stays unaware of which runtime it is in.
  */
-import Database from 'better-sqlite3';
 import { app } from 'electron';
 import { existsSync } from 'node:fs';
 import { chooseSqliteBinding } from './native-binding';
+import { databaseWithBinding } from './sqlite-with-binding';
 
 function binding(): string | undefined {
   const choice = chooseSqliteBinding({
@@ -19,11 +19,4 @@ function binding(): string | undefined {
   return choice.value;
 }
 
-function ElectronDatabase(filename?: string | Buffer, options: Database.Options = {}): Database.Database {
-  const nativeBinding = options.nativeBinding ?? binding();
-  return new Database(filename, nativeBinding === undefined ? options : { ...options, nativeBinding });
-}
-ElectronDatabase.prototype = Database.prototype;
-ElectronDatabase.SqliteError = Database.SqliteError;
-
-export default ElectronDatabase as unknown as typeof Database;
+export default databaseWithBinding(binding);

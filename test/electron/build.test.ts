@@ -23,6 +23,7 @@ describe('the main bundle', () => {
   it('hands db/ better-sqlite3 through the Electron shim, and requires the real one only there', async () => {
     const { inputs, required } = await bundle(options.mainOptions);
     expect(inputs).toContain('electron/shell/sqlite-electron.ts');
+    expect(inputs).not.toContain('electron/shell/sqlite-electron-worker.ts');
     expect(inputs).toContain('db/open.ts');
     expect(required.filter((r) => r === 'better-sqlite3')).toHaveLength(1);
   });

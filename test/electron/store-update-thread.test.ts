@@ -7,9 +7,9 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { LATEST_VERSION, schemaVersion } from '../../db';
+import { LATEST_VERSION } from '../../db';
 import { updateInWorkerThread } from '../../electron/shell/store-update-thread';
-import { writeStoreOneVersionBehind } from '../support/large-store';
+import { schemaVersionOfFile, writeStoreOneVersionBehind } from '../support/large-store';
 import { buildUpdateWorker } from '../support/update-worker';
 
 let dir: string;
@@ -22,22 +22,13 @@ beforeAll(async () => {
 
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-const versionOf = (file: string) => {
-  const db = new Database(file, { readonly: true });
-  try {
-    return schemaVersion(db);
-  } finally {
-    db.close();
-  }
-};
-
 describe('the store update in a worker thread', () => {
   it('brings a store one version behind to this version, and lets go of the file', async () => {
     const file = path.join(dir, 'behind.db');
     writeStoreOneVersionBehind(file, 0);
-    expect(versionOf(file)).toBe(LATEST_VERSION - 1);
+    expect(schemaVersionOfFile(file)).toBe(LATEST_VERSION - 1);
     await expect(updateInWorkerThread({ workerFile, file, nativeBinding: undefined })).resolves.toEqual({ ok: true });
-    expect(versionOf(file)).toBe(LATEST_VERSION);
+    expect(schemaVersionOfFile(file)).toBe(LATEST_VERSION);
     // No connection left open by the worker: the file can be taken in exclusive mode at once.
     const db = new Database(file);
     db.pragma('locking_mode = EXCLUSIVE');
@@ -64,7 +55,7 @@ describe('the store update in a worker thread', () => {
     const outcome = await updateInWorkerThread({ workerFile, file, nativeBinding: missing });
     expect(outcome).toMatchObject({ ok: false });
     expect(JSON.stringify(outcome)).toContain('electron-99');
-    expect(versionOf(file)).toBe(LATEST_VERSION - 1);
+    expect(schemaVersionOfFile(file)).toBe(LATEST_VERSION - 1);
   });
 
   it('says the worker is not built, without starting anything', async () => {

@@ -1,13 +1,12 @@
 // A large store written by the version before is brought up to this one's schema as the command line opens it,
 // and the command says so on standard error first, so a long pause is explained. A small store says nothing.
-import Database from 'better-sqlite3';
 import { spawnSync } from 'node:child_process';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { LATEST_VERSION, schemaVersion, storeBytes } from '../../db';
+import { LATEST_VERSION, storeBytes } from '../../db';
 import { NOTICE_FROM_BYTES } from '../../service/host/store-update';
 import { tempDir } from './db/helpers';
-import { writeStoreOneVersionBehind } from '../support/large-store';
+import { schemaVersionOfFile, writeStoreOneVersionBehind } from '../support/large-store';
 
 const root = resolve(__dirname, '../..');
 const cli = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'service/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
@@ -18,15 +17,6 @@ function storeOneVersionBehind(sheets: number): string {
   return file;
 }
 
-const versionOf = (file: string) => {
-  const db = new Database(file, { readonly: true });
-  try {
-    return schemaVersion(db);
-  } finally {
-    db.close();
-  }
-};
-
 describe('the command line on a store of the version before', () => {
   it('says it is updating a large store, then does the command', () => {
     const file = storeOneVersionBehind(2);
@@ -36,7 +26,7 @@ describe('the command line on a store of the version before', () => {
     expect(listed.stderr).toContain('Updating the job store for this version of Coilwright:');
     expect(listed.stderr).toContain(`from schema version ${LATEST_VERSION - 1} to ${LATEST_VERSION}`);
     expect(listed.stdout).toContain('QX-7 (demo)');
-    expect(versionOf(file)).toBe(LATEST_VERSION);
+    expect(schemaVersionOfFile(file)).toBe(LATEST_VERSION);
     expect(cli('jobs', 'list', '--db', file).stderr).not.toContain('Updating the job store');
   });
 
@@ -45,7 +35,7 @@ describe('the command line on a store of the version before', () => {
     const listed = cli('jobs', 'list', '--db', file);
     expect(listed.status, listed.stderr).toBe(0);
     expect(listed.stderr).toBe('');
-    expect(versionOf(file)).toBe(LATEST_VERSION);
+    expect(schemaVersionOfFile(file)).toBe(LATEST_VERSION);
   });
 });
 

@@ -1,6 +1,6 @@
 import Database from 'better-sqlite3';
 import { createHash, randomBytes } from 'node:crypto';
-import { LATEST_VERSION, addAttachment, migrate } from '../../db';
+import { LATEST_VERSION, addAttachment, migrate, schemaVersion } from '../../db';
 import type { Store } from '../../db';
 
 /** Size of one scanned drawing sheet: two take a store over the 64 MB size rules of the damage check and the update notice. */
@@ -39,6 +39,16 @@ export function writeStoreOneVersionBehind(file: string, sheets: number): void {
           .run(`drawing-sheet-${i}.tif`, data.length, createHash('sha256').update(data).digest('hex'), data, at);
       }
     })();
+  } finally {
+    db.close();
+  }
+}
+
+/** The schema version a store file is at, read without changing it. */
+export function schemaVersionOfFile(file: string): number {
+  const db = new Database(file, { readonly: true });
+  try {
+    return schemaVersion(db);
   } finally {
     db.close();
   }

@@ -27,6 +27,7 @@ const crossings: Array<[room: string, file: string, code: string]> = [
   ['the service importing better-sqlite3', 'service/api/fence-probe.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the service reaching the shell', 'service/web/fence-probe.ts', "import { createMenu } from '../../electron/shell/menu'; export const x = createMenu;"],
   ['the shell importing better-sqlite3', 'electron/shell/fence-probe.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
+  ['a binding shim importing better-sqlite3 past the shared constructor', 'electron/shell/sqlite-electron-worker.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the shell importing pdfkit', 'electron/fence-probe.ts', "import PDFDocument from 'pdfkit'; export const x = PDFDocument;"],
   ['the renderer reaching db/', 'renderer/model/fence-probe.ts', "import { openStore } from '../../db'; export const x = openStore;"],
   ['the renderer reaching the service', 'renderer/model/fence-probe.ts', "import { dispatch } from '../../service/api'; export const x = dispatch;"],
@@ -52,7 +53,7 @@ const allowed: Array<[room: string, file: string, code: string]> = [
   ['the request-sheet reader importing exceljs and csv-parse', 'service/request-sheet/fence-probe.ts', "import ExcelJS from 'exceljs'; import { parse } from 'csv-parse/sync'; export const x = [ExcelJS, parse];"],
   ['the shell importing Electron and the service', 'electron/shell/fence-probe.ts', "import { app } from 'electron'; import { dispatch } from '../../service/api'; export const x = [app, dispatch];"],
   ['db/pg importing pg and the store', 'db/pg/fence-probe.ts', "import pg from 'pg'; import { StoreError } from '../errors'; export const x = [pg, StoreError];"],
-  ['the binding shim importing better-sqlite3', 'electron/shell/sqlite-electron.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
+  ['the binding shims\' shared constructor importing better-sqlite3', 'electron/shell/sqlite-with-binding.ts', "import Database from 'better-sqlite3'; export const x = Database;"],
   ['the renderer importing React, core and its own files', 'renderer/model/fence-probe.ts', "import { useState } from 'react'; import { parseSpec } from '../../core/spec'; import { x as http } from '../api/http'; export const x = [useState, parseSpec, http];"],
 ];
 
