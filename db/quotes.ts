@@ -11,7 +11,8 @@ import { storedSpecOf } from './jobs/rows';
 import { readStoredSpec } from './jobs/stored-spec';
 import { revisionFields, stateOfRow } from './jobs/state';
 import { attempt, updateJob } from './jobs/write';
-import { readSettings } from './settings';
+import { readSettings, shopTimeZone } from './settings';
+import { addCalendarDays, calendarDay, snapshotTimeZone } from '../core/calendar';
 import type { Store } from './store';
 import { inTransaction } from './store';
 import { parseWith } from '../core/validation';
@@ -26,15 +27,15 @@ interface LineRow {
   quote_id: number; line: number; job_id: number; job_revision: number; job: string; spec?: string; prices?: string; quantity_breaks?: string;
 }
 
-const DAY_MS = 86_400_000;
 
 function lineSummary(row: LineRow): QuoteLineSummary {
   const job = JSON.parse(row.job) as { number: string; partNumber: string };
   return { line: row.line, jobId: row.job_id, jobRevision: row.job_revision, jobNumber: job.number, partNumber: job.partNumber };
 }
 
-function toSummary(row: QuoteRow, lines: readonly LineRow[]): QuoteSummary {
-  const validUntil = new Date(Date.parse(row.issued_at) + row.validity_days * DAY_MS).toISOString().slice(0, 10);
+/** A quote's last valid day: its day of issue in the shop's time zone, plus its days of validity (as on the document). */
+function toSummary(row: QuoteRow, lines: readonly LineRow[], timeZone: string): QuoteSummary {
+  const validUntil = addCalendarDays(calendarDay(row.issued_at, timeZone), row.validity_days);
   return {
     id: row.id, number: row.number, jobId: row.job_id, jobRevision: row.job_revision, issuedAt: row.issued_at,
     validityDays: row.validity_days, validUntil, currency: row.currency, lines: lines.map(lineSummary),
@@ -60,11 +61,13 @@ function toQuote(row: QuoteRow, lineRows: readonly LineRow[]): StoreResult<Quote
     if (!line.ok) return line;
     lines.push(line.value);
   }
+  const settings = JSON.parse(row.settings!) as Settings;
   return success({
-    ...toSummary(row, lineRows),
+    // Dated in the zone the quote was issued under, as its document is.
+    ...toSummary(row, lineRows, snapshotTimeZone(settings)),
     job: JSON.parse(row.job!) as RevisionFields & { number: string },
     spec: stored.spec,
-    settings: JSON.parse(row.settings!) as Settings,
+    settings,
     prices: JSON.parse(row.prices!),
     quantityBreaks: JSON.parse(row.quantity_breaks!) as unknown[],
     document: JSON.parse(row.document!),
@@ -194,5 +197,6 @@ export function listQuotes(store: Store, raw: unknown): StoreResult<QuoteSummary
     : store.sql(quoteHistorySql).all(jobId, limit, offset)
   ) as QuoteRow[];
   const lines = lineSummaries(store, rows.map((r) => r.id));
-  return success(rows.map((r) => toSummary(r, lines.get(r.id)!)));
+  const zone = shopTimeZone(store);
+  return success(rows.map((r) => toSummary(r, lines.get(r.id)!, zone)));
 }

@@ -17,6 +17,15 @@ export function readSetting<K extends SettingsKey>(store: Store, key: K): Settin
   return parsed.value;
 }
 
+/** The shop's time zone; UTC when the stored defaults do not read (the list and the documents still work). */
+export function shopTimeZone(store: Store): string {
+  try {
+    return readSetting(store, 'defaults').timeZone;
+  } catch {
+    return 'UTC';
+  }
+}
+
 export function readSettings(store: Store): Settings {
   const out: Partial<Record<SettingsKey, unknown>> = {};
   for (const key of settingsKeys) out[key] = readSetting(store, key);

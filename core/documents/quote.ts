@@ -8,7 +8,8 @@ import { springContent } from './spring';
 import { commercialFields, signatureBlock, statedTerms } from './quote-terms';
 import type { QuoteTermsInput } from './quote-terms';
 import { priceCurve } from '../drawing';
-import { addDays, dayOf, moneyText, piecesText, unitPriceText } from './text';
+import { moneyText, piecesText, unitPriceText } from './text';
+import { addCalendarDays, calendarDay } from '../calendar';
 import type { Field, FigureModel, QuoteDocument, QuoteIssue, QuoteLineModel, TableModel } from './types';
 import { DOCUMENT_VERSION } from './types';
 
@@ -114,8 +115,10 @@ function partFields(job: QuoteJob, o: { enquiryReference?: string; titled?: bool
   ]);
 }
 
-export function quoteIssue(number: string, issuedAt: string, validityDays: number): QuoteIssue {
-  return { number, date: dayOf(issuedAt), validUntil: addDays(issuedAt, validityDays), validityDays };
+/** The quote's date and its last valid day, as days of the shop's time zone. */
+export function quoteIssue(number: string, issuedAt: string, validityDays: number, timeZone: string): QuoteIssue {
+  const date = calendarDay(issuedAt, timeZone);
+  return { number, date, validUntil: addCalendarDays(date, validityDays), validityDays };
 }
 
 function quoteLine(line: QuoteLineInput, settings: Settings, index: number, count: number): QuoteLineModel {
@@ -159,7 +162,7 @@ export function quotationDocument(input: QuotationInput): QuoteDocument {
   // Every line is priced with the same shop settings, so in the same currency.
   const currency = lines[0]!.estimate.currency;
   const validityDays = input.validityDays ?? settings.defaults.quoteValidityDays;
-  const issue = quoteIssue(input.number ?? 'DRAFT', input.issuedAt, validityDays);
+  const issue = quoteIssue(input.number ?? 'DRAFT', input.issuedAt, validityDays, settings.defaults.timeZone);
   const first = lines[0]!.job;
   const stated = statedTerms(settings.quoteTerms, first.customerPaymentTerms, input.terms);
   return {
@@ -186,7 +189,7 @@ export function quoteDocument(input: QuoteInput): QuoteDocument {
  * The model as issued: the store's number and time of issue replace the draft's; validity and everything
  * else stay as the model has them.
  */
-export function withQuoteIssue(model: QuoteDocument, issued: { number: string; issuedAt: string }): QuoteDocument {
-  const issue = quoteIssue(issued.number, issued.issuedAt, model.issue.validityDays);
+export function withQuoteIssue(model: QuoteDocument, issued: { number: string; issuedAt: string }, timeZone: string): QuoteDocument {
+  const issue = quoteIssue(issued.number, issued.issuedAt, model.issue.validityDays, timeZone);
   return { ...model, issue, createdAt: issued.issuedAt, reference: `Quotation ${issue.number}` };
 }

@@ -51,14 +51,6 @@ export function quantityText(value: number, quantity: Quantity, units: UnitSyste
   return formatQuantity(value, quantity, units).replace(/^\d{5,}(?=\D|$)/, (digits) => grouped(digits));
 }
 
-/** The calendar day of an ISO timestamp (UTC), as printed on documents: 2026-03-02. */
-export function dayOf(iso: string): string {
-  return iso.slice(0, 10);
-}
-
-export function addDays(isoDay: string, days: number): string {
-  return new Date(Date.parse(`${dayOf(isoDay)}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
-}
 
 /** Schema words the documents spell out, in the shared vocabulary's long form. */
 const words: Record<string, string> = Object.fromEntries(

@@ -9,7 +9,8 @@ import type { Spec } from '../spec';
 import { cautionNotice, planSafetyNotes } from './cautions';
 import { drawingText, kindTitle, letterhead, present } from './common';
 import { springContent } from './spring';
-import { dayOf, piecesText } from './text';
+import { piecesText } from './text';
+import { calendarDay } from '../calendar';
 import {
   INSPECTION_SIGN_OFF, MATERIAL_FILL_IN, RELEASE_SIGN_OFF, finishChecks, inspectionTable, materialFields, operationLots,
   operationModel, samplingSummary,
@@ -42,7 +43,7 @@ export interface TravellerInput {
   printedAt: string;
 }
 
-function jobFields(job: TravellerJob, plan: ManufacturingPlan, printedAt: string): Field[] {
+function jobFields(job: TravellerJob, plan: ManufacturingPlan, printed: string): Field[] {
   return present([
     { label: 'Job', value: job.number ?? 'not in the job store' },
     { label: 'Part number', value: job.partNumber },
@@ -53,7 +54,7 @@ function jobFields(job: TravellerJob, plan: ManufacturingPlan, printedAt: string
     { label: 'Quantity to start', value: `${piecesText(plan.lotWire.startQuantity)} pcs (with scrap allowance)` },
     { label: 'Due date', value: job.dueDate ?? 'not set' },
     { label: kindTerms[plan.kind].toleranceGrade, value: String(plan.toleranceGrade) },
-    { label: 'Printed', value: dayOf(printedAt) },
+    { label: 'Printed', value: printed },
   ]);
 }
 
@@ -80,7 +81,7 @@ export function travellerDocument(input: TravellerInput): TravellerDocument {
     version: DOCUMENT_VERSION, type: 'traveller', paperSize: settings.defaults.paperSize, createdAt: input.printedAt,
     title: 'Shop traveller', reference: `Traveller, job ${job.number ?? '(not stored)'}`,
     letterhead: letterhead(settings), caution: cautionNotice('shop'),
-    job: { number: job.number, fields: jobFields(job, plan, input.printedAt) },
+    job: { number: job.number, fields: jobFields(job, plan, calendarDay(input.printedAt, settings.defaults.timeZone)) },
     qr: job.number,
     material: { fields: materialFields(plan), fillIn: MATERIAL_FILL_IN },
     release: RELEASE_SIGN_OFF,

@@ -3,6 +3,7 @@ import type { FieldError, Result } from '../result';
 import { fail, fieldError, ok } from '../result';
 import { zodErrors } from '../validation';
 import { bounded } from './bounds';
+import { isTimeZone } from '../calendar';
 import { checkPlusMinusTable, checkShopToleranceTable, demoShopTables, demoStoredShopTables } from '../tolerances';
 import type { StoredShopTables } from '../tolerances';
 
@@ -35,6 +36,8 @@ export const defaultsSchema = z.object({
   setRemovalMethod: z.enum(['stricter', 'handbook', 'en13906']).default('stricter'),
   /** The decimal mark typed numbers use; the other of "." and "," then reads as a thousands separator. */
   decimalMark: z.enum(['.', ',']).default('.'),
+  /** The shop's time zone (IANA name): the days on the screens, the documents and the job list's date ranges are its days. */
+  timeZone: z.string().max(64).refine(isTimeZone, 'a time zone name such as America/Chicago, Europe/Berlin or UTC').default('UTC'),
 }).strict();
 
 const sequence = {
@@ -215,7 +218,7 @@ function uniqueIds<T extends { id: string }>(items: T[], ctx: z.RefinementCtx): 
 /** The schema of each settings key; the store keeps one row per key. */
 export const settingsSchemas = {
   shopProfile: shopProfileSchema.default({ name: '', addressLines: [], phone: '', email: '' }),
-  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30, setRemovalMethod: 'stricter', decimalMark: '.' }),
+  defaults: defaultsSchema.default({ currency: 'USD', paperSize: 'letter', units: 'metric', toleranceGrade: 2, quoteValidityDays: 30, setRemovalMethod: 'stricter', decimalMark: '.', timeZone: 'UTC' }),
   numbering: numberingSchema.default({ prefix: 'J-{yy}-', width: 4, next: 1, quotes: { prefix: 'Q-{yy}-', width: 4, next: 1 } }),
   machines: z.array(machineSchema).max(200).superRefine(uniqueIds).default([]),
   materialPrices: z.array(materialPriceSchema).max(2000).default([]),

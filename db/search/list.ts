@@ -7,22 +7,30 @@ import type { JobRow } from '../jobs/rows';
 import { JOB_FROM, SUMMARY_COLUMNS, toSummary } from '../jobs/rows';
 import type { Store } from '../store';
 import { parseWith } from '../../core/validation';
+import { addCalendarDays, dayStart } from '../../core/calendar';
+import { shopTimeZone } from '../settings';
 
 interface Where {
   clauses: string[];
   params: unknown[];
 }
 
-type Filters = Pick<ListJobsQuery, 'status' | 'customerId' | 'kind' | 'material' | 'dates'> & { archived?: boolean };
+/**
+ * A date range as the store compares it. `before` (set by inShopDays) is the first instant of the day after `to` in
+ * the shop's time zone; without it a stamp's UTC date is compared.
+ */
+type DateBounds = NonNullable<ListJobsQuery['dates']> & { before?: string };
+type Filters = Pick<ListJobsQuery, 'status' | 'customerId' | 'kind' | 'material'> & { dates?: DateBounds | undefined; archived?: boolean };
 
 const dateColumn = { created: 'created_at', updated: 'updated_at', due: 'due_date' } as const;
 
 /**
- * Date bounds on ISO stamps: "to" includes the whole day. Due dates are plain YYYY-MM-DD. `indexed: false`
- * writes the column as `substr(column, 1)` (the same value, NULL kept): SQLite then neither reads a date index
- * for the range nor counts the query among those its partial dated indexes serve, and reads the sort's index.
+ * Date bounds on ISO stamps: "to" includes the whole day (up to `before` when the shop's days are set). Due dates
+ * are plain YYYY-MM-DD. `indexed: false` writes the column as `substr(column, 1)` (the same value, NULL kept):
+ * SQLite then neither reads a date index for the range nor counts the query among those its partial dated indexes
+ * serve, and reads the sort's index.
  */
-function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, table: string, indexed = true): void {
+function dateClauses(where: Where, dates: DateBounds, table: string, indexed = true): void {
   const column = indexed ? `${table}${dateColumn[dates.field]}` : `substr(${table}${dateColumn[dates.field]}, 1)`;
   if (dates.from) {
     where.clauses.push(`${column} >= ?`);
@@ -30,8 +38,20 @@ function dateClauses(where: Where, dates: NonNullable<ListJobsQuery['dates']>, t
   }
   if (dates.to) {
     where.clauses.push(dates.field === 'due' ? `${column} <= ?` : `${column} < ?`);
-    where.params.push(dates.field === 'due' ? dates.to : `${dates.to}T99`);
+    where.params.push(dates.field === 'due' ? dates.to : dates.before ?? `${dates.to}T99`);
   }
+}
+
+/**
+ * The range's days as the shop's (settings `defaults.timeZone`): a created or last-saved range runs from the first
+ * instant of its from day to the first instant of the day after its to day there. Due dates are days already.
+ */
+export function inShopDays<Q extends { dates?: DateBounds | undefined }>(q: Q, zone: string): Q {
+  const d = q.dates;
+  if (d === undefined || d.field === 'due') return q;
+  return { ...q, dates: {
+    ...d, ...(d.from ? { from: dayStart(d.from, zone) } : {}), ...(d.to ? { before: dayStart(addCalendarDays(d.to, 1), zone) } : {}),
+  } };
 }
 
 /** The filters as SQL on the jobs table; `table` is its alias with the dot ("j.") or "" for job_counts. */
@@ -286,7 +306,7 @@ export function countedTotal(count: CountSql, row: { n: number; archived?: numbe
 export function listJobs(store: Store, raw: unknown): StoreResult<JobPage> {
   const parsed = parseWith(listJobsSchema, raw ?? {});
   if (!parsed.ok) return invalid(parsed.errors);
-  const q = parsed.value;
+  const q = inShopDays(parsed.value, shopTimeZone(store));
   const after = q.after === undefined ? null : decodeCursor(q.after, sortColumns(q));
   if (q.after !== undefined && after === null) {
     return invalid([fieldError('bad-cursor', 'after', 'this page key is not from this list and sort: start again from the first page')]);

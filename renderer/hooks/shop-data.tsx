@@ -5,6 +5,7 @@ import type { GradeSummary } from '../../core/materials';
 import type { Settings } from '../../core/settings/schema';
 import { useApi } from '../api';
 import { takeDecimalMark } from '../model/numbers';
+import { takeShopTimeZone } from '../model/shop-days';
 import { useCommand } from './commands';
 
 /** What many screens read from the store: the shop's settings, the wire grades and the customers. */
@@ -26,6 +27,7 @@ export function ShopDataProvider({ children }: { children: ReactNode }) {
   const [settings, setShopSettings] = useState<Settings | null>(null);
   const setSettings = useCallback((s: Settings) => {
     takeDecimalMark(s.defaults.decimalMark);
+    takeShopTimeZone(s.defaults.timeZone);
     setShopSettings(s);
   }, []);
   const [grades, setGrades] = useState<GradeSummary[]>([]);

@@ -1,5 +1,7 @@
 import type { JobDateField } from '../../core/api';
 import { isBackwardsRange } from '../../core/api';
+import { addCalendarDays } from '../../core/calendar';
+import { shopDay } from './shop-days';
 
 export interface DateRange {
   field: JobDateField;
@@ -10,32 +12,31 @@ export interface DateRange {
 
 export const noDateRange: DateRange = { field: 'created', from: '', to: '' };
 
-const pad = (n: number) => String(n).padStart(2, '0');
-
-/** The calendar date of a local day as YYYY-MM-DD (not the UTC date, which differs near midnight). */
-export function localIsoDate(day: Date): string {
-  return `${day.getFullYear()}-${pad(day.getMonth() + 1)}-${pad(day.getDate())}`;
+const firstOfMonth = (day: string): string => `${day.slice(0, 8)}01`;
+const year = (day: string): number => Number(day.slice(0, 4));
+/** The first day of the month `months` after (or before) the month of `day`. */
+function monthStart(day: string, months: number): string {
+  const index = year(day) * 12 + Number(day.slice(5, 7)) - 1 + months;
+  return `${String(Math.floor(index / 12)).padStart(4, '0')}-${String((index % 12) + 1).padStart(2, '0')}-01`;
 }
 
-const dayOf = (y: number, m: number, d: number) => localIsoDate(new Date(y, m, d));
-
-/** Ranges a planner asks for often, worked out from the local date `today` (taken when the button is pressed). */
-export const quickRanges: readonly { label: string; range(today: Date): DateRange }[] = [
+/** Ranges a planner asks for often, worked out from `today`, the shop's day when the button is pressed (shopToday). */
+export const quickRanges: readonly { label: string; range(today: string): DateRange }[] = [
   {
     label: 'Due in the next 14 days',
-    range: (t) => ({ field: 'due', from: localIsoDate(t), to: dayOf(t.getFullYear(), t.getMonth(), t.getDate() + 14) }),
+    range: (t) => ({ field: 'due', from: t, to: addCalendarDays(t, 14) }),
   },
   {
     label: 'Created this month',
-    range: (t) => ({ field: 'created', from: dayOf(t.getFullYear(), t.getMonth(), 1), to: dayOf(t.getFullYear(), t.getMonth() + 1, 0) }),
+    range: (t) => ({ field: 'created', from: firstOfMonth(t), to: addCalendarDays(monthStart(t, 1), -1) }),
   },
   {
     label: 'Created last month',
-    range: (t) => ({ field: 'created', from: dayOf(t.getFullYear(), t.getMonth() - 1, 1), to: dayOf(t.getFullYear(), t.getMonth(), 0) }),
+    range: (t) => ({ field: 'created', from: monthStart(t, -1), to: addCalendarDays(firstOfMonth(t), -1) }),
   },
   {
     label: 'Created last year',
-    range: (t) => ({ field: 'created', from: `${t.getFullYear() - 1}-01-01`, to: `${t.getFullYear() - 1}-12-31` }),
+    range: (t) => ({ field: 'created', from: `${year(t) - 1}-01-01`, to: `${year(t) - 1}-12-31` }),
   },
 ];
 
@@ -56,13 +57,13 @@ export function rangeInput(r: DateRange): { field: JobDateField; from?: string; 
 const dateOfJob = { created: 'createdAt', updated: 'updatedAt', due: 'dueDate' } as const;
 
 /**
- * Whether a job falls in the range, as the store decides it (db/search/list.ts): stamps by their date part,
- * both ends included; a job without the date (no due date) is outside any range.
+ * Whether a job falls in the range, as the store decides it (db/search/list.ts): stamps by their day in the shop's
+ * time zone, both ends included; a job without the date (no due date) is outside any range.
  */
 export function jobInRange(job: { createdAt: string; updatedAt: string; dueDate: string | null }, r: DateRange): boolean {
   if (!isRangeSet(r)) return true;
   const value = job[dateOfJob[r.field]];
   if (value === null) return false;
-  const day = value.slice(0, 10);
+  const day = r.field === 'due' ? value : shopDay(value);
   return (r.from === '' || day >= r.from) && (r.to === '' || day <= r.to);
 }

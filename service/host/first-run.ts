@@ -1,7 +1,8 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { ApiError } from '../../core/api';
-import { STORE_VARIABLE, StoreError, createDemoShop, isPostgresLocation, openPgStore, readOnlyNotice, storeName, tryOpenStore } from '../../db';
+import { STORE_VARIABLE, StoreError, createDemoShop, getSettings, isPostgresLocation, openPgStore, readOnlyNotice, saveSettings, storeName, tryOpenStore } from '../../db';
+import { isTimeZone } from '../../core/calendar';
 import type { OpenOptions, SqliteStore, Store } from '../../db';
 
 export interface ShopStore {
@@ -47,15 +48,26 @@ export function openShopStore(file: string, options: OpenOptions = {}):
   return withDemo(store);
 }
 
+/** A new shop keeps its days in the time zone of the computer it starts on (Shop settings change it). */
+function datedHere(store: Store): { ok: true } | { ok: false; error: ApiError } {
+  const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  const settings = getSettings(store);
+  if (!settings.ok) return settings;
+  if (!isTimeZone(here) || settings.value.defaults.timeZone === here) return { ok: true };
+  const saved = saveSettings(store, { defaults: { ...settings.value.defaults, timeZone: here } });
+  return saved.ok ? { ok: true } : saved;
+}
+
 /** A pristine store of any backend gets the demo shop, as a new file does. */
 function withDemo<S extends Store>(store: S): { ok: true; value: { store: S; demoJobs: number } } | { ok: false; error: ApiError } {
   if (!isPristine(store)) return { ok: true, value: { store, demoJobs: 0 } };
   const demo = createDemoShop(store);
-  if (!demo.ok) {
+  const dated = demo.ok ? datedHere(store) : demo;
+  if (!dated.ok) {
     store.close();
-    return demo;
+    return dated;
   }
-  return { ok: true, value: { store, demoJobs: demo.value.jobs } };
+  return { ok: true, value: { store, demoJobs: demo.ok ? demo.value.jobs : 0 } };
 }
 
 /**

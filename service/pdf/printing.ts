@@ -2,6 +2,7 @@ import type { Customer, Job, Quote } from '../../core/api/store';
 import { estimateCost } from '../../core/costing/estimate';
 import type { CostEstimate } from '../../core/costing/types';
 import { parseQuoteDocument, quotationDocument, travellerDocument, travellerQuantity, withQuoteIssue } from '../../core/documents';
+import { snapshotTimeZone } from '../../core/calendar';
 import type { PrintJob, QuoteDocument, QuoteTermsInput, TravellerDocument } from '../../core/documents';
 import type { Result } from '../../core/result';
 import type { Settings } from '../../core/settings/schema';
@@ -68,7 +69,7 @@ export function draftQuote(print: PrintJob, settings: Settings, now: Date, optio
 /** An issued quote prints from its snapshot alone, whatever the prices are today. */
 export function issuedQuoteDocument(quote: Quote): Result<QuoteDocument> {
   const model = parseQuoteDocument(quote.document);
-  return model.ok ? { ok: true, value: withQuoteIssue(model.value, quote) } : model;
+  return model.ok ? { ok: true, value: withQuoteIssue(model.value, quote, snapshotTimeZone(quote.settings)) } : model;
 }
 
 export function travellerFor(print: PrintJob, settings: Settings, quantity: number | undefined, now: Date): Result<TravellerDocument> {

@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -41,5 +42,19 @@ describe('openShopStore', () => {
     writeFileSync(file, 'these are not the jobs you are looking for');
     const opened = openShopStore(file);
     expect(opened).toMatchObject({ ok: false, error: { code: 'not-a-store' } });
+  });
+
+  it('dates a new shop\'s days in the time zone of the computer it starts on', { timeout: 60_000 }, () => {
+    const file = path.join(dir, 'chicago', 'coilwright.db');
+    const opened = spawnSync(process.execPath, ['--import', 'tsx', 'test/integration/db/fixtures/open-shop.ts', file],
+      { cwd: path.resolve(__dirname, '../..'), encoding: 'utf8', env: { ...process.env, TZ: 'America/Chicago' } });
+    expect(opened.status, opened.stderr).toBe(0);
+    expect((JSON.parse(opened.stdout) as { demoJobs: number }).demoJobs).toBeGreaterThan(0);
+    const store = openStore(file);
+    const settings = getSettings(store);
+    store.close();
+    expect(settings.ok && settings.value.defaults.timeZone).toBe('America/Chicago');
+    // The demo shop's own defaults are kept beside it.
+    expect(settings.ok && settings.value.defaults.units).toBe('inch');
   });
 });

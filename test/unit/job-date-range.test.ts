@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { isBackwardsRange, isCalendarDate, listJobsSchema } from '../../core/api/store';
-import { dateRangeProblem, jobInRange, localIsoDate, quickRanges } from '../../renderer/model/date-ranges';
+import { dateRangeProblem, jobInRange, quickRanges } from '../../renderer/model/date-ranges';
+import { shopToday, takeShopTimeZone } from '../../renderer/model/shop-days';
 import { jobCount, jobTotal } from '../../renderer/model/job-count';
 
-const quick = (label: string, today: Date) => quickRanges.find((q) => q.label === label)!.range(today);
+const quick = (label: string, today: string) => quickRanges.find((q) => q.label === label)!.range(today);
 
 describe('job list date ranges', () => {
   it('takes only days on the calendar', () => {
@@ -24,24 +25,44 @@ describe('job list date ranges', () => {
     expect(dateRangeProblem({ field: 'due', from: '2025-04-01', to: '' })).toBeNull();
   });
 
-  it('works out the quick ranges from the local date, months and leap years included', () => {
-    const midJanuary = new Date(2026, 0, 15, 23, 50);
-    expect(localIsoDate(midJanuary)).toBe('2026-01-15');
-    expect(quick('Due in the next 14 days', midJanuary)).toEqual({ field: 'due', from: '2026-01-15', to: '2026-01-29' });
-    expect(quick('Created last month', midJanuary)).toEqual({ field: 'created', from: '2025-12-01', to: '2025-12-31' });
-    expect(quick('Created last year', midJanuary)).toEqual({ field: 'created', from: '2025-01-01', to: '2025-12-31' });
-    expect(quick('Created this month', new Date(2024, 1, 10))).toEqual({ field: 'created', from: '2024-02-01', to: '2024-02-29' });
-    expect(quick('Created last month', new Date(2025, 2, 31))).toEqual({ field: 'created', from: '2025-02-01', to: '2025-02-28' });
-    expect(quick('Due in the next 14 days', new Date(2025, 11, 25))).toEqual({ field: 'due', from: '2025-12-25', to: '2026-01-08' });
+  it('works out the quick ranges from the shop\'s day, months and leap years included', () => {
+    // Gregorian calendar (ISO 8601-1:2019): 2024 is a leap year, 2025 is not.
+    expect(quick('Due in the next 14 days', '2026-01-15')).toEqual({ field: 'due', from: '2026-01-15', to: '2026-01-29' });
+    expect(quick('Created last month', '2026-01-15')).toEqual({ field: 'created', from: '2025-12-01', to: '2025-12-31' });
+    expect(quick('Created last year', '2026-01-15')).toEqual({ field: 'created', from: '2025-01-01', to: '2025-12-31' });
+    expect(quick('Created this month', '2024-02-10')).toEqual({ field: 'created', from: '2024-02-01', to: '2024-02-29' });
+    expect(quick('Created this month', '2025-12-31')).toEqual({ field: 'created', from: '2025-12-01', to: '2025-12-31' });
+    expect(quick('Created last month', '2025-03-31')).toEqual({ field: 'created', from: '2025-02-01', to: '2025-02-28' });
+    expect(quick('Due in the next 14 days', '2025-12-25')).toEqual({ field: 'due', from: '2025-12-25', to: '2026-01-08' });
   });
 
-  it('keeps a found job in a range as the store does: the stamp\'s date, both days included', () => {
+  it('takes today in the shop\'s zone: 11:50 pm in Chicago is still that day', () => {
+    // 2026-01-16T05:50Z is 23:50 on 15 January in Chicago (CST, UTC−6).
+    takeShopTimeZone('America/Chicago');
+    try {
+      expect(shopToday(new Date('2026-01-16T05:50:00Z'))).toBe('2026-01-15');
+    } finally {
+      takeShopTimeZone('UTC');
+    }
+    expect(shopToday(new Date('2026-01-16T05:50:00Z'))).toBe('2026-01-16');
+  });
+
+  it('keeps a found job in a range as the store does: the stamp\'s day in the shop\'s zone, both days included', () => {
     const job = { createdAt: '2025-03-31T23:30:00.000Z', updatedAt: '2025-04-02T08:00:00.000Z', dueDate: null };
     expect(jobInRange(job, { field: 'created', from: '2025-03-01', to: '2025-03-31' })).toBe(true);
     expect(jobInRange(job, { field: 'created', from: '2025-04-01', to: '' })).toBe(false);
     expect(jobInRange(job, { field: 'updated', from: '', to: '2025-04-02' })).toBe(true);
     expect(jobInRange(job, { field: 'due', from: '2025-01-01', to: '' })).toBe(false);
     expect(jobInRange(job, { field: 'due', from: '', to: '' })).toBe(true);
+    // In Chicago (CDT, UTC−5, in April) 23:30 UTC on 31 March is 18:30 that day; 08:00 UTC on 2 April is 03:00 that day.
+    takeShopTimeZone('America/Chicago');
+    try {
+      expect(jobInRange(job, { field: 'created', from: '2025-03-31', to: '2025-03-31' })).toBe(true);
+      expect(jobInRange({ ...job, createdAt: '2025-04-01T03:30:00.000Z' }, { field: 'created', from: '', to: '2025-03-31' })).toBe(true);
+      expect(jobInRange({ ...job, createdAt: '2025-04-01T03:30:00.000Z' }, { field: 'created', from: '2025-04-01', to: '' })).toBe(false);
+    } finally {
+      takeShopTimeZone('UTC');
+    }
   });
 
   it('says how many jobs, with thousands spaced and an open count marked', () => {

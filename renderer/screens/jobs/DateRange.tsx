@@ -4,6 +4,7 @@ import { PlainSelect } from '../../components/Plain';
 import type { DateRange } from '../../model/date-ranges';
 import { dateRangeProblem, isRangeSet, noDateRange, quickRanges } from '../../model/date-ranges';
 import { jobDateLabels } from '../../model/labels';
+import { shopToday } from '../../model/shop-days';
 
 function DateInput({ label, value, onChange, errorId }: { label: string; value: string; onChange(v: string): void; errorId?: string | undefined }) {
   const id = useId();
@@ -30,7 +31,7 @@ export function DateRangeFilter({ range, onRange }: { range: DateRange; onRange(
       <button type="button" className="button" disabled={!isRangeSet(range)} onClick={() => onRange({ ...noDateRange, field: range.field })}>Clear dates</button>
       <div className="filterbar__quick" role="group" aria-label="Quick date ranges">
         {quickRanges.map((q) => (
-          <button key={q.label} type="button" className="button button--small button--quiet" onClick={() => onRange(q.range(new Date()))}>{q.label}</button>
+          <button key={q.label} type="button" className="button button--small button--quiet" onClick={() => onRange(q.range(shopToday()))}>{q.label}</button>
         ))}
       </div>
       {/* Under From, which it names; a line of its own so the controls beside it do not move. */}

@@ -3,6 +3,7 @@ import { formatQuantity } from '../../../core/format';
 import { jobDateLabels, statusLabels } from '../../model/labels';
 import { kindLabel } from '../../../core/vocabulary';
 import { kindEntryOf } from '../../../core/kinds/registry';
+import { shopDay } from '../../model/shop-days';
 
 export type SortKey = 'number' | 'updated' | 'customer';
 export interface Sort {
@@ -42,7 +43,6 @@ function SortHeader({ label, k, sort, onSort }: { label: string; k: SortKey; sor
   );
 }
 
-const day = (iso: string) => iso.slice(0, 10);
 
 /** A job whose stored spec no longer reads still lists, marked, with why beside its spring. */
 const rowClass = (j: JobSummary, selected: boolean): string | undefined =>
@@ -87,15 +87,15 @@ export function JobTable({ jobs, sort, onSort, selected, onSelect, onSelectAll, 
               <td><span className="nowrap">{j.partNumber || <span className="muted">—</span>}</span><br />
                 <span className="muted nowrap">{j.drawingNumber}{j.drawingRevision ? ` rev ${j.drawingRevision}` : ''}</span></td>
               <td><span className={`status status--${j.status}`}>{statusLabels[j.status]}</span>
-                {j.archivedAt ? <><br /><span className="muted">archived {day(j.archivedAt)}</span></> : null}</td>
+                {j.archivedAt ? <><br /><span className="muted">archived {shopDay(j.archivedAt)}</span></> : null}</td>
               <td>{kindLabel(j.shape.kind)}<br /><span className="muted nowrap">{j.shape.material}</span>
                 {j.problem ? <><br /><span className="error-text job-problem" role="note">{j.problem.message}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.wireDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.outerDiameter, 'length', u)}</td>
               <td className="num">{formatQuantity(j.shape.freeLength, 'length', u)}{compared.lengthNote ? <><br /><span className="muted">{compared.lengthNote}</span></> : null}</td>
               <td className="num">{formatQuantity(j.shape.rate, compared.rateQuantity, u)}</td>
-              {rangeDate ? <td className="nowrap">{rangeDate === 'due' ? (j.dueDate ?? '—') : day(j.createdAt)}</td> : null}
-              <td className="nowrap">{day(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
+              {rangeDate ? <td className="nowrap">{rangeDate === 'due' ? (j.dueDate ?? '—') : shopDay(j.createdAt)}</td> : null}
+              <td className="nowrap">{shopDay(archived && j.archivedAt ? j.archivedAt : j.updatedAt)}</td>
               <td><div className="row-actions">
                 <button type="button" className="button button--small" onClick={() => onSimilar(j)} aria-label={`Find jobs similar to ${j.number}`}>Similar</button>
                 <button type="button" className="button button--small button--quiet" onClick={() => onArchive(j, j.archivedAt === null)}

@@ -5,6 +5,7 @@ import { useApi } from '../../api';
 import { useNavigation } from '../../hooks/navigation';
 import { useQuery } from '../../hooks/useQuery';
 import { QuoteSelected } from '../jobs/QuoteSelected';
+import { shopDay } from '../../model/shop-days';
 
 /** An enquiry's jobs as the store lists them now, in sheet order, each one click from its workspace. */
 export function EnquiryJobsTable({ enquiry }: { enquiry: Enquiry }) {
@@ -75,7 +76,7 @@ export function RecentEnquiries({ refreshKey }: { refreshKey: number }) {
           <tbody>
             {list.value.map((e) => (
               <tr key={e.id} className={open === e.id ? 'is-selected' : undefined}>
-                <td>{e.reference}</td><td>{e.customer.name}</td><td>{e.receivedAt.slice(0, 10)}</td><td>{e.source}</td>
+                <td>{e.reference}</td><td>{e.customer.name}</td><td>{shopDay(e.receivedAt)}</td><td>{e.source}</td>
                 <td className="num">{e.jobCount}</td>
                 <td><button type="button" className="button button--small" aria-expanded={open === e.id}
                   onClick={() => setOpen(open === e.id ? null : e.id)}>{open === e.id ? 'Hide jobs' : `Jobs of ${e.reference}`}</button></td>

@@ -41,6 +41,18 @@ export function ProfileSection() {
   );
 }
 
+/** The shop's time zone: this computer's first, then UTC and every zone the runtime knows, the one set kept. */
+function TimeZoneSelect() {
+  const d = useSettingsDraft();
+  const set = d.get('defaults.timeZone');
+  const here = Intl.DateTimeFormat().resolvedOptions().timeZone;
+  const zones = [...new Set([here, 'UTC', ...(typeof set === 'string' ? [set] : []), ...Intl.supportedValuesOf('timeZone')])];
+  return (
+    <SSelect path="defaults.timeZone" label="Shop's time zone" hint="The days on the screens, documents and job list ranges are its days."
+      choices={zones.map((z) => ({ value: z, label: z === here ? `${z} (this computer)` : z }))} />
+  );
+}
+
 export function DefaultsSection() {
   return (
     <section className="settings-section" id="settings-defaults" aria-labelledby="settings-defaults-title">
@@ -56,6 +68,7 @@ export function DefaultsSection() {
           choices={[{ value: 'stricter', label: 'The stricter method' }, { value: 'handbook', label: 'Handbook (Shigley Table 10-6)' }, { value: 'en13906', label: 'EN 13906-1 static' }]} />
         <SSelect path="defaults.decimalMark" label="Decimal mark in typed numbers"
           choices={[{ value: '.', label: 'Point: 1.6 and 2,000' }, { value: ',', label: 'Comma: 1,6 and 2.000' }]} />
+        <TimeZoneSelect />
       </div>
     </section>
   );

@@ -1,5 +1,6 @@
 import { useShopData } from '../../hooks/shop-data';
 import { Rows, SNumber, SSelect, SText } from './fields';
+import { shopToday } from '../../model/shop-days';
 
 function useGradeChoices() {
   const { grades } = useShopData();
@@ -13,7 +14,7 @@ export function MaterialPricesSection() {
       <h2 id="settings-prices-title">Material prices</h2>
       <p className="muted">Price per kg by grade and diameter band (mm), with the date and supplier of the price.</p>
       <Rows path="materialPrices" noun="a price" title={(p, i) => `Price ${i + 1}: ${String(p.grade ?? '') || 'no grade'}`}
-        blank={() => ({ grade: '', dMin: 0, dMax: 1, pricePerKg: 0, date: new Date().toISOString().slice(0, 10), supplier: '' })}>
+        blank={() => ({ grade: '', dMin: 0, dMax: 1, pricePerKg: 0, date: shopToday(), supplier: '' })}>
         {(prefix) => (
           <>
             <SSelect path={`${prefix}.grade`} label="Grade" choices={grades} wide />

@@ -7,6 +7,7 @@ import { useNavigation } from '../../hooks/navigation';
 import { dimensionLabels, statusLabels } from '../../model/labels';
 import { money } from '../../model/shown';
 import { useCopyJob } from './useCopyJob';
+import { shopDay } from '../../model/shop-days';
 
 const shownDimensions = ['wireDiameter', 'outerDiameter', 'freeLength', 'activeCoils', 'rate'] as const;
 
@@ -51,7 +52,7 @@ function LastQuoted({ hit }: { hit: SimilarJob }) {
   return (
     <>
       <b>{money(q.unitPrice, q.currency)}</b> each at {q.quantity.toLocaleString('en-US')} pcs
-      <br /><span className="muted">{q.quoteNumber}, {q.issuedAt.slice(0, 10)}</span>
+      <br /><span className="muted">{q.quoteNumber}, {shopDay(q.issuedAt)}</span>
     </>
   );
 }
@@ -93,7 +94,7 @@ export function SimilarJobsDialog({ open, onClose, spec, excludeJobId, quantity,
                   <button type="button" className="link" onClick={() => { onClose(); nav.openJob(hit.id); }}>{hit.number}</button>
                   <br /><span className={`status status--${hit.job.status}`}>{statusLabels[hit.job.status]}</span>
                   {hit.job.archivedAt ? <span className="muted"> · archived</span> : null}
-                  <br /><span className="muted">{hit.job.updatedAt.slice(0, 10)}</span>
+                  <br /><span className="muted">{shopDay(hit.job.updatedAt)}</span>
                   <br /><button type="button" className="button button--small similar__copy" disabled={copier.busy} aria-label={`New job from ${hit.number}`}
                     onClick={() => void copier.copy(hit.id).then((done) => { if (done) onClose(); })}>New job from this one</button>
                 </td>

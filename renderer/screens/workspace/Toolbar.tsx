@@ -1,4 +1,5 @@
 import type { JobEditor } from '../../hooks/useJobEditor';
+import { shopDay } from '../../model/shop-days';
 
 function saveStatus(e: JobEditor, problems: number): { text: string; tone: 'ok' | 'busy' | 'warn' | 'error' } {
   if (e.saving) return { text: 'Saving…', tone: 'busy' };
@@ -34,7 +35,7 @@ export function Toolbar({ editor, problems, onSave, onSimilar, onCopy, onArchive
       <div className="toolbar__title">
         <span className="toolbar__number">{job ? job.number : 'New job'}</span>
         <span className="toolbar__sub">{job ? [job.customer?.name, job.partNumber].filter(Boolean).join(' · ') || 'no customer yet' : 'not in the store yet'}
-          {job?.archivedAt ? <span className="badge" title={`archived ${job.archivedAt.slice(0, 10)}`}> archived</span> : null}</span>
+          {job?.archivedAt ? <span className="badge" title={`archived ${shopDay(job.archivedAt)}`}> archived</span> : null}</span>
       </div>
       <p className={`save-status save-status--${status.tone}`} role="status" aria-live="polite" data-save={status.tone}>{status.text}</p>
       <div className="toolbar__actions">

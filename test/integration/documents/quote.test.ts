@@ -71,10 +71,17 @@ describe('quote PDF', () => {
 
   it('takes the store\'s number and date at issue; validity stays as drafted', () => {
     expect(model.issue).toEqual({ number: 'DRAFT', date: '2026-03-02', validUntil: '2026-04-16', validityDays: 45 });
-    const issued = withQuoteIssue(model, { number: 'Q-26-0003', issuedAt: '2026-03-05T10:00:00.000Z' });
+    const issued = withQuoteIssue(model, { number: 'Q-26-0003', issuedAt: '2026-03-05T10:00:00.000Z' }, 'UTC');
     expect(issued.issue).toEqual({ number: 'Q-26-0003', date: '2026-03-05', validUntil: '2026-04-19', validityDays: 45 });
     expect(issued.reference).toBe('Quotation Q-26-0003');
     expect(issued.lines).toEqual(model.lines);
+  });
+
+  it('dates the quote on the shop\'s day: issued at 7 pm in Chicago is that day, not the next UTC one', () => {
+    // 2026-03-06T01:00Z is 19:00 on 5 March in Chicago (CST, UTC−6, before the 8 March change).
+    const evening = withQuoteIssue(model, { number: 'Q-26-0004', issuedAt: '2026-03-06T01:00:00.000Z' }, 'America/Chicago');
+    expect(evening.issue).toEqual({ number: 'Q-26-0004', date: '2026-03-05', validUntil: '2026-04-19', validityDays: 45 });
+    expect(withQuoteIssue(model, { number: 'Q-26-0004', issuedAt: '2026-03-06T01:00:00.000Z' }, 'UTC').issue.date).toBe('2026-03-06');
   });
 
   it('prints the shop\'s logo, leaves out one it cannot read, and names the bake of a plated spring', async () => {

@@ -2,6 +2,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
+import { snapshotTimeZone } from '../../../core/calendar';
 import { parseQuoteDocument, quoteDocument, travellerDocument, withQuoteIssue } from '../../../core/documents';
 import { documentText } from '../../../core/documents';
 import { estimateCost } from '../../../core/costing/estimate';
@@ -64,7 +65,7 @@ describe('the same model prints the same document', () => {
       jobId: created.id, jobRevision: created.revision, validityDays: draft.issue.validityDays, prices: JSON.parse(JSON.stringify(estimate)),
       quantityBreaks: estimate.breaks.map((b) => b.quantity), document: JSON.parse(JSON.stringify(draft)), decision: null,
     }));
-    const printed = await renderQuote(withQuoteIssue(draft, issued));
+    const printed = await renderQuote(withQuoteIssue(draft, issued, settings.defaults.timeZone));
 
     const dearer = shop.materialPrices!.map((p) => ({ ...p, pricePerKg: p.pricePerKg * 3 }));
     ok(saveSettings(store, { materialPrices: dearer }));
@@ -74,7 +75,7 @@ describe('the same model prints the same document', () => {
     const snapshot = ok(getQuote(store, { number: issued.number }));
     const parsed = parseQuoteDocument(snapshot.document);
     if (!parsed.ok) throw new Error(JSON.stringify(parsed.errors));
-    const reprinted = await renderQuote(withQuoteIssue(parsed.value, snapshot));
+    const reprinted = await renderQuote(withQuoteIssue(parsed.value, snapshot, snapshotTimeZone(snapshot.settings)));
     expect(reprinted.equals(printed)).toBe(true);
     const text = (await pdfText(reprinted)).all;
     expect(text).toContain(issued.number);

@@ -26,6 +26,14 @@ describe('traveller PDF', () => {
   const plan = planManufacture(spec, settings, 1000);
   const model = traveller(spec, settings);
 
+  it('says the day it was printed on in the shop\'s time zone', () => {
+    expect(field(model.job.fields, 'Printed')).toBe('2026-03-02');
+    // 02:00 UTC on 3 March is 20:00 on 2 March in Chicago (CST, UTC−6).
+    const evening = travellerDocument({ spec, settings: settingsWith({ defaults: { ...settings.defaults, timeZone: 'America/Chicago' } }),
+      job: { ...job }, printedAt: '2026-03-03T02:00:00.000Z' });
+    expect(field(evening.job.fields, 'Printed')).toBe('2026-03-02');
+  });
+
   it('prints the plan\'s wire per piece, coiled free length and sample, formatted as the model formats them', async () => {
     const wire = formatQuantity(plan.wireLengthPerPiece, 'length', 'metric');
     const coiled = formatQuantity(plan.coiledFreeLength!, 'length', 'metric');

@@ -16,8 +16,8 @@ import { draftValue, emptyFirstOffDraft, firstOffInputOf, firstOffPaths, withDra
 import { shown } from '../../../model/shown';
 import { MeasuredRow } from './MeasuredRow';
 import type { MeasuredLine } from './MeasuredRow';
+import { shopToday } from '../../../model/shop-days';
 
-const today = () => new Date().toISOString().slice(0, 10);
 
 /** First-off results of the saved job: a form laid out as the traveller's inspection block, and the records so far. */
 export function FirstOffPane({ editor }: { editor: JobEditor }) {
@@ -66,7 +66,7 @@ function FirstOffBody({ job, dirty }: { job: Job; dirty: boolean }) {
   const testLengths = useMemo(() => (spec.kind === 'compression' ? spec.loads.map((l) => l.length) : []), [spec]);
   const plan = useQuery(JSON.stringify([job.id, job.revision]), () => api.manufacturingPlan({ spec, orderQuantity: job.orderQuantity ?? 100 }));
   const records = useQuery(`records-${job.id}`, () => api.listFirstOff({ jobId: job.id }));
-  const [draft, setDraft] = useState<FirstOffDraft>(() => emptyFirstOffDraft(testLengths.length, today()));
+  const [draft, setDraft] = useState<FirstOffDraft>(() => emptyFirstOffDraft(testLengths.length, shopToday()));
   const [errors, setErrors] = useState<FormError[]>([]);
   const [status, setStatus] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);

@@ -1,6 +1,7 @@
 import type { Job, QuoteSummary } from '../../../../core/api';
 import { useApi } from '../../../api';
 import { useQuery } from '../../../hooks/useQuery';
+import { shopDay } from '../../../model/shop-days';
 
 /** What else a quotation carried besides this job: "line 2 of 3, with J-26-0004 (KPS-0905), …", or "only this job". */
 function linesText(q: QuoteSummary, jobId: number): string {
@@ -24,7 +25,7 @@ export function IssuedQuotes({ job, refresh, disabled, onReprint }: { job: Job; 
           <tbody>
             {quotes.value.map((q) => (
               <tr key={q.id}>
-                <td>{q.number}</td><td>{q.issuedAt.slice(0, 10)}</td><td>{q.validUntil.slice(0, 10)}</td><td className="num">{q.lines.find((l) => l.jobId === job.id)?.jobRevision ?? q.jobRevision}</td>
+                <td>{q.number}</td><td>{shopDay(q.issuedAt)}</td><td>{q.validUntil}</td><td className="num">{q.lines.find((l) => l.jobId === job.id)?.jobRevision ?? q.jobRevision}</td>
                 <td data-quote-lines={q.number}>{linesText(q, job.id)}</td><td>{q.currency}</td>
                 <td><button type="button" className="button button--small" disabled={disabled} onClick={() => onReprint(q.number)}>Reprint {q.number}</button></td>
               </tr>

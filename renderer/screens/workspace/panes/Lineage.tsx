@@ -1,5 +1,6 @@
 import type { Job } from '../../../../core/api';
 import { useNavigation } from '../../../hooks/navigation';
+import { shopDay } from '../../../model/shop-days';
 
 /** Where the job came from and the jobs made from it, each a link. */
 export function Lineage({ job }: { job: Job }) {
@@ -11,8 +12,8 @@ export function Lineage({ job }: { job: Job }) {
   );
   return (
     <ul className="lineage" aria-label="Copies">
-      {copiedFrom ? <li>Made from job {link(copiedFrom)} on {copiedFrom.at.slice(0, 10)}.</li> : null}
-      {copiedTo.map((l) => <li key={l.id}>Copied to job {link(l)} on {l.at.slice(0, 10)}.</li>)}
+      {copiedFrom ? <li>Made from job {link(copiedFrom)} on {shopDay(copiedFrom.at)}.</li> : null}
+      {copiedTo.map((l) => <li key={l.id}>Copied to job {link(l)} on {shopDay(l.at)}.</li>)}
     </ul>
   );
 }
