@@ -5,7 +5,7 @@ import { InputError } from './io';
 
 /** The help's words for the date range of `jobs list`. */
 export const dateRangeHelp = '[--created-from D] [--created-to D] | [--updated-from D] [--updated-to D] | [--due-from D] [--due-to D]\n'
-  + '  (a date range on one of created, updated (last saved) or due; D as YYYY-MM-DD, both days included)';
+  + '  (a date range on one of created, updated (last saved) or due; D as YYYY-MM-DD, both days included, days of the shop\'s time zone)';
 
 const bad = (flag: string, message: string): never => {
   throw new InputError([{ code: 'invalid-option', path: flag, message }]);
